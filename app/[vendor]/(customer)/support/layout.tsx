@@ -1,0 +1,3 @@
+import { areaLayout } from "@/components/shell/area-layout";
+
+export default areaLayout("support.use", "support");

@@ -1,0 +1,41 @@
+"use server";
+
+import { headers } from "next/headers";
+import { redirect } from "next/navigation";
+import { z } from "zod";
+
+import type { ActionState } from "@/lib/actions/action-state";
+import { signUpSchema } from "@/lib/auth/auth-schemas";
+import { getSessionUser } from "@/lib/auth/session-user";
+import { DomainError } from "@/lib/errors/domain-errors";
+import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
+import { clientIp } from "@/lib/http/client-ip";
+import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
+import { joinAsCustomer, signUpCustomer } from "@/lib/users/sign-up-customer";
+import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+
+const vendorField = z.object({ vendor: z.string().max(60) });
+
+export async function signUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const values = { name: String(form.get("name") ?? ""), email: String(form.get("email") ?? "") };
+  const vendor = await getVendorBySlug(vendorField.parse({ vendor: form.get("vendor") }).vendor);
+  if (!vendor) return { ok: false, message: "Not found." };
+  const parsed = signUpSchema.safeParse(Object.fromEntries(form.entries()));
+  if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error), values };
+  try {
+    await consumeRateLimit({ key: `sign-up:${clientIp(await headers())}`, limit: 10, windowSeconds: 3600 });
+    await signUpCustomer({ vendorId: vendor.id, ...parsed.data });
+  } catch (error) {
+    if (error instanceof DomainError) return { ok: false, message: error.message, values };
+    throw error;
+  }
+  return { ok: true, message: "Account created. Sign in with your e-mail and password.", values: { email: parsed.data.email } };
+}
+
+export async function joinAsCustomerAction(form: FormData): Promise<void> {
+  const vendor = await getVendorBySlug(String(form.get("vendor") ?? ""));
+  const user = await getSessionUser();
+  if (!vendor || !user) redirect("/sign-in");
+  await joinAsCustomer({ vendorId: vendor.id, userId: user.id });
+  redirect(`/${vendor.slug}/bench`);
+}

@@ -1,0 +1,4 @@
+// GET /api/health: liveness for a load balancer.
+export function GET() {
+  return Response.json({ ok: true });
+}

@@ -1,0 +1,12 @@
+import type { FieldErrors } from "@/lib/errors/domain-errors";
+
+export type ActionState<T = unknown> = {
+  ok: boolean;
+  message?: string;
+  errors?: FieldErrors;
+  data?: T;
+  /** The submitted values, so a form can show them again after an error. */
+  values?: Record<string, string>;
+};
+
+export const initialActionState: ActionState = { ok: false };

@@ -1,0 +1,57 @@
+import "server-only";
+
+import type { z } from "zod";
+
+import { resolveVendorAccess, type VendorAccess } from "@/lib/auth/access";
+import type { Member } from "@/lib/auth/membership";
+import type { Permission } from "@/lib/auth/permissions";
+import { getSessionUser, type SessionUser } from "@/lib/auth/session-user";
+import { DomainError } from "@/lib/errors/domain-errors";
+import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
+
+import type { ActionState } from "./action-state";
+
+export type MemberAccess = VendorAccess & { user: SessionUser; member: Member };
+
+function formValues(input: FormData | Record<string, unknown>): Record<string, unknown> {
+  if (!(input instanceof FormData)) return input;
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of input.entries()) {
+    if (key.startsWith("$ACTION")) continue;
+    if (key in out) out[key] = ([] as unknown[]).concat(out[key], value);
+    else out[key] = value;
+  }
+  return out;
+}
+
+/**
+ * The one wrapper for server actions: session, vendor, membership and permission through the
+ * access helper, zod parsing of the input, typed errors to `{ ok, message, errors }`.
+ * The vendor slug comes from the input's `vendor` field and is checked like any other input.
+ */
+export function vendorAction<S extends z.ZodType>(
+  options: { permission: Permission; schema: S },
+  run: (input: z.output<S>, access: MemberAccess) => Promise<ActionState | void>,
+) {
+  return async (_previous: ActionState, input: FormData | Record<string, unknown>): Promise<ActionState> => {
+    const raw = formValues(input);
+    const values = Object.fromEntries(Object.entries(raw).filter(([, v]) => typeof v === "string")) as Record<string, string>;
+    try {
+      const user = await getSessionUser();
+      const access = await resolveVendorAccess(String(raw.vendor ?? ""), user, options.permission);
+      if (!access.user || !access.member) return { ok: false, message: "Sign in to continue.", values };
+      const parsed = options.schema.safeParse(raw);
+      if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error), values };
+      const result = await run(parsed.data, access as MemberAccess);
+      return result ?? { ok: true };
+    } catch (error) {
+      if (error instanceof DomainError) {
+        return { ok: false, message: error.code === "not_found" ? "Not found." : error.message, errors: error.fieldErrors, values };
+      }
+      // Next's redirect() and notFound() signal by throwing; let them through.
+      if (error && typeof error === "object" && "digest" in error) throw error;
+      console.error("[action]", error);
+      return { ok: false, message: "Something went wrong on our side. Nothing was saved.", values };
+    }
+  };
+}

@@ -1,0 +1,24 @@
+import "server-only";
+
+import { NextResponse } from "next/server";
+import { ZodError } from "zod";
+
+import { DomainError, HTTP_STATUS, RateLimited } from "@/lib/errors/domain-errors";
+import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
+
+/** Typed errors become clear JSON; anything else is logged and answered without a stack trace. */
+export function errorResponse(error: unknown): NextResponse {
+  if (error instanceof ZodError) {
+    return NextResponse.json({ error: "invalid_input", message: "The request is not valid.", fieldErrors: fieldErrorsOf(error) }, { status: 400 });
+  }
+  if (error instanceof DomainError) {
+    const headers: Record<string, string> = {};
+    if (error instanceof RateLimited) headers["Retry-After"] = String(error.retryAfterSeconds);
+    return NextResponse.json(
+      { error: error.code, message: error.message, ...(error.fieldErrors ? { fieldErrors: error.fieldErrors } : {}) },
+      { status: HTTP_STATUS[error.code], headers },
+    );
+  }
+  console.error("[api]", error);
+  return NextResponse.json({ error: "internal", message: "Something went wrong on our side." }, { status: 500 });
+}

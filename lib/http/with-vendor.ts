@@ -1,0 +1,65 @@
+import "server-only";
+
+import type { NextRequest } from "next/server";
+
+import { resolveVendorAccess, type VendorAccess } from "@/lib/auth/access";
+import { userForApiToken } from "@/lib/auth/api-tokens";
+import type { Permission } from "@/lib/auth/permissions";
+import { getSessionUser } from "@/lib/auth/session-user";
+import { NotFound } from "@/lib/errors/domain-errors";
+import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
+
+import { clientIp } from "./client-ip";
+import { errorResponse } from "./error-response";
+
+type Params = Record<string, string | string[] | undefined>;
+type Ctx<P extends Params> = { params: Promise<P> };
+export type VendorHandler<P extends Params> = (
+  request: NextRequest,
+  context: { access: VendorAccess; params: P },
+) => Promise<Response>;
+
+export type WithVendorOptions = { permission?: Permission; rateLimit?: { limit: number; windowSeconds: number } };
+
+const DEFAULT_RATE = { limit: 300, windowSeconds: 60 };
+
+/**
+ * Wraps every /api/v1/vendors/{vendor}/... handler: rate limit, session or bearer token,
+ * vendor and membership through the one access helper, typed errors to JSON.
+ */
+export function withVendor<P extends Params & { vendor: string }>(handler: VendorHandler<P>, options: WithVendorOptions = {}) {
+  return async (request: NextRequest, ctx: Ctx<P>): Promise<Response> => {
+    try {
+      const params = await ctx.params;
+      const rate = options.rateLimit ?? DEFAULT_RATE;
+      const bearer = request.headers.get("authorization")?.match(/^Bearer\s+(\S+)$/i)?.[1];
+      await consumeRateLimit({ key: `api:${bearer ? bearer.slice(0, 12) : clientIp(request.headers)}`, ...rate });
+      let user = null;
+      if (bearer) {
+        const vendor = await getVendorBySlug(params.vendor);
+        if (!vendor) throw new NotFound();
+        user = await userForApiToken(bearer, vendor.id);
+        if (!user) throw new NotFound();
+      } else {
+        user = await getSessionUser();
+      }
+      const access = await resolveVendorAccess(params.vendor, user, options.permission);
+      return await handler(request, { access, params });
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+/** For public, vendor-free endpoints such as /api/v1/calculate. */
+export function withPublic(handler: (request: NextRequest) => Promise<Response>, rate = { limit: 120, windowSeconds: 60 }) {
+  return async (request: NextRequest): Promise<Response> => {
+    try {
+      await consumeRateLimit({ key: `public:${new URL(request.url).pathname}:${clientIp(request.headers)}`, ...rate });
+      return await handler(request);
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}

@@ -1,0 +1,9 @@
+import "server-only";
+
+import { mailMessageSchema } from "./mail-schema";
+import { MAIL_FROM, mailTransport } from "./transport";
+
+export async function sendMailJob(data: unknown): Promise<void> {
+  const message = mailMessageSchema.parse(data);
+  await mailTransport().sendMail({ from: MAIL_FROM, ...message });
+}

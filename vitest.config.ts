@@ -1,0 +1,40 @@
+import path from "node:path";
+import { defineConfig } from "vitest/config";
+
+const alias = { "@": path.resolve(import.meta.dirname) };
+// "server-only" throws outside a React Server environment; tests import server modules directly.
+const serverOnlyStub = { "server-only": path.resolve(import.meta.dirname, "tests/support/server-only-stub.ts") };
+
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        resolve: { alias: { ...alias, ...serverOnlyStub } },
+        test: { name: "unit", include: ["tests/unit/**/*.test.{ts,tsx}"], environment: "node" },
+      },
+      {
+        resolve: { alias: { ...alias, ...serverOnlyStub } },
+        test: {
+          name: "integration",
+          include: ["tests/integration/**/*.test.ts"],
+          environment: "node",
+          globalSetup: ["tests/support/integration-global-setup.ts"],
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "e2e",
+          include: ["tests/e2e/**/*.test.ts"],
+          environment: "node",
+          fileParallelism: false,
+          testTimeout: 120_000,
+          hookTimeout: 120_000,
+        },
+      },
+    ],
+  },
+});
