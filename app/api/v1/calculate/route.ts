@@ -1,0 +1,18 @@
+import { NextResponse } from "next/server";
+
+import { runCalculation } from "@/lib/calculate/run-calculation";
+import { withPublic } from "@/lib/http/with-vendor";
+import { readJson } from "@/lib/http/read-json";
+
+const MAX_BODY_BYTES = 16 * 1024;
+
+// POST /api/v1/calculate: adapt one operation to a machine; JSON in either unit system, result in both.
+export const POST = withPublic(
+  async (request) => {
+    const body = await readJson(request, MAX_BODY_BYTES);
+    const outcome = runCalculation(body);
+    if (!outcome.ok) return NextResponse.json({ error: "invalid_input", message: outcome.message, fieldErrors: outcome.errors }, { status: 400 });
+    return NextResponse.json(outcome.result);
+  },
+  { limit: 120, windowSeconds: 60 },
+);

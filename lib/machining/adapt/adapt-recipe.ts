@@ -1,0 +1,70 @@
+import { MachiningInputError } from "../errors";
+import type { AdaptInput, AdaptResult } from "../types";
+import { resolveInput } from "./resolve-input";
+import { referenceChipLoad } from "./rules/01-reference-chip-load";
+import { radialChipThinning } from "./rules/02-radial-chip-thinning";
+import { spindleSpeedRange } from "./rules/03-spindle-speed-range";
+import { feedLimit } from "./rules/04-feed-limit";
+import { cuttingSpeedWindow } from "./rules/05-cutting-speed-window";
+import { rigidity } from "./rules/06-rigidity";
+import { spindlePower } from "./rules/07-spindle-power";
+import { toolDeflection } from "./rules/08-tool-deflection";
+import { plungeFeed } from "./rules/09-plunge-feed";
+import { standardCautions } from "./rules/10-standard-cautions";
+import { createState, type AdaptState } from "./state";
+
+/** The ten rules of DOMAIN.md, in order. */
+export const RULE_PIPELINE = [
+  referenceChipLoad,
+  radialChipThinning,
+  spindleSpeedRange,
+  feedLimit,
+  cuttingSpeedWindow,
+  rigidity,
+  spindlePower,
+  toolDeflection,
+  plungeFeed,
+  standardCautions,
+] as const;
+
+const finite = (v: number | null) => v === null || Number.isFinite(v);
+
+// Written out rather than looped over keys: this runs on every call and stays monomorphic.
+const allFinite = (r: AdaptResult) =>
+  finite(r.rpm) && finite(r.feedMmMin) && finite(r.chipLoadMm) && finite(r.maxChipThicknessMm) &&
+  finite(r.cuttingSpeedMpm) && finite(r.axialDepthMm) && finite(r.radialDepthMm) && finite(r.plungeFeedMmMin) &&
+  finite(r.mrrCm3Min) && finite(r.powerKw) && finite(r.torqueNm) && finite(r.forceN) && finite(r.deflectionMm) &&
+  r.steps.every((step) => Number.isFinite(step.before) && Number.isFinite(step.after));
+
+/** Adapts one sheet operation to a customer's machine; every change is explained in `steps`. */
+export function adaptRecipe(input: AdaptInput): AdaptResult {
+  const s = createState(resolveInput(input));
+  for (const rule of RULE_PIPELINE) rule(s);
+  return finish(s);
+}
+
+function finish(s: AdaptState): AdaptResult {
+  const d = s.input.operation.diameterMm;
+  const r = s.radialDepthMm / d;
+  const result: AdaptResult = {
+    rpm: s.rpm,
+    feedMmMin: s.feedMmMin,
+    chipLoadMm: s.chipLoadMm,
+    maxChipThicknessMm: r >= 0.5 ? s.chipLoadMm : s.chipLoadMm * 2 * Math.sqrt(r * (1 - r)),
+    cuttingSpeedMpm: s.cuttingSpeedMpm,
+    axialDepthMm: s.axialDepthMm,
+    radialDepthMm: s.radialDepthMm,
+    plungeFeedMmMin: s.plungeFeedMmMin,
+    mrrCm3Min: (s.axialDepthMm * s.radialDepthMm * s.feedMmMin) / 1000,
+    powerKw: s.powerKw,
+    torqueNm: s.torqueNm,
+    forceN: s.forceN,
+    deflectionMm: s.deflectionMm,
+    warnings: s.warnings,
+    steps: s.steps,
+  };
+  if (!allFinite(result)) {
+    throw new MachiningInputError("operation", "The inputs are out of range: the result cannot be computed.");
+  }
+  return result;
+}

@@ -1,0 +1,58 @@
+import { LineCounter, parseDocument } from "yaml";
+import type { z } from "zod";
+
+import { sheetFrontMatterSchema, type SheetFrontMatter } from "@/content-schema/sheet-front-matter";
+
+import type { SheetIssue } from "./sheet-issue";
+import { yamlPathOffset } from "./yaml-path-position";
+
+export type FrontMatterResult = { frontMatter?: SheetFrontMatter; issues: SheetIssue[] };
+
+export function formatPath(path: readonly PropertyKey[]): string {
+  return path.reduce<string>((out, step) => (typeof step === "number" ? `${out}[${step}]` : out ? `${out}.${String(step)}` : String(step)), "");
+}
+
+function zodMessage(issue: z.core.$ZodIssue, path: string, unknownKey?: string): string {
+  if (unknownKey !== undefined) {
+    const where = path ? ` in ${path}` : "";
+    return `Unknown field “${unknownKey}”${where}; check the spelling.`;
+  }
+  if (issue.code === "invalid_type" && issue.input === undefined) return `${path} is required.`;
+  return path ? `${path}: ${issue.message}` : issue.message;
+}
+
+// yaml's own "at line N, column M" counts from the front matter, not the file: drop it.
+const yamlMessage = (message: string) => `YAML: ${message.split("\n")[0].replace(/ at line \d+, column \d+:?$/, "")}`;
+
+/**
+ * Parses and validates the YAML front matter. `firstLine` is the file line where the YAML
+ * text starts, so every issue names its line in the whole file.
+ */
+export function checkFrontMatter(yamlText: string, firstLine: number): FrontMatterResult {
+  const lineCounter = new LineCounter();
+  const doc = parseDocument(yamlText, { lineCounter, prettyErrors: true, uniqueKeys: true });
+  const at = (offset: number) => {
+    const pos = lineCounter.linePos(offset);
+    return { line: pos.line + firstLine - 1, column: pos.col };
+  };
+
+  const yamlIssues: SheetIssue[] = [
+    ...doc.errors.map((e) => ({ ...at(e.pos[0]), message: yamlMessage(e.message), severity: "error" as const })),
+    ...doc.warnings.map((w) => ({ ...at(w.pos[0]), message: yamlMessage(w.message), severity: "warning" as const })),
+  ];
+  if (doc.errors.length) return { issues: yamlIssues };
+
+  const parsed = sheetFrontMatterSchema.safeParse(doc.toJS({ maxAliasCount: 50 }) ?? {}, { reportInput: true });
+  if (parsed.success) return { frontMatter: parsed.data, issues: yamlIssues };
+
+  const schemaIssues = parsed.error.issues.flatMap((issue): SheetIssue[] => {
+    const keys = issue.code === "unrecognized_keys" ? issue.keys : [undefined];
+    return keys.map((key) => ({
+      ...at(yamlPathOffset(doc, issue.path, key)),
+      path: formatPath(key === undefined ? issue.path : [...issue.path, key]),
+      message: zodMessage(issue, formatPath(issue.path), key),
+      severity: "error",
+    }));
+  });
+  return { issues: [...yamlIssues, ...schemaIssues] };
+}
