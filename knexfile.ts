@@ -2,7 +2,9 @@ import path from "node:path";
 
 import { knexConfig } from "./lib/db/config";
 
-export default {
+const config = {
   ...knexConfig(),
   migrations: { directory: path.join(import.meta.dirname, "migrations"), extension: "ts", loadExtensions: [".ts"] },
 };
+
+export default config;

@@ -2,6 +2,8 @@ import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
   poweredByHeader: false,
+  // The test run builds into its own folder so a developer's dev server keeps running.
+  distDir: process.env.NEXT_DIST_DIR ?? ".next",
   // Native or Node-only packages stay outside the server bundle.
   serverExternalPackages: ["@node-rs/argon2", "pg-boss", "knex", "pg", "smtp-server", "mailparser", "@react-pdf/renderer"],
   async headers() {

@@ -1,5 +1,9 @@
 import { redirect } from "next/navigation";
 
+import { requirePageAccess } from "@/lib/auth/page-access";
+
 export default async function VendorHome({ params }: { params: Promise<{ vendor: string }> }) {
-  redirect(`/${(await params).vendor}/library`);
+  const { vendor } = await params;
+  await requirePageAccess(vendor, "library.read", `/${vendor}/library`);
+  redirect(`/${vendor}/library`);
 }

@@ -27,7 +27,8 @@ export function SignInForms({ callbackUrl, vendor }: { callbackUrl: string; vend
     setBusy(true);
     const result = await signIn("password", { ...parsed.data, redirect: false, callbackUrl });
     setBusy(false);
-    if (result?.ok && !result.error) window.location.assign(result.url ?? callbackUrl);
+    // Stay on this origin: next-auth's absolute URL uses NEXTAUTH_URL, which may name another host alias.
+    if (result?.ok && !result.error) window.location.assign(callbackUrl);
     else setErrors({ _form: [result?.error === "rate_limited" ? "Too many attempts. Wait 15 minutes and try again." : "E-mail or password is not right."] });
   }
 

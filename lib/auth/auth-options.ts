@@ -8,7 +8,7 @@ import { db } from "@/lib/db/knex";
 import { RateLimited } from "@/lib/errors/domain-errors";
 import { clientIp } from "@/lib/http/client-ip";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
-import { consumeRateLimit, resetRateLimit } from "@/lib/rate-limit/consume-rate-limit";
+import { assertUnderRateLimit, consumeRateLimit, resetRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 
 import { credentialsSchema } from "./auth-schemas";
 import { knexAdapter } from "./knex-adapter";
@@ -19,14 +19,16 @@ export const SIGN_IN_LIMITS = {
   perIp: { limit: 40, windowSeconds: 15 * 60 },
 };
 
-async function authorizePassword(raw: unknown, headers: Record<string, string | string[] | undefined>) {
+export async function authorizePassword(raw: unknown, headers: Record<string, string | string[] | undefined>) {
   const parsed = credentialsSchema.safeParse(raw);
   if (!parsed.success) return null;
   const { email, password } = parsed.data;
   const accountKey = `sign-in:account:${email}`;
+  const ipKey = `sign-in:ip:${clientIp(headers)}`;
   try {
-    await consumeRateLimit({ key: `sign-in:ip:${clientIp(headers)}`, ...SIGN_IN_LIMITS.perIp });
-    await consumeRateLimit({ key: accountKey, ...SIGN_IN_LIMITS.perAccount });
+    // Only failures count, so a busy office behind one address is not locked out by its own sign-ins.
+    await assertUnderRateLimit({ key: ipKey, ...SIGN_IN_LIMITS.perIp });
+    await assertUnderRateLimit({ key: accountKey, ...SIGN_IN_LIMITS.perAccount });
   } catch (error) {
     if (error instanceof RateLimited) throw new Error("rate_limited");
     throw error;
@@ -34,7 +36,11 @@ async function authorizePassword(raw: unknown, headers: Record<string, string | 
   const user = await db("users").where({ email }).first<{ id: string; email: string; name: string; password_hash: string | null } | undefined>();
   // Verify even for unknown accounts so timing does not reveal which e-mails exist.
   const ok = await verifyPassword(user?.password_hash ?? "$argon2id$v=19$m=19456,t=2,p=1$c2FsdHNhbHQ$ZmFrZWZha2VmYWtlZmFrZQ", password);
-  if (!user || !ok) return null;
+  if (!user || !ok) {
+    await consumeRateLimit({ key: ipKey, limit: Number.MAX_SAFE_INTEGER, windowSeconds: SIGN_IN_LIMITS.perIp.windowSeconds });
+    await consumeRateLimit({ key: accountKey, limit: Number.MAX_SAFE_INTEGER, windowSeconds: SIGN_IN_LIMITS.perAccount.windowSeconds });
+    return null;
+  }
   await resetRateLimit(accountKey);
   return { id: user.id, email: user.email, name: user.name };
 }

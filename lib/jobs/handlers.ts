@@ -1,5 +1,7 @@
 import "server-only";
 
+import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
+import { SHEET_EVENTS_QUEUE } from "@/lib/events/sheet-events";
 import { MAIL_QUEUE } from "@/lib/mail/enqueue-mail";
 import { sendMailJob } from "@/lib/mail/send-mail-job";
 
@@ -8,4 +10,6 @@ export type JobHandler = (data: unknown) => Promise<void>;
 // Every background job of the app, by queue name. Features add their queues here.
 export const JOB_HANDLERS: Record<string, JobHandler> = {
   [MAIL_QUEUE]: sendMailJob,
+  [SHEET_EVENTS_QUEUE]: dispatchSheetEvent,
+  [SHEET_EVENT_DELIVERY_QUEUE]: deliverSheetEvent,
 };

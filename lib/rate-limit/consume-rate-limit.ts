@@ -29,3 +29,14 @@ export async function consumeRateLimit({ key, limit, windowSeconds }: Limit): Pr
 export async function resetRateLimit(key: string): Promise<void> {
   await db("rate_limit_buckets").where({ key }).delete();
 }
+
+/** Throw RateLimited if the key is already past its limit, without counting this call. */
+export async function assertUnderRateLimit({ key, limit, windowSeconds }: Limit): Promise<void> {
+  const row = await db("rate_limit_buckets")
+    .where({ key })
+    .whereRaw("window_start >= now() - make_interval(secs => ?)", [windowSeconds])
+    .first<{ hits: number; window_start: Date } | undefined>("hits", "window_start");
+  if (row && row.hits >= limit) {
+    throw new RateLimited(Math.max(1, Math.ceil(windowSeconds - (Date.now() - new Date(row.window_start).getTime()) / 1000)));
+  }
+}

@@ -1,0 +1,8 @@
+import "server-only";
+
+import type { SheetEvent } from "./sheet-events";
+
+export type SheetEventSubscriber = { name: string; handle: (event: SheetEvent) => Promise<void> };
+
+// Each feature that reacts to sheet events adds one entry here.
+export const SHEET_EVENT_SUBSCRIBERS: SheetEventSubscriber[] = [];

@@ -1,0 +1,23 @@
+# Shell helpers shared by scripts/demo.sh and scripts/test.sh (sourced, not run).
+
+wait_for_url() { # url seconds
+  local url=$1 deadline=$((SECONDS + ${2:-60}))
+  until curl -fsS -o /dev/null "$url" 2>/dev/null; do
+    [ $SECONDS -lt $deadline ] || { echo "Timed out waiting for $url" >&2; return 1; }
+    sleep 0.5
+  done
+}
+
+start_maildev() { # smtp_port web_port log
+  node node_modules/maildev/bin/maildev --ip 127.0.0.1 --smtp "$1" --web "$2" --mail-directory "$(mktemp -d)" >"$3" 2>&1 &
+  echo $!
+}
+
+start_s3_fake() { # port dir log
+  if [ -f scripts/s3-fake.ts ]; then
+    S3_PORT=$1 S3_FAKE_DIR=$2 node --import tsx scripts/s3-fake.ts >"$3" 2>&1 &
+    echo $!
+  fi
+}
+
+migrate() { node --import tsx node_modules/knex/bin/cli.js --knexfile knexfile.ts migrate:latest >/dev/null; }

@@ -1,0 +1,109 @@
+import type { Knex } from "knex";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+
+import { fillPattern, listAppRoutes, paramsOf } from "../support/app-routes";
+import { openBrowser, screenshot, type Session } from "../support/browser";
+import { closeE2eDb, e2eDb } from "../support/db";
+import { signInWithPassword } from "../support/sign-in";
+
+// A member of vendor A (northbeck's admin, no role at quillon) probes every vendor route of the app with
+// vendor B's slug and B's real object ids: every answer must be a 404, never data and never a 403.
+const TARGET = "quillon";
+const PROBER = "admin@northbeck.test";
+
+// Routes that are public by design, with the reason.
+const PUBLIC_BY_DESIGN: Record<string, string> = {
+  "/[vendor]/sign-up": "anyone may create a customer account with any vendor",
+  "/[vendor]/join/[token]": "an invitation link works for whoever holds it (probed with a forged token below)",
+  "/api/v1/vendors/[vendor]/logo": "a vendor's logo is public branding, shown on the platform root",
+};
+
+type ValueSource = (db: Knex, vendorId: string) => Promise<string | undefined>;
+const firstId = (table: string, column = "id"): ValueSource => async (db, vendorId) =>
+  (await db(table).where({ vendor_id: vendorId }).first(column))?.[column];
+
+// Where a real object of the target vendor comes from, by route parameter name. A new dynamic segment
+// without a source here fails the probe, so its author must add one.
+const VALUE_SOURCES: Record<string, ValueSource> = {
+  vendor: async () => TARGET,
+  token: async () => "forged-token-forged-token-forged-token",
+  sheet: firstId("sheets", "slug"),
+  slug: firstId("sheets", "slug"),
+  n: async () => "1",
+  sku: firstId("cutters", "sku"),
+  cutter: firstId("cutters", "id"),
+  material: firstId("materials", "id"),
+  machineClass: firstId("machine_classes", "id"),
+  machine: firstId("machines", "id"),
+  setup: firstId("setups", "id"),
+  ticket: firstId("tickets", "id"),
+  id: firstId("tickets", "id"),
+  attachment: firstId("ticket_attachments", "id"),
+  version: firstId("sheet_versions", "id"),
+};
+
+describe("cross-vendor probe", () => {
+  let session: Session;
+  let values: Record<string, string>;
+  const routes = listAppRoutes().filter((r) => r.pattern.startsWith("/[vendor]") || r.pattern.startsWith("/api/v1/vendors/[vendor]"));
+
+  beforeAll(async () => {
+    const db = e2eDb();
+    const vendor = await db("vendors").where({ slug: TARGET }).first("id");
+    values = {};
+    for (const name of new Set(routes.flatMap((r) => paramsOf(r.pattern)))) {
+      const source = VALUE_SOURCES[name];
+      if (!source) throw new Error(`The probe has no value source for route parameter [${name}]: add one to VALUE_SOURCES.`);
+      const hasTable = await source(db, vendor.id).catch(() => undefined);
+      // A table that does not exist yet still gets a well-formed id, so the route is probed anyway.
+      values[name] = hasTable ?? "00000000-0000-4000-8000-000000000000";
+    }
+    session = await openBrowser();
+    await signInWithPassword(session.page, PROBER, "/northbeck/library");
+  });
+
+  afterAll(async () => {
+    await session?.close();
+    await closeE2eDb();
+  });
+
+  it("enumerates the app's vendor routes", () => {
+    expect(routes.filter((r) => r.kind === "page").length).toBeGreaterThanOrEqual(6);
+  });
+
+  it("the prober really is signed in and reaches its own vendor's admin pages", async () => {
+    const response = await session.page.goto("/northbeck/admin/members");
+    expect(response?.status()).toBe(200);
+  });
+
+  it("gets 404 on every page of the other vendor", async () => {
+    const failures: string[] = [];
+    for (const route of routes.filter((r) => r.kind === "page" && !(r.pattern in PUBLIC_BY_DESIGN))) {
+      const url = fillPattern(route.pattern, values);
+      const response = await session.context.request.get(url, { maxRedirects: 0, failOnStatusCode: false });
+      if (response.status() !== 404) failures.push(`${url} → ${response.status()}`);
+    }
+    await session.page.goto(fillPattern("/[vendor]/drafting", values));
+    await screenshot(session.page, "cross-vendor-probe-404");
+    expect(failures).toEqual([]);
+  });
+
+  it("gets 404 from every API route of the other vendor, for every method", async () => {
+    const failures: string[] = [];
+    for (const route of routes.filter((r) => r.kind === "api" && !(r.pattern in PUBLIC_BY_DESIGN))) {
+      const url = fillPattern(route.pattern, values);
+      for (const method of route.methods) {
+        const response = await session.context.request.fetch(url, { method, data: method === "GET" ? undefined : {}, failOnStatusCode: false });
+        if (response.status() !== 404) failures.push(`${method} ${url} → ${response.status()}`);
+        const text = await response.text();
+        if (/quillon/i.test(text.replace(url, ""))) failures.push(`${method} ${url} leaks data`);
+      }
+    }
+    expect(failures).toEqual([]);
+  });
+
+  it("cannot use a forged invitation link", async () => {
+    await session.page.goto(fillPattern("/[vendor]/join/[token]", values));
+    await expect(session.page.getByRole("heading", { name: "This invitation is not valid" }).isVisible()).resolves.toBe(true);
+  });
+});
