@@ -14,7 +14,7 @@ export function contrastRatio(a: string, b: string): number {
   return (hi + 0.05) / (lo + 0.05);
 }
 
-/** White or near-black text, whichever reads better on the accent. */
-export function inkFor(accent: string): "#ffffff" | "#1c1917" {
-  return contrastRatio(accent, "#ffffff") >= contrastRatio(accent, "#1c1917") ? "#ffffff" : "#1c1917";
+/** White or black text (one of them always reaches 4.5:1 on any colour), whichever reads better on the accent. */
+export function inkFor(accent: string): "#ffffff" | "#000000" {
+  return contrastRatio(accent, "#ffffff") >= contrastRatio(accent, "#000000") ? "#ffffff" : "#000000";
 }

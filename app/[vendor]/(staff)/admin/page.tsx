@@ -1,5 +1,6 @@
 import Link from "next/link";
 
+import { BrandingForm } from "@/components/admin/branding-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { listRecentAudit } from "@/lib/audit/list-audit";
@@ -18,17 +19,9 @@ export default async function AdminPage({ params }: { params: Promise<{ vendor: 
           <Link href={`/${vendor.slug}/admin/members`} className="font-medium underline">Members and roles</Link>
           <p className="mt-1 text-sm text-stone-600">Invite staff, change roles, remove people.</p>
         </li>
-        <li className="rounded-lg border border-stone-200 bg-white p-4">
-          <p className="font-medium">Branding</p>
-          <p className="mt-1 text-sm text-stone-600">Accent colour <span className="num" style={{ color: vendor.accentColor }}>■ {vendor.accentColor}</span>{vendor.hasLogo ? ", logo set" : ", no logo"}.</p>
-        </li>
-        <li className="rounded-lg border border-stone-200 bg-white p-4">
-          <p className="font-medium">Settings</p>
-          <p className="mt-1 text-sm text-stone-600">
-            Library {vendor.settings.libraryPublic ? "public" : "for signed-in customers only"}; publishing {vendor.settings.requireSecondApproval ? "needs a second engineer's approval" : "needs no second approval"}.
-          </p>
-        </li>
       </ul>
+      <h2 className="mb-3 text-lg font-semibold">Branding and settings</h2>
+      <div className="mb-8"><BrandingForm vendor={vendor} /></div>
       <h2 className="mb-3 text-lg font-semibold">Recent activity</h2>
       <ol className="divide-y divide-stone-100 rounded-lg border border-stone-200 bg-white text-sm">
         {audit.length === 0 ? <li className="p-3 text-stone-600">Nothing yet.</li> : null}

@@ -1,0 +1,17 @@
+import { z } from "zod";
+
+import { accentColorSchema } from "./vendor-schema";
+
+const checkbox = z.union([z.literal("on"), z.literal("true"), z.literal("")]).optional().transform((v) => v === "on" || v === "true");
+
+export const brandingSchema = z.object({
+  vendor: z.string(),
+  name: z.string().trim().min(2, "At least 2 characters.").max(80, "At most 80 characters."),
+  accentColor: accentColorSchema,
+  libraryPublic: checkbox,
+  requireSecondApproval: checkbox,
+});
+export type BrandingInput = z.infer<typeof brandingSchema>;
+
+export const LOGO_MAX_BYTES = 256 * 1024;
+export const LOGO_TYPES = ["image/png", "image/jpeg", "image/webp"] as const;
