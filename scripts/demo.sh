@@ -24,6 +24,7 @@ trap 'for pid in "${pids[@]}"; do kill "$pid" 2>/dev/null || true; done; bash sc
 bash scripts/pg.sh start
 if ! curl -fsS -o /dev/null http://127.0.0.1:1080/api/email 2>/dev/null; then
   pids+=("$(start_maildev "$SMTP_PORT" 1080 .data/maildev.log)")
+  wait_for_url http://127.0.0.1:1080/api/email 30
 fi
 s3_pid=$(start_s3_fake 4569 "$PWD/.data/s3" .data/s3-fake.log)
 if [ -n "$s3_pid" ]; then

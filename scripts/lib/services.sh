@@ -9,7 +9,7 @@ wait_for_url() { # url seconds
 }
 
 start_maildev() { # smtp_port web_port log
-  node node_modules/maildev/bin/maildev --ip 127.0.0.1 --smtp "$1" --web "$2" --mail-directory "$(mktemp -d)" >"$3" 2>&1 &
+  node_modules/.bin/maildev --ip 127.0.0.1 --smtp "$1" --web "$2" --mail-directory "$(mktemp -d)" >"$3" 2>&1 &
   echo $!
 }
 
