@@ -1,11 +1,9 @@
-import Link from "next/link";
+import { NotFoundMessage } from "@/components/ui/not-found-message";
 
 export default function NotFound() {
   return (
-    <main className="mx-auto max-w-xl py-24 text-center">
-      <h1 className="text-2xl font-semibold">Not found</h1>
-      <p className="mt-2 text-stone-600">There is nothing here, or you do not have access to it.</p>
-      <Link href="/" className="mt-6 inline-block underline">Back to Swarfbook</Link>
+    <main className="mx-auto max-w-xl px-4 py-8">
+      <NotFoundMessage />
     </main>
   );
 }
