@@ -10,7 +10,7 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias: { ...alias, ...serverOnlyStub } },
-        test: { name: "unit", include: ["tests/unit/**/*.test.{ts,tsx}"], environment: "node" },
+        test: { name: "unit", include: ["tests/unit/**/*.test.{ts,tsx}"], environment: "node", testTimeout: 30_000 },
       },
       {
         resolve: { alias: { ...alias, ...serverOnlyStub } },

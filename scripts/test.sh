@@ -17,11 +17,14 @@ INBOUND_PORT=${TEST_INBOUND_SMTP_PORT:-2526}
 mkdir -p .tmp test-results
 pids=()
 cleanup() {
-  for pid in "${pids[@]}"; do kill "$pid" 2>/dev/null || true; done
+  for pid in "${pids[@]}"; do pkill -P "$pid" 2>/dev/null || true; kill "$pid" 2>/dev/null || true; done
   bash scripts/pg.sh destroy >/dev/null 2>&1 || true
 }
 trap cleanup EXIT
 
+for port in "$APP_PORT" "$SMTP_PORT" "$MAILDEV_WEB_PORT" "$PG_PORT"; do
+  if ss -ltn 2>/dev/null | grep -q "127.0.0.1:$port "; then echo "Port $port is in use; stop what runs there (or set TEST_*_PORT)." >&2; exit 1; fi
+done
 bash scripts/pg.sh destroy >/dev/null 2>&1 || true
 bash scripts/pg.sh start
 pids+=("$(start_maildev "$SMTP_PORT" "$MAILDEV_WEB_PORT" .tmp/test-maildev.log)")
@@ -49,8 +52,8 @@ node --conditions=react-server --import tsx scripts/seed.ts --reset >/dev/null
 
 echo "== production build (into .next-test)"
 export NEXT_DIST_DIR=.next-test
-npx next build >.tmp/test-build.log 2>&1 || { tail -60 .tmp/test-build.log; exit 1; }
-npx next start -H 127.0.0.1 -p "$APP_PORT" >.tmp/test-app.log 2>&1 &
+node_modules/.bin/next build >.tmp/test-build.log 2>&1 || { tail -60 .tmp/test-build.log; exit 1; }
+node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >.tmp/test-app.log 2>&1 &
 pids+=("$!")
 wait_for_url "$E2E_BASE_URL/api/health" 90
 
