@@ -19,6 +19,7 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/support/integration-global-setup.ts"],
+          setupFiles: ["tests/support/integration-setup.ts"],
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,

@@ -3,13 +3,14 @@ import { randomBytes } from "node:crypto";
 import path from "node:path";
 
 import knexFactory from "knex";
+import type { TestProject } from "vitest/node";
 
 import { assertLocalDatabase } from "./local-db-guard";
 
 // Every integration run gets a fresh, migrated database in the local cluster and drops it after.
 const adminUrl = process.env.TEST_ADMIN_URL ?? "postgres://postgres@127.0.0.1:54329/postgres";
 
-export default async function setup() {
+export default async function setup(project: TestProject) {
   assertLocalDatabase(adminUrl);
   const name = `swarfbook_it_${process.pid}_${randomBytes(3).toString("hex")}`;
   const admin = knexFactory({ client: "pg", connection: adminUrl, pool: { min: 0, max: 1 } });
@@ -24,8 +25,8 @@ export default async function setup() {
     env: { ...process.env, DATABASE_URL: dbUrl },
     stdio: "pipe",
   });
-  process.env.DATABASE_URL = dbUrl;
-  process.env.JOBS_WORKER = "off";
+  // Given to the integration project only (tests/support/integration-setup.ts); the e2e project keeps its own database.
+  project.provide("integrationDatabaseUrl", dbUrl);
 
   return async () => {
     await admin.raw(`drop database if exists ${name} with (force)`);
