@@ -29,7 +29,8 @@ fi
 s3_pid=$(start_s3_fake 4569 "$PWD/.data/s3" .data/s3-fake.log)
 if [ -n "$s3_pid" ]; then
   pids+=("$s3_pid")
-  export STORAGE=s3 S3_ENDPOINT=http://127.0.0.1:4569 S3_BUCKET=swarfbook S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_REGION=us-east-1
+  wait_for_url http://127.0.0.1:4569/ 30
+  export STORAGE_ENGINE=s3 S3_ENDPOINT=http://127.0.0.1:4569 S3_BUCKET=swarfbook-uploads S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_REGION=us-east-1
 fi
 
 migrate

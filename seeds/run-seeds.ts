@@ -1,9 +1,17 @@
 import type { Knex } from "knex";
 
+import { seedBench } from "./seed-bench";
 import { seedFoundation } from "./seed-foundation";
+import { seedSheets } from "./seed-sheets";
+import { seedSupport } from "./seed-support";
+import { seedSearchIndex } from "@/search/indexing/seed-search-index";
 
 // Tables in dependency order for a reset; later features add theirs at the front.
 export const TENANT_TABLES = [
+  "search_words", "search_documents",
+  "inbound_mail_log", "problem_reports", "reply_snippets", "desk_views", "ticket_attachments", "ticket_messages", "ticket_sheet_links", "tickets",
+  "cutter_images",
+  "change_alerts_sent", "mail_preferences", "outcomes", "setups", "machines",
   "sheet_versions", "sheets", "machine_classes", "materials", "cutters",
   "api_tokens", "audit_log", "invitations", "members", "verification_tokens", "rate_limit_buckets", "users", "vendors",
 ];
@@ -11,5 +19,9 @@ export const TENANT_TABLES = [
 export async function runSeeds(knex: Knex, { reset }: { reset: boolean }) {
   if (reset) await knex.raw(`truncate ${TENANT_TABLES.join(", ")} cascade`);
   const ids = await seedFoundation(knex);
+  await seedSheets(knex, ids);
+  await seedBench(knex, ids);
+  await seedSupport(knex, ids);
+  await seedSearchIndex(knex);
   return ids;
 }

@@ -6,6 +6,8 @@ import { ROLE_LABELS } from "@/lib/auth/roles";
 import { inkFor } from "@/lib/ui/contrast";
 import type { Vendor } from "@/lib/vendors/vendor-schema";
 
+import { ShellSearchBox } from "@/components/search/shell-search-box";
+
 import { SignOutButton } from "./sign-out-button";
 
 type Props = { vendor: Vendor; role: Role | null; userName: string | null };
@@ -30,6 +32,7 @@ export function VendorHeader({ vendor, role, userName }: Props) {
             </Link>
           ))}
         </nav>
+        <ShellSearchBox vendorSlug={vendor.slug} />
         <div className="ml-auto flex items-center gap-3 text-sm">
           {userName ? (
             <>

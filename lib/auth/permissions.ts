@@ -14,6 +14,7 @@ export const PERMISSIONS = {
   "members.manage": ["admin"],
   "vendor.settings": ["admin"],
   "audit.read": ["admin"],
+  "tokens.manage": ["admin", "engineer", "support", "customer"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -1,8 +1,11 @@
 import "server-only";
 
+import { changeAlertSubscriber } from "@/lib/bench/change-alert-subscriber";
+import { searchIndexSubscriber } from "@/search/indexing/search-index-jobs";
+
 import type { SheetEvent } from "./sheet-events";
 
 export type SheetEventSubscriber = { name: string; handle: (event: SheetEvent) => Promise<void> };
 
 // Each feature that reacts to sheet events adds one entry here.
-export const SHEET_EVENT_SUBSCRIBERS: SheetEventSubscriber[] = [];
+export const SHEET_EVENT_SUBSCRIBERS: SheetEventSubscriber[] = [searchIndexSubscriber, changeAlertSubscriber];

@@ -5,38 +5,54 @@ import { db } from "@/lib/db/knex";
 export type PublishedSheetSummary = {
   slug: string;
   title: string;
+  summary: string;
   number: number;
   publishedAt: Date;
   cutterSku: string;
   cutterName: string;
   diameterMm: number;
   flutes: number;
+  materialSlug: string;
   materialName: string;
+  machineClassSlug: string;
   machineClassName: string;
 };
 
-export async function listPublishedSheets({ vendorId, limit = 200 }: { vendorId: string; limit?: number }): Promise<PublishedSheetSummary[]> {
-  const rows = await db("sheet_versions as v")
+export type LibraryFilters = { cutter?: string; material?: string; machineClass?: string };
+
+/** Current published versions, optionally narrowed to one cutter (SKU), material or machine class (slugs). */
+export async function listPublishedSheets({ vendorId, limit = 500, filters = {} }: { vendorId: string; limit?: number; filters?: LibraryFilters }): Promise<PublishedSheetSummary[]> {
+  const query = db("sheet_versions as v")
     .join("sheets as s", function () {
       this.on("s.id", "v.sheet_id").andOn("s.vendor_id", "v.vendor_id");
     })
     .join("cutters as c", "c.id", "s.cutter_id")
     .join("materials as m", "m.id", "s.material_id")
     .join("machine_classes as k", "k.id", "s.machine_class_id")
-    .where({ "v.vendor_id": vendorId, "v.state": "published" })
-    .orderBy([{ column: "m.name" }, { column: "c.diameter_mm" }])
+    .where({ "v.vendor_id": vendorId, "v.state": "published" });
+  if (filters.cutter) query.whereRaw("lower(c.sku) = lower(?)", [filters.cutter]);
+  if (filters.material) query.where("m.slug", filters.material);
+  if (filters.machineClass) query.where("k.slug", filters.machineClass);
+  const rows = await query
+    .orderBy([{ column: "m.name" }, { column: "c.diameter_mm" }, { column: "s.slug" }])
     .limit(limit)
-    .select("s.slug", "v.title", "v.number", "v.published_at", "c.sku", "c.name as cutter_name", "c.diameter_mm", "c.flutes", "m.name as material_name", "k.name as class_name");
+    .select(
+      "s.slug", "v.title", "v.front_matter", "v.number", "v.published_at", "c.sku", "c.name as cutter_name", "c.diameter_mm", "c.flutes",
+      "m.slug as material_slug", "m.name as material_name", "k.slug as class_slug", "k.name as class_name",
+    );
   return rows.map((r) => ({
     slug: r.slug,
     title: r.title,
+    summary: typeof r.front_matter?.summary === "string" ? r.front_matter.summary : "",
     number: r.number,
     publishedAt: r.published_at,
     cutterSku: r.sku,
     cutterName: r.cutter_name,
     diameterMm: r.diameter_mm,
     flutes: r.flutes,
+    materialSlug: r.material_slug,
     materialName: r.material_name,
+    machineClassSlug: r.class_slug,
     machineClassName: r.class_name,
   }));
 }

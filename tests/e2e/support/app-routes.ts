@@ -30,11 +30,18 @@ export function listAppRoutes(): AppRoute[] {
     });
 }
 
-/** The dynamic segments of a pattern, e.g. ["vendor", "sheet"]. */
-export function paramsOf(pattern: string): string[] {
-  return [...pattern.matchAll(/\[(?:\.\.\.)?([^\]]+)\]/g)].map((m) => m[1]);
+/**
+ * The dynamic segments of a pattern with the segment before each, as keys like "setups/[id]" —
+ * the same parameter name can mean different objects under different parents.
+ */
+export function paramKeysOf(pattern: string): string[] {
+  const segments = pattern.split("/").filter(Boolean);
+  return segments.flatMap((segment, i) => (/^\[.*\]$/.test(segment) ? [`${segments[i - 1] ?? ""}/${segment}`] : []));
 }
 
 export function fillPattern(pattern: string, values: Record<string, string>): string {
-  return pattern.replace(/\[(?:\.\.\.)?([^\]]+)\]/g, (_, name: string) => encodeURIComponent(values[name]));
+  const segments = pattern.split("/");
+  return segments
+    .map((segment, i) => (/^\[.*\]$/.test(segment) ? encodeURIComponent(values[`${segments[i - 1] ?? ""}/${segment}`]) : segment))
+    .join("/");
 }

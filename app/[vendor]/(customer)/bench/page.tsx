@@ -1,26 +1,50 @@
 import Link from "next/link";
 
+import { AlertsToggle } from "@/components/bench/alerts-toggle";
+import { MachineList } from "@/components/bench/machine-list";
+import { SetupsTable } from "@/components/bench/setups-table";
 import { EmptyState } from "@/components/ui/empty-state";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
+import { listSetups } from "@/lib/bench/list-setups";
+import { listMachines } from "@/lib/bench/machines";
+import { wantsChangeAlerts } from "@/lib/bench/mail-preferences";
 
 export const metadata = { title: "Bench" };
 
 export default async function BenchPage({ params }: { params: Promise<{ vendor: string }> }) {
   const { vendor: slug } = await params;
-  const { vendor } = await requirePageAccess(slug, "bench.use", `/${slug}/bench`);
+  const { vendor, user } = await requirePageAccess(slug, "bench.use", `/${slug}/bench`);
+  const owner = { vendorId: vendor.id, userId: user!.id };
+  const [machines, setups, alerts] = await Promise.all([listMachines(owner), listSetups(owner), wantsChangeAlerts(owner)]);
+  const register = (
+    <Link href={`/${vendor.slug}/bench/machines/new`} className="inline-flex min-h-11 items-center rounded bg-accent px-4 font-medium text-accent-ink">
+      Register a machine
+    </Link>
+  );
   return (
     <>
-      <PageHeader title="Bench" lead="Your machines, the setups you saved from sheets (pinned to their version) and how the cuts went." />
+      <PageHeader title="Bench" lead="Your machines, the setups you saved from sheets (pinned to their version) and how the cuts went." actions={register} />
       <section aria-labelledby="machines" className="mb-8">
         <h2 id="machines" className="mb-3 text-lg font-semibold">My machines</h2>
-        <EmptyState title="No machines registered yet.">Register your machine to adapt any sheet to its spindle, power and rigidity.</EmptyState>
+        {machines.length ? (
+          <MachineList machines={machines} vendorSlug={vendor.slug} />
+        ) : (
+          <EmptyState title="No machines registered yet.">Register your machine to adapt any sheet to its spindle, power and rigidity.</EmptyState>
+        )}
       </section>
-      <section aria-labelledby="setups">
+      <section aria-labelledby="setups" className="mb-8">
         <h2 id="setups" className="mb-3 text-lg font-semibold">Saved setups</h2>
-        <EmptyState title="No saved setups yet.">
-          Open a sheet in the <Link className="underline" href={`/${vendor.slug}/library`}>Library</Link> and adapt it to your machine.
-        </EmptyState>
+        {setups.length ? (
+          <SetupsTable setups={setups} vendorSlug={vendor.slug} />
+        ) : (
+          <EmptyState title="No saved setups yet.">
+            Open a sheet in the <Link className="underline" href={`/${vendor.slug}/library`}>Library</Link> and adapt it to your machine.
+          </EmptyState>
+        )}
+      </section>
+      <section aria-label="E-mail" className="border-t border-stone-200 pt-4">
+        <AlertsToggle vendorSlug={vendor.slug} enabled={alerts} />
       </section>
     </>
   );

@@ -1,36 +1,37 @@
 import Link from "next/link";
 
+import { LibraryFilters } from "@/components/library/library-filters";
+import { readUnits } from "@/components/library/read-units";
+import { SheetCards } from "@/components/library/sheet-cards";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
+import { listCutters, listMachineClasses, listMaterials } from "@/lib/catalogue/list-catalogue";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 
 export const metadata = { title: "Library" };
 
-export default async function LibraryPage({ params }: { params: Promise<{ vendor: string }> }) {
+type Props = { params: Promise<{ vendor: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+const one = (v: string | string[] | undefined) => (typeof v === "string" && v.trim() && v.length <= 80 ? v.trim() : undefined);
+
+export default async function LibraryPage({ params, searchParams }: Props) {
   const { vendor: slug } = await params;
   const { vendor } = await requirePageAccess(slug, "library.read", `/${slug}/library`);
-  const sheets = await listPublishedSheets({ vendorId: vendor.id });
+  const q = await searchParams;
+  const filters = { cutter: one(q.cutter), material: one(q.material), machineClass: one(q.machineClass) };
+  const [sheets, cutters, materials, machineClasses, units] = await Promise.all([
+    listPublishedSheets({ vendorId: vendor.id, filters }),
+    listCutters({ vendorId: vendor.id }),
+    listMaterials({ vendorId: vendor.id }),
+    listMachineClasses({ vendorId: vendor.id }),
+    readUnits(),
+  ]);
+  const filtered = Boolean(filters.cutter || filters.material || filters.machineClass);
   return (
     <>
-      <PageHeader title="Library" lead={`Published recipe sheets from ${vendor.name}: starting-point cutting data per cutter, material and machine class.`} />
-      {sheets.length === 0 ? (
-        <p className="rounded-lg border border-dashed border-stone-300 p-8 text-center text-stone-600">No sheets are published yet.</p>
-      ) : (
-        <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-          {sheets.map((sheet) => (
-            <li key={sheet.slug} className="rounded-lg border border-stone-200 bg-white p-4 shadow-sm">
-              <Link href={`/${vendor.slug}/library/${sheet.slug}`} className="font-medium hover:underline">
-                {sheet.title}
-              </Link>
-              <p className="mt-1 text-sm text-stone-600">
-                <span className="num">{sheet.cutterSku}</span> · Ø <span className="num">{sheet.diameterMm} mm</span> ·{" "}
-                <span className="num">{sheet.flutes}</span> {sheet.flutes === 1 ? "flute" : "flutes"} · {sheet.materialName} · {sheet.machineClassName}
-              </p>
-              <p className="mt-1 text-xs text-stone-500">Version {sheet.number}</p>
-            </li>
-          ))}
-        </ul>
-      )}
+      <PageHeader title="Library" lead={`Published recipe sheets from ${vendor.name}: starting-point cutting data per cutter, material and machine class.`} actions={<Link href={`/${vendor.slug}/library/search`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500">Search sheets</Link>} />
+      <LibraryFilters action={`/${vendor.slug}/library`} filters={filters} cutters={cutters} materials={materials} machineClasses={machineClasses} />
+      <p className="mb-3 text-sm text-stone-600" role="status"><span className="num">{sheets.length}</span> {sheets.length === 1 ? "sheet" : "sheets"}</p>
+      <SheetCards sheets={sheets} vendorSlug={vendor.slug} units={units} empty={filtered ? "No sheet matches these filters." : "No sheets are published yet."} />
     </>
   );
 }

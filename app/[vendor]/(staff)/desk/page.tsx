@@ -1,16 +1,28 @@
-import { EmptyState } from "@/components/ui/empty-state";
+import Link from "next/link";
+
+import { QueueTable } from "@/components/desk/queue-table";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
+import { listAssignees, listMaterialOptions } from "@/lib/desk/desk-options";
+import { listQueue } from "@/lib/desk/list-queue";
+import { listDeskViews } from "@/lib/desk/saved-views";
 
 export const metadata = { title: "Desk" };
 
 export default async function DeskPage({ params }: { params: Promise<{ vendor: string }> }) {
   const { vendor: slug } = await params;
-  await requirePageAccess(slug, "desk.use", `/${slug}/desk`);
+  const { vendor, user } = await requirePageAccess(slug, "desk.use", `/${slug}/desk`);
+  const [tickets, views, assignees, materials] = await Promise.all([
+    listQueue({ vendorId: vendor.id, userId: user!.id, filters: {} }),
+    listDeskViews({ vendorId: vendor.id, userId: user!.id }),
+    listAssignees({ vendorId: vendor.id }),
+    listMaterialOptions({ vendorId: vendor.id }),
+  ]);
+  const dashboard = <Link href={`/${vendor.slug}/desk/dashboard`} className="inline-flex min-h-9 items-center rounded border border-stone-300 bg-white px-3 text-sm">Dashboard</Link>;
   return (
     <>
-      <PageHeader title="Desk" lead="The support queue: tickets by status, priority and response target." />
-      <EmptyState title="The queue is empty.">New tickets from customers land here.</EmptyState>
+      <PageHeader title="Desk" lead="The support queue: tickets by status, priority and response target. It refreshes on its own." actions={dashboard} />
+      <QueueTable vendor={vendor.slug} initial={tickets} views={views} assignees={assignees} materials={materials} />
     </>
   );
 }

@@ -1,0 +1,11 @@
+import { notFound } from "next/navigation";
+import type { ReactNode } from "react";
+
+import { loadLibrarySheet } from "@/components/library/load-library-sheet";
+
+// The sheet is looked up here, above any loading boundary, so an unknown sheet is a real 404.
+export default async function SheetLayout({ children, params }: { children: ReactNode; params: Promise<{ vendor: string; sheet: string }> }) {
+  const { vendor, sheet } = await params;
+  if (!(await loadLibrarySheet(vendor, sheet))) notFound();
+  return children;
+}

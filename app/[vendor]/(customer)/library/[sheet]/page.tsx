@@ -1,0 +1,23 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+
+import { loadLibrarySheet } from "@/components/library/load-library-sheet";
+import { readUnits } from "@/components/library/read-units";
+import { SheetView } from "@/components/library/sheet-view";
+import { adaptPanelRenderer } from "@/components/adapt/adapt-panel-mount";
+
+type Props = { params: Promise<{ vendor: string; sheet: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const { vendor, sheet } = await params;
+  return { title: (await loadLibrarySheet(vendor, sheet))?.data.version.title ?? "Sheet" };
+}
+
+export default async function SheetPage({ params }: Props) {
+  const { vendor, sheet } = await params;
+  const found = await loadLibrarySheet(vendor, sheet);
+  if (!found) notFound();
+  const units = await readUnits();
+  const renderAdaptPanel = adaptPanelRenderer({ vendor: found.vendor, versionId: found.data.version.id, units, returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}` });
+  return <SheetView data={found.data} units={units} vendorSlug={found.vendor.slug} renderAdaptPanel={renderAdaptPanel} />;
+}

@@ -1,0 +1,25 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+
+import { loadLibrarySheet, parseVersionNumber } from "@/components/library/load-library-sheet";
+import { readUnits } from "@/components/library/read-units";
+import { SheetView } from "@/components/library/sheet-view";
+import { adaptPanelRenderer } from "@/components/adapt/adapt-panel-mount";
+
+type Props = { params: Promise<{ vendor: string; sheet: string; n: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const { vendor, sheet, n } = await params;
+  const found = await loadLibrarySheet(vendor, sheet, parseVersionNumber(n) ?? -1);
+  return { title: found ? `${found.data.version.title} (version ${found.data.version.number})` : "Sheet" };
+}
+
+export default async function SheetVersionPage({ params }: Props) {
+  const { vendor, sheet, n } = await params;
+  const number = parseVersionNumber(n);
+  const found = number === null ? null : await loadLibrarySheet(vendor, sheet, number);
+  if (!found) notFound();
+  const units = await readUnits();
+  const renderAdaptPanel = adaptPanelRenderer({ vendor: found.vendor, versionId: found.data.version.id, units, returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}` });
+  return <SheetView data={found.data} units={units} vendorSlug={found.vendor.slug} renderAdaptPanel={renderAdaptPanel} />;
+}

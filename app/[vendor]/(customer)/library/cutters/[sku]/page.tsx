@@ -1,0 +1,35 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+
+import { CutterCard } from "@/components/library/cutter-card";
+import { loadLibraryCutter } from "@/components/library/load-library-cutter";
+import { readUnits } from "@/components/library/read-units";
+import { SheetCards } from "@/components/library/sheet-cards";
+import { UnitsToggle } from "@/components/library/units-toggle";
+import { PageHeader } from "@/components/ui/page-header";
+import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
+
+type Props = { params: Promise<{ vendor: string; sku: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const { vendor, sku } = await params;
+  return { title: (await loadLibraryCutter(vendor, sku))?.cutter.sku ?? "Cutter" };
+}
+
+// The deep-link target of a cutter's short link and QR code: the cutter and its published sheets.
+export default async function CutterPage({ params }: Props) {
+  const { vendor: vendorSlug, sku } = await params;
+  const found = await loadLibraryCutter(vendorSlug, sku);
+  if (!found) notFound();
+  const { vendor, cutter } = found;
+  const [sheets, units] = await Promise.all([listPublishedSheets({ vendorId: vendor.id, filters: { cutter: cutter.sku } }), readUnits()]);
+  return (
+    <>
+      <PageHeader title={`${cutter.sku}: ${cutter.name}`} lead="Published recipe sheets for this cutter." actions={<UnitsToggle units={units} />} />
+      <div className="mb-6 max-w-xl">
+        <CutterCard cutter={cutter} units={units} vendorSlug={vendor.slug} />
+      </div>
+      <SheetCards sheets={sheets} vendorSlug={vendor.slug} units={units} empty="No sheet is published for this cutter yet." />
+    </>
+  );
+}

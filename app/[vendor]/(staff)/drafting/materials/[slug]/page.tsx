@@ -1,0 +1,37 @@
+import { notFound } from "next/navigation";
+
+import { MaterialForm } from "@/components/catalogue/catalogue-forms";
+import { loadMaterial } from "@/components/catalogue/load-drafting-item";
+import { PageHeader } from "@/components/ui/page-header";
+import { requirePageAccess } from "@/lib/auth/page-access";
+import { can } from "@/lib/auth/permissions";
+
+import { saveMaterialAction } from "../../actions";
+import { DetailCard } from "./detail-card";
+
+type Props = { params: Promise<{ vendor: string; slug: string }> };
+
+export async function generateMetadata({ params }: Props) {
+  const { vendor, slug } = await params;
+  return { title: (await loadMaterial(vendor, slug))?.name ?? "Not found" };
+}
+
+export default async function DetailPage({ params }: Props) {
+  const { vendor: vendorSlug, slug } = await params;
+  const { member } = await requirePageAccess(vendorSlug, "sheets.author", `/${vendorSlug}/drafting/materials/${slug}`);
+  const item = await loadMaterial(vendorSlug, slug);
+  if (!item) notFound();
+  const { id, updatedAt: _updatedAt, ...fields } = item;
+  return (
+    <>
+      <PageHeader title={item.name} />
+      <DetailCard item={item} />
+      {can(member?.role, "catalogue.edit") ? (
+        <section aria-labelledby="edit-heading" className="mt-8">
+          <h2 id="edit-heading" className="mb-3 text-lg font-semibold">Edit</h2>
+          <MaterialForm vendorSlug={vendorSlug} action={saveMaterialAction} id={id} defaultValues={{ ...fields, synonyms: fields.synonyms.join(", "), cautions: fields.cautions.map((c) => `${c.kind}: ${c.text}`).join("\n") }} />
+        </section>
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,16 @@
+import { cutterQr } from "@/lib/bench/cutter-links";
+import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
+import { NotFound } from "@/lib/errors/domain-errors";
+import { withVendor } from "@/lib/http/with-vendor";
+
+// GET /api/v1/vendors/{vendor}/cutters/{sku}/qr?format=png|svg[&download=1]: QR code of the cutter's short link.
+export const GET = withVendor<{ vendor: string; sku: string }>(async (request, { access, params }) => {
+  const cutter = await getCutterBySku({ vendorId: access.vendor.id, sku: decodeURIComponent(params.sku) });
+  if (!cutter) throw new NotFound();
+  const query = new URL(request.url).searchParams;
+  const format = query.get("format") === "svg" ? "svg" : "png";
+  const { body, contentType } = await cutterQr(cutter.shortCode, format);
+  const headers: Record<string, string> = { "content-type": contentType, "cache-control": "public, max-age=86400", "content-security-policy": "default-src 'none'; style-src 'unsafe-inline'" };
+  if (query.get("download")) headers["content-disposition"] = `attachment; filename="${cutter.sku.replace(/[^A-Za-z0-9._-]/g, "-")}-qr.${format}"`;
+  return new Response(body, { headers });
+}, { permission: "library.read" });

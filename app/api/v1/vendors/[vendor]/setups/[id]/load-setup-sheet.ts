@@ -1,0 +1,22 @@
+import "server-only";
+
+import type { VendorAccess } from "@/lib/auth/access";
+import { requireMember } from "@/lib/auth/access";
+import { getSetup } from "@/lib/bench/list-setups";
+import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
+import { setupSheetData } from "@/lib/bench/setup-sheet-data";
+import { NotFound } from "@/lib/errors/domain-errors";
+import { appUrl } from "@/lib/http/app-url";
+
+/** The setup sheet's data for the PDF and CSV routes; only the owner finds it. */
+export async function loadSetupSheet(access: VendorAccess, setupId: string) {
+  requireMember(access);
+  const setup = await getSetup({ vendorId: access.vendor.id, userId: access.user.id, setupId });
+  if (!setup) throw new NotFound();
+  const context = await loadAdaptContext({ vendorId: access.vendor.id, versionId: setup.sheetVersionId });
+  if (!context) throw new NotFound();
+  const data = setupSheetData({ context, operationIndex: setup.operationIndex, result: setup.result, setupName: setup.name, machineName: setup.machineName, units: setup.units });
+  const versionUrl = appUrl(`/${access.vendor.slug}/library/${context.sheetSlug}/v/${context.versionNumber}`);
+  const fileName = `setup-${context.sheetSlug}-v${context.versionNumber}`.replace(/[^a-z0-9-]/gi, "-").slice(0, 80);
+  return { data, versionUrl, fileName, vendorName: access.vendor.name };
+}

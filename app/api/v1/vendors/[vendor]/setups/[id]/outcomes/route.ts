@@ -1,0 +1,28 @@
+import { outcomeFieldsSchema } from "@/content-schema/outcome-fields";
+import { outcomeFormSchema } from "@/content-schema/outcome-form";
+import { requireMember } from "@/lib/auth/access";
+import { getSetup } from "@/lib/bench/list-setups";
+import { recordOutcome } from "@/lib/bench/outcomes";
+import { NotFound, TooLarge } from "@/lib/errors/domain-errors";
+import { parseInput } from "@/lib/errors/zod-field-errors";
+import { readJson } from "@/lib/http/read-json";
+import { withVendor } from "@/lib/http/with-vendor";
+import { MAX_UPLOAD_BYTES } from "@/lib/storage";
+
+const formValues = (form: FormData) => Object.fromEntries([...form.keys()].map((k) => [k, form.get(k)]));
+
+// POST /api/v1/vendors/{vendor}/setups/{id}/outcomes: report how a cut went (JSON, or multipart with a photo).
+export const POST = withVendor<{ vendor: string; id: string }>(async (request, { access, params }) => {
+  requireMember(access);
+  const owner = { vendorId: access.vendor.id, userId: access.user.id, setupId: params.id };
+  if (!(await getSetup(owner))) throw new NotFound();
+  let outcome;
+  if ((request.headers.get("content-type") ?? "").startsWith("multipart/form-data")) {
+    if (Number(request.headers.get("content-length") ?? "0") > MAX_UPLOAD_BYTES + 64 * 1024) throw new TooLarge("A photo may be at most 10 MB.");
+    const { vendor: _v, setupId: _s, photo, ...fields } = parseInput(outcomeFormSchema, { ...formValues(await request.formData()), vendor: access.vendor.slug, setupId: params.id });
+    outcome = await recordOutcome({ ...owner, fields, photo: photo ? Buffer.from(await photo.arrayBuffer()) : null });
+  } else {
+    outcome = await recordOutcome({ ...owner, fields: parseInput(outcomeFieldsSchema, await readJson(request)) });
+  }
+  return Response.json({ outcome }, { status: 201 });
+}, { permission: "bench.use", rateLimit: { limit: 30, windowSeconds: 60 } });

@@ -1,0 +1,30 @@
+import { NextResponse } from "next/server";
+
+import { apiNewSheetSchema } from "@/content-schema/sheet-workflow";
+import { parseInput } from "@/lib/errors/zod-field-errors";
+import { readJson } from "@/lib/http/read-json";
+import { withVendor } from "@/lib/http/with-vendor";
+import { apiActor } from "@/lib/sheets/api-actor";
+import { createSheet } from "@/lib/sheets/create-sheet";
+import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
+
+// GET /api/v1/vendors/{vendor}/sheets: the published sheets (filters: cutter, material, machineClass).
+export const GET = withVendor(
+  async (request, { access }) => {
+    const q = request.nextUrl.searchParams;
+    const filters = { cutter: q.get("cutter") ?? undefined, material: q.get("material") ?? undefined, machineClass: q.get("machineClass") ?? undefined };
+    const sheets = await listPublishedSheets({ vendorId: access.vendor.id, filters });
+    return NextResponse.json({ sheets });
+  },
+  { permission: "library.read" },
+);
+
+// POST /api/v1/vendors/{vendor}/sheets: a new sheet with a first draft from MDX source { slug, source }.
+export const POST = withVendor(
+  async (request, { access }) => {
+    const body = parseInput(apiNewSheetSchema, await readJson(request, 256 * 1024));
+    const created = await createSheet({ ...apiActor(access), slug: body.slug, source: body.source });
+    return NextResponse.json({ slug: created.slug, number: created.number, state: "draft", revision: created.revision, issues: created.issues }, { status: 201 });
+  },
+  { permission: "sheets.author" },
+);

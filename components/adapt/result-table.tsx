@@ -1,0 +1,49 @@
+import type { ContextOperation } from "@/lib/bench/adapt-context";
+import { type AdaptNumbers, formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/machining";
+
+type Row = { key: string; label: string; kind: QuantityKind; sheet: number | null; adapted: number | null };
+
+export function resultRows(op: ContextOperation, cutter: { diameterMm: number; flutes: number }, adapted: AdaptNumbers | null): Row[] {
+  const a = (v: number | null | undefined) => (adapted ? (v ?? null) : null);
+  return [
+    { key: "n", label: "n (spindle speed)", kind: "spindleSpeed", sheet: op.rpm, adapted: a(adapted?.rpm) },
+    { key: "vf", label: "vf (feed rate)", kind: "feedRate", sheet: op.feedMmMin, adapted: a(adapted?.feedMmMin) },
+    { key: "fz", label: "fz (chip load)", kind: "chipLoad", sheet: op.feedMmMin / (cutter.flutes * op.rpm), adapted: a(adapted?.chipLoadMm) },
+    { key: "vc", label: "vc (cutting speed)", kind: "cuttingSpeed", sheet: (Math.PI * cutter.diameterMm * op.rpm) / 1000, adapted: a(adapted?.cuttingSpeedMpm) },
+    { key: "ap", label: "ap (axial depth)", kind: "length", sheet: op.axialDepthMm, adapted: a(adapted?.axialDepthMm) },
+    { key: "ae", label: "ae (radial depth)", kind: "length", sheet: op.radialDepthMm, adapted: a(adapted?.radialDepthMm) },
+    { key: "plunge", label: "Plunge feed", kind: "feedRate", sheet: op.plungeFeedMmMin, adapted: a(adapted?.plungeFeedMmMin) },
+    { key: "q", label: "Q (removal rate)", kind: "removalRate", sheet: null, adapted: a(adapted?.mrrCm3Min) },
+    { key: "pc", label: "Pc (cutting power)", kind: "power", sheet: null, adapted: a(adapted?.powerKw) },
+    { key: "defl", label: "Tool deflection", kind: "deflection", sheet: null, adapted: a(adapted?.deflectionMm) },
+  ];
+}
+
+const differs = (r: Row) => r.sheet !== null && r.adapted !== null && Math.abs(r.adapted - r.sheet) > 1e-9 * Math.max(1, Math.abs(r.sheet));
+
+/** The sheet's numbers beside the adapted ones; a changed number is marked with a word, not only a colour. */
+export function ResultTable({ rows, units, headings = ["Sheet", "Your machine"] }: { rows: Row[]; units: UnitSystem; headings?: [string, string] }) {
+  return (
+    <table className="mt-3 w-full border-collapse text-sm">
+      <thead>
+        <tr className="border-b border-stone-300 text-left">
+          <th scope="col" className="py-2 pr-2 font-medium">Quantity</th>
+          <th scope="col" className="py-2 pr-2 text-right font-medium">{headings[0]}</th>
+          <th scope="col" className="py-2 text-right font-medium">{headings[1]}</th>
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map((r) => (
+          <tr key={r.key} data-row={r.key} className="border-b border-stone-200">
+            <th scope="row" className="py-2 pr-2 text-left font-normal">{r.label}</th>
+            <td className="num py-2 pr-2 text-right text-stone-600">{formatQuantity(r.sheet, r.kind, units)}</td>
+            <td data-testid={`adapted-${r.key}`} className={`num py-2 text-right ${differs(r) ? "font-semibold text-stone-950" : ""}`}>
+              {formatQuantity(r.adapted, r.kind, units)}
+              {differs(r) ? <span className="ml-1 text-xs font-normal text-amber-800">changed</span> : null}
+            </td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}

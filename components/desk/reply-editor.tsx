@@ -1,0 +1,102 @@
+"use client";
+
+import { useEffect, useRef, useState } from "react";
+
+import { staffReplyAction } from "@/app/[vendor]/(staff)/desk/actions";
+import { FormMessage } from "@/components/forms/form-message";
+import { SubmitButton } from "@/components/forms/submit-button";
+import { useValidatedAction } from "@/components/forms/use-validated-action";
+import { SafeMarkdown } from "@/components/support/safe-markdown";
+import { UploadField } from "@/components/support/upload-field";
+import { ticketReplySchema } from "@/content-schema/ticket-update";
+import { expandSnippet, type SnippetValues } from "@/lib/desk/expand-snippet";
+
+type Option = { id: string; name: string };
+type Props = {
+  vendor: string;
+  ticketId: string;
+  versions: Option[];
+  machines: Option[];
+  defaultMachineId: string | null;
+  defaultVersionId: string | null;
+  snippets: { id: string; title: string; body: string }[];
+  placeholders: SnippetValues;
+};
+
+const field = "min-h-9 rounded border border-stone-300 bg-white px-2 text-sm";
+
+/** Markdown reply or internal note, with an adapted-sheet picker and saved snippets. */
+export function ReplyEditor({ vendor, ticketId, versions, machines, defaultMachineId, defaultVersionId, snippets, placeholders }: Props) {
+  const { state, formAction, onSubmit, errors } = useValidatedAction(staffReplyAction, ticketReplySchema);
+  const [body, setBody] = useState("");
+  const [preview, setPreview] = useState(false);
+  const [versionId, setVersionId] = useState("");
+  const form = useRef<HTMLFormElement>(null);
+  // After a successful send: clear the editor (derived from the new action state, not in an effect).
+  const [seen, setSeen] = useState(state);
+  const [sent, setSent] = useState(0);
+  if (state !== seen) {
+    setSeen(state);
+    if (state.ok) {
+      setBody("");
+      setVersionId("");
+      setSent((n) => n + 1);
+    }
+  }
+  useEffect(() => {
+    if (sent) form.current?.reset();
+  }, [sent]);
+  const sheetTitle = versions.find((v) => v.id === (versionId || defaultVersionId))?.name;
+  const values = { ...placeholders, "sheet.title": sheetTitle ?? placeholders["sheet.title"] };
+
+  return (
+    <form ref={form} action={formAction} onSubmit={onSubmit} className="space-y-3 rounded-lg border border-stone-300 bg-white p-4" aria-label="Reply editor">
+      <input type="hidden" name="vendor" value={vendor} />
+      <input type="hidden" name="ticketId" value={ticketId} />
+      <fieldset className="flex flex-wrap gap-4 text-sm">
+        <legend className="sr-only">Kind of message</legend>
+        <label className="flex items-center gap-2"><input type="radio" name="visibility" value="public" defaultChecked /> Reply to customer</label>
+        <label className="flex items-center gap-2"><input type="radio" name="visibility" value="note" /> Internal note (staff only)</label>
+      </fieldset>
+      <div className="flex flex-wrap items-center gap-2 text-sm">
+        <button type="button" onClick={() => setPreview(false)} aria-pressed={!preview} className="rounded px-2 aria-pressed:bg-stone-200">Write</button>
+        <button type="button" onClick={() => setPreview(true)} aria-pressed={preview} className="rounded px-2 aria-pressed:bg-stone-200">Preview</button>
+        {snippets.length ? (
+          <select aria-label="Insert snippet" className={field} value="" onChange={(e) => {
+            const s = snippets.find((x) => x.id === e.target.value);
+            if (s) setBody((b) => (b ? `${b}\n\n` : "") + expandSnippet(s.body, values));
+          }}>
+            <option value="">Insert a snippet…</option>
+            {snippets.map((s) => <option key={s.id} value={s.id}>{s.title}</option>)}
+          </select>
+        ) : null}
+      </div>
+      <label htmlFor="f-staff-body" className="sr-only">Message</label>
+      <textarea id="f-staff-body" name="body" rows={7} value={body} onChange={(e) => setBody(e.target.value)} hidden={preview} className="w-full rounded border border-stone-300 px-3 py-2 font-mono text-sm" />
+      {preview ? <div className="min-h-24 rounded border border-dashed border-stone-300 p-3"><SafeMarkdown source={body || "_Nothing to preview._"} /></div> : null}
+      {errors.body ? <p className="text-sm text-red-800"><span aria-hidden>⚠ </span>{errors.body.join(" ")}</p> : null}
+      <fieldset className="grid gap-2 text-sm sm:grid-cols-2">
+        <legend className="font-medium">Embed a sheet adapted to the customer&apos;s machine</legend>
+        <label className="flex flex-col">Sheet version
+          <select name="cardSheetVersionId" className={field} value={versionId} onChange={(e) => setVersionId(e.target.value)}>
+            <option value="">No sheet</option>
+            {versions.map((v) => <option key={v.id} value={v.id}>{v.name}</option>)}
+          </select>
+        </label>
+        <label className="flex flex-col">Customer&apos;s machine
+          <select name="cardMachineId" className={field} defaultValue={defaultMachineId ?? machines[0]?.id ?? ""}>
+            <option value="">—</option>
+            {machines.map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
+          </select>
+        </label>
+        {errors.cardMachineId || errors.cardSheetVersionId ? (
+          <p className="text-red-800 sm:col-span-2"><span aria-hidden>⚠ </span>{[...(errors.cardMachineId ?? []), ...(errors.cardSheetVersionId ?? [])].join(" ")}</p>
+        ) : null}
+        {versionId && !machines.length ? <p className="text-amber-900 sm:col-span-2"><span aria-hidden>⚠ </span>The customer has no saved machine, so the sheet cannot be adapted.</p> : null}
+      </fieldset>
+      <UploadField key={sent} vendor={vendor} label="Attach files" />
+      <FormMessage state={state} success={state.message} />
+      <SubmitButton pendingText="Sending…">Send</SubmitButton>
+    </form>
+  );
+}

@@ -1,0 +1,31 @@
+"use client";
+
+import Link from "next/link";
+
+import { operationKindLabels } from "@/content-schema/sheet-kinds";
+import type { SearchHit } from "@/search/run/search-response";
+
+import { HighlightedText } from "./highlighted-text";
+
+type Props = { hit: SearchHit; href: string; id: string; active: boolean; onHover: () => void };
+
+export function SearchHitItem({ hit, href, id, active, onHover }: Props) {
+  const cutterText = `${hit.cutter.sku} ${hit.cutter.name}`;
+  return (
+    <li id={id} role="option" aria-selected={active} onMouseEnter={onHover} className={`rounded-lg border bg-white p-4 shadow-sm ${active ? "border-stone-700 ring-2 ring-stone-300" : "border-stone-200"}`}>
+      <Link href={href} className="font-medium hover:underline" tabIndex={-1}>
+        <HighlightedText text={hit.title} ranges={hit.highlights.title} />
+      </Link>
+      <p className="mt-1 text-sm text-stone-600">
+        <HighlightedText text={cutterText} ranges={hit.highlights.cutter} /> · Ø{" "}
+        <span className="num">{hit.cutter.diameterMm.toLocaleString("en", { maximumFractionDigits: 3 })} mm</span> · <span className="num">{hit.cutter.flutes}</span> {hit.cutter.flutes === 1 ? "flute" : "flutes"}
+      </p>
+      <p className="text-sm text-stone-600">
+        <HighlightedText text={hit.material.name ?? ""} ranges={hit.highlights.material} />
+        {hit.machineClass ? ` · ${hit.machineClass.name}` : null} · {hit.operations.map((op) => operationKindLabels[op]).join(", ")}
+      </p>
+      <p className="mt-1 line-clamp-2 text-sm text-stone-500"><HighlightedText text={hit.summary} ranges={hit.highlights.summary} /></p>
+      <p className="mt-1 text-xs text-stone-500">Version <span className="num">{hit.version}</span></p>
+    </li>
+  );
+}

@@ -1,0 +1,12 @@
+import "server-only";
+
+import type { SheetEventSubscriber } from "@/lib/events/subscribers";
+
+import { sendChangeAlerts } from "./send-change-alerts";
+
+export const changeAlertSubscriber: SheetEventSubscriber = {
+  name: "bench.change-alerts",
+  handle: async (event) => {
+    await sendChangeAlerts(event);
+  },
+};

@@ -1,0 +1,67 @@
+import type { BenchMachineInput } from "./adapt-context";
+
+export type MachineRow = {
+  id: string;
+  vendor_id: string;
+  user_id: string;
+  name: string;
+  preset: string | null;
+  rpm_min: number;
+  rpm_max: number;
+  power_kw: number;
+  max_feed_mm_min: number;
+  rigidity: number;
+  z_thrust_n: number | null;
+  stickout_mm: number | null;
+  units: "metric" | "imperial";
+  created_at: Date;
+  updated_at: Date;
+};
+
+/** A customer's machine in metric machining units. */
+export type Machine = {
+  id: string;
+  name: string;
+  preset: string | null;
+  rpmMin: number;
+  rpmMax: number;
+  powerKw: number;
+  maxFeedMmMin: number;
+  rigidity: number;
+  zThrustN: number | null;
+  stickoutMm: number | null;
+  units: "metric" | "imperial";
+  updatedAt: string;
+};
+
+export const MACHINE_COLUMNS = ["id", "name", "preset", "rpm_min", "rpm_max", "power_kw", "max_feed_mm_min", "rigidity", "z_thrust_n", "stickout_mm", "units", "updated_at"];
+
+export function rowToMachine(row: Pick<MachineRow, "id" | "name" | "preset" | "rpm_min" | "rpm_max" | "power_kw" | "max_feed_mm_min" | "rigidity" | "z_thrust_n" | "stickout_mm" | "units" | "updated_at">): Machine {
+  return {
+    id: row.id,
+    name: row.name,
+    preset: row.preset,
+    rpmMin: Number(row.rpm_min),
+    rpmMax: Number(row.rpm_max),
+    powerKw: Number(row.power_kw),
+    maxFeedMmMin: Number(row.max_feed_mm_min),
+    rigidity: Number(row.rigidity),
+    zThrustN: row.z_thrust_n === null ? null : Number(row.z_thrust_n),
+    stickoutMm: row.stickout_mm === null ? null : Number(row.stickout_mm),
+    units: row.units,
+    updatedAt: new Date(row.updated_at).toISOString(),
+  };
+}
+
+/** The engine's machine input (and the usual stick-out) from a stored machine. */
+export function machineToInput(m: Pick<Machine, "rpmMin" | "rpmMax" | "powerKw" | "maxFeedMmMin" | "rigidity" | "zThrustN" | "stickoutMm">): BenchMachineInput {
+  return {
+    minRpm: m.rpmMin,
+    maxRpm: m.rpmMax,
+    spindlePowerKw: m.powerKw,
+    maxFeedMmMin: m.maxFeedMmMin,
+    rigidity: m.rigidity,
+    zThrustN: m.zThrustN ?? undefined,
+    stickoutMm: m.stickoutMm,
+  };
+}

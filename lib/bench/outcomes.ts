@@ -1,0 +1,76 @@
+import "server-only";
+
+import type { OutcomeFields, OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
+import { writeAudit } from "@/lib/audit/write-audit";
+import { db } from "@/lib/db/knex";
+import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
+import { getStorage, newStorageKey, sniffUpload } from "@/lib/storage";
+
+export type Outcome = {
+  id: string;
+  result: OutcomeResult;
+  symptom: OutcomeSymptom | null;
+  changes: OutcomeFields["changes"];
+  notes: string;
+  hasPhoto: boolean;
+  sheetVersionId: string;
+  createdAt: string;
+};
+
+type Options = { vendorId: string; userId: string; setupId: string };
+
+/** Records how a cut went, against the setup's pinned version and machine. The photo must sniff as an image. */
+export async function recordOutcome({ vendorId, userId, setupId, fields, photo }: Options & { fields: OutcomeFields; photo?: Buffer | null }) {
+  const setup = await db("setups").where({ vendor_id: vendorId, user_id: userId, id: setupId }).first("id", "sheet_version_id", "machine_id");
+  if (!setup) throw new NotFound("That setup was not found.");
+  let photoKey: string | null = null;
+  if (photo && photo.byteLength > 0) {
+    const sniffed = await sniffUpload(photo, "photo");
+    if (sniffed.kind !== "image") throw new InvalidInput("Please correct the marked fields.", { photo: ["The photo must be a PNG, JPEG or WebP image."] });
+    photoKey = newStorageKey();
+    await getStorage().put(photoKey, photo, sniffed.contentType);
+  }
+  const [row] = await db("outcomes")
+    .insert({
+      vendor_id: vendorId,
+      setup_id: setup.id,
+      sheet_version_id: setup.sheet_version_id,
+      user_id: userId,
+      machine_id: setup.machine_id,
+      result: fields.result,
+      symptom: fields.result === "failed" ? (fields.symptom ?? null) : null,
+      changes: JSON.stringify(fields.result === "worked_after_changes" ? fields.changes : {}),
+      notes: fields.notes,
+      photo_key: photoKey,
+    })
+    .returning("id");
+  await writeAudit({ vendorId, actorUserId: userId, action: "outcome.create", objectType: "outcome", objectId: row.id, details: { setupId, result: fields.result } });
+  return { id: row.id as string };
+}
+
+export async function listOutcomes({ vendorId, userId, setupId }: Options): Promise<Outcome[]> {
+  const rows = await db("outcomes")
+    .where({ vendor_id: vendorId, user_id: userId, setup_id: setupId })
+    .orderBy("created_at", "desc")
+    .select("id", "result", "symptom", "changes", "notes", "photo_key", "sheet_version_id", "created_at");
+  return rows.map((r) => ({
+    id: r.id,
+    result: r.result,
+    symptom: r.symptom,
+    changes: r.changes ?? {},
+    notes: r.notes,
+    hasPhoto: r.photo_key !== null,
+    sheetVersionId: r.sheet_version_id,
+    createdAt: new Date(r.created_at).toISOString(),
+  }));
+}
+
+/** The stored photo of one of the customer's outcomes. */
+export async function getOutcomePhoto({ vendorId, userId, outcomeId }: { vendorId: string; userId: string; outcomeId: string }) {
+  const row = await db("outcomes").where({ vendor_id: vendorId, user_id: userId, id: outcomeId }).whereNotNull("photo_key").first("photo_key");
+  if (!row) return null;
+  const bytes = await getStorage().get(row.photo_key);
+  if (!bytes) return null;
+  const sniffed = await sniffUpload(bytes, "photo");
+  return { bytes, contentType: sniffed.contentType };
+}

@@ -1,0 +1,84 @@
+import "server-only";
+
+import { existsSync } from "node:fs";
+
+import { Document, Font, Image, Page, renderToBuffer, StyleSheet, Text, View } from "@react-pdf/renderer";
+import QRCode from "qrcode";
+
+import type { SetupSheetData } from "./setup-sheet-data";
+
+// DejaVu covers Ø, ≈, ±, → and the no-break space; without it the built-in Helvetica is used and the
+// few symbols outside Latin-1 are spelt out.
+const DEJAVU = "/usr/share/fonts/truetype/dejavu/DejaVuSans.ttf";
+const DEJAVU_BOLD = "/usr/share/fonts/truetype/dejavu/DejaVuSans-Bold.ttf";
+const hasDejaVu = existsSync(DEJAVU) && existsSync(DEJAVU_BOLD);
+if (hasDejaVu) Font.register({ family: "DejaVu", fonts: [{ src: DEJAVU }, { src: DEJAVU_BOLD, fontWeight: "bold" }] });
+Font.registerHyphenationCallback((word) => [word]);
+const family = hasDejaVu ? "DejaVu" : "Helvetica";
+const plain = (text: string) => (hasDejaVu ? text : text.replace(/→/g, "->").replace(/[\u00a0\u202f]/g, " ").replace(/·/g, "x").replace(/³/g, "3"));
+
+const s = StyleSheet.create({
+  page: { padding: 32, fontSize: 9, fontFamily: family, color: "#1c1917" },
+  header: { flexDirection: "row", justifyContent: "space-between", borderBottomWidth: 2, borderBottomColor: "#292524", paddingBottom: 8, marginBottom: 10 },
+  h1: { fontSize: 15, fontWeight: "bold" },
+  h2: { fontSize: 10, fontWeight: "bold", marginTop: 10, marginBottom: 4 },
+  muted: { color: "#57534e" },
+  row: { flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: "#d6d3d1", paddingVertical: 3 },
+  th: { fontWeight: "bold" },
+  c1: { width: "40%" },
+  c2: { width: "30%", textAlign: "right" },
+  c3: { width: "30%", textAlign: "right", fontWeight: "bold" },
+  li: { marginBottom: 3 },
+  qr: { width: 72, height: 72 },
+});
+
+function SetupSheet({ data, qr, url, vendorName }: { data: SetupSheetData; qr: string; url: string; vendorName: string }) {
+  const t = plain;
+  return (
+    <Document title={t(`${data.setupName}: setup sheet`)} author={vendorName} creator="Swarfbook">
+      <Page size="A4" style={s.page}>
+        <View style={s.header}>
+          <View style={{ width: "78%" }}>
+            <Text style={s.muted}>{t(`${vendorName} · Setup sheet · ${data.versionLabel}`)}</Text>
+            <Text style={s.h1}>{t(data.setupName)}</Text>
+            <Text>{t(`Machine: ${data.machineName}`)}</Text>
+            <Text>{t(`Cutter: ${data.cutterLine}`)}</Text>
+            <Text>{t(`Material: ${data.materialLine}`)}</Text>
+          </View>
+          {/* eslint-disable-next-line jsx-a11y/alt-text -- react-pdf Image has no alt */}
+          <Image style={s.qr} src={qr} />
+        </View>
+        <Text style={s.h2}>{t(`Operation: ${data.operationLabel}`)}</Text>
+        <View style={[s.row, s.th]}>
+          <Text style={s.c1}>Quantity</Text>
+          <Text style={s.c2}>Sheet</Text>
+          <Text style={s.c3}>This machine</Text>
+        </View>
+        {data.rows.map((r) => (
+          <View key={r.symbol} style={s.row}>
+            <Text style={s.c1}>{t(`${r.symbol} (${r.label.toLowerCase()})`)}</Text>
+            <Text style={s.c2}>{t(r.sheetText)}</Text>
+            <Text style={s.c3}>{t(r.adaptedText)}</Text>
+          </View>
+        ))}
+        <Text style={s.h2}>How the numbers were adapted</Text>
+        {data.steps.length ? data.steps.map((step, i) => <Text key={i} style={s.li}>{t(`${i + 1}. ${step}`)}</Text>) : <Text>No rule changed a number: the sheet runs as written on this machine.</Text>}
+        {data.warnings.length ? (
+          <>
+            <Text style={s.h2}>Warnings</Text>
+            {data.warnings.map((w, i) => <Text key={i} style={s.li}>{t(`! ${w}`)}</Text>)}
+          </>
+        ) : null}
+        <Text style={s.h2}>Cautions</Text>
+        {data.cautions.map((c, i) => <Text key={i} style={s.li}>{t(`- ${c}`)}</Text>)}
+        <Text style={[s.muted, { marginTop: 12 }]}>{t(`Sheet version: ${url}`)}</Text>
+      </Page>
+    </Document>
+  );
+}
+
+/** A one-page PDF for the machine: numbers in the setup's units, steps, cautions, QR code to the sheet version. */
+export async function renderSetupSheetPdf({ data, versionUrl, vendorName }: { data: SetupSheetData; versionUrl: string; vendorName: string }): Promise<Buffer> {
+  const qr = await QRCode.toDataURL(versionUrl, { margin: 1, width: 240, errorCorrectionLevel: "M" });
+  return renderToBuffer(<SetupSheet data={data} qr={qr} url={versionUrl} vendorName={vendorName} />);
+}

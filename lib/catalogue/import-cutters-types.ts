@@ -1,0 +1,1 @@
+export type ImportMode = "all-or-nothing" | "valid-rows";

@@ -1,0 +1,33 @@
+import "server-only";
+
+import type { Knex } from "knex";
+
+import { db } from "@/lib/db/knex";
+import { selectTickets, toTicketDetail } from "@/lib/tickets/ticket-select";
+import type { TicketSummary } from "@/lib/tickets/ticket-types";
+
+import type { QueueFilters } from "./queue-filters";
+
+/** Applies queue filters to a `tickets as t` query; without a status filter, closed tickets are left out. */
+export function applyQueueFilters(q: Knex.QueryBuilder, f: QueueFilters, userId: string): Knex.QueryBuilder {
+  if (f.status?.length) q.whereIn("t.status", f.status);
+  else q.whereNot("t.status", "closed");
+  if (f.priority?.length) q.whereIn("t.priority", f.priority);
+  if (f.assignee === "me") q.where("t.assignee_id", userId);
+  else if (f.assignee === "none") q.whereNull("t.assignee_id");
+  else if (f.assignee) q.where("t.assignee_id", f.assignee);
+  if (f.tag) q.whereRaw("? = any(t.tags)", [f.tag]);
+  if (f.materialId) q.where("t.material_id", f.materialId);
+  if (f.overdue) q.whereNull("t.first_response_at").whereNot("t.status", "closed").where("t.first_response_due_at", "<", db.fn.now());
+  return q;
+}
+
+/** The Desk queue: tickets of one vendor by filters, most urgent target first. */
+export async function listQueue({ vendorId, userId, filters, limit = 500 }: { vendorId: string; userId: string; filters: QueueFilters; limit?: number }): Promise<TicketSummary[]> {
+  const q = applyQueueFilters(selectTickets(db, vendorId), filters, userId).orderBy("t.first_response_due_at").limit(limit);
+  const rows = await q;
+  return rows.map((r: Record<string, unknown>) => {
+    const { body: _body, machineName: _m, closedAt: _c, satisfaction: _s, satisfactionComment: _sc, ...summary } = toTicketDetail(r);
+    return summary;
+  });
+}

@@ -1,0 +1,24 @@
+import "server-only";
+
+import { writeAudit } from "@/lib/audit/write-audit";
+import { db } from "@/lib/db/knex";
+import { Conflict, Forbidden } from "@/lib/errors/domain-errors";
+import { getVendorSettings } from "./vendor-settings";
+
+import { lockOpenDraft } from "./find-sheet";
+
+/** Records the review of a version in review; with requireSecondApproval the author (or last editor) cannot approve. */
+export async function approveDraft({ vendorId, userId, slug }: { vendorId: string; userId: string; slug: string }) {
+  const settings = await getVendorSettings(vendorId);
+  return db.transaction(async (trx) => {
+    const { draft } = await lockOpenDraft({ vendorId, slug, trx });
+    if (draft.state !== "in_review") throw new Conflict("Only a version in review can be approved. Submit the draft first.");
+    if (draft.approvedBy) throw new Conflict(`This version is already approved by ${draft.approvedByName ?? "another engineer"}.`);
+    if (settings.requireSecondApproval && (draft.authorId === userId || draft.updatedBy === userId)) {
+      throw new Forbidden("You wrote or last edited this version; an engineer other than the author must approve it.");
+    }
+    await trx("sheet_versions").where({ vendor_id: vendorId, id: draft.id }).update({ approved_by: userId, approved_at: trx.fn.now(), updated_at: trx.fn.now() });
+    await writeAudit({ vendorId, actorUserId: userId, action: "sheet.approve", objectType: "sheet_version", objectId: draft.id, details: { slug, number: draft.number } }, trx);
+    return { number: draft.number, approved: true };
+  });
+}

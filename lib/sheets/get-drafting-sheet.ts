@@ -1,0 +1,23 @@
+import "server-only";
+
+import { getCutterById, getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
+
+import { findSheet, listVersions } from "./find-sheet";
+
+/** A sheet with its catalogue entries and every version (drafts included), newest first. */
+export async function getDraftingSheet({ vendorId, slug }: { vendorId: string; slug: string }) {
+  const sheet = await findSheet({ vendorId, slug });
+  if (!sheet) return null;
+  const [cutter, material, machineClass, versions] = await Promise.all([
+    getCutterById({ vendorId, id: sheet.cutterId }),
+    getMaterialById({ vendorId, id: sheet.materialId }),
+    getMachineClassById({ vendorId, id: sheet.machineClassId }),
+    listVersions({ vendorId, sheetId: sheet.id }),
+  ]);
+  if (!cutter || !material || !machineClass) return null;
+  const openDraft = versions.find((v) => v.state === "draft" || v.state === "in_review") ?? null;
+  const published = versions.find((v) => v.state === "published") ?? null;
+  return { sheet, cutter, material, machineClass, versions, openDraft, published };
+}
+
+export type DraftingSheet = NonNullable<Awaited<ReturnType<typeof getDraftingSheet>>>;

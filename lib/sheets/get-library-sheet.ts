@@ -1,0 +1,32 @@
+import "server-only";
+
+import { getCutterById, getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { db } from "@/lib/db/knex";
+
+import { findSheet } from "./find-sheet";
+import { READABLE_STATES, type SheetVersion } from "./sheet-types";
+import { rowToVersion, versionQuery } from "./version-rows";
+
+/**
+ * What a Library reader may see of a sheet: the requested version (default: the published one, else the
+ * latest withdrawn one) and the history of readable versions. Drafts and versions in review never appear.
+ */
+export async function getLibrarySheet({ vendorId, slug, number }: { vendorId: string; slug: string; number?: number }) {
+  const sheet = await findSheet({ vendorId, slug });
+  if (!sheet) return null;
+  const history: SheetVersion[] = (
+    await versionQuery(vendorId, db).where("v.sheet_id", sheet.id).whereIn("v.state", READABLE_STATES).orderBy("v.number", "desc")
+  ).map(rowToVersion);
+  const current = history.find((v) => v.state === "published") ?? null;
+  const version = number === undefined ? (current ?? history[0]) : history.find((v) => v.number === number);
+  if (!version || !version.frontMatter) return null;
+  const [cutter, material, machineClass] = await Promise.all([
+    getCutterById({ vendorId, id: sheet.cutterId }),
+    getMaterialById({ vendorId, id: sheet.materialId }),
+    getMachineClassById({ vendorId, id: sheet.machineClassId }),
+  ]);
+  if (!cutter || !material || !machineClass) return null;
+  return { sheet, version, frontMatter: version.frontMatter, current, history, cutter, material, machineClass };
+}
+
+export type LibrarySheet = NonNullable<Awaited<ReturnType<typeof getLibrarySheet>>>;

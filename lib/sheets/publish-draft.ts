@@ -1,0 +1,33 @@
+import "server-only";
+
+import { writeAudit } from "@/lib/audit/write-audit";
+import { db } from "@/lib/db/knex";
+import { emitSheetEvent } from "@/lib/events/emit-sheet-event";
+import { Conflict } from "@/lib/errors/domain-errors";
+
+import { lockOpenDraft } from "./find-sheet";
+import { getVendorSettings } from "./vendor-settings";
+
+/** in_review → published; the previously published version becomes superseded in the same transaction. */
+export async function publishDraft({ vendorId, userId, slug }: { vendorId: string; userId: string; slug: string }) {
+  const settings = await getVendorSettings(vendorId);
+  const result = await db.transaction(async (trx) => {
+    const { sheet, draft } = await lockOpenDraft({ vendorId, slug, trx });
+    if (draft.state !== "in_review") throw new Conflict("Only a version in review can be published. Submit the draft first.");
+    if (settings.requireSecondApproval && !draft.approvedBy) throw new Conflict("This version needs an approval by an engineer other than the author before it is published.");
+    const superseded = await trx("sheet_versions")
+      .where({ vendor_id: vendorId, sheet_id: sheet.id, state: "published" })
+      .update({ state: "superseded", superseded_at: trx.fn.now(), updated_at: trx.fn.now() })
+      .returning(["id", "number"]);
+    await trx("sheet_versions").where({ vendor_id: vendorId, id: draft.id }).update({ state: "published", published_at: trx.fn.now(), updated_at: trx.fn.now() });
+    await trx("sheets").where({ vendor_id: vendorId, id: sheet.id }).update({ updated_at: trx.fn.now() });
+    const previous = superseded[0] as { id: string; number: number } | undefined;
+    await writeAudit({ vendorId, actorUserId: userId, action: "sheet.publish", objectType: "sheet_version", objectId: draft.id, details: { slug, number: draft.number, supersedes: previous?.number ?? null } }, trx);
+    if (previous) {
+      await writeAudit({ vendorId, actorUserId: userId, action: "sheet.supersede", objectType: "sheet_version", objectId: previous.id, details: { slug, number: previous.number, by: draft.number } }, trx);
+    }
+    return { number: draft.number, state: "published" as const, superseded: previous?.number ?? null, versionId: draft.id, previousVersionId: previous?.id ?? null, sheetId: sheet.id };
+  });
+  await emitSheetEvent({ type: "version.published", vendorId, sheetId: result.sheetId, versionId: result.versionId, supersededVersionId: result.previousVersionId });
+  return result;
+}

@@ -1,0 +1,17 @@
+// s3rver ships no types; only what scripts/s3-fake.ts and the storage tests use.
+declare module "s3rver" {
+  import type { AddressInfo } from "node:net";
+  type Options = {
+    address?: string;
+    port?: number;
+    silent?: boolean;
+    directory?: string;
+    resetOnClose?: boolean;
+    configureBuckets?: { name: string; configs?: string[] }[];
+  };
+  export default class S3rver {
+    constructor(options: Options);
+    run(): Promise<AddressInfo>;
+    close(): Promise<void>;
+  }
+}

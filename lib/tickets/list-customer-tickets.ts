@@ -1,0 +1,12 @@
+import "server-only";
+
+import { db } from "@/lib/db/knex";
+
+import { selectTickets, toTicketDetail } from "./ticket-select";
+import type { TicketDetail } from "./ticket-types";
+
+/** A customer's own tickets in one vendor, newest activity first. */
+export async function listCustomerTickets({ vendorId, customerId, limit = 200 }: { vendorId: string; customerId: string; limit?: number }): Promise<TicketDetail[]> {
+  const rows = await selectTickets(db, vendorId).where("t.customer_id", customerId).orderBy("t.last_activity_at", "desc").limit(limit);
+  return rows.map(toTicketDetail);
+}

@@ -1,0 +1,41 @@
+import "server-only";
+
+import { db } from "@/lib/db/knex";
+
+export type TicketMailContext = {
+  ticketId: string;
+  number: number;
+  subject: string;
+  vendorSlug: string;
+  vendorName: string;
+  customer: { email: string; name: string };
+  assignee: { email: string; name: string } | null;
+};
+
+export const REPLY_ABOVE = "-- Reply above this line to add to the ticket --";
+
+export async function loadTicketMailContext(vendorId: string, ticketId: string): Promise<TicketMailContext | null> {
+  const row = await db("tickets as t")
+    .join("vendors as v", "v.id", "t.vendor_id")
+    .join("users as c", "c.id", "t.customer_id")
+    .leftJoin("users as a", "a.id", "t.assignee_id")
+    .where({ "t.id": ticketId, "t.vendor_id": vendorId })
+    .first("t.id", "t.number", "t.subject", "v.slug", "v.name as vendor_name", "c.email", "c.name", "a.email as a_email", "a.name as a_name");
+  if (!row) return null;
+  return {
+    ticketId: row.id,
+    number: row.number,
+    subject: row.subject,
+    vendorSlug: row.slug,
+    vendorName: row.vendor_name,
+    customer: { email: row.email, name: row.name },
+    assignee: row.a_email ? { email: row.a_email, name: row.a_name } : null,
+  };
+}
+
+/** E-mail addresses of the vendor's support team (support staff; admins when there are none). */
+export async function supportTeamEmails(vendorId: string): Promise<string[]> {
+  const rows = await db("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).select("u.email", "m.role");
+  const support = rows.filter((r) => r.role === "support");
+  return (support.length ? support : rows).map((r) => r.email as string);
+}

@@ -1,0 +1,70 @@
+import "server-only";
+
+import type { Knex } from "knex";
+
+import type { TicketUpdateInput } from "@/content-schema/ticket-update";
+import { db } from "@/lib/db/knex";
+import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
+import type { Vendor } from "@/lib/vendors/vendor-schema";
+
+import { auditTicketChange } from "./audit-change";
+import { firstResponseDueAt } from "./first-response-due";
+
+type Row = { status: string; priority: string; assignee_id: string | null; tags: string[]; created_at: Date; first_response_at: Date | null };
+
+async function assertAssignable(trx: Knex, vendorId: string, userId: string) {
+  const ok = await trx("members").where({ vendor_id: vendorId, user_id: userId }).whereIn("role", ["support", "admin"]).first("id");
+  if (!ok) throw new InvalidInput("Please correct the marked fields.", { assigneeId: ["Choose a member of the support team."] });
+}
+
+async function applyUpdate(trx: Knex.Transaction, vendor: Vendor, actorUserId: string, input: TicketUpdateInput): Promise<void> {
+  const row = await trx("tickets").where({ id: input.ticketId, vendor_id: vendor.id }).forUpdate().first<Row | undefined>();
+  if (!row) throw new NotFound();
+  const patch: Record<string, unknown> = {};
+  const audit = (field: "status" | "priority" | "assignee" | "tags", from: unknown, to: unknown) =>
+    auditTicketChange(trx, { vendorId: vendor.id, actorUserId, ticketId: input.ticketId, field, from, to });
+
+  if (input.status && input.status !== row.status) {
+    patch.status = input.status;
+    patch.closed_at = input.status === "closed" ? trx.fn.now() : null;
+    await audit("status", row.status, input.status);
+  }
+  if (input.priority && input.priority !== row.priority) {
+    patch.priority = input.priority;
+    // The target follows the priority until someone has answered.
+    if (!row.first_response_at) patch.first_response_due_at = firstResponseDueAt(new Date(row.created_at), input.priority, vendor.settings);
+    await audit("priority", row.priority, input.priority);
+  }
+  if (input.assigneeId !== undefined) {
+    const next = input.assigneeId || null;
+    if (next !== row.assignee_id) {
+      if (next) await assertAssignable(trx, vendor.id, next);
+      patch.assignee_id = next;
+      await audit("assignee", row.assignee_id, next);
+    }
+  }
+  if (input.tags && input.tags.join(",") !== row.tags.join(",")) {
+    patch.tags = input.tags;
+    await audit("tags", row.tags, input.tags);
+  }
+  if (Object.keys(patch).length) await trx("tickets").where({ id: input.ticketId, vendor_id: vendor.id }).update({ ...patch, updated_at: trx.fn.now() });
+}
+
+/** A staff change to status, priority, assignee or tags; each changed field is audited. */
+export async function updateTicket({ vendor, actorUserId, input }: { vendor: Vendor; actorUserId: string; input: TicketUpdateInput }): Promise<void> {
+  await db.transaction((trx) => applyUpdate(trx, vendor, actorUserId, input));
+}
+
+/** Assigns many tickets at once (the queue's bulk action), audited per ticket. */
+export async function bulkAssign({ vendor, actorUserId, ticketIds, assigneeId }: { vendor: Vendor; actorUserId: string; ticketIds: string[]; assigneeId: string }): Promise<number> {
+  let changed = 0;
+  await db.transaction(async (trx) => {
+    for (const ticketId of ticketIds) {
+      const exists = await trx("tickets").where({ id: ticketId, vendor_id: vendor.id }).first("id");
+      if (!exists) continue;
+      await applyUpdate(trx, vendor, actorUserId, { ticketId, assigneeId });
+      changed += 1;
+    }
+  });
+  return changed;
+}

@@ -1,0 +1,126 @@
+// Benchmark of the PostgreSQL search engine: synthetic catalogues in a throwaway database of the
+// local cluster (never the dev database), 20 concurrent clients, p50/p95/p99 and the main query plan.
+// Run: node --conditions=react-server --import tsx scripts/bench-search.ts [--versions 20000] [--vendors 20] [--queries 4000]
+import { randomBytes } from "node:crypto";
+import path from "node:path";
+
+import knexFactory, { type Knex } from "knex";
+
+import { createPostgresEngine } from "../search/engines/postgres/postgres-engine";
+import { buildSearchSql } from "../search/engines/postgres/pg-search-sql";
+import { reindexVendor } from "../search/indexing/reindex";
+import { engineQueriesFor, runSearch } from "../search/run/run-search";
+
+import { type BenchVendor, createBenchVendor, queryMix } from "./bench-search-data";
+
+const TARGET_P95_MS = 30;
+const arg = (name: string, fallback: number, max: number) => {
+  const at = process.argv.indexOf(`--${name}`);
+  const value = at === -1 ? fallback : Number(process.argv[at + 1]);
+  if (!Number.isInteger(value) || value < 1 || value > max) throw new Error(`--${name} must be a whole number from 1 to ${max}.`);
+  return value;
+};
+
+function assertLocal(url: string) {
+  if (!["127.0.0.1", "localhost", "::1", "[::1]"].includes(new URL(url).hostname)) throw new Error("The benchmark only runs against a local cluster.");
+}
+
+const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
+
+async function main() {
+  const versions = arg("versions", 20_000, 200_000);
+  const vendorCount = arg("vendors", 20, 100);
+  const queries = arg("queries", 4_000, 50_000);
+  const CLIENTS = arg("clients", 20, 100);
+  const adminUrl = process.env.BENCH_ADMIN_URL ?? "postgres://postgres@127.0.0.1:54329/postgres";
+  assertLocal(adminUrl);
+  const name = `swarfbook_bench_${process.pid}_${randomBytes(3).toString("hex")}`;
+  const admin = knexFactory({ client: "pg", connection: adminUrl, pool: { min: 0, max: 1 } });
+  await admin.raw(`create database ${name} template template1`);
+  const url = new URL(adminUrl);
+  url.pathname = `/${name}`;
+  const knex: Knex = knexFactory({
+    client: "pg",
+    connection: url.toString(),
+    pool: { min: 0, max: CLIENTS },
+    migrations: { directory: path.join(import.meta.dirname, "../migrations"), extension: "ts", loadExtensions: [".ts"] },
+  });
+  try {
+    console.log(`database ${name}: migrating`);
+    await knex.migrate.latest();
+    let t = performance.now();
+    const vendors: BenchVendor[] = [];
+    const per = Math.floor(versions / vendorCount);
+    for (let i = 0; i < vendorCount; i++) vendors.push(await createBenchVendor(knex, i, per + (i < versions % vendorCount ? 1 : 0)));
+    console.log(`generated ${versions} published versions across ${vendorCount} vendors in ${Math.round(performance.now() - t)} ms`);
+    const pgEngine = createPostgresEngine(knex);
+    let roundTrips = 0;
+    const engine = { ...pgEngine, search: (query: Parameters<typeof pgEngine.search>[0]) => (roundTrips++, pgEngine.search(query)) };
+    t = performance.now();
+    for (const v of vendors) await reindexVendor({ engine, knex, vendorId: v.id });
+    await knex.raw("analyze");
+    const { rows } = await knex.raw<{ rows: { n: number }[] }>("select count(*)::int as n from search_documents");
+    console.log(`indexed ${rows[0].n} documents in ${Math.round(performance.now() - t)} ms`);
+
+    const mix = queryMix(vendors, queries);
+    for (const item of mix.slice(0, 200)) await runSearch(engine, item); // warm-up
+    const latencies: number[] = [];
+    roundTrips = 0;
+    let next = 0;
+    t = performance.now();
+    await Promise.all(
+      Array.from({ length: CLIENTS }, async () => {
+        while (next < mix.length) {
+          const item = mix[next++];
+          const started = performance.now();
+          await runSearch(engine, item);
+          latencies.push(performance.now() - started);
+        }
+      }),
+    );
+    const wall = performance.now() - t;
+    const tripsPerSearch = roundTrips / latencies.length;
+    if (process.argv.includes("--by-query")) {
+      const byQuery = new Map<string, number[]>();
+      for (const item of mix.slice(0, 300)) {
+        const started = performance.now();
+        await runSearch(engine, item);
+        const key = /^B\d+-/.test(item.q) ? "<sku>" : item.q;
+        byQuery.set(key, [...(byQuery.get(key) ?? []), performance.now() - started]);
+      }
+      for (const [q, ms] of byQuery) console.log(`  ${(ms.reduce((a, b) => a + b, 0) / ms.length).toFixed(1).padStart(6)} ms  “${q}”`);
+    }
+    latencies.sort((a, b) => a - b);
+    const [p50, p95, p99] = [50, 95, 99].map((p) => percentile(latencies, p));
+
+    const at = process.argv.indexOf("--explain");
+    const sample = at === -1 ? "1/8 acrylic slot" : process.argv[at + 1];
+    const { sql, bindings } = buildSearchSql(engineQueriesFor({ vendorId: vendors[0].id, q: sample }).steps[0].query);
+    const explain = await knex.raw<{ rows: { "QUERY PLAN": string }[] }>(`explain (analyze, buffers) ${sql}`, bindings as Knex.ValueDict[]);
+    console.log(`\nmain query plan for “${sample}” (vendor ${vendors[0].slug}):`);
+    console.log(explain.rows.map((r) => r["QUERY PLAN"]).join("\n"));
+
+    if (process.argv.includes("--explain-mix")) {
+      console.log("\nPostgreSQL execution + planning time of the first query of each search in the mix:");
+      for (const q of [...new Set(mix.map((m) => (/^B\d+-/.test(m.q) ? vendors[0].skus[0] : m.q)))]) {
+        const first = buildSearchSql(engineQueriesFor({ vendorId: vendors[0].id, q }).steps[0].query);
+        const rows = (await knex.raw<{ rows: { "QUERY PLAN": string }[] }>(`explain (analyze) ${first.sql}`, first.bindings as Knex.ValueDict[])).rows.map((r) => r["QUERY PLAN"]);
+        const ms = (label: string) => rows.find((r) => r.startsWith(label))?.replace(/[^\d.]/g, "") ?? "?";
+        console.log(`  exec ${ms("Execution Time").padStart(7)} ms  plan ${ms("Planning Time").padStart(6)} ms  “${q}”`);
+      }
+    }
+    console.log(`\n${latencies.length} searches, ${CLIENTS} concurrent clients, ${Math.round((latencies.length / wall) * 1000)} searches/s, ${tripsPerSearch.toFixed(2)} engine round trips per search`);
+    console.log(`p50 ${p50.toFixed(1)} ms · p95 ${p95.toFixed(1)} ms · p99 ${p99.toFixed(1)} ms · max ${latencies.at(-1)!.toFixed(1)} ms`);
+    console.log(`target p95 ≤ ${TARGET_P95_MS} ms: ${p95 <= TARGET_P95_MS ? "PASS" : "BELOW"}`);
+  } finally {
+    await knex.destroy();
+    await admin.raw(`drop database if exists ${name} with (force)`);
+    await admin.destroy();
+    console.log(`dropped ${name}`);
+  }
+}
+
+main().catch((error: unknown) => {
+  console.error(error instanceof Error ? error.stack : error);
+  process.exitCode = 1;
+});

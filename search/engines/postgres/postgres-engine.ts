@@ -1,0 +1,38 @@
+import type { Knex } from "knex";
+
+import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
+import { rowToDoc } from "./pg-columns";
+import { buildSearchSql } from "./pg-search-sql";
+import { preparedQuery } from "./prepared-query";
+import { removeRows, replaceVendorRows, upsertRows } from "./pg-write";
+
+type Raw = { total: number; hits: Record<string, unknown>[]; facets: { facet: FacetName; value: string; count: number }[]; cutters: Record<string, unknown>[] };
+
+function facetCounts(rows: Raw["facets"]): FacetCounts {
+  const out: FacetCounts = {};
+  for (const { facet, value, count } of rows) (out[facet] ??= []).push({ value, count });
+  for (const list of Object.values(out)) list.sort((a, b) => b.count - a.count || a.value.localeCompare(b.value, "en", { numeric: true }));
+  return out;
+}
+
+/** The default engine: the search_documents table (weighted tsvector, pg_trgm, unaccent) in the app's own database. */
+export function createPostgresEngine(knex: Knex): SearchEngine {
+  return {
+    name: "postgres",
+    // The migration declares the settings (weights, trigram indexes); nothing to apply at run time.
+    configure: async () => {},
+    upsert: (vendorId, docs) => upsertRows(knex, vendorId, docs),
+    remove: (vendorId, docIds) => removeRows(knex, vendorId, docIds),
+    replaceVendor: (vendorId, docs) => replaceVendorRows(knex, vendorId, docs),
+    async search(query: EngineQuery): Promise<EngineResult> {
+      const { sql, bindings } = buildSearchSql(query);
+      const [row] = await preparedQuery<Raw>(knex, sql, bindings);
+      return {
+        total: row.total,
+        hits: row.hits.map((h) => ({ doc: rowToDoc(h), score: Number(h.score) })),
+        facets: facetCounts(row.facets),
+        cutters: row.cutters.map(rowToDoc),
+      };
+    },
+  };
+}

@@ -1,0 +1,21 @@
+import { createHash } from "node:crypto";
+
+import type { Knex } from "knex";
+
+type PgConnection = { query: (config: { name: string; text: string; values: readonly unknown[] }) => Promise<{ rows: unknown[] }> };
+
+/**
+ * Runs a statement as a named prepared statement on the pooled connection, so PostgreSQL plans each
+ * shape of the search statement once per connection instead of on every keystroke. The name is a
+ * hash of the text: the shapes are few (which parts are present), the values are always parameters.
+ */
+export async function preparedQuery<T>(knex: Knex, sql: string, bindings: readonly unknown[]): Promise<T[]> {
+  const native = knex.raw(sql, bindings as Knex.ValueDict[]).toSQL().toNative();
+  const name = `sbk_${createHash("sha1").update(native.sql).digest("hex").slice(0, 24)}`;
+  const connection = (await knex.client.acquireConnection()) as PgConnection;
+  try {
+    return (await connection.query({ name, text: native.sql, values: native.bindings })).rows as T[];
+  } finally {
+    await knex.client.releaseConnection(connection);
+  }
+}

@@ -1,0 +1,32 @@
+import "server-only";
+
+import { z } from "zod";
+
+import type { SheetEvent } from "@/lib/events/sheet-events";
+import type { SheetEventSubscriber } from "@/lib/events/subscribers";
+import { enqueue } from "@/lib/jobs/enqueue";
+import { getSearchEngine } from "@/search/engines/choose-engine";
+
+import { reindexCatalogueEntry, reindexSheets, reindexVendor } from "./reindex";
+
+export const SEARCH_REINDEX_VENDOR_QUEUE = "search.reindex-vendor";
+
+/** Runs inside the event delivery job: a failing engine throws, and the job retries until it is back. */
+export async function indexSheetEvent(event: SheetEvent): Promise<void> {
+  const engine = getSearchEngine();
+  if (event.type === "catalogue.changed") {
+    await reindexCatalogueEntry({ engine, vendorId: event.vendorId, entity: event.entity, entityId: event.entityId });
+  } else {
+    await reindexSheets({ engine, vendorId: event.vendorId, sheetIds: [event.sheetId] });
+  }
+}
+
+export const searchIndexSubscriber: SheetEventSubscriber = { name: "search-index", handle: indexSheetEvent };
+
+const vendorJob = z.object({ vendorId: z.uuid() });
+
+export async function reindexVendorJob(data: unknown): Promise<void> {
+  await reindexVendor({ engine: getSearchEngine(), vendorId: vendorJob.parse(data).vendorId });
+}
+
+export const enqueueVendorReindex = (vendorId: string) => enqueue(SEARCH_REINDEX_VENDOR_QUEUE, { vendorId }, { singletonKey: `search-reindex-${vendorId}` });

@@ -1,0 +1,32 @@
+import { NextRequest } from "next/server";
+import { describe, expect, it } from "vitest";
+
+import { GET } from "@/app/api/v1/vendors/[vendor]/setups/alerts/stop/route";
+import { createAlertStopToken } from "@/lib/bench/alert-token";
+import { wantsChangeAlerts } from "@/lib/bench/mail-preferences";
+import { createVendorWithStaff } from "@/tests/factories/foundation";
+
+const stop = (vendorSlug: string, token: string) => GET(new NextRequest(`http://127.0.0.1:3000/api/v1/vendors/${vendorSlug}/setups/alerts/stop?token=${encodeURIComponent(token)}`));
+
+describe("the one-click stop link", () => {
+  it("turns change alerts off without signing in, for that person and vendor only", async () => {
+    const a = await createVendorWithStaff();
+    const b = await createVendorWithStaff();
+    const who = { vendorId: a.vendor.id, userId: a.customer.user.id };
+    expect(await wantsChangeAlerts(who)).toBe(true);
+    const res = await stop(a.vendor.slug, createAlertStopToken(who));
+    expect(res.status).toBe(200);
+    expect(await res.text()).toContain("Change alerts stopped");
+    expect(await wantsChangeAlerts(who)).toBe(false);
+    expect(await wantsChangeAlerts({ vendorId: b.vendor.id, userId: a.customer.user.id })).toBe(true);
+    expect(await wantsChangeAlerts({ vendorId: a.vendor.id, userId: a.admin.user.id })).toBe(true);
+  });
+
+  it("refuses an altered token and changes nothing", async () => {
+    const { vendor, customer } = await createVendorWithStaff();
+    const who = { vendorId: vendor.id, userId: customer.user.id };
+    const forged = createAlertStopToken(who).replace(/.$/, (c) => (c === "A" ? "B" : "A"));
+    expect((await stop(vendor.slug, forged)).status).toBe(400);
+    expect(await wantsChangeAlerts(who)).toBe(true);
+  });
+});

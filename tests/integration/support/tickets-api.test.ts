@@ -1,0 +1,67 @@
+import { randomUUID } from "node:crypto";
+
+import { NextRequest } from "next/server";
+import { describe, expect, it } from "vitest";
+
+import { GET as getOne } from "@/app/api/v1/vendors/[vendor]/tickets/[ticket]/route";
+import { POST as create } from "@/app/api/v1/vendors/[vendor]/tickets/route";
+import { hashToken, newTokenSecret } from "@/lib/auth/api-tokens";
+import { db } from "@/lib/db/knex";
+import { addStaffMessage } from "@/lib/tickets/add-message";
+import { createVendorWithStaff } from "@/tests/factories/foundation";
+
+async function tokenFor(vendorId: string, userId: string) {
+  const token = newTokenSecret();
+  await db("api_tokens").insert({ vendor_id: vendorId, user_id: userId, name: "test", prefix: token.slice(0, 8), token_hash: hashToken(token) });
+  return token;
+}
+
+const post = (slug: string, token: string, body: unknown) =>
+  create(
+    new NextRequest(`http://localhost/api/v1/vendors/${slug}/tickets`, { method: "POST", body: JSON.stringify(body), headers: { authorization: `Bearer ${token}`, "content-type": "application/json" } }),
+    { params: Promise.resolve({ vendor: slug }) },
+  );
+const get = (slug: string, token: string, id: string) =>
+  getOne(new NextRequest(`http://localhost/api/v1/vendors/${slug}/tickets/${id}`, { headers: { authorization: `Bearer ${token}` } }), {
+    params: Promise.resolve({ vendor: slug, ticket: id }),
+  });
+
+describe("tickets API", () => {
+  it("creates once per idempotency key (201 then 200) and reads the customer's view without notes", async () => {
+    const { vendor, customer, support } = await createVendorWithStaff();
+    const token = await tokenFor(vendor.id, customer.user.id);
+    const body = { subject: "Broken cutter on plunge", body: "Snapped at the first plunge.", idempotencyKey: randomUUID() };
+    const first = await post(vendor.slug, token, body);
+    const again = await post(vendor.slug, token, body);
+    expect([first.status, again.status]).toEqual([201, 200]);
+    const { ticket } = await first.json();
+    expect((await again.json()).ticket.id).toBe(ticket.id);
+
+    await addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "secret note", visibility: "note" });
+    const res = await get(vendor.slug, token, ticket.id);
+    expect(res.status).toBe(200);
+    const thread = await res.json();
+    expect(thread.ticket.subject).toBe("Broken cutter on plunge");
+    expect(JSON.stringify(thread)).not.toContain("secret note");
+  });
+
+  it("answers 400 with field errors for a bad body", async () => {
+    const { vendor, customer } = await createVendorWithStaff();
+    const res = await post(vendor.slug, await tokenFor(vendor.id, customer.user.id), { subject: "", body: "" });
+    expect(res.status).toBe(400);
+    expect(Object.keys((await res.json()).fieldErrors)).toEqual(expect.arrayContaining(["subject", "body", "idempotencyKey"]));
+  });
+
+  it("answers 404 for another vendor's ticket and for another customer's ticket", async () => {
+    const a = await createVendorWithStaff();
+    const b = await createVendorWithStaff();
+    const tokenA = await tokenFor(a.vendor.id, a.customer.user.id);
+    const { ticket } = await (await post(a.vendor.slug, tokenA, { subject: "Chatter", body: "Loud", idempotencyKey: randomUUID() })).json();
+    const tokenB = await tokenFor(b.vendor.id, b.customer.user.id);
+    expect((await get(b.vendor.slug, tokenB, ticket.id)).status).toBe(404);
+    // A token of vendor A used on vendor B's path is not valid there.
+    expect((await get(b.vendor.slug, tokenA, ticket.id)).status).toBe(404);
+    const staffA = await tokenFor(a.vendor.id, a.engineer.user.id);
+    expect((await post(a.vendor.slug, staffA, { subject: "x y z", body: "b", idempotencyKey: randomUUID() })).status).toBe(404);
+  });
+});
