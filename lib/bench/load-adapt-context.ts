@@ -3,6 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 
 import { db } from "@/lib/db/knex";
+import { joinSheetCatalogue } from "@/lib/sheets/join-sheet-catalogue";
 
 import type { AdaptContext } from "./adapt-context";
 import { readStoredCautions, readStoredOperations, toContextOperation } from "./read-front-matter";
@@ -11,19 +12,7 @@ const READABLE = ["published", "superseded", "withdrawn"];
 
 /** The sheet-derived engine inputs of one readable version, built from its front matter and catalogue rows. */
 export async function loadAdaptContext({ vendorId, versionId, trx = db }: { vendorId: string; versionId: string; trx?: Knex }): Promise<AdaptContext | null> {
-  const row = await trx("sheet_versions as v")
-    .join("sheets as s", function () {
-      this.on("s.id", "v.sheet_id").andOn("s.vendor_id", "v.vendor_id");
-    })
-    .join("cutters as c", function () {
-      this.on("c.id", "s.cutter_id").andOn("c.vendor_id", "s.vendor_id");
-    })
-    .join("materials as m", function () {
-      this.on("m.id", "s.material_id").andOn("m.vendor_id", "s.vendor_id");
-    })
-    .join("machine_classes as k", function () {
-      this.on("k.id", "s.machine_class_id").andOn("k.vendor_id", "s.vendor_id");
-    })
+  const row = await joinSheetCatalogue(trx("sheet_versions as v"))
     .where({ "v.vendor_id": vendorId, "v.id": versionId })
     .whereIn("v.state", READABLE)
     .first(

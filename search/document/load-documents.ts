@@ -3,6 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 
 import { db } from "@/lib/db/knex";
+import { joinSheetCatalogue } from "@/lib/sheets/join-sheet-catalogue";
 
 import { buildCutterDocument, buildSheetDocument, type CutterRow } from "./build-sheet-document";
 import type { SearchDocument } from "./document-schema";
@@ -21,19 +22,7 @@ const toCutter = (r: Row, p = ""): CutterRow => ({
 
 /** Index documents of the current published versions of a vendor's sheets (all, or the given sheets). */
 export async function loadSheetDocuments({ vendorId, sheetIds, knex = db }: { vendorId: string; sheetIds?: readonly string[]; knex?: Knex }): Promise<SearchDocument[]> {
-  const query = knex("sheet_versions as v")
-    .join("sheets as s", function () {
-      this.on("s.id", "v.sheet_id").andOn("s.vendor_id", "v.vendor_id");
-    })
-    .join("cutters as c", function () {
-      this.on("c.id", "s.cutter_id").andOn("c.vendor_id", "s.vendor_id");
-    })
-    .join("materials as m", function () {
-      this.on("m.id", "s.material_id").andOn("m.vendor_id", "s.vendor_id");
-    })
-    .join("machine_classes as k", function () {
-      this.on("k.id", "s.machine_class_id").andOn("k.vendor_id", "s.vendor_id");
-    })
+  const query = joinSheetCatalogue(knex("sheet_versions as v"))
     .where({ "v.vendor_id": vendorId, "v.state": "published" })
     .select(
       "s.id as sheet_id", "s.slug as sheet_slug",

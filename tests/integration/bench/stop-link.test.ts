@@ -29,4 +29,12 @@ describe("the one-click stop link", () => {
     expect((await stop(vendor.slug, forged)).status).toBe(400);
     expect(await wantsChangeAlerts(who)).toBe(true);
   });
+
+  it("does not work under another vendor's address", async () => {
+    const a = await createVendorWithStaff();
+    const b = await createVendorWithStaff();
+    const who = { vendorId: a.vendor.id, userId: a.customer.user.id };
+    expect((await stop(b.vendor.slug, createAlertStopToken(who))).status).toBe(400);
+    expect(await wantsChangeAlerts(who)).toBe(true);
+  });
 });

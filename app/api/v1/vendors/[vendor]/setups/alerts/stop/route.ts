@@ -3,6 +3,7 @@ import { NextResponse } from "next/server";
 import { readAlertStopToken } from "@/lib/bench/alert-token";
 import { setChangeAlerts } from "@/lib/bench/mail-preferences";
 import { withPublic } from "@/lib/http/with-vendor";
+import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
 const page = (title: string, text: string, status = 200) =>
   new NextResponse(
@@ -13,7 +14,10 @@ const page = (title: string, text: string, status = 200) =>
 async function stop(request: Request) {
   const token = new URL(request.url).searchParams.get("token") ?? "";
   const who = readAlertStopToken(token);
-  if (!who) return page("This link does not work", "The stop link is incomplete or was changed. Turn change alerts off on your Bench instead.", 400);
+  // A token only works under the vendor it was made for.
+  const vendorSlug = new URL(request.url).pathname.split("/")[4] ?? "";
+  const vendor = who ? await getVendorBySlug(vendorSlug) : null;
+  if (!who || !vendor || vendor.id !== who.vendorId) return page("This link does not work", "The stop link is incomplete or was changed. Turn change alerts off on your Bench instead.", 400);
   await setChangeAlerts({ ...who, enabled: false });
   return page("Change alerts stopped", "You will get no more e-mails about new versions of sheets you saved setups from. You can turn them back on from your Bench.");
 }
