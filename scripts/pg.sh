@@ -22,7 +22,16 @@ if [ -z "${BIN:-}" ]; then
   BIN=$(find_bin)
 fi
 
-as_pg() { if [ "$(id -u)" = 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi; }
+as_pg() { if [ "$(id -u)" = 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi; }
+
+# The postgres user must be able to reach the data folder. When the project sits under a folder it
+# cannot enter (a 0700 temporary clone, say), the cluster goes to a per-project folder in /tmp instead.
+if [ "$(id -u)" = 0 ]; then
+  mkdir -p "$PG_DIR"
+  if ! (cd / && runuser -u postgres -- test -x "$PG_DIR") 2>/dev/null; then
+    PG_DIR=${TMPDIR:-/tmp}/swarfbook-pg-$(printf '%s' "$PG_DIR" | sha1sum | cut -c1-12)
+  fi
+fi
 ctl() { as_pg "$BIN/pg_ctl" -D "$PG_DIR/data" "$@"; }
 
 case "$cmd" in
