@@ -2,24 +2,15 @@
 // Run: npm run bench:engine
 import { adaptRecipe, type AdaptInput, OPERATION_KINDS } from "../lib/machining/index";
 
+import { prng } from "./lib/prng";
+
 const TARGET_PER_SECOND = 200_000;
 const MIX_SIZE = 2_000;
 const WARMUP_CALLS = 200_000;
 const THROUGHPUT_MS = 3_000;
 const LATENCY_CALLS = 200_000;
 
-// mulberry32: small deterministic PRNG, so every run measures the same mix.
-function prng(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
+// Seeded, so every run measures the same mix.
 const rand = prng(0x5eed);
 const between = (min: number, max: number) => min + (max - min) * rand();
 const pick = <T>(list: readonly T[]) => list[Math.floor(rand() * list.length)];

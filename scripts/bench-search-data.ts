@@ -1,18 +1,9 @@
-// Synthetic catalogues and published sheets for scripts/bench-search.ts (invented data, seeded PRNG).
+// Synthetic catalogues and published sheets for scripts/bench-search.ts and scripts/bench-field.ts (invented data, seeded PRNG).
 import type { Knex } from "knex";
 
 import { OPERATION_KINDS } from "../lib/machining/types";
 
-export function prng(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { prng } from "./lib/prng";
 
 const rand = prng(0xbe7c4);
 export const pick = <T>(list: readonly T[]) => list[Math.floor(rand() * list.length)];

@@ -1,10 +1,7 @@
 // Benchmark of the PostgreSQL search engine: synthetic catalogues in a throwaway database of the
 // local cluster (never the dev database), 20 concurrent clients, p50/p95/p99 and the main query plan.
 // Run: node --conditions=react-server --import tsx scripts/bench-search.ts [--versions 20000] [--vendors 20] [--queries 4000]
-import { randomBytes } from "node:crypto";
-import path from "node:path";
-
-import knexFactory, { type Knex } from "knex";
+import type { Knex } from "knex";
 
 import { createPostgresEngine } from "../search/engines/postgres/postgres-engine";
 import { buildSearchSql } from "../search/engines/postgres/pg-search-sql";
@@ -12,42 +9,17 @@ import { reindexVendor } from "../search/indexing/reindex";
 import { engineQueriesFor, runSearch } from "../search/run/run-search";
 
 import { type BenchVendor, createBenchVendor, queryMix } from "./bench-search-data";
+import { arg, percentile } from "./lib/bench-args";
+import { withBenchDatabase } from "./lib/bench-database";
 
 const TARGET_P95_MS = 30;
-const arg = (name: string, fallback: number, max: number) => {
-  const at = process.argv.indexOf(`--${name}`);
-  const value = at === -1 ? fallback : Number(process.argv[at + 1]);
-  if (!Number.isInteger(value) || value < 1 || value > max) throw new Error(`--${name} must be a whole number from 1 to ${max}.`);
-  return value;
-};
-
-function assertLocal(url: string) {
-  if (!["127.0.0.1", "localhost", "::1", "[::1]"].includes(new URL(url).hostname)) throw new Error("The benchmark only runs against a local cluster.");
-}
-
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 
 async function main() {
   const versions = arg("versions", 20_000, 200_000);
   const vendorCount = arg("vendors", 20, 100);
   const queries = arg("queries", 4_000, 50_000);
   const CLIENTS = arg("clients", 20, 100);
-  const adminUrl = process.env.BENCH_ADMIN_URL ?? "postgres://postgres@127.0.0.1:54329/postgres";
-  assertLocal(adminUrl);
-  const name = `swarfbook_bench_${process.pid}_${randomBytes(3).toString("hex")}`;
-  const admin = knexFactory({ client: "pg", connection: adminUrl, pool: { min: 0, max: 1 } });
-  await admin.raw(`create database ${name} template template1`);
-  const url = new URL(adminUrl);
-  url.pathname = `/${name}`;
-  const knex: Knex = knexFactory({
-    client: "pg",
-    connection: url.toString(),
-    pool: { min: 0, max: CLIENTS },
-    migrations: { directory: path.join(import.meta.dirname, "../migrations"), extension: "ts", loadExtensions: [".ts"] },
-  });
-  try {
-    console.log(`database ${name}: migrating`);
-    await knex.migrate.latest();
+  await withBenchDatabase({ prefix: "swarfbook_bench", poolMax: CLIENTS }, async (_url, knex) => {
     let t = performance.now();
     const vendors: BenchVendor[] = [];
     const per = Math.floor(versions / vendorCount);
@@ -112,12 +84,7 @@ async function main() {
     console.log(`\n${latencies.length} searches, ${CLIENTS} concurrent clients, ${Math.round((latencies.length / wall) * 1000)} searches/s, ${tripsPerSearch.toFixed(2)} engine round trips per search`);
     console.log(`p50 ${p50.toFixed(1)} ms · p95 ${p95.toFixed(1)} ms · p99 ${p99.toFixed(1)} ms · max ${latencies.at(-1)!.toFixed(1)} ms`);
     console.log(`target p95 ≤ ${TARGET_P95_MS} ms: ${p95 <= TARGET_P95_MS ? "PASS" : "BELOW"}`);
-  } finally {
-    await knex.destroy();
-    await admin.raw(`drop database if exists ${name} with (force)`);
-    await admin.destroy();
-    console.log(`dropped ${name}`);
-  }
+  });
 }
 
 main().catch((error: unknown) => {

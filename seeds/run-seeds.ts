@@ -1,13 +1,16 @@
 import type { Knex } from "knex";
 
 import { seedBench } from "./seed-bench";
+import { seedField } from "./seed-field";
 import { seedFoundation } from "./seed-foundation";
 import { seedSheets } from "./seed-sheets";
 import { seedSupport } from "./seed-support";
+import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { seedSearchIndex } from "@/search/indexing/seed-search-index";
 
 // Tables in dependency order for a reset; later features add theirs at the front.
 export const TENANT_TABLES = [
+  "field_digests_sent", "sheet_version_activity",
   "search_words", "search_documents",
   "inbound_mail_log", "problem_reports", "reply_snippets", "desk_views", "ticket_attachments", "ticket_messages", "ticket_sheet_links", "tickets",
   "cutter_images",
@@ -22,6 +25,8 @@ export async function runSeeds(knex: Knex, { reset }: { reset: boolean }) {
   await seedSheets(knex, ids);
   await seedBench(knex, ids);
   await seedSupport(knex, ids);
+  await seedField(knex, ids);
   await seedSearchIndex(knex);
+  await refreshFieldRollups(knex);
   return ids;
 }

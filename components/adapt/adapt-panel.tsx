@@ -14,6 +14,7 @@ import { resultRows, ResultTable } from "./result-table";
 import { type SaveSetupAction, SaveSetupForm } from "./save-setup-form";
 import { StepsTrail } from "./steps-trail";
 import { TextInput } from "./text-input";
+import { useAdaptationBeacon } from "./use-adaptation-beacon";
 import { UnitsSwitch } from "./units-switch";
 import { WarningList } from "./warning-list";
 
@@ -58,6 +59,7 @@ export function AdaptPanel({ context, operationIndex = 0, machines = [], units: 
     ? feedSpeedCurve({ machine, diameterMm: context.cutter.diameterMm, flutes: context.cutter.flutes, chipLoadMm: result.chipLoadMm, minChipLoadMm: context.material.minChipLoadMm, vcWindowMpm: [context.material.vcMinMpm, context.material.vcMaxMpm], adapted: result, units })
     : null;
   const savedMachine = machines.some((m) => m.id === machineId);
+  useAdaptationBeacon({ vendorSlug, versionId: context.versionId, adaptationKey: `${opIndex}|${machineId}|${savedMachine ? "" : JSON.stringify(draft)}|${JSON.stringify(overrides)}`, ok: Boolean(result) });
 
   return (
     <div className="mt-3 space-y-4" data-adapt-panel>

@@ -6,6 +6,7 @@ const LINKS = [
   ["/cutters", "Cutters"],
   ["/materials", "Materials"],
   ["/machine-classes", "Machine classes"],
+  ["/field", "Field results"],
 ] as const;
 
 export function DraftingNav({ vendorSlug }: { vendorSlug: string }) {

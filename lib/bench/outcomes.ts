@@ -3,6 +3,7 @@ import "server-only";
 import type { OutcomeFields, OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
+import { scheduleFieldRefresh } from "@/lib/field/refresh-rollups";
 import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
 import { getStorage, newStorageKey, sniffUpload } from "@/lib/storage";
 
@@ -45,6 +46,7 @@ export async function recordOutcome({ vendorId, userId, setupId, fields, photo }
     })
     .returning("id");
   await writeAudit({ vendorId, actorUserId: userId, action: "outcome.create", objectType: "outcome", objectId: row.id, details: { setupId, result: fields.result } });
+  await scheduleFieldRefresh();
   return { id: row.id as string };
 }
 

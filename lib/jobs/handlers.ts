@@ -1,5 +1,7 @@
 import "server-only";
 
+import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/field/send-digest";
+import { FIELD_REFRESH_QUEUE, refreshFieldRollupsJob } from "@/lib/field/refresh-rollups";
 import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
 import { SHEET_EVENTS_QUEUE } from "@/lib/events/sheet-events";
 import { MAIL_QUEUE } from "@/lib/mail/enqueue-mail";
@@ -14,4 +16,13 @@ export const JOB_HANDLERS: Record<string, JobHandler> = {
   [SHEET_EVENTS_QUEUE]: dispatchSheetEvent,
   [SHEET_EVENT_DELIVERY_QUEUE]: deliverSheetEvent,
   [SEARCH_REINDEX_VENDOR_QUEUE]: reindexVendorJob,
+  [FIELD_REFRESH_QUEUE]: refreshFieldRollupsJob,
+  [FIELD_DIGEST_QUEUE]: weeklyDigestJob,
+};
+
+// Queues that also run on a clock (cron, UTC).
+export const JOB_SCHEDULES: Record<string, string> = {
+  // Views and adaptations only reach the rollup through this; outcomes and hand-offs also ask for a refresh.
+  [FIELD_REFRESH_QUEUE]: "*/5 * * * *",
+  [FIELD_DIGEST_QUEUE]: FIELD_DIGEST_CRON,
 };

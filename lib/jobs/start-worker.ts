@@ -2,7 +2,7 @@ import "server-only";
 
 import { getBoss } from "./boss";
 import { ensureQueue } from "./enqueue";
-import { JOB_HANDLERS } from "./handlers";
+import { JOB_HANDLERS, JOB_SCHEDULES } from "./handlers";
 
 let started = false;
 
@@ -17,4 +17,5 @@ export async function startWorker(): Promise<void> {
       for (const job of jobs) await handler(job.data);
     });
   }
+  for (const [name, cron] of Object.entries(JOB_SCHEDULES)) await boss.schedule(name, cron, {}, { tz: "UTC" });
 }

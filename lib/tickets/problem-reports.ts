@@ -3,6 +3,7 @@ import "server-only";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
+import { scheduleFieldRefresh } from "@/lib/field/refresh-rollups";
 
 export type ProblemReport = {
   id: string;
@@ -21,7 +22,7 @@ type CreateOptions = { vendorId: string; actorUserId: string; ticketId: string; 
 
 /** Hand-off to engineering: a problem with one sheet version, raised from a ticket. */
 export async function createProblemReport(o: CreateOptions): Promise<{ id: string }> {
-  return db.transaction(async (trx) => {
+  const created = await db.transaction(async (trx) => {
     const ticket = await trx("tickets").where({ id: o.ticketId, vendor_id: o.vendorId }).first("id");
     if (!ticket) throw new NotFound();
     const version = await trx("sheet_versions").where({ id: o.sheetVersionId, vendor_id: o.vendorId }).first("id");
@@ -32,6 +33,8 @@ export async function createProblemReport(o: CreateOptions): Promise<{ id: strin
     await writeAudit({ vendorId: o.vendorId, actorUserId: o.actorUserId, action: "ticket.handoff", objectType: "ticket", objectId: o.ticketId, details: { problemReportId: row.id, sheetVersionId: o.sheetVersionId } }, trx);
     return row;
   });
+  await scheduleFieldRefresh();
+  return created;
 }
 
 /** Problem reports for the Drafting side, newest first; optionally for one sheet version. */

@@ -22,7 +22,12 @@ export async function updateBranding(opts: { vendorId: string; actorUserId: stri
   const logo = opts.logo && opts.logo.byteLength > 0 ? await checkLogo(opts.logo) : null;
   await db.transaction(async (trx) => {
     const current = await trx("vendors").where({ id: opts.vendorId }).forUpdate().first<{ settings: Record<string, unknown> }>("settings");
-    const settings = { ...current.settings, libraryPublic: opts.input.libraryPublic, requireSecondApproval: opts.input.requireSecondApproval };
+    const settings = {
+      ...current.settings,
+      libraryPublic: opts.input.libraryPublic,
+      requireSecondApproval: opts.input.requireSecondApproval,
+      ...(opts.input.wilsonConfidence === undefined ? {} : { wilsonConfidence: opts.input.wilsonConfidence }),
+    };
     await trx("vendors")
       .where({ id: opts.vendorId })
       .update({
@@ -33,7 +38,7 @@ export async function updateBranding(opts: { vendorId: string; actorUserId: stri
         updated_at: trx.fn.now(),
       });
     await writeAudit(
-      { vendorId: opts.vendorId, actorUserId: opts.actorUserId, action: "vendor.branding", objectType: "vendor", objectId: opts.vendorId, details: { name: opts.input.name, accentColor: opts.input.accentColor, logo: Boolean(logo), libraryPublic: opts.input.libraryPublic, requireSecondApproval: opts.input.requireSecondApproval } },
+      { vendorId: opts.vendorId, actorUserId: opts.actorUserId, action: "vendor.branding", objectType: "vendor", objectId: opts.vendorId, details: { name: opts.input.name, accentColor: opts.input.accentColor, logo: Boolean(logo), libraryPublic: opts.input.libraryPublic, requireSecondApproval: opts.input.requireSecondApproval, wilsonConfidence: opts.input.wilsonConfidence } },
       trx,
     );
   });

@@ -7,6 +7,8 @@ export type PlannedSheet = { cutter: string; material: string; machineClass: str
 
 const FIRST: PlannedVersion = { chipLoadScale: 1, depthScale: 1, changeNote: "First version, from test cuts on the reference machine." };
 const FEED_DOWN: PlannedVersion = { chipLoadScale: 0.9, depthScale: 1, changeNote: "Feed lowered 10 % after field reports of chatter on this machine class." };
+// The plastics sheet of the Field-results melting story (seeds/seed-field.ts): v1 rubbed and welded, v2 cuts.
+const CHIP_UP: PlannedVersion = { chipLoadScale: 1.25, depthScale: 1, changeNote: "Chip load raised 25 %: at the old feed the cutter rubbed and the chips welded in the slot." };
 const DEPTH_DOWN: PlannedVersion = { chipLoadScale: 0.9, depthScale: 0.8, changeNote: "Axial depth reduced 20 %: customers reported deflection at long stick-out." };
 
 const KINDS: Record<string, OperationKind[]> = {
@@ -42,6 +44,7 @@ export const DEMO_SHEET_PLAN: Record<string, PlannedSheet[]> = {
       ["NB-CMP-635", "plywood", "rigid-router"], ["NB-CMP-635", "mdf", "rigid-router"], ["NB-CMP-635", "hardwood-oak", "rigid-router"],
     ],
     {
+      1: { versions: [FIRST, CHIP_UP] },
       11: { withdrawnReason: "G10 dust needs wet cutting or a sealed enclosure on this machine class; a revised sheet is in preparation." },
       16: { openDraft: "in_review" },
     },
@@ -56,6 +59,6 @@ export const DEMO_SHEET_PLAN: Record<string, PlannedSheet[]> = {
       ["QC-B2-3", "mdf", "light-router"], ["QC-CP-8", "plywood", "rigid-router"], ["QC-CP-8", "mdf", "rigid-router"],
       ["QC-CP-8", "hardwood-maple", "rigid-router"], ["QC-E3-8", "carbon-fibre", "small-machining-centre"],
     ],
-    { 6: { openDraft: "draft" } },
+    { 1: { versions: [FIRST, CHIP_UP] }, 6: { openDraft: "draft" } },
   ),
 };

@@ -17,6 +17,7 @@ const PUBLIC_BY_DESIGN: Record<string, string> = {
   "/[vendor]/join/[token]": "an invitation link works for whoever holds it (probed with a forged token below)",
   "/api/v1/vendors/[vendor]/logo": "a vendor's logo is public branding, shown on the platform root",
   "/api/v1/vendors/[vendor]/setups/alerts/stop": "the one-click stop link of change alerts works by its signed token, without sign-in",
+  "/api/v1/vendors/[vendor]/field/digest/stop": "the one-click stop link of the weekly digest works by its signed token, without sign-in",
 };
 
 type ValueSource = (db: Knex, vendorId: string) => Promise<string | undefined>;
@@ -42,6 +43,8 @@ const VALUE_SOURCES: Record<string, ValueSource> = {
   "adapt/[versionId]": firstId("sheet_versions"),
   "tickets/[ticket]": firstId("tickets"),
   "attachments/[attachment]": firstId("ticket_attachments"),
+  "field/[slug]": firstId("sheets", "slug"),
+  "field/[list]": async () => "needs-attention",
 };
 
 describe("cross-vendor probe", () => {

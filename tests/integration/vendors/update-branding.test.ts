@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
+import { brandingSchema } from "@/lib/vendors/branding-schema";
 import { updateBranding } from "@/lib/vendors/update-branding";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
@@ -26,5 +27,16 @@ describe("branding", () => {
     const html = Buffer.from("<html><script>alert(1)</script></html>");
     await expect(updateBranding({ vendorId: vendor.id, actorUserId: admin.user.id, input: input(), logo: html })).rejects.toBeInstanceOf(InvalidInput);
     expect((await db("vendors").where({ id: vendor.id }).first()).logo).toBeNull();
+  });
+
+  it("keeps the Field-results confidence unless the form sends one, and accepts only the offered levels", async () => {
+    const { vendor, admin } = await createVendorWithStaff({ settings: { wilsonConfidence: 0.9 } });
+    await updateBranding({ vendorId: vendor.id, actorUserId: admin.user.id, input: input() });
+    expect((await db("vendors").where({ id: vendor.id }).first()).settings.wilsonConfidence).toBe(0.9);
+    // As the admin form posts it: checkboxes as "on", the level as a string.
+    const form = { vendor: "x", name: "Renamed Co", accentColor: "#123456", requireSecondApproval: "on" };
+    await updateBranding({ vendorId: vendor.id, actorUserId: admin.user.id, input: brandingSchema.parse({ ...form, wilsonConfidence: "0.99" }) });
+    expect((await db("vendors").where({ id: vendor.id }).first()).settings.wilsonConfidence).toBe(0.99);
+    expect(brandingSchema.safeParse({ ...form, wilsonConfidence: "0.5" }).success).toBe(false);
   });
 });

@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { after } from "next/server";
 
 import { loadLibrarySheet, parseVersionNumber } from "@/components/library/load-library-sheet";
 import { readUnits } from "@/components/library/read-units";
 import { SheetView } from "@/components/library/sheet-view";
 import { adaptPanelRenderer } from "@/components/adapt/adapt-panel-mount";
+import { countSheetView } from "@/lib/field/count-sheet-view";
 
 type Props = { params: Promise<{ vendor: string; sheet: string; n: string }> };
 
@@ -19,6 +21,8 @@ export default async function SheetVersionPage({ params }: Props) {
   const number = parseVersionNumber(n);
   const found = number === null ? null : await loadLibrarySheet(vendor, sheet, number);
   if (!found) notFound();
+  // Counted after the response is sent, so a slow write never delays the page.
+  after(() => countSheetView(found.vendor.id, found.data.version.id));
   const units = await readUnits();
   const renderAdaptPanel = adaptPanelRenderer({ vendor: found.vendor, versionId: found.data.version.id, units, returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}` });
   return <SheetView data={found.data} units={units} vendorSlug={found.vendor.slug} renderAdaptPanel={renderAdaptPanel} />;

@@ -1,15 +1,8 @@
-import { NextResponse } from "next/server";
-
 import { readAlertStopToken } from "@/lib/bench/alert-token";
 import { setChangeAlerts } from "@/lib/bench/mail-preferences";
+import { plainPage as page } from "@/lib/http/plain-page";
 import { withPublic } from "@/lib/http/with-vendor";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
-
-const page = (title: string, text: string, status = 200) =>
-  new NextResponse(
-    `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width"><title>${title}</title></head><body style="font-family:system-ui,sans-serif;max-width:36rem;margin:3rem auto;padding:0 1rem;color:#1c1917"><h1 style="font-size:1.4rem">${title}</h1><p>${text}</p></body></html>`,
-    { status, headers: { "content-type": "text/html; charset=utf-8", "content-security-policy": "default-src 'none'; style-src 'unsafe-inline'", "cache-control": "no-store" } },
-  );
 
 async function stop(request: Request) {
   const token = new URL(request.url).searchParams.get("token") ?? "";

@@ -1,0 +1,10 @@
+import { notFound } from "next/navigation";
+import type { ReactNode } from "react";
+
+import { loadFieldSheet } from "@/components/field/load-field-sheet";
+
+export default async function FieldSheetLayout({ children, params }: { children: ReactNode; params: Promise<{ vendor: string; slug: string }> }) {
+  const { vendor, slug } = await params;
+  if (!(await loadFieldSheet(vendor, slug))) notFound();
+  return children;
+}

@@ -1,0 +1,43 @@
+import { fieldExportSchema } from "@/content-schema/field-export";
+import { NotFound } from "@/lib/errors/domain-errors";
+import { confidenceOf } from "@/lib/field/confidence";
+import { loadCoverageGaps } from "@/lib/field/coverage";
+import { listCustomerChanges } from "@/lib/field/customer-changes";
+import { coverageGapsCsv, customerChangesCsv, needsAttentionCsv, sheetVersionsCsv } from "@/lib/field/field-csv";
+import { listNeedsAttention } from "@/lib/field/needs-attention";
+import { findFieldSheet, loadSheetFieldResults } from "@/lib/field/sheet-field-results";
+import { withVendor } from "@/lib/http/with-vendor";
+import type { Vendor } from "@/lib/vendors/vendor-schema";
+
+const EXPORT_LIMIT = 5000;
+
+async function render(vendor: Vendor, query: ReturnType<typeof fieldExportSchema.parse>): Promise<string> {
+  const { z, confidence } = confidenceOf(vendor.settings);
+  switch (query.list) {
+    case "needs-attention":
+      return needsAttentionCsv(await listNeedsAttention({ vendorId: vendor.id, z, limit: EXPORT_LIMIT }), confidence);
+    case "customer-changes":
+      return customerChangesCsv(await listCustomerChanges({ vendorId: vendor.id, limit: EXPORT_LIMIT }));
+    case "coverage-gaps":
+      return coverageGapsCsv(await loadCoverageGaps({ vendorId: vendor.id }));
+    case "sheet-versions": {
+      const sheet = await findFieldSheet({ vendorId: vendor.id, slug: query.sheet });
+      const results = sheet && (await loadSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.id, z }));
+      if (!results) throw new NotFound("No such sheet.");
+      return sheetVersionsCsv(results.sheet.slug, results.versions, confidence);
+    }
+  }
+}
+
+// GET /api/v1/vendors/{vendor}/field/{needs-attention|customer-changes|coverage-gaps|sheet-versions?sheet=…}: a Field-results list as CSV.
+export const GET = withVendor<{ vendor: string; list: string }>(
+  async (request, { access, params }) => {
+    const query = fieldExportSchema.parse({ list: params.list, sheet: request.nextUrl.searchParams.get("sheet") ?? undefined });
+    const body = await render(access.vendor, query);
+    const fileName = `${access.vendor.slug}-${query.list}${query.list === "sheet-versions" ? `-${query.sheet}` : ""}-${new Date().toISOString().slice(0, 10)}`;
+    return new Response(body, {
+      headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${fileName}.csv"`, "cache-control": "private, no-store" },
+    });
+  },
+  { permission: "field.read" },
+);

@@ -1,0 +1,13 @@
+import "server-only";
+
+import { cache } from "react";
+
+import { requirePageAccess } from "@/lib/auth/page-access";
+import { findFieldSheet } from "@/lib/field/sheet-field-results";
+
+/** The sheet a Field-results drill-in is about, under the engineer's own vendor; null answers 404. */
+export const loadFieldSheet = cache(async (vendorSlug: string, sheetSlug: string) => {
+  const access = await requirePageAccess(vendorSlug, "field.read", `/${vendorSlug}/drafting/field/${sheetSlug}`);
+  const sheet = await findFieldSheet({ vendorId: access.vendor.id, slug: decodeURIComponent(sheetSlug) });
+  return sheet ? { access, sheet } : null;
+});

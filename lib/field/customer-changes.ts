@@ -1,0 +1,52 @@
+import "server-only";
+
+import { db } from "@/lib/db/knex";
+
+import type { ChangeRollup } from "./describe-change";
+
+export type ChangeItem = ChangeRollup & { versionId: string; sheetSlug: string; title: string; machineClass: string; number: number; state: string };
+
+const read = (r: Record<string, unknown>): ChangeItem => ({
+  versionId: String(r.sheet_version_id),
+  sheetSlug: String(r.sheet_slug),
+  title: String(r.title),
+  machineClass: String(r.machine_class),
+  number: Number(r.number),
+  state: String(r.state),
+  param: String(r.param),
+  reports: Number(r.reports),
+  medianPct: Number(r.median_pct),
+  q1Pct: Number(r.q1_pct),
+  q3Pct: Number(r.q3_pct),
+  lowered: Number(r.lowered),
+  raised: Number(r.raised),
+});
+
+const base = (vendorId: string) =>
+  db("field_change_rollups as c")
+    .join("sheet_versions as v", function () {
+      this.on("v.id", "c.sheet_version_id").andOn("v.vendor_id", "c.vendor_id");
+    })
+    .join("sheets as s", function () {
+      this.on("s.id", "v.sheet_id").andOn("s.vendor_id", "v.vendor_id");
+    })
+    .join("machine_classes as mc", function () {
+      this.on("mc.id", "s.machine_class_id").andOn("mc.vendor_id", "s.vendor_id");
+    })
+    .where("c.vendor_id", vendorId)
+    .select("c.*", "v.title", "v.number", "v.state", "s.slug as sheet_slug", "mc.name as machine_class");
+
+/**
+ * Across the published versions: the parameters customers changed most often, as suggestions for the next version.
+ * One report is an anecdote, so the vendor-wide list starts at two.
+ */
+export async function listCustomerChanges({ vendorId, limit = 25, minReports = 2 }: { vendorId: string; limit?: number; minReports?: number }): Promise<ChangeItem[]> {
+  const rows = await base(vendorId).where("v.state", "published").where("c.reports", ">=", minReports).orderBy([{ column: "c.reports", order: "desc" }, { column: "s.slug" }, { column: "c.param" }]).limit(limit);
+  return rows.map(read);
+}
+
+/** Every version of one sheet. */
+export async function listSheetChanges({ vendorId, sheetId }: { vendorId: string; sheetId: string }): Promise<ChangeItem[]> {
+  const rows = await base(vendorId).where("v.sheet_id", sheetId).orderBy([{ column: "v.number", order: "desc" }, { column: "c.reports", order: "desc" }]);
+  return rows.map(read);
+}

@@ -1,0 +1,33 @@
+import "server-only";
+
+import { db } from "@/lib/db/knex";
+
+export type FieldSummary = { versionsWithReports: number; outcomes: number; failed: number; workedAfterChanges: number; setups: number; views: number; adaptations: number; tickets: number; openHandoffs: number };
+
+/** The vendor's totals, from the rollup (one row per version), never from raw outcomes. */
+export async function loadFieldSummary({ vendorId }: { vendorId: string }): Promise<FieldSummary> {
+  const row = await db("field_version_rollups")
+    .where({ vendor_id: vendorId })
+    .first(
+      db.raw("count(*) filter (where outcomes > 0)::int as versions_with_reports"),
+      db.raw("coalesce(sum(outcomes), 0)::int as outcomes"),
+      db.raw("coalesce(sum(failed), 0)::int as failed"),
+      db.raw("coalesce(sum(worked_after_changes), 0)::int as worked_after_changes"),
+      db.raw("coalesce(sum(setups), 0)::int as setups"),
+      db.raw("coalesce(sum(views), 0)::int as views"),
+      db.raw("coalesce(sum(adaptations), 0)::int as adaptations"),
+      db.raw("coalesce(sum(tickets), 0)::int as tickets"),
+      db.raw("coalesce(sum(open_handoffs), 0)::int as open_handoffs"),
+    );
+  return {
+    versionsWithReports: row.versions_with_reports,
+    outcomes: row.outcomes,
+    failed: row.failed,
+    workedAfterChanges: row.worked_after_changes,
+    setups: row.setups,
+    views: row.views,
+    adaptations: row.adaptations,
+    tickets: row.tickets,
+    openHandoffs: row.open_handoffs,
+  };
+}

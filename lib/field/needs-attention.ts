@@ -1,0 +1,28 @@
+import "server-only";
+
+import { db } from "@/lib/db/knex";
+
+import { readRollup, type VersionRollup } from "./rollup-rows";
+import { WILSON_LOWER_SQL } from "./wilson-sql";
+
+export type AttentionItem = VersionRollup & { sheetSlug: string; title: string; machineClass: string; lowerBound: number };
+
+/**
+ * Published versions with at least one failure, ranked by the lower Wilson bound of their failure share:
+ * the versions that fail most *for certain*, so 1 failure in 1 report does not outrank 30 in 100.
+ */
+export async function listNeedsAttention({ vendorId, z, limit = 25 }: { vendorId: string; z: number; limit?: number }): Promise<AttentionItem[]> {
+  const { rows } = await db.raw(
+    `select r.*, v.title, s.slug as sheet_slug, mc.name as machine_class, ${WILSON_LOWER_SQL} as lower_bound
+     from field_version_rollups r
+     cross join (select ?::float8 as z) zz
+     join sheet_versions v on v.id = r.sheet_version_id and v.vendor_id = r.vendor_id
+     join sheets s on s.id = r.sheet_id and s.vendor_id = r.vendor_id
+     join machine_classes mc on mc.id = s.machine_class_id and mc.vendor_id = s.vendor_id
+     where r.vendor_id = ? and r.state = 'published' and r.failed > 0
+     order by lower_bound desc, r.failed desc, s.slug
+     limit ?`,
+    [z, vendorId, limit],
+  );
+  return rows.map((r: Record<string, unknown>) => ({ ...readRollup(r, z), sheetSlug: String(r.sheet_slug), title: String(r.title), machineClass: String(r.machine_class), lowerBound: Number(r.lower_bound) }));
+}

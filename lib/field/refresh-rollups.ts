@@ -1,0 +1,45 @@
+import "server-only";
+
+import type { Knex } from "knex";
+
+import { db } from "@/lib/db/knex";
+import { DEFAULT_JOB_OPTIONS, ensureQueue } from "@/lib/jobs/enqueue";
+import { getBoss } from "@/lib/jobs/boss";
+
+export const FIELD_REFRESH_QUEUE = "field.refresh-rollups";
+const VIEWS = ["field_version_rollups", "field_change_rollups"] as const;
+
+/**
+ * Rebuilds both Field-results rollups. CONCURRENTLY keeps the old rows readable while the new ones are built,
+ * so a page view never waits for a refresh.
+ */
+export async function refreshFieldRollups(knex: Knex = db): Promise<{ durationMs: number }> {
+  const started = performance.now();
+  for (const view of VIEWS) await knex.raw(`refresh materialized view concurrently ${view}`);
+  const durationMs = Math.round(performance.now() - started);
+  await knex("field_rollup_refreshes").insert({ name: "field", refreshed_at: knex.fn.now(), duration_ms: durationMs }).onConflict("name").merge();
+  return { durationMs };
+}
+
+export async function refreshFieldRollupsJob(): Promise<void> {
+  await refreshFieldRollups();
+}
+
+/**
+ * After a new outcome or hand-off: one refresh per 20 s at most, however many reports arrive.
+ * Best effort: the report is already saved, and the five-minute schedule refreshes anyway.
+ */
+export async function scheduleFieldRefresh(): Promise<void> {
+  try {
+    await ensureQueue(FIELD_REFRESH_QUEUE);
+    const boss = await getBoss();
+    await boss.sendDebounced(FIELD_REFRESH_QUEUE, {}, { ...DEFAULT_JOB_OPTIONS, retryLimit: 3 }, 20, "field");
+  } catch (error) {
+    console.error("[field] could not schedule a rollup refresh", error);
+  }
+}
+
+export async function lastFieldRefresh(): Promise<Date | null> {
+  const row = await db("field_rollup_refreshes").where({ name: "field" }).first("refreshed_at");
+  return row ? new Date(row.refreshed_at) : null;
+}
