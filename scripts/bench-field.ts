@@ -49,7 +49,7 @@ const CLASS_SPECS = [
 // Customers' machines: each is one archetype with jitter, rounded as people type numbers in.
 const MACHINE_ARCHETYPES = [
   // preset, share, rpm_min, rpm_max, power kW, max feed mm/min, rigidity
-  ["desktop-3018", 0.12, 1_000, 10_000, 0.3, 1_000, 0.25],
+  ["desktop-mini", 0.12, 1_000, 10_000, 0.3, 1_000, 0.25],
   ["trim-router-belt", 0.25, 10_000, 30_000, 0.7, 5_000, 0.35],
   ["hobby-ballscrew-1.5kw", 0.2, 8_000, 24_000, 1.5, 6_000, 0.55],
   ["hobby-ballscrew-2.2kw", 0.18, 6_000, 24_000, 2.2, 8_000, 0.65],

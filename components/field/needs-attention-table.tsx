@@ -28,7 +28,7 @@ export function NeedsAttentionTable({ items, vendorSlug, confidenceLabel }: { it
           {items.map((item, i) => {
             const symptom = topSymptom(item.symptoms);
             return (
-              <tr key={item.versionId}>
+              <tr key={item.versionId} data-sheet={item.sheetSlug} data-lower-bound={item.lowerBound.toFixed(6)}>
                 <td className="num px-3 py-2 text-stone-500">{i + 1}</td>
                 <td className="px-3 py-2">
                   <Link className="font-medium underline" href={`/${vendorSlug}/drafting/field/${item.sheetSlug}`}>{item.title}</Link>

@@ -14,7 +14,7 @@ export function SearchNotices({ data, busy, failed, vendorSlug }: { data?: Searc
         {failed ? "Search is not answering right now; try again in a moment." : data ? (
           <>
             <span className="num" data-testid="search-total">{data.total}</span> {data.total === 1 ? "sheet" : "sheets"}
-            {busy ? <span className="ml-2 text-stone-400">· updating…</span> : null}
+            {busy ? <span className="ml-2 text-stone-600">· updating…</span> : null}
           </>
         ) : "Searching…"}
       </p>

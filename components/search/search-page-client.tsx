@@ -115,7 +115,7 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
           {data && data.total === 0 ? <SearchEmpty description={data.description} suggestions={data.suggestions} onTry={pushQuery} /> : null}
           <ul id="search-results" role="listbox" aria-label="Matching sheets" className="grid gap-3 lg:grid-cols-2">
             {hits.map((hit, i) => (
-              <SearchHitItem key={hit.slug} hit={hit} href={href(hit.slug)} id={`search-hit-${i}`} active={i === active} onHover={() => setActive(i)} />
+              <SearchHitItem key={hit.slug} hit={hit} href={href(hit.slug)} id={`search-hit-${i}`} active={i === active} onHover={() => setActive(i)} onOpen={() => router.push(href(hit.slug))} />
             ))}
           </ul>
         </div>

@@ -56,8 +56,14 @@ describe("Library search", () => {
     await box.focus();
     await page.keyboard.press("ArrowDown");
     expect(await box.getAttribute("aria-activedescendant")).toBe("search-hit-0");
-    const first = await page.getByRole("option").first().locator("a").getAttribute("href");
+    const first = await page.getByRole("option").first().getAttribute("data-href");
     await page.keyboard.press("Enter");
+    await page.waitForURL((url) => url.pathname === first, { timeout: 60_000 });
+    // A click on a result opens it too.
+    await page.goBack();
+    const option = page.getByRole("option").first();
+    await option.waitFor({ timeout: 30_000 });
+    await option.click();
     await page.waitForURL((url) => url.pathname === first, { timeout: 60_000 });
   });
 
