@@ -59,7 +59,7 @@ export function AdaptPanel({ context, operationIndex = 0, machines = [], units: 
     ? feedSpeedCurve({ machine, diameterMm: context.cutter.diameterMm, flutes: context.cutter.flutes, chipLoadMm: result.chipLoadMm, minChipLoadMm: context.material.minChipLoadMm, vcWindowMpm: [context.material.vcMinMpm, context.material.vcMaxMpm], adapted: result, units })
     : null;
   const savedMachine = machines.some((m) => m.id === machineId);
-  useAdaptationBeacon({ vendorSlug, versionId: context.versionId, adaptationKey: `${opIndex}|${machineId}|${savedMachine ? "" : JSON.stringify(draft)}|${JSON.stringify(overrides)}`, ok: Boolean(result) });
+  useAdaptationBeacon({ vendorSlug, versionId: context.versionId, adaptationKey: savedMachine ? machineId : JSON.stringify(draft), ok: Boolean(result) });
 
   return (
     <div className="mt-3 space-y-4" data-adapt-panel>

@@ -2,8 +2,9 @@
 
 import { useEffect } from "react";
 
-// Each distinct adaptation (version, operation, machine) counts once per page load, after the reader
-// has stopped typing for a moment. Counting is best effort: a failed beacon is never shown to anyone.
+// A sheet version adapted to one machine counts once per browser tab, however many operation panels
+// the page shows and however often the reader changes ae or ap; a machine typed in counts once it has
+// settled for a moment. Counting is best effort: a failed beacon is never shown to anyone.
 const reported = new Set<string>();
 const SETTLE_MS = 1500;
 

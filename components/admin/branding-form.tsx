@@ -38,10 +38,10 @@ export function BrandingForm({ vendor }: { vendor: Vendor }) {
         <label className="flex items-center gap-2"><input type="checkbox" name="libraryPublic" defaultChecked={vendor.settings.libraryPublic} className="h-5 w-5" /> Library open to visitors (otherwise signed-in customers only)</label>
         <label className="flex items-center gap-2"><input type="checkbox" name="requireSecondApproval" defaultChecked={vendor.settings.requireSecondApproval} className="h-5 w-5" /> Publishing needs approval by a second engineer</label>
         <label htmlFor="wilsonConfidence" className="mt-1 font-medium">Field results: confidence of the failure interval</label>
-        <select id="wilsonConfidence" name="wilsonConfidence" defaultValue={String(vendor.settings.wilsonConfidence)} className="min-h-11 max-w-xs rounded border border-stone-300 bg-white px-3">
+        <select id="wilsonConfidence" name="wilsonConfidence" aria-describedby="wilsonConfidence-hint" defaultValue={String(vendor.settings.wilsonConfidence)} className="min-h-11 max-w-xs rounded border border-stone-300 bg-white px-3">
           {WILSON_CONFIDENCE_CHOICES.map((c) => <option key={c} value={c}>{Number(c) * 100} %</option>)}
         </select>
-        <span className="text-stone-600">Higher asks for more reports before a version ranks high in Needs attention.</span>
+        <span id="wilsonConfidence-hint" className="text-stone-600">Higher asks for more reports before a version ranks high in Needs attention.</span>
         {errors.wilsonConfidence ? <span className="text-red-800">⚠ {errors.wilsonConfidence.join(" ")}</span> : null}
       </fieldset>
       <div className="flex items-center gap-4 sm:col-span-2">

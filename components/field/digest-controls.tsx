@@ -5,9 +5,9 @@ import { useActionState } from "react";
 import { sendDigestNowAction, setWeeklyDigestAction } from "@/app/[vendor]/(staff)/drafting/field/actions";
 import { initialActionState } from "@/lib/actions/action-state";
 
+// Always mounted, so screen readers announce the message when it appears.
 function Status({ state }: { state: { ok: boolean; message?: string } }) {
-  if (!state.message) return null;
-  return <p role={state.ok ? "status" : "alert"} className={state.ok ? "text-sm text-green-800" : "text-sm text-red-800"}>{state.message}</p>;
+  return <p role="status" aria-live="polite" className={state.ok ? "text-sm text-green-800" : "text-sm text-red-800"}>{state.message ?? ""}</p>;
 }
 
 /** The weekly digest for the signed-in engineer: on or off, and "send it to me now". */

@@ -14,7 +14,11 @@ function spread(c: ChangeRollup): string {
 
 export function describeChange(c: ChangeRollup): string {
   const reports = `${c.reports} ${c.reports === 1 ? "report" : "reports"}`;
-  if (Math.abs(c.medianPct) < 0.05) return `${labelOf(c.param)} changed both ways, median ±0 % in ${reports} (${c.lowered} lowered, ${c.raised} raised)`;
+  if (Math.abs(c.medianPct) < 0.05) {
+    return c.lowered + c.raised === 0
+      ? `${labelOf(c.param)} named in ${reports} but kept at the sheet's value`
+      : `${labelOf(c.param)} changed both ways, median ±0 % in ${reports} (${c.lowered} lowered, ${c.raised} raised)`;
+  }
   const way = c.medianPct < 0 ? "lowered" : "raised";
   const agree = c.medianPct < 0 ? c.lowered : c.raised;
   return `${labelOf(c.param)} ${way} by a median of ${pct(c.medianPct)} in ${reports} (${agree} of ${c.reports} ${way} it${spread(c)})`;

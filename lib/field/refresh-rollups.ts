@@ -15,9 +15,12 @@ const VIEWS = ["field_version_rollups", "field_change_rollups"] as const;
  */
 export async function refreshFieldRollups(knex: Knex = db): Promise<{ durationMs: number }> {
   const started = performance.now();
-  for (const view of VIEWS) await knex.raw(`refresh materialized view concurrently ${view}`);
+  // One transaction, so a reader never sees new version rollups beside old change rollups.
+  await knex.transaction(async (trx) => {
+    for (const view of VIEWS) await trx.raw(`refresh materialized view concurrently ${view}`);
+    await trx("field_rollup_refreshes").insert({ name: "field", refreshed_at: trx.fn.now(), duration_ms: Math.round(performance.now() - started) }).onConflict("name").merge();
+  });
   const durationMs = Math.round(performance.now() - started);
-  await knex("field_rollup_refreshes").insert({ name: "field", refreshed_at: knex.fn.now(), duration_ms: durationMs }).onConflict("name").merge();
   return { durationMs };
 }
 

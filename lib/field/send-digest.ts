@@ -17,7 +17,7 @@ import { loadCoverageGaps } from "./coverage";
 import { listCustomerChanges } from "./customer-changes";
 import { describeChange } from "./describe-change";
 import { type DigestMail, renderDigest } from "./digest-mail";
-import { listNeedsAttention } from "./needs-attention";
+import { countNeedsAttention, listNeedsAttention } from "./needs-attention";
 import { topSymptom } from "./rollup-rows";
 
 export const FIELD_DIGEST_QUEUE = "field.weekly-digest";
@@ -26,6 +26,7 @@ export const FIELD_DIGEST_CRON = "0 7 * * 1";
 const TOP = 5;
 
 const digestJobSchema = z.object({ vendorId: z.uuid().optional(), userId: z.uuid().optional() }).default({});
+type DigestJob = z.infer<typeof digestJobSchema>;
 
 /** The Monday (UTC) of the week `at` falls in, as YYYY-MM-DD. */
 export function weekStartOf(at: Date): string {
@@ -40,8 +41,9 @@ export const digestStopUrl = (vendor: Pick<Vendor, "id" | "slug">, userId: strin
 /** The digest's lists for one vendor; the same for every engineer of that vendor. */
 export async function buildDigestContent(vendor: Vendor, weekOf: string): Promise<Omit<DigestMail, "stopUrl">> {
   const { z: zValue, label } = confidenceOf(vendor.settings);
-  const [attention, changes, coverage] = await Promise.all([
+  const [attention, attentionTotal, changes, coverage] = await Promise.all([
     listNeedsAttention({ vendorId: vendor.id, z: zValue, limit: TOP }),
+    countNeedsAttention({ vendorId: vendor.id }),
     listCustomerChanges({ vendorId: vendor.id, limit: TOP }),
     loadCoverageGaps({ vendorId: vendor.id }),
   ]);
@@ -54,8 +56,11 @@ export async function buildDigestContent(vendor: Vendor, weekOf: string): Promis
       const symptom = topSymptom(a.symptoms);
       return { title: `${a.title} (${a.machineClass})`, number: a.number, failed: a.failed, outcomes: a.outcomes, lowerPct: percent(a.failure.lower), upperPct: percent(a.failure.upper), symptom: symptom && outcomeSymptomLabels[symptom], url: appUrl(`/${vendor.slug}/drafting/field/${a.sheetSlug}`) };
     }),
+    attentionTotal,
     changes: changes.map((c) => ({ title: `${c.title} (${c.machineClass})`, number: c.number, sentence: describeChange(c) })),
     gaps: coverage.clusters.slice(0, TOP).map((c) => c.summary),
+    moreGaps: Math.max(0, coverage.clusters.length - TOP),
+    machines: coverage.machines,
   };
 }
 
@@ -112,14 +117,20 @@ export async function requestDigest(vendorId: string, userId: string): Promise<v
   await enqueue(FIELD_DIGEST_QUEUE, { vendorId, userId });
 }
 
-/** The queue's handler: the weekly run (no data) covers every vendor; a request names one person. */
+/**
+ * The queue's handler. The weekly tick (no data) queues one job per vendor, so one vendor's failure is retried
+ * on its own and never holds up the others; a job with a vendor sends its digests; one with a person too is a request.
+ */
 export async function weeklyDigestJob(data: unknown): Promise<void> {
-  const job = digestJobSchema.parse(data ?? {});
+  const job: DigestJob = digestJobSchema.parse(data ?? {});
   const vendors = await listVendors();
-  if (job.vendorId && job.userId) {
-    const vendor = vendors.find((v) => v.id === job.vendorId);
-    if (vendor) await sendDigestOnRequest(vendor, job.userId);
+  if (!job.vendorId) {
+    const week = weekStartOf(new Date());
+    for (const vendor of vendors) await enqueue(FIELD_DIGEST_QUEUE, { vendorId: vendor.id }, { singletonKey: `${vendor.id}:${week}` });
     return;
   }
-  for (const vendor of vendors) await sendVendorDigests(vendor);
+  const vendor = vendors.find((v) => v.id === job.vendorId);
+  if (!vendor) return;
+  if (job.userId) await sendDigestOnRequest(vendor, job.userId);
+  else await sendVendorDigests(vendor);
 }

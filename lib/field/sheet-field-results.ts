@@ -49,7 +49,7 @@ export async function loadSheetFieldResults({ vendorId, sheetId, z }: { vendorId
       .where({ "l.vendor_id": vendorId, "v.sheet_id": sheetId })
       .orderBy("t.created_at", "desc")
       .select("t.id", "t.number", "t.subject", "t.status", "t.created_at", "v.number as version_number"),
-    listProblemReports({ vendorId }),
+    listProblemReports({ vendorId, sheetId }),
   ]);
   const numberOf = new Map(rollups.map((r) => [String(r.sheet_version_id), Number(r.number)]));
   const latest = rollups[rollups.length - 1];

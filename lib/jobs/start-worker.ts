@@ -1,7 +1,7 @@
 import "server-only";
 
 import { getBoss } from "./boss";
-import { ensureQueue } from "./enqueue";
+import { DEFAULT_JOB_OPTIONS, ensureQueue } from "./enqueue";
 import { JOB_HANDLERS, JOB_SCHEDULES } from "./handlers";
 
 let started = false;
@@ -17,5 +17,5 @@ export async function startWorker(): Promise<void> {
       for (const job of jobs) await handler(job.data);
     });
   }
-  for (const [name, cron] of Object.entries(JOB_SCHEDULES)) await boss.schedule(name, cron, {}, { tz: "UTC" });
+  for (const [name, cron] of Object.entries(JOB_SCHEDULES)) await boss.schedule(name, cron, {}, { ...DEFAULT_JOB_OPTIONS, tz: "UTC" });
 }

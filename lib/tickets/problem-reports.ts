@@ -37,8 +37,8 @@ export async function createProblemReport(o: CreateOptions): Promise<{ id: strin
   return created;
 }
 
-/** Problem reports for the Drafting side, newest first; optionally for one sheet version. */
-export async function listProblemReports({ vendorId, sheetVersionId }: { vendorId: string; sheetVersionId?: string }): Promise<ProblemReport[]> {
+/** Problem reports for the Drafting side, newest first; optionally for one sheet version or one sheet's versions. */
+export async function listProblemReports({ vendorId, sheetVersionId, sheetId }: { vendorId: string; sheetVersionId?: string; sheetId?: string }): Promise<ProblemReport[]> {
   const q = db("problem_reports as p")
     .leftJoin("tickets as t", function () {
       this.on("t.id", "p.ticket_id").andOn("t.vendor_id", "p.vendor_id");
@@ -48,6 +48,7 @@ export async function listProblemReports({ vendorId, sheetVersionId }: { vendorI
     .select("p.*", "t.number as ticket_number", "u.name as reporter_name", "u.email as reporter_email")
     .orderBy("p.created_at", "desc");
   if (sheetVersionId) q.where("p.sheet_version_id", sheetVersionId);
+  if (sheetId) q.whereIn("p.sheet_version_id", db("sheet_versions").where({ vendor_id: vendorId, sheet_id: sheetId }).select("id"));
   const rows = await q;
   return rows.map((r) => ({
     id: r.id,

@@ -1,14 +1,25 @@
 import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 
-import { GET } from "@/app/api/v1/vendors/[vendor]/setups/alerts/stop/route";
+import { GET, POST } from "@/app/api/v1/vendors/[vendor]/setups/alerts/stop/route";
 import { createAlertStopToken } from "@/lib/bench/alert-token";
 import { wantsChangeAlerts } from "@/lib/bench/mail-preferences";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
-const stop = (vendorSlug: string, token: string) => GET(new NextRequest(`http://127.0.0.1:3000/api/v1/vendors/${vendorSlug}/setups/alerts/stop?token=${encodeURIComponent(token)}`));
+const url = (vendorSlug: string, token: string) => `http://127.0.0.1:3000/api/v1/vendors/${vendorSlug}/setups/alerts/stop?token=${encodeURIComponent(token)}`;
+// What a mail client's one-click unsubscribe sends (RFC 8058), and what the page's button sends.
+const stop = (vendorSlug: string, token: string) => POST(new NextRequest(url(vendorSlug, token), { method: "POST", body: "List-Unsubscribe=One-Click", headers: { "content-type": "application/x-www-form-urlencoded" } }));
 
 describe("the one-click stop link", () => {
+  it("only asks on GET, because mail scanners open links: the button POSTs", async () => {
+    const { vendor, customer } = await createVendorWithStaff();
+    const who = { vendorId: vendor.id, userId: customer.user.id };
+    const res = await GET(new NextRequest(url(vendor.slug, createAlertStopToken(who))));
+    expect(res.status).toBe(200);
+    expect(await res.text()).toMatch(/<form method="post"><button type="submit"[^>]*>Stop change alerts<\/button>/);
+    expect(await wantsChangeAlerts(who)).toBe(true);
+  });
+
   it("turns change alerts off without signing in, for that person and vendor only", async () => {
     const a = await createVendorWithStaff();
     const b = await createVendorWithStaff();

@@ -1,3 +1,4 @@
+import { NextRequest } from "next/server";
 import { afterAll, describe, expect, it } from "vitest";
 
 import { createAlertStopToken } from "@/lib/bench/alert-token";
@@ -7,7 +8,7 @@ import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { sendDigestOnRequest, sendVendorDigests, weekStartOf } from "@/lib/field/send-digest";
 import { getBoss } from "@/lib/jobs/boss";
 import { readStopToken } from "@/lib/mail/stop-token";
-import { GET as stopDigest } from "@/app/api/v1/vendors/[vendor]/field/digest/stop/route";
+import { POST as stopDigest } from "@/app/api/v1/vendors/[vendor]/field/digest/stop/route";
 import { createBenchSheet } from "@/tests/factories/bench";
 import { reportOutcomes } from "@/tests/factories/field";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
@@ -19,7 +20,7 @@ afterAll(async () => {
 
 type Mail = { subject: string; text: string; html: string; headers: Record<string, string> };
 const mailsTo = async (email: string): Promise<Mail[]> => (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map((r: { data: Mail }) => r.data);
-const stop = (slug: string, token: string) => stopDigest(new Request(`http://localhost/api/v1/vendors/${slug}/field/digest/stop?token=${encodeURIComponent(token)}`) as never);
+const stop = (slug: string, token: string) => stopDigest(new NextRequest(`http://localhost/api/v1/vendors/${slug}/field/digest/stop?token=${encodeURIComponent(token)}`, { method: "POST" }));
 
 describe("weekly Field-results digest", () => {
   it("goes to engineers and admins once a week with the top items and a one-click stop; a retry sends nothing twice", async () => {

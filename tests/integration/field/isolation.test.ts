@@ -3,6 +3,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { db } from "@/lib/db/knex";
 import { loadCoverageGaps } from "@/lib/field/coverage";
 import { listCustomerChanges } from "@/lib/field/customer-changes";
+import { coverageGapsCsv, customerChangesCsv, needsAttentionCsv, sheetVersionsCsv } from "@/lib/field/field-csv";
 import { loadFieldSummary } from "@/lib/field/field-summary";
 import { listNeedsAttention } from "@/lib/field/needs-attention";
 import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
@@ -46,5 +47,31 @@ describe("Field results across vendors", () => {
     expect(digest.text).not.toContain(sheetB.sheetSlug);
     expect(digest.text).not.toMatch(/failed in 9 of 13|melting/i);
     expect(digest.text).not.toContain("5,000 rpm");
+  });
+
+  it("shows engineers aggregates only: no customer's name, e-mail, machine name or notes in any list, CSV or digest", async () => {
+    const { vendor, engineer } = await createVendorWithStaff();
+    const sheet = await createBenchSheet(vendor.id);
+    const customer = await reportOutcomes(vendor.id, sheet.versionId, { afterChanges: 3, failed: { chatter: 4 } });
+    await db("users").where({ id: customer.userId }).update({ name: "Wilhelmina Quarrington" });
+    await db("machines").where({ id: customer.machineId }).update({ name: "Quarrington garage router" });
+    await db("outcomes").where({ user_id: customer.userId }).update({ notes: "private note from the shop floor" });
+    await refreshFieldRollups();
+
+    const v = await loadVendor(vendor.id);
+    const attention = await listNeedsAttention({ vendorId: vendor.id, z: 1.96 });
+    const changes = await listCustomerChanges({ vendorId: vendor.id });
+    const coverage = await loadCoverageGaps({ vendorId: vendor.id });
+    const sheetResults = (await loadSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.sheetId, z: 1.96 }))!;
+    expect(attention).toHaveLength(1);
+    expect(changes).toHaveLength(1);
+    await sendVendorDigests(v);
+    const [digest] = await mailsTo(engineer.user.email);
+    const everything = [
+      JSON.stringify({ attention, changes, coverage, summary: await loadFieldSummary({ vendorId: vendor.id }), versions: sheetResults.versions, changesOfSheet: sheetResults.changes }),
+      needsAttentionCsv(attention, 0.95), customerChangesCsv(changes), coverageGapsCsv(coverage), sheetVersionsCsv(sheet.sheetSlug, sheetResults.versions, 0.95),
+      digest.text,
+    ].join("\n");
+    for (const secret of ["Quarrington", customer.email, customer.userId, customer.machineId, "private note"]) expect(everything).not.toContain(secret);
   });
 });

@@ -17,6 +17,9 @@ const attentionItem = (overrides: Partial<Attention> = {}): Attention => ({
 });
 
 const digest = (overrides: Partial<DigestMail> = {}): DigestMail => ({
+  attentionTotal: (overrides.attention ?? [null]).length,
+  moreGaps: 0,
+  machines: 40,
   vendorName: "Acme Tools",
   weekOf: "2026-12-07",
   confidenceLabel: "95 %",
@@ -26,6 +29,25 @@ const digest = (overrides: Partial<DigestMail> = {}): DigestMail => ({
   changes: [{ title: "Brass, 3 mm", number: 2, sentence: "vf (feed rate) lowered by a median of 18 % in 23 reports" }],
   gaps: ["31 machines with max 12,000 rpm, 0.5–1 kW and a light frame: no class covers them."],
   ...overrides,
+});
+
+describe("renderDigest: more than the digest lists", () => {
+  it("counts every flagged version in the subject and says the list is the top of them", () => {
+    const mail = renderDigest(digest({ attentionTotal: 40 }));
+    expect(mail.subject).toContain(": 40 versions need attention");
+    expect(mail.text).toContain("the top 1 of 40");
+  });
+
+  it("points to the page for the clusters it leaves out", () => {
+    expect(renderDigest(digest({ moreGaps: 3 })).text).toContain("… and 3 more clusters on the Field results page.");
+    expect(renderDigest(digest({ moreGaps: 0 })).text).not.toContain("more cluster");
+  });
+
+  it("does not claim full coverage when no machine is registered", () => {
+    const mail = renderDigest(digest({ machines: 0, gaps: [] }));
+    expect(mail.text).toContain("No customer has registered a machine yet.");
+    expect(mail.text).not.toContain("Every registered machine");
+  });
 });
 
 describe("renderDigest: subject", () => {

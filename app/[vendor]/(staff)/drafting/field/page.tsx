@@ -12,6 +12,7 @@ import { listCustomerChanges } from "@/lib/field/customer-changes";
 import { loadFieldSummary } from "@/lib/field/field-summary";
 import { listNeedsAttention } from "@/lib/field/needs-attention";
 import { lastFieldRefresh } from "@/lib/field/refresh-rollups";
+import { wilsonInterval } from "@/lib/field/wilson";
 
 export const metadata = { title: "Field results" };
 
@@ -21,6 +22,9 @@ export default async function FieldResultsPage({ params }: { params: Promise<{ v
   const { vendor: slug } = await params;
   const { vendor, user } = await requirePageAccess(slug, "field.read", `/${slug}/drafting/field`);
   const { z, label } = confidenceOf(vendor.settings);
+  // The explanation uses the vendor's own level, so it stays true at 80 % as at 99 %.
+  const oneInOne = wilsonInterval(1, 1, z).lower;
+  const thirtyInHundred = wilsonInterval(30, 100, z).lower;
   const [summary, attention, changes, coverage, refreshed, digestOn] = await Promise.all([
     loadFieldSummary({ vendorId: vendor.id }),
     listNeedsAttention({ vendorId: vendor.id, z }),
@@ -57,7 +61,7 @@ export default async function FieldResultsPage({ params }: { params: Promise<{ v
         id="needs-attention"
         title="Needs attention"
         csvHref={csv("needs-attention")}
-        lead={<>Published versions ranked by the <strong>lower end</strong> of the {label} Wilson score interval of their failure share, so a version with 1 failure in 1 report does not outrank one with 30 in 100: few reports prove little. The bar shows the interval and the dot the observed share. The confidence level is a vendor setting.</>}
+        lead={<>Published versions ranked by the <strong>lower end</strong> of the {label} Wilson score interval of their failure share, which weighs how many reports there are: at {label}, 1 failure in 1 report has a lower end of {percent(oneInOne)} and 30 failures in 100 of {percent(thirtyInHundred)}. The bar shows the interval and the dot the observed share. The confidence level is a vendor setting (Admin).</>}
       >
         <NeedsAttentionTable items={attention} vendorSlug={slug} confidenceLabel={label} />
       </FieldSection>
@@ -73,7 +77,7 @@ export default async function FieldResultsPage({ params }: { params: Promise<{ v
         id="coverage-gaps"
         title="Coverage gaps"
         csvHref={csv("coverage-gaps")}
-        lead="Customers’ registered machines whose spindle speed, power or rigidity fall outside every machine class you publish sheets for, grouped by top speed, power and frame. A class covers a machine whose top speed is 75–150 % of the class’s, with half to twice its power and a rigidity within ±0.2."
+        lead="Customers’ registered machines whose spindle speed, power or rigidity fall outside every machine class you publish sheets for, grouped by top speed, power and frame. A class covers a machine whose top speed is 75–150 % of the class’s, whose lowest speed is at most 1.5 times the class’s, with half to twice its power and a rigidity within ±0.2."
       >
         <CoverageGapList report={coverage} />
       </FieldSection>

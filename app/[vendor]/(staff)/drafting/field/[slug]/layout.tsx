@@ -3,6 +3,7 @@ import type { ReactNode } from "react";
 
 import { loadFieldSheet } from "@/components/field/load-field-sheet";
 
+// The sheet is looked up here, above loading.tsx: a notFound() inside the streamed page would answer 200.
 export default async function FieldSheetLayout({ children, params }: { children: ReactNode; params: Promise<{ vendor: string; slug: string }> }) {
   const { vendor, slug } = await params;
   if (!(await loadFieldSheet(vendor, slug))) notFound();

@@ -38,11 +38,11 @@ export default async function FieldSheetPage({ params }: { params: Promise<{ ven
         lead={<>For the {results.sheet.machineClass} class; field results version by version. <Link className="underline" href={`/${slug}/drafting/sheets/${sheet.slug}`}>Open the sheet in Drafting</Link> · <Link className="underline" href={`/${slug}/drafting/field`}>All Field results</Link></>}
       />
       {versions.length === 0 ? (
-        <p className="text-sm text-stone-600">No version of this sheet has been published yet.</p>
+        <p className="text-sm text-stone-600">No published version of this sheet has field results yet; they refresh every few minutes.</p>
       ) : (
         <>
           <div className="mb-2 flex justify-end">
-            <a href={`/api/v1/vendors/${slug}/field/sheet-versions?sheet=${encodeURIComponent(sheet.slug)}`} className="min-h-11 rounded border border-stone-300 bg-white px-3 py-2 text-sm" download>Export CSV</a>
+            <a href={`/api/v1/vendors/${slug}/field/sheet-versions?sheet=${encodeURIComponent(sheet.slug)}`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-3 text-sm" download>Export CSV<span className="sr-only"> of the versions</span></a>
           </div>
           <VersionRollupTable versions={versions} confidenceLabel={label} />
           {comparisons.length ? (

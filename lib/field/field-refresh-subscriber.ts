@@ -1,0 +1,13 @@
+import "server-only";
+
+import type { SheetEventSubscriber } from "@/lib/events/subscribers";
+
+import { scheduleFieldRefresh } from "./refresh-rollups";
+
+/** A version published, superseded or withdrawn changes what Field results lists: refresh soon. */
+export const fieldRefreshSubscriber: SheetEventSubscriber = {
+  name: "field-refresh",
+  handle: async (event) => {
+    if (event.type === "version.published" || event.type === "version.withdrawn") await scheduleFieldRefresh();
+  },
+};
