@@ -1,10 +1,18 @@
+import Link from "next/link";
+
 import { EmptyState } from "@/components/ui/empty-state";
-import type { CoverageReport } from "@/lib/field/coverage-gaps";
+import type { CoverageCluster, CoverageReport } from "@/lib/field/coverage-gaps";
+
+const newClassHref = (vendorSlug: string, c: CoverageCluster) =>
+  `/${vendorSlug}/drafting/machine-classes/new?${new URLSearchParams({
+    rpmMin: String(c.rpmMinMedian), rpmMax: String(c.rpmMax.median), powerKw: String(c.powerKw.median), rigidity: String(c.rigidityMedian),
+    description: `For the ${c.machines} registered machines of a Field-results coverage gap: ${c.summary.split(":")[0].replace(/^\S+ machines? with /, "")}.`,
+  })}`;
 
 const span = (r: { min: number; max: number }, unit: string) =>
   r.min === r.max ? `${r.min.toLocaleString("en-GB")} ${unit}` : `${r.min.toLocaleString("en-GB")}–${r.max.toLocaleString("en-GB")} ${unit}`;
 
-export function CoverageGapList({ report }: { report: CoverageReport }) {
+export function CoverageGapList({ report, vendorSlug }: { report: CoverageReport; vendorSlug: string }) {
   if (!report.machines) return <EmptyState title="No machines registered">Customers have not registered a machine on their Bench yet.</EmptyState>;
   return (
     <div className="space-y-3">
@@ -31,6 +39,7 @@ export function CoverageGapList({ report }: { report: CoverageReport }) {
                   </>
                 ) : null}
               </dl>
+              <Link className="mt-3 inline-flex min-h-11 items-center underline" href={newClassHref(vendorSlug, c)}>Draft a machine class for them</Link>
             </li>
           ))}
         </ul>

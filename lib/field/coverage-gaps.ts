@@ -26,6 +26,9 @@ export type CoverageCluster = {
   machines: number;
   rpmMax: { min: number; median: number; max: number };
   powerKw: { min: number; median: number; max: number };
+  /** Medians (by machine count) of the lowest speed and the rigidity: a starting point for a new class. */
+  rpmMinMedian: number;
+  rigidityMedian: number;
   rigidityLabel: string;
   nearestClass: { slug: string; name: string; rpmMax: number; powerKw: number; rigidity: number } | null;
   /** Per dimension: how many of the cluster's machines miss the nearest class there, and which way. */
@@ -142,6 +145,8 @@ export function findCoverageGaps(machines: readonly MachineGroup[], classes: rea
       machines: count,
       rpmMax,
       powerKw,
+      rpmMinMedian: weightedMedian(c.groups.map((g) => ({ value: g.rpmMin, count: g.count }))),
+      rigidityMedian: weightedMedian(c.groups.map((g) => ({ value: g.rigidity, count: g.count }))),
       rigidityLabel: RIGIDITY_WORDS[c.rigidityKey],
       nearestClass: top && { slug: top.slug, name: top.name, rpmMax: top.rpmMax, powerKw: top.powerKw, rigidity: top.rigidity },
       misses,

@@ -65,6 +65,12 @@ describe("Field results", () => {
     await expect(page.getByTestId("customer-changes").textContent()).resolves.toMatch(/ap \(axial depth\) lowered by a median of \d+ %/);
     await screenshot(page, "field-results-overview");
 
+    // A coverage gap opens a new machine class prefilled with the cluster's median machine.
+    await Promise.all([page.waitForURL(/\/drafting\/machine-classes\/new\?/), page.getByTestId("coverage-gaps").getByRole("link", { name: "Draft a machine class for them" }).first().click()]);
+    await expect(page.getByLabel("Highest spindle speed (rpm)").inputValue()).resolves.toBe("12000");
+    await page.goBack();
+    await attention.waitFor();
+
     // CSV export of the ranked list, as the browser downloads it.
     const [download] = await Promise.all([page.waitForEvent("download"), page.locator("#needs-attention-heading").locator("..").getByRole("link", { name: "Export CSV" }).click()]);
     const csv = readFileSync((await download.path())!, "utf8").split("\r\n");

@@ -190,6 +190,16 @@ describe("findCoverageGaps", () => {
     expect(report.clusters[0].powerKw).toEqual({ min: 0.6, median: 0.9, max: 0.9 });
   });
 
+  it("gives the median lowest speed and rigidity of a cluster, weighted by count, as the start of a new class", () => {
+    const report = findCoverageGaps(
+      [machine({ count: 1, rpmMin: 8000, rpmMax: 12000, powerKw: 0.6, rigidity: 0.3 }), machine({ count: 10, rpmMin: 6000, rpmMax: 12000, powerKw: 0.6, rigidity: 0.4 })],
+      [klass()],
+    );
+    expect(report.clusters).toHaveLength(1);
+    expect(report.clusters[0].rpmMinMedian).toBe(6000);
+    expect(report.clusters[0].rigidityMedian).toBe(0.4);
+  });
+
   it("the nearest class is the one with the fewest misses, and the cluster names the most common one", () => {
     const slowRouter = klass({ slug: "router-12k", name: "12k router", rpmMax: 12000, rpmMin: 6000, powerKw: 2.2, rigidity: 0.35 });
     // 12,000 rpm, 0.75 kW, light: misses slowRouter on power only; misses the 24k router on spindle and power.

@@ -79,7 +79,7 @@ export default async function FieldResultsPage({ params }: { params: Promise<{ v
         csvHref={csv("coverage-gaps")}
         lead="Customers’ registered machines whose spindle speed, power or rigidity fall outside every machine class you publish sheets for, grouped by top speed, power and frame. A class covers a machine whose top speed is 75–150 % of the class’s, whose lowest speed is at most 1.5 times the class’s, with half to twice its power and a rigidity within ±0.2."
       >
-        <CoverageGapList report={coverage} />
+        <CoverageGapList report={coverage} vendorSlug={slug} />
       </FieldSection>
     </>
   );
