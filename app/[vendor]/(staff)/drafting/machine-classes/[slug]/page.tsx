@@ -1,8 +1,8 @@
 import { notFound } from "next/navigation";
 
+import { CatalogueItemView } from "@/components/catalogue/catalogue-item-view";
 import { MachineClassForm } from "@/components/catalogue/catalogue-forms";
 import { loadMachineClass } from "@/components/catalogue/load-drafting-item";
-import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
 
@@ -22,16 +22,6 @@ export default async function DetailPage({ params }: Props) {
   const item = await loadMachineClass(vendorSlug, slug);
   if (!item) notFound();
   const { id, updatedAt: _updatedAt, ...fields } = item;
-  return (
-    <>
-      <PageHeader title={item.name} />
-      <DetailCard item={item} />
-      {can(member?.role, "catalogue.edit") ? (
-        <section aria-labelledby="edit-heading" className="mt-8">
-          <h2 id="edit-heading" className="mb-3 text-lg font-semibold">Edit</h2>
-          <MachineClassForm vendorSlug={vendorSlug} action={saveMachineClassAction} id={id} defaultValues={{ ...fields, zThrustN: fields.zThrustN ?? "" }} />
-        </section>
-      ) : null}
-    </>
-  );
+  const editForm = can(member?.role, "catalogue.edit") ? <MachineClassForm vendorSlug={vendorSlug} action={saveMachineClassAction} id={id} defaultValues={{ ...fields, zThrustN: fields.zThrustN ?? "" }} /> : null;
+  return <CatalogueItemView title={item.name} detail={<DetailCard item={item} />} editForm={editForm} />;
 }
