@@ -98,7 +98,7 @@ export function resolveInput(input: AdaptInput): ResolvedInput {
     meltsWhenRubbing: material.meltsWhenRubbing === true,
     referenceRigidity: referenceMachine.rigidity,
     machine: {
-      ...machine,
+      minRpm: machine.minRpm, maxRpm: machine.maxRpm, maxFeedMmMin: machine.maxFeedMmMin, spindlePowerKw: machine.spindlePowerKw, rigidity: machine.rigidity,
       ratedRpm: machine.ratedRpm ?? machine.maxRpm,
       spindleKind: machine.spindleKind ?? "constant-torque",
       rigidityClass,

@@ -46,13 +46,16 @@ export function spindlePower(s: AdaptState): void {
         : "The cut would need more power than your spindle can give with a safety margin, so the depth of cut is reduced until it fits.",
     );
     if (derated) {
-      warn(s, "power-limited-at-speed", `At ${Math.round(s.rpm)} rpm your spindle gives about ${say(units, s.availablePowerKw, "power")} of its ${say(units, s.input.machine.spindlePowerKw, "power")}; the depth of cut was reduced to fit.`, [
+      const rpm = s.rpm;
+      const available = s.availablePowerKw;
+      warn(s, "power-limited-at-speed", `At ${Math.round(rpm)} rpm your spindle gives about ${say(units, available, "power")} of its ${say(units, s.input.machine.spindlePowerKw, "power")}; the depth of cut was reduced to fit.`, [
         { name: "availablePowerKw", quantity: "power", value: s.availablePowerKw },
       ]);
     }
     const sheetAp = s.input.operation.axialDepthMm;
     if (s.axialDepthMm < MIN_AXIAL_DEPTH_SHARE * sheetAp) {
-      warn(s, "machine-too-small", `Your spindle is too weak for this operation: the depth of cut had to drop to ${say(units, s.axialDepthMm, "length")}, below a tenth of the vendor's. Choose a smaller cutter or a lighter operation.`, [
+      const ap = s.axialDepthMm;
+      warn(s, "machine-too-small", `Your spindle is too weak for this operation: the depth of cut had to drop to ${say(units, ap, "length")}, below a tenth of the vendor's. Choose a smaller cutter or a lighter operation.`, [
         { name: "axialDepthMm", quantity: "length", value: s.axialDepthMm },
       ]);
     }
