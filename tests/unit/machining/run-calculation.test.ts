@@ -68,12 +68,15 @@ describe("runCalculation", () => {
     expect(outcome.message).toMatch(/invalid/i);
   });
 
-  it("maps an engine refusal to the body path", () => {
+  it("maps an engine refusal to the body path, in the caller's units", () => {
     const body = imperialBody();
-    // 0.3 in radial depth on a 0.25 in cutter
+    // 0.3 in radial depth on a 0.25 in cutter: an imperial caller reads inches (model 1 answered 7.62 mm)
     const outcome = runCalculation({ ...body, operation: { ...body.operation, radialDepth: { value: 0.3, unit: "in" } } });
     if (outcome.ok) throw new Error("expected an error");
-    expect(outcome.errors["operation.radialDepth.value"]?.[0]).toMatch(/^operation\.radialDepth\.value \(7\.62 mm\) cannot exceed/);
+    expect(outcome.errors["operation.radialDepth.value"]?.[0]).toMatch(/^operation\.radialDepth\.value \(0\.3\sin\) cannot exceed the cutter diameter \(0\.25\sin\)/);
+    const metric = runCalculation({ ...body, units: "metric", operation: { ...body.operation, radialDepth: { value: 0.3, unit: "in" } } });
+    if (metric.ok) throw new Error("expected an error");
+    expect(metric.errors["operation.radialDepth.value"]?.[0]).toMatch(/\(7\.62\smm\)/);
   });
 
   it("maps min above max on the spindle range", () => {
