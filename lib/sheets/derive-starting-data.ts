@@ -1,7 +1,7 @@
 import type { OperationKind } from "@/content-schema/sheet-kinds";
 import { chipLoad, feedRate, spindleSpeed } from "@/lib/machining";
 
-// Pure: starting numbers derived from the formulas in DOMAIN.md (n = 1000·vc/(π·D), vf = fz·z·n),
+// Pure: starting numbers derived from the formulas in lib/machining/README.md (n = 1000·vc/(π·D), vf = fz·z·n),
 // a cutting speed inside the material's window and a chip load from a typical range per material group.
 // Used for new-sheet templates and for the invented demo data; never a claim that a number is safe.
 

@@ -6,7 +6,7 @@ const cutter = { diameterMm: 6, flutes: 2, cornerForm: "square" };
 const material = { materialGroup: "wood", vcMinMpm: 300, vcMaxMpm: 600, minChipLoadMm: 0.05 };
 
 describe("deriveOperation", () => {
-  it("takes n from the middle of the vc window and vf = fz·z·n (DOMAIN.md)", () => {
+  it("takes n from the middle of the vc window and vf = fz·z·n (lib/machining/README.md)", () => {
     const op = deriveOperation({ cutter, material, machine: { rpmMin: 6000, rpmMax: 24000, maxFeedMmMin: 15000, rigidity: 1 }, kind: "profile" });
     // n = 1000·450/(π·6) = 23873 rpm → 23900 rpm; fz = 0.016·6 = 0.096 mm; vf = 0.096·2·23900 = 4588.8 → 4590 mm/min.
     expect(op.n).toBe("23900 rpm");
