@@ -105,4 +105,25 @@ describe("runCalculation", () => {
     expect(outcome.result.imperial.feed?.value).toBeCloseTo(46.667, 3);
     expect(outcome.result.units).toBe("metric");
   });
+
+  it("takes model 2's inputs with units and answers warnings in the caller's units", () => {
+    const body = imperialBody();
+    const outcome = runCalculation({
+      ...body,
+      operation: { ...body.operation, kind: "adaptive", fluteLength: { value: 0.75, unit: "in" }, cornerForm: "square", entry: "plunge", plungeFeed: { value: 30, unit: "in/min" } },
+      material: { ...body.material, specificCuttingForce: undefined, kc11: { value: 120, unit: "N/mm²" }, mc: 0, chipLoadBand: { min: 1.2, max: 3, unit: "% of D" }, meltsWhenRubbing: true },
+      machine: { ...body.machine, spindleSpeed: { min: 10000, max: 10000, unit: "rpm" }, zThrust: undefined, rigidityClass: "light", spindleKind: "constant-torque", ratedSpindleSpeed: { value: 10000, unit: "rpm" } },
+      entryCapability: "plunge-only",
+    });
+    if (!outcome.ok) throw new Error(JSON.stringify(outcome.errors));
+    const { imperial, warnings } = outcome.result;
+    // light class: 150 N assumed; fn = 0.0281 mm/rev at 10 000 rpm = 11.1 in/min (the calibration)
+    expect(imperial.plungeFeed?.value).toBeCloseTo(11.07, 1);
+    expect(imperial.plungeFeedPerRev?.unit).toBe("in/rev");
+    expect(imperial.axialDepth?.value).toBeCloseTo(0.25 / 4, 9); // plunge-only in a melting material: D/4
+    const plunge = warnings.find((w) => w.code === "plunge-thrust-limited");
+    expect(plunge?.message).toMatch(/in\/min.*lbf/);
+    expect(plunge?.message).not.toMatch(/mm\/min/);
+    expect(warnings.map((w) => w.code)).toEqual(expect.arrayContaining(["ramp-entry-recommended", "plunge-only-shallow-passes"]));
+  });
 });
