@@ -11,7 +11,8 @@ export function powerAt(s: AdaptState, apMm: number): number | null {
 
 /** P(n) = P_rated·min(1, n/n_rated) for a constant-torque (VFD) spindle; P_rated for a constant-power one. */
 export function availablePower(s: AdaptState): number {
-  const { spindlePowerKw, ratedRpm, spindleKind } = s.input.machine;
+  const { ratedRpm, spindleKind } = s.input;
+  const spindlePowerKw = s.input.machine.spindlePowerKw;
   return spindleKind === "constant-power" ? spindlePowerKw : spindlePowerKw * Math.min(1, s.rpm / ratedRpm);
 }
 
@@ -29,7 +30,7 @@ export function spindlePower(s: AdaptState): void {
   if (first > usable) {
     let ap = (s.axialDepthMm * usable) / first;
     // A shallow ball nose cuts with a thinner mean chip, where kc rises: settle ap in a few steps.
-    for (let i = 0; i < 4 && s.input.operation.ballNose; i++) {
+    for (let i = 0; i < 4 && s.input.ballNose; i++) {
       const p = powerAt(s, ap) ?? usable;
       if (p <= usable * (1 + 1e-9)) break;
       ap *= usable / p;
@@ -65,7 +66,7 @@ export function spindlePower(s: AdaptState): void {
   if (s.powerKw === null) return;
   s.toolPowerKw = s.powerKw * s.input.spindleEfficiency;
   s.torqueNm = (60000 / (2 * Math.PI)) * (s.powerKw / s.rpm);
-  if (s.input.operation.ballNose) {
+  if (s.input.ballNose) {
     s.effectiveDiameterMm = effectiveDiameter(s, s.axialDepthMm);
     s.cuttingSpeedMpm = (Math.PI * s.effectiveDiameterMm * s.rpm) / 1000;
   }

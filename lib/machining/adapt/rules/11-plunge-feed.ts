@@ -11,15 +11,17 @@ const thrust = (d: number, kc: number, fn: number) => PLUNGE_THRUST_A * kc * d *
 
 /** The Z thrust in the caller's units, saying when it is the rigidity class's default. */
 function zText(s: AdaptState): string {
-  const { zThrustN, zThrustAssumed, rigidityClass } = s.input.machine;
+  const { zThrustN, zThrustAssumed, rigidityClass } = s.input;
   const force = say(s.input.units, zThrustN, "force");
   return zThrustAssumed ? `${force} (assumed for a ${rigidityClass} machine; enter your Z axis thrust if you know it)` : force;
 }
 
 /** Rule 11: hold fn from the sheet; cap it where the thrust exceeds the Z axis; refuse a straight plunge the centre alone cannot make. */
 export function plungeFeed(s: AdaptState): void {
-  const { diameterMm: d, plungeFeedMmMin, rpm: refRpm, kind } = s.input.operation;
-  const { zThrustN, maxFeedMmMin } = s.input.machine;
+  const { diameterMm: d, plungeFeedMmMin, rpm: refRpm } = s.input.operation;
+  const kind = s.input.kind;
+  const zThrustN = s.input.zThrustN;
+  const maxFeedMmMin = s.input.machine.maxFeedMmMin;
   const units = s.input.units;
   if (d >= s.input.rampThresholdDiameterMm && !RAMPED.has(kind)) {
     warn(s, "ramp-entry-recommended", `For a cutter this size, enter with a ramp or a helix rather than a straight plunge: a large cutter needs a lot of axial force to plunge, and a ramp allows deeper cuts.`);
