@@ -75,6 +75,25 @@ while (elapsed < THROUGHPUT_MS) {
 }
 const perSecond = (calls / elapsed) * 1000;
 
+// Baseline in the same run, so a loaded machine shows as a slower baseline rather than a slower engine:
+// the plain speed-and-feed arithmetic (fz, hex, vc, vf) over the same mix, with the same loop.
+const plain = (input: AdaptInput) => {
+  const op = input.operation;
+  const fz = op.feedMmMin / (op.flutes * op.rpm);
+  const r = op.radialDepthMm / op.diameterMm;
+  const hex = r >= 0.5 ? fz : fz * 2 * Math.sqrt(r * (1 - r));
+  const n = Math.min(Math.max(op.rpm, input.machine.minRpm), input.machine.maxRpm);
+  return { vc: (Math.PI * op.diameterMm * n) / 1000, vf: Math.min((hex / Math.max(hex, 1e-12)) * fz * op.flutes * n, input.machine.maxFeedMmMin) };
+};
+let baseCalls = 0;
+const baseStart = performance.now();
+let baseElapsed = 0;
+while (baseElapsed < THROUGHPUT_MS) {
+  for (let i = 0; i < 10_000; i++, baseCalls++) sink += plain(mix[baseCalls % MIX_SIZE]).vf;
+  baseElapsed = performance.now() - baseStart;
+}
+const basePerSecond = (baseCalls / baseElapsed) * 1000;
+
 const times = new Float64Array(LATENCY_CALLS);
 for (let i = 0; i < LATENCY_CALLS; i++) {
   const t0 = process.hrtime.bigint();
@@ -87,6 +106,7 @@ const pct = (p: number) => times[Math.min(times.length - 1, Math.floor(p * times
 const verdict = perSecond >= TARGET_PER_SECOND ? "PASS" : "BELOW";
 console.log(`adaptRecipe benchmark (node ${process.version}, one core, ${MIX_SIZE} seeded inputs)`);
 console.log(`  throughput: ${Math.round(perSecond).toLocaleString("en-US")} adaptations/s over ${calls.toLocaleString("en-US")} calls`);
+console.log(`  baseline:   ${Math.round(basePerSecond).toLocaleString("en-US")} plain speed-and-feed evaluations/s on the same mix; adaptRecipe costs ${(basePerSecond / perSecond).toFixed(1)}× one`);
 console.log(`  per call:   p50 ${pct(0.5).toFixed(2)} µs, p99 ${pct(0.99).toFixed(2)} µs`);
 console.log(`  target:     ≥ ${TARGET_PER_SECOND.toLocaleString("en-US")}/s: ${verdict}`);
 if (!Number.isFinite(sink)) console.log("  (checksum not finite)");

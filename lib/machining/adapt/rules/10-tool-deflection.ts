@@ -32,7 +32,7 @@ function suggestRadialDepth(s: AdaptState, stickoutMm: number): number | null {
   let lo = MIN_RADIAL_ENGAGEMENT * s.input.operation.diameterMm;
   let hi = s.radialDepthMm;
   if (lo >= hi || deflection(s, peakForceAt(s, lo), stickoutMm) > limit) return null;
-  for (let i = 0; i < 32; i++) {
+  for (let i = 0; i < 24; i++) {
     const mid = (lo + hi) / 2;
     if (deflection(s, peakForceAt(s, mid), stickoutMm) <= limit) lo = mid;
     else hi = mid;
