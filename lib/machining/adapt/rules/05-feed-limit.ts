@@ -1,5 +1,5 @@
 import { say } from "../message-units";
-import { change, hexFactor, warn, type AdaptState } from "../state";
+import { change, hasWarning, hexFactor, warn, type AdaptState } from "../state";
 
 /** Rule 5: vf = fz·z·n, capped at the machine's max feed; where hex then falls under the floor, n comes down. */
 export function feedLimit(s: AdaptState): void {
@@ -33,6 +33,8 @@ export function feedLimit(s: AdaptState): void {
 
 /** The chip the edge sees is under the band's floor: say so, with the feed that would restore it. */
 export function warnBelowFloor(s: AdaptState): void {
+  // Rule 12 checks again at the final numbers; the first warning stands, so its message is not built twice.
+  if (hasWarning(s, "chip-load-below-minimum")) return;
   const { flutes } = s.input.operation;
   const floor = s.input.band.minMm;
   const factor = hexFactor(s, s.radialDepthMm, s.axialDepthMm);

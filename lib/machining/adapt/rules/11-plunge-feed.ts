@@ -1,6 +1,6 @@
 import { PLUNGE_FEED_EXPONENT, PLUNGE_THRUST_A, PLUNGE_THRUST_B } from "../../formulas/plunge";
 import { say } from "../message-units";
-import { record, warn, type AdaptState } from "../state";
+import { hasWarning, record, warn, type AdaptState } from "../state";
 
 const RAMPED = new Set(["ramp", "helical", "drilling"]);
 
@@ -63,7 +63,9 @@ export function plungeFeed(s: AdaptState): void {
         { name: "plungeFeedMmMin", quantity: "feedRate", value: feed },
         { name: "zThrustN", quantity: "force", value: zThrustN },
       ], "machine.zThrustN");
-      warn(s, "ramp-entry-recommended", plungeOnly ? `${RAMP_ADVICE} Your CAM can only plunge straight; if it can be set to ramp, this cut gets faster and safer.` : RAMP_ADVICE);
+      if (!hasWarning(s, "ramp-entry-recommended")) {
+        warn(s, "ramp-entry-recommended", plungeOnly ? `${RAMP_ADVICE} Your CAM can only plunge straight; if it can be set to ramp, this cut gets faster and safer.` : RAMP_ADVICE);
+      }
     }
   }
   if (feed > maxFeedMmMin) {
