@@ -42,7 +42,12 @@ const allFinite = (r: AdaptResult) =>
   finite(r.mrrCm3Min) && finite(r.powerKw) && finite(r.torqueNm) && finite(r.forceN) && finite(r.deflectionMm) &&
   finite(r.meanChipThicknessMm) && finite(r.effectiveDiameterMm) && finite(r.peakForceN) && finite(r.availablePowerKw) &&
   finite(r.plungeThrustN) && finite(r.plungeFeedPerRevMm) &&
-  r.steps.every((step) => Number.isFinite(step.before) && Number.isFinite(step.after));
+  stepsFinite(r.steps);
+
+function stepsFinite(steps: AdaptResult["steps"]): boolean {
+  for (const step of steps) if (!Number.isFinite(step.before) || !Number.isFinite(step.after)) return false;
+  return true;
+}
 
 /** Adapts one sheet operation to a customer's machine; every change is explained in `steps`. */
 export function adaptRecipe(input: AdaptInput): AdaptResult {

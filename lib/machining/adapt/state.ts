@@ -45,7 +45,10 @@ export function warn(s: AdaptState, code: WarningCode, message: string, values?:
   s.warnings.push(warning);
 }
 
-export const hasWarning = (s: AdaptState, code: WarningCode) => s.warnings.some((w) => w.code === code);
+export function hasWarning(s: AdaptState, code: WarningCode): boolean {
+  for (const w of s.warnings) if (w.code === code) return true;
+  return false;
+}
 
 // Chip geometry at the state's current numbers (Altintas ch. 2; ball nose: Machinery's Handbook).
 

@@ -20,7 +20,8 @@ export function availablePower(s: AdaptState): number {
 export function spindlePower(s: AdaptState): void {
   s.meanChipThicknessMm = s.chipLoadMm * meanFactor(s, s.radialDepthMm, s.axialDepthMm);
   s.availablePowerKw = availablePower(s);
-  const first = powerAt(s, s.axialDepthMm);
+  const apBefore = s.axialDepthMm;
+  const first = powerAt(s, apBefore);
   if (first === null) {
     warn(s, "no-cutting-force-data", "This material has no specific cutting force on file, so spindle power, cutting force, deflection and plunge thrust were not checked.");
     return;
@@ -60,9 +61,10 @@ export function spindlePower(s: AdaptState): void {
         { name: "axialDepthMm", quantity: "length", value: s.axialDepthMm },
       ]);
     }
+    s.meanChipThicknessMm = s.chipLoadMm * meanFactor(s, s.radialDepthMm, s.axialDepthMm);
   }
-  s.meanChipThicknessMm = s.chipLoadMm * meanFactor(s, s.radialDepthMm, s.axialDepthMm);
-  s.powerKw = powerAt(s, s.axialDepthMm);
+  // When the cut fits, ap and the chip are unchanged, so Pc is `first`; only a lowered ap is recomputed.
+  s.powerKw = s.axialDepthMm === apBefore ? first : powerAt(s, s.axialDepthMm);
   if (s.powerKw === null) return;
   s.toolPowerKw = s.powerKw * s.input.spindleEfficiency;
   s.torqueNm = (60000 / (2 * Math.PI)) * (s.powerKw / s.rpm);
