@@ -1,10 +1,12 @@
 import { z } from "zod";
 
+import { LEGACY_OPERATION_KINDS, type OperationKind as EngineOperationKind } from "@/lib/machining/operation-kinds";
+
 /** Operation kinds a sheet can describe, with the label shown to readers. */
 export const operationKindLabels = {
   slotting: "Slot, full width",
   pocket: "Pocket clearing",
-  adaptive: "Constant-engagement clearing",
+  "constant-engagement": "Constant-engagement clearing",
   profile: "Profile (contour)",
   finishing: "Finishing pass",
   plunge: "Plunge",
@@ -36,7 +38,13 @@ export const cautionKindLabels = {
 type Keys<T> = [keyof T & string, ...(keyof T & string)[]];
 const keysOf = <T extends object>(o: T) => Object.keys(o) as Keys<T>;
 
-export const operationKindSchema = z.enum(keysOf(operationKindLabels));
+const operationKindEnum = z.enum(keysOf(operationKindLabels));
+const legacyOperationKindSchema = z
+  .enum(keysOf(LEGACY_OPERATION_KINDS))
+  .describe("Older key, still read; answered as the current key")
+  .transform((old): EngineOperationKind => LEGACY_OPERATION_KINDS[old]);
+/** Accepts the keys stored before a rename (front matter of stored versions, API bodies) and answers the current key. */
+export const operationKindSchema = z.union([operationKindEnum, legacyOperationKindSchema]);
 export const entryMethodSchema = z.enum(keysOf(entryMethodLabels));
 export const cautionKindSchema = z.enum(keysOf(cautionKindLabels));
 
@@ -44,6 +52,6 @@ export type OperationKind = z.infer<typeof operationKindSchema>;
 export type EntryMethod = z.infer<typeof entryMethodSchema>;
 export type CautionKind = z.infer<typeof cautionKindSchema>;
 
-export const operationKinds = operationKindSchema.options;
+export const operationKinds = operationKindEnum.options;
 export const entryMethods = entryMethodSchema.options;
 export const cautionKinds = cautionKindSchema.options;

@@ -33,6 +33,12 @@ const OUTPUT_KINDS: Record<keyof AdaptNumbers, QuantityKind> = {
   torqueNm: "torque",
   forceN: "force",
   deflectionMm: "deflection",
+  meanChipThicknessMm: "chipLoad",
+  effectiveDiameterMm: "length",
+  peakForceN: "force",
+  availablePowerKw: "power",
+  plungeThrustN: "force",
+  plungeFeedPerRevMm: "feedPerRev",
 };
 
 export function display(metricValue: number, kind: QuantityKind, system: UnitSystem): DisplayQuantity {

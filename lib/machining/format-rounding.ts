@@ -36,6 +36,7 @@ export const ROUNDING: Record<QuantityKind, Record<UnitSystem, Rounder>> = {
   cuttingSpeed: { metric: (v) => bySize(v, 1, 0, 100), imperial: (v) => fixed(v, 0) },
   feedRate: { metric: (v) => fixed(v, 0), imperial: (v) => fixed(v, 1) },
   chipLoad: { metric: (v) => trimmed(v, 4, 3), imperial: (v) => fixed(v, Math.abs(v) < 0.001 ? 5 : 4) },
+  feedPerRev: { metric: (v) => trimmed(v, 4, 3), imperial: (v) => fixed(v, Math.abs(v) < 0.001 ? 5 : 4) },
   spindleSpeed: { metric: roundRpm, imperial: roundRpm },
   power: { metric: tiered, imperial: tiered },
   force: { metric: (v) => bySize(v, 1, 0, 10), imperial: (v) => bySize(v, 1, 0, 100) },

@@ -9,6 +9,7 @@ export const QUANTITIES = {
   cuttingSpeed: { metric: "m/min", imperial: "SFM", toImperial: u.mpmToSfm, toMetric: u.sfmToMpm },
   feedRate: { metric: "mm/min", imperial: "in/min", toImperial: u.mmMinToInMin, toMetric: u.inMinToMmMin },
   chipLoad: { metric: "mm/tooth", imperial: "in/tooth", toImperial: u.mmToIn, toMetric: u.inToMm },
+  feedPerRev: { metric: "mm/rev", imperial: "in/rev", toImperial: u.mmToIn, toMetric: u.inToMm },
   spindleSpeed: { metric: "rpm", imperial: "rpm", toImperial: (v: number) => v, toMetric: (v: number) => v },
   power: { metric: "kW", imperial: "hp", toImperial: u.kwToHp, toMetric: u.hpToKw },
   force: { metric: "N", imperial: "lbf", toImperial: u.nToLbf, toMetric: u.lbfToN },

@@ -1,10 +1,10 @@
-import type { QuantityKind } from "./quantities";
+import type { QuantityKind, UnitSystem } from "./quantities";
 import type { RuleId } from "./adapt/rules-meta";
 import type { WarningCode } from "./adapt/warning-codes";
 
-/** Operation kinds, the same keys as content-schema/sheet-kinds.ts (the engine imports no zod). */
-export const OPERATION_KINDS = ["slotting", "pocket", "adaptive", "profile", "finishing", "plunge", "ramp", "helical", "drilling"] as const;
-export type OperationKind = (typeof OPERATION_KINDS)[number];
+import type { OperationKind } from "./operation-kinds";
+
+export { isOperationKind, LEGACY_OPERATION_KINDS, normalizeOperationKind, OPERATION_KINDS, type OperationKind } from "./operation-kinds";
 
 export const TOOL_MATERIALS = ["carbide", "hss"] as const;
 export type ToolMaterial = (typeof TOOL_MATERIALS)[number];
@@ -19,19 +19,62 @@ export interface OperationInput {
   axialDepthMm: number;
   radialDepthMm: number;
   plungeFeedMmMin?: number;
+  /** Corner radius; a radius of D/2 (within 1e-6·D) is a ball nose whatever `cornerForm` says. */
   cornerRadiusMm?: number;
   stickoutMm?: number;
+  /** Length of cut; ap above it is refused and the stick-out is never taken shorter. */
+  fluteLengthMm?: number;
+  /** Default "square"; "ball" makes the cutter a ball nose (De at shallow depth). */
+  cornerForm?: CornerForm;
+  /** How the sheet enters the material (default: a straight plunge where a plunge feed is given). */
+  entry?: EntryKind;
+  rampAngleDeg?: number;
+}
+
+export const CORNER_FORMS = ["square", "ball", "corner-radius"] as const;
+export type CornerForm = (typeof CORNER_FORMS)[number];
+
+export const ENTRY_KINDS = ["plunge", "ramp", "helix"] as const;
+export type EntryKind = (typeof ENTRY_KINDS)[number];
+
+/** What the customer's CAM can do to enter the material. */
+export const ENTRY_CAPABILITIES = ["plunge-only", "ramp", "helix"] as const;
+export type EntryCapability = (typeof ENTRY_CAPABILITIES)[number];
+
+export const SPINDLE_KINDS = ["constant-torque", "constant-power"] as const;
+export type SpindleKind = (typeof SPINDLE_KINDS)[number];
+
+export const RIGIDITY_CLASS_KEYS = ["light", "medium", "rigid"] as const;
+export type RigidityClass = (typeof RIGIDITY_CLASS_KEYS)[number];
+
+/** Chip load band per tooth as fractions of D (0.012 = 1.2 % of D). */
+export interface ChipLoadPctOfD {
+  min: number;
+  max: number;
 }
 
 export interface MaterialInput {
   cuttingSpeedWindowMpm?: readonly [number, number];
+  /** Absolute floor of the chip load band: fzMin = max(minChipLoadMm, min·D). */
   minChipLoadMm?: number;
+  /** Constant kc, used at every chip thickness when kc11Nmm2 is absent. */
   specificCuttingForceNmm2?: number;
+  chipLoadPctOfD?: ChipLoadPctOfD;
+  /** Kienzle kc1.1 (N/mm² at h = 1 mm); with `mc`, kc(h) = kc1.1·h^(−mc). */
+  kc11Nmm2?: number;
+  /** Kienzle exponent mc (default 0.25 when only kc11Nmm2 is given). */
+  mc?: number;
+  /** Plastics that melt and weld the chip when the edge rubs (shallow passes on a straight plunge). */
+  meltsWhenRubbing?: boolean;
 }
 
 /** Rigidity is a class on a 0–1 scale (1 = the stiffest machine the vendor rates). */
 export interface ReferenceMachineInput {
   rigidity: number;
+  rigidityClass?: RigidityClass;
+  zThrustN?: number;
+  maxFeedMmMin?: number;
+  maxRpm?: number;
 }
 
 export interface MachineInput {
@@ -40,7 +83,14 @@ export interface MachineInput {
   maxFeedMmMin: number;
   spindlePowerKw: number;
   rigidity: number;
+  /** Unknown Z thrust defaults by rigidity class (defaultZThrustN). */
   zThrustN?: number;
+  /** Speed up to which a constant-torque spindle holds torque (default maxRpm). */
+  ratedRpm?: number;
+  /** Default "constant-torque" (a VFD-driven spindle: P(n) = P·min(1, n/n_rated)). */
+  spindleKind?: SpindleKind;
+  /** Default: derived from `rigidity` (rigidityClassFromFactor). */
+  rigidityClass?: RigidityClass;
 }
 
 export interface OverridesInput {
@@ -62,6 +112,12 @@ export interface AdaptOptions {
   youngsModulusGPa?: number;
   /** From this cutter diameter on, a ramp or helical entry is recommended (default 10 mm). */
   rampThresholdDiameterMm?: number;
+  /** fz multiplier when a non-slot operation goes to full width (default 0.75). */
+  slottingFactor?: number;
+  /** Radial to tangential force ratio Kr (default 0.3). */
+  radialForceRatio?: number;
+  /** Unit system of warning and error messages (default metric). */
+  messageUnits?: UnitSystem;
 }
 
 export interface AdaptInput {
@@ -71,6 +127,8 @@ export interface AdaptInput {
   machine: MachineInput;
   overrides?: OverridesInput;
   options?: AdaptOptions;
+  /** The customer's CAM entry capability (default "ramp": the sheet's depth is kept). */
+  entryCapability?: EntryCapability;
 }
 
 /** A number a rule changed, with the reason in plain words and the source of the rule. */
@@ -115,6 +173,18 @@ export interface AdaptNumbers {
   forceN: number | null;
   /** null without a specific cutting force or a stick-out. */
   deflectionMm: number | null;
+  /** hm, the mean chip thickness over the arc of engagement. */
+  meanChipThicknessMm: number;
+  /** De: the diameter that cuts (a ball nose at shallow depth cuts at less than D). */
+  effectiveDiameterMm: number;
+  /** Peak force on the cutter, F_peak = Ft,max·ze·√(1 + Kr²); null without cutting force data. */
+  peakForceN: number | null;
+  /** Spindle power available at the adapted speed, P(n) (before the usable fraction). */
+  availablePowerKw: number | null;
+  /** Estimated thrust of the plunge; null without a plunge feed or cutting force data. */
+  plungeThrustN: number | null;
+  /** fn of the adapted plunge; null without a plunge feed. */
+  plungeFeedPerRevMm: number | null;
 }
 
 export interface AdaptResult extends AdaptNumbers {

@@ -34,7 +34,7 @@ const mm = (value: number) => `${Number(value.toFixed(2))} mm`;
 const DEPTHS: Partial<Record<OperationKind, { ap: number; ae: number | "full"; entry: DerivedOperation["entry"]; angle?: number }>> = {
   slotting: { ap: 0.5, ae: "full", entry: "ramp", angle: 3 },
   pocket: { ap: 0.5, ae: 0.45, entry: "helical", angle: 2 },
-  adaptive: { ap: 1.5, ae: 0.1, entry: "helical", angle: 2 },
+  "constant-engagement": { ap: 1.5, ae: 0.1, entry: "helical", angle: 2 },
   profile: { ap: 1, ae: 0.25, entry: "none" },
   finishing: { ap: 1, ae: 0.05, entry: "none" },
 };

@@ -7,7 +7,7 @@ export const operations: readonly VocabularyEntry<OperationKind>[] = [
   { key: "slotting", label: "slotting", terms: ["slotting", "slot", "slots", "full slot", "full width slot", "groove", "grooves", "grooving"] },
   { key: "pocket", label: "pocket clearing", terms: ["pocket", "pockets", "pocketing", "clearing", "pocket clearing", "area clearing"] },
   {
-    key: "adaptive",
+    key: "constant-engagement",
     label: "constant-engagement",
     terms: ["adaptive", "trochoidal", "HSM", "high speed machining", "HEM", "high efficiency milling", "constant engagement"],
     looseTerms: ["dynamic"],

@@ -14,7 +14,7 @@ const DEPTH_DOWN: PlannedVersion = { chipLoadScale: 0.9, depthScale: 0.8, change
 const KINDS: Record<string, OperationKind[]> = {
   single: ["slotting", "profile"],
   two: ["pocket", "profile"],
-  three: ["adaptive", "slotting", "finishing"],
+  three: ["constant-engagement", "slotting", "finishing"],
   ball: ["finishing", "pocket"],
   compression: ["profile", "pocket"],
 };

@@ -60,6 +60,12 @@ function finish(s: AdaptState): AdaptResult {
     torqueNm: s.torqueNm,
     forceN: s.forceN,
     deflectionMm: s.deflectionMm,
+    meanChipThicknessMm: s.meanChipThicknessMm,
+    effectiveDiameterMm: s.effectiveDiameterMm,
+    peakForceN: s.peakForceN,
+    availablePowerKw: s.availablePowerKw,
+    plungeThrustN: s.plungeThrustN,
+    plungeFeedPerRevMm: s.plungeFeedPerRevMm,
     warnings: s.warnings,
     steps: s.steps,
   };

@@ -61,6 +61,12 @@ export function createState(input: ResolvedInput): AdaptState {
     torqueNm: null,
     forceN: null,
     deflectionMm: null,
+    meanChipThicknessMm: 0,
+    effectiveDiameterMm: op.diameterMm,
+    peakForceN: null,
+    availablePowerKw: null,
+    plungeThrustN: null,
+    plungeFeedPerRevMm: null,
     warnings: [],
     steps: [],
   };

@@ -33,3 +33,9 @@ export function maxChipThickness(input: Engagement & { chipLoadMm: number }): nu
 export function chipLoadForThickness(input: Engagement & { maxChipThicknessMm: number }): number {
   return positive(input.maxChipThicknessMm, "maxChipThicknessMm") * chipThinningFactor(input);
 }
+
+/** Mean chip thickness hm = fz·(1 − cos φs)/φs = 2·fz·(ae/D)/φs (a slot: 2·fz/π), the integral of fz·sin φ over the arc. */
+export function meanChipThickness(input: Engagement & { chipLoadMm: number }): number {
+  const r = ratio(input);
+  return (positive(input.chipLoadMm, "chipLoadMm") * 2 * r) / Math.acos(1 - 2 * r);
+}

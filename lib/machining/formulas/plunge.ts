@@ -1,13 +1,33 @@
 import { positive } from "../validate";
 
-// Drilling thrust approximation for κr = 90°, from memory: Ff ≈ 0.5·kc·fn·D/2.
+// Plunge thrust Ff = A·kc·D·fn^0.8 + B·kc·D² (N; D mm, fn mm/rev, kc N/mm²). The form follows
+// Machinery's Handbook's drilling-thrust formula: a lip term that grows with feed and a centre
+// (web) term that grows with the cutter's area and does not fall with feed. A and B are not
+// published: they are calibrated here to two facts of the trade (lib/machining/README.md, "Calibration").
 
-/** Approximate axial thrust of a plunge in N. */
-export function plungeThrust({ specificCuttingForceNmm2, feedPerRevMm, diameterMm }: { specificCuttingForceNmm2: number; feedPerRevMm: number; diameterMm: number }): number {
-  return 0.5 * positive(specificCuttingForceNmm2, "specificCuttingForceNmm2") * positive(feedPerRevMm, "feedPerRevMm") * (positive(diameterMm, "diameterMm") / 2);
+/** Lip-term coefficient A (calibrated). */
+export const PLUNGE_THRUST_A = 2.1;
+/** Centre-term coefficient B (calibrated). */
+export const PLUNGE_THRUST_B = 0.012;
+/** Exponent of fn in the lip term: the thin-chip rise of kc is folded into it. */
+export const PLUNGE_FEED_EXPONENT = 0.8;
+
+/** The centre term B·kc·D², which a straight plunge needs at any feed. */
+export const plungeCentreThrustN = (diameterMm: number, kcNmm2: number) => PLUNGE_THRUST_B * kcNmm2 * diameterMm * diameterMm;
+
+/** Axial thrust of a straight plunge in N. */
+export function plungeThrustN({ diameterMm, kcNmm2, feedPerRevMm }: { diameterMm: number; kcNmm2: number; feedPerRevMm: number }): number {
+  const d = positive(diameterMm, "diameterMm");
+  const kc = positive(kcNmm2, "kcNmm2");
+  const fn = positive(feedPerRevMm, "feedPerRevMm");
+  return PLUNGE_THRUST_A * kc * d * fn ** PLUNGE_FEED_EXPONENT + plungeCentreThrustN(d, kc);
 }
 
-/** Feed per revolution fn whose thrust estimate equals the limit: fn = Ff / (0.5·kc·D/2). */
-export function feedPerRevForThrust({ specificCuttingForceNmm2, thrustN, diameterMm }: { specificCuttingForceNmm2: number; thrustN: number; diameterMm: number }): number {
-  return positive(thrustN, "thrustN") / (0.5 * positive(specificCuttingForceNmm2, "specificCuttingForceNmm2") * (positive(diameterMm, "diameterMm") / 2));
+/** fn (mm/rev) whose thrust equals zThrustN; null when the centre term alone exceeds it. */
+export function plungeFeedPerRevForThrust({ diameterMm, kcNmm2, zThrustN }: { diameterMm: number; kcNmm2: number; zThrustN: number }): number | null {
+  const d = positive(diameterMm, "diameterMm");
+  const kc = positive(kcNmm2, "kcNmm2");
+  const lip = positive(zThrustN, "zThrustN") - plungeCentreThrustN(d, kc);
+  if (lip <= 0) return null;
+  return (lip / (PLUNGE_THRUST_A * kc * d)) ** (1 / PLUNGE_FEED_EXPONENT);
 }

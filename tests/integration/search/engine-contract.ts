@@ -31,7 +31,7 @@ export function defineEngineContract(name: string, makeEngine: () => Promise<Sea
         acrylic18: sheetDoc({ vendorId: a, slug: "acrylic-18", title: "Cast acrylic, 1/8 in single flute", material: acrylic }),
         acrylic14: sheetDoc({ vendorId: a, slug: "acrylic-14", title: "Cast acrylic, 1/4 in single flute", material: acrylic, diameterMm: 6.35, sku: "T-SF-6350" }),
         mdf6: sheetDoc({ vendorId: a, slug: "mdf-6", title: "MDF, 6 mm two-flute", material: mdf, diameterMm: 6, flutes: 2, sku: "T-2F-6", kinds: ["pocket", "profile"], geometry: "upcut" }),
-        alu6: sheetDoc({ vendorId: a, slug: "alu-6", title: "Aluminium 6061, 6 mm three-flute", material: alu, diameterMm: 6, flutes: 3, sku: "T-3F-6", kinds: ["adaptive", "slotting"], geometry: "straight" }),
+        alu6: sheetDoc({ vendorId: a, slug: "alu-6", title: "Aluminium 6061, 6 mm three-flute", material: alu, diameterMm: 6, flutes: 3, sku: "T-3F-6", kinds: ["constant-engagement", "slotting"], geometry: "straight" }),
         otherVendor: sheetDoc({ vendorId: b, slug: "b-acrylic", title: "Cast acrylic, 1/8 in single flute zebrawood", material: acrylic }),
       };
       const cutter = buildCutterDocument(a, { id: docs.mdf6.cutterId, sku: "T-2F-6", name: "6 mm two-flute up-cut", diameterMm: 6, flutes: 2, cornerForm: "square", geometry: "upcut" });
@@ -53,7 +53,7 @@ export function defineEngineContract(name: string, makeEngine: () => Promise<Sea
 
     it("filters by material keys, operations (all of them), flutes and diameter within the tolerance", async () => {
       expect(await ids({ filters: { materialKeys: ["acrylic", "acrylic-cast"] } })).toEqual([docs.acrylic18.id, docs.acrylic14.id].sort());
-      expect(await ids({ filters: { operations: ["slotting", "adaptive"] } })).toEqual([docs.alu6.id]);
+      expect(await ids({ filters: { operations: ["slotting", "constant-engagement"] } })).toEqual([docs.alu6.id]);
       expect(await ids({ filters: { flutes: 2 } })).toEqual([docs.mdf6.id]);
       expect(await ids({ filters: { diameterMm: 3.18 } })).toEqual([docs.acrylic18.id]);
       expect(await ids({ filters: { diameterMm: 3.2 } })).toEqual([]);

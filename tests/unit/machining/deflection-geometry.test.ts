@@ -2,9 +2,7 @@ import { describe, expect, it } from "vitest";
 
 import {
   ballNoseEffectiveDiameter,
-  feedPerRevForThrust,
   MachiningInputError,
-  plungeThrust,
   roundBarInertia,
   scallopHeight,
   stepoverForScallop,
@@ -63,14 +61,5 @@ describe("ball-nose geometry", () => {
 
   it("refuses a stepover wider than the ball", () => {
     expect(() => scallopHeight({ diameterMm: 10, stepoverMm: 11 })).toThrowError(MachiningInputError);
-  });
-});
-
-// Drilling thrust approximation (κr = 90°), from memory: Ff ≈ 0.5·kc·fn·D/2.
-describe("plunge thrust", () => {
-  it("Ff ≈ 0.5·kc·fn·D/2", () => {
-    // 0.5 × 2000 × 0.1 × 5 = 500 N
-    expect(plungeThrust({ specificCuttingForceNmm2: 2000, feedPerRevMm: 0.1, diameterMm: 10 })).toBeCloseTo(500, 9);
-    expect(feedPerRevForThrust({ specificCuttingForceNmm2: 2000, thrustN: 500, diameterMm: 10 })).toBeCloseTo(0.1, 12);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 
-import { adaptRecipe, cuttingSpeed, inToMm, mmMinToInMin, mpmToSfm, plungeFeed, plungeThrust, sfmToMpm, spindleSpeed } from "@/lib/machining";
+import { adaptRecipe, cuttingSpeed, inToMm, mmMinToInMin, mpmToSfm, plungeFeed, plungeThrustN, sfmToMpm, spindleSpeed } from "@/lib/machining";
 
 import { baseInput } from "./fixtures";
 
@@ -22,7 +22,7 @@ describe("facts of the trade (common practice)", () => {
   });
 
   it("a larger cutter needs more axial force to plunge at the same feed per revolution", () => {
-    const at = (diameterMm: number) => plungeThrust({ specificCuttingForceNmm2: 800, feedPerRevMm: 0.03, diameterMm });
+    const at = (diameterMm: number) => plungeThrustN({ kcNmm2: 800, feedPerRevMm: 0.03, diameterMm });
     expect(at(12)).toBeGreaterThan(at(6));
   });
 
