@@ -16,6 +16,9 @@ import type { Knex } from "knex";
 // class as the engine does: below 0.45 light, below 0.85 medium, else rigid.
 const Z_THRUST_DEFAULT = `case when rigidity < 0.45 then 150 when rigidity < 0.85 then 400 else 1500 end`;
 
+const BAND_MIN = `case material_group when 'plastics' then 1.2 when 'wood' then 1.2 when 'ferrous' then 0.3 else 0.5 end`;
+const BAND_MAX = `case material_group when 'plastics' then 3 when 'wood' then 3 when 'ferrous' then 1 else 1.5 end`;
+
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.alterTable("materials", (t) => {
     t.double("chip_load_min_pct_d");
@@ -23,9 +26,18 @@ export async function up(knex: Knex): Promise<void> {
     t.double("kc11_nmm2");
     t.double("mc");
   });
+  // A row written without a band (an older client, a raw insert) gets its group's band, as the form does
+  // (CHIP_BAND_PCT_BY_GROUP in content-schema/catalogue-material.ts holds the same numbers).
+  await knex.raw(`create function materials_fill_chip_band() returns trigger language plpgsql as $$
+    begin
+      new.chip_load_min_pct_d := coalesce(new.chip_load_min_pct_d, ${BAND_MIN.replaceAll("material_group", "new.material_group")});
+      new.chip_load_max_pct_d := coalesce(new.chip_load_max_pct_d, ${BAND_MAX.replaceAll("material_group", "new.material_group")});
+      return new;
+    end $$`);
+  await knex.raw(`create trigger materials_fill_chip_band before insert or update on materials for each row execute function materials_fill_chip_band()`);
   await knex.raw(`update materials set
-    chip_load_min_pct_d = case material_group when 'plastics' then 1.2 when 'wood' then 1.2 when 'ferrous' then 0.3 else 0.5 end,
-    chip_load_max_pct_d = case material_group when 'plastics' then 3 when 'wood' then 3 when 'ferrous' then 1 else 1.5 end,
+    chip_load_min_pct_d = ${BAND_MIN},
+    chip_load_max_pct_d = ${BAND_MAX},
     kc11_nmm2 = case material_group when 'non-ferrous' then 500 when 'ferrous' then 1700 end,
     mc = case when material_group in ('non-ferrous', 'ferrous') then 0.25 end`);
   await knex.raw(`alter table materials
@@ -59,6 +71,8 @@ export async function down(knex: Knex): Promise<void> {
       t.dropColumn("rated_rpm");
     });
   }
+  await knex.raw(`drop trigger if exists materials_fill_chip_band on materials`);
+  await knex.raw(`drop function if exists materials_fill_chip_band()`);
   await knex.raw(`alter table materials drop constraint if exists materials_chip_band_check, drop constraint if exists materials_kienzle_check`);
   await knex.schema.alterTable("materials", (t) => {
     t.dropColumn("chip_load_min_pct_d");

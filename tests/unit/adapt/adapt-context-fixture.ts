@@ -8,12 +8,12 @@ export const acrylicContext: AdaptContext = {
   versionState: "published",
   sheetSlug: "cast-acrylic-demo",
   title: "Cast acrylic, 1/8 in single-flute cutter",
-  cutter: { sku: "SF-125", name: "Single flute", diameterMm: 3.175, flutes: 1, cornerRadiusMm: null, toolMaterial: "carbide" },
-  material: { name: "Cast acrylic", vcMinMpm: 150, vcMaxMpm: 300, minChipLoadMm: 0.05, kcNmm2: 100 },
-  referenceMachine: { name: "Rigid router", rigidity: 0.8, rpmMin: 8000, rpmMax: 24000 },
+  cutter: { sku: "SF-125", name: "Single flute", diameterMm: 3.175, flutes: 1, cornerRadiusMm: null, cornerForm: "square", fluteLengthMm: 12, toolMaterial: "carbide" },
+  material: { name: "Cast acrylic", vcMinMpm: 150, vcMaxMpm: 300, minChipLoadMm: 0.05, kcNmm2: 100, chipLoadMinPctD: 1.2, chipLoadMaxPctD: 3, kc11Nmm2: null, mc: null, meltsWhenRubbing: true },
+  referenceMachine: { name: "Rigid router", rigidity: 0.8, rpmMin: 8000, rpmMax: 24000, maxFeedMmMin: 10000, zThrustN: null },
   operations: [
-    { index: 0, label: "Full-width slot", kind: "slotting", rpm: 18000, feedMmMin: 1800, axialDepthMm: 1.5, radialDepthMm: 3.175, plungeFeedMmMin: 500 },
-    { index: 1, label: "Outside profile", kind: "profile", rpm: 18000, feedMmMin: 1800, axialDepthMm: 3, radialDepthMm: 0.5, plungeFeedMmMin: null },
+    { index: 0, label: "Full-width slot", kind: "slotting", rpm: 18000, feedMmMin: 1800, axialDepthMm: 1.5, radialDepthMm: 3.175, plungeFeedMmMin: 500, entry: "ramp", rampAngleDeg: 3 },
+    { index: 1, label: "Outside profile", kind: "profile", rpm: 18000, feedMmMin: 1800, axialDepthMm: 3, radialDepthMm: 0.5, plungeFeedMmMin: null, entry: null, rampAngleDeg: null },
   ],
   cautions: [{ kind: "melting", text: "Keep the feed up." }],
 };

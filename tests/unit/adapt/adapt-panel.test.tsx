@@ -69,7 +69,7 @@ describe("adapt panel", () => {
   });
 
   it("starts with the customer's first registered machine and switches units", () => {
-    const machine: Machine = { id: "m1", name: "Garage router", preset: null, rpmMin: 8000, rpmMax: 20000, powerKw: 1.5, maxFeedMmMin: 5000, rigidity: 0.55, zThrustN: null, stickoutMm: 20, units: "metric", updatedAt: "" };
+    const machine: Machine = { id: "m1", name: "Garage router", preset: null, rpmMin: 8000, rpmMax: 20000, powerKw: 1.5, maxFeedMmMin: 5000, rigidity: 0.55, zThrustN: null, spindleKind: "constant-torque", ratedRpm: null, stickoutMm: 20, units: "metric", updatedAt: "" };
     render(<AdaptPanel context={acrylicContext} vendorSlug="northbeck" machines={[machine]} />);
     expect(adapted("n")).toContain(formatQuantity(18000, "spindleSpeed", "metric"));
     fireEvent.click(screen.getByRole("button", { name: "in, hp" }));
