@@ -22,7 +22,7 @@ const nmm2 = (q: Q<"N/mm²" | "N/mm2" | "MPa" | "psi">) => (q.unit === "psi" ? p
 
 /** Converts a validated body to the engine's metric input. */
 export function toEngineInput(body: CalculateBody): AdaptInput {
-  const { operation: op, material: mat, machine: m, overrides = {}, options = {} } = body;
+  const { operation: op, material: mat, referenceMachine: ref, machine: m, overrides = {}, options = {} } = body;
   const window = mat.cuttingSpeedWindow;
   return {
     operation: {
@@ -36,13 +36,27 @@ export function toEngineInput(body: CalculateBody): AdaptInput {
       plungeFeedMmMin: op.plungeFeed ? mmMin(op.plungeFeed) : undefined,
       cornerRadiusMm: op.cornerRadius ? (op.cornerRadius.unit === "in" ? inToMm(op.cornerRadius.value) : op.cornerRadius.value) : undefined,
       stickoutMm: mmOpt(op.stickout),
+      fluteLengthMm: mmOpt(op.fluteLength),
+      cornerForm: op.cornerForm,
+      entry: op.entry,
+      rampAngleDeg: op.rampAngle?.value,
     },
     material: {
       cuttingSpeedWindowMpm: window ? [mpm(window.min, window.unit), mpm(window.max, window.unit)] : undefined,
       minChipLoadMm: mat.minChipLoad ? (mat.minChipLoad.unit === "in/tooth" ? inToMm(mat.minChipLoad.value) : mat.minChipLoad.value) : undefined,
       specificCuttingForceNmm2: mat.specificCuttingForce ? nmm2(mat.specificCuttingForce) : undefined,
+      chipLoadPctOfD: mat.chipLoadBand ? { min: mat.chipLoadBand.min / 100, max: mat.chipLoadBand.max / 100 } : undefined,
+      kc11Nmm2: mat.kc11 ? nmm2(mat.kc11) : undefined,
+      mc: mat.mc,
+      meltsWhenRubbing: mat.meltsWhenRubbing,
     },
-    referenceMachine: { rigidity: body.referenceMachine.rigidity },
+    referenceMachine: {
+      rigidity: ref.rigidity,
+      rigidityClass: ref.rigidityClass,
+      zThrustN: ref.zThrust ? newton(ref.zThrust) : undefined,
+      maxFeedMmMin: ref.maxFeed ? mmMin(ref.maxFeed) : undefined,
+      maxRpm: ref.maxSpindleSpeed?.value,
+    },
     machine: {
       minRpm: m.spindleSpeed.min,
       maxRpm: m.spindleSpeed.max,
@@ -50,7 +64,11 @@ export function toEngineInput(body: CalculateBody): AdaptInput {
       spindlePowerKw: kw(m.spindlePower),
       rigidity: m.rigidity,
       zThrustN: m.zThrust ? newton(m.zThrust) : undefined,
+      ratedRpm: m.ratedSpindleSpeed?.value,
+      spindleKind: m.spindleKind,
+      rigidityClass: m.rigidityClass,
     },
+    entryCapability: body.entryCapability,
     overrides: {
       radialDepthMm: mmOpt(overrides.radialDepth),
       axialDepthMm: mmOpt(overrides.axialDepth),
@@ -63,6 +81,9 @@ export function toEngineInput(body: CalculateBody): AdaptInput {
       toolMaterial: options.toolMaterial,
       youngsModulusGPa: options.youngsModulus?.value,
       rampThresholdDiameterMm: mmOpt(options.rampThresholdDiameter),
+      slottingFactor: options.slottingFactor,
+      radialForceRatio: options.radialForceRatio,
+      messageUnits: body.units,
     },
   };
 }

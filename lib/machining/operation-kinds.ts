@@ -25,3 +25,9 @@ export function normalizeOperationKind(kind: string): string {
 const KINDS: ReadonlySet<string> = new Set(OPERATION_KINDS);
 
 export const isOperationKind = (kind: string): kind is OperationKind => KINDS.has(kind);
+
+/** The current key for a current or old key; undefined for anything else. */
+export function toOperationKind(kind: string): OperationKind | undefined {
+  const key = normalizeOperationKind(kind);
+  return isOperationKind(key) ? key : undefined;
+}

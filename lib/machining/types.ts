@@ -154,6 +154,8 @@ export interface AdaptWarning {
   code: WarningCode;
   message: string;
   values?: WarningValue[];
+  /** The input the warning is about, e.g. "operation.stickoutMm" (sanity warnings). */
+  field?: string;
 }
 
 export interface AdaptNumbers {

@@ -2,28 +2,34 @@ import { MachiningInputError } from "../errors";
 import type { AdaptInput, AdaptResult } from "../types";
 import { resolveInput } from "./resolve-input";
 import { referenceChipLoad } from "./rules/01-reference-chip-load";
-import { radialChipThinning } from "./rules/02-radial-chip-thinning";
-import { spindleSpeedRange } from "./rules/03-spindle-speed-range";
-import { feedLimit } from "./rules/04-feed-limit";
-import { cuttingSpeedWindow } from "./rules/05-cutting-speed-window";
-import { rigidity } from "./rules/06-rigidity";
-import { spindlePower } from "./rules/07-spindle-power";
-import { toolDeflection } from "./rules/08-tool-deflection";
-import { plungeFeed } from "./rules/09-plunge-feed";
-import { standardCautions } from "./rules/10-standard-cautions";
+import { engagement } from "./rules/02-engagement";
+import { entryCapability } from "./rules/03-entry-capability";
+import { spindleSpeedRange } from "./rules/04-spindle-speed-range";
+import { feedLimit } from "./rules/05-feed-limit";
+import { chipLoadBand } from "./rules/06-chip-load-band";
+import { cuttingSpeedWindow } from "./rules/07-cutting-speed-window";
+import { rigidity } from "./rules/08-rigidity";
+import { spindlePower } from "./rules/09-spindle-power";
+import { toolDeflection } from "./rules/10-tool-deflection";
+import { plungeFeed } from "./rules/11-plunge-feed";
+import { sanityLimits } from "./rules/12-sanity-limits";
+import { standardCautions } from "./rules/13-standard-cautions";
 import { createState, type AdaptState } from "./state";
 
-/** The ten rules of DOMAIN.md, in order. */
+/** The thirteen rules of lib/machining/README.md, in order. */
 export const RULE_PIPELINE = [
   referenceChipLoad,
-  radialChipThinning,
+  engagement,
+  entryCapability,
   spindleSpeedRange,
   feedLimit,
+  chipLoadBand,
   cuttingSpeedWindow,
   rigidity,
   spindlePower,
   toolDeflection,
   plungeFeed,
+  sanityLimits,
   standardCautions,
 ] as const;
 
@@ -34,6 +40,8 @@ const allFinite = (r: AdaptResult) =>
   finite(r.rpm) && finite(r.feedMmMin) && finite(r.chipLoadMm) && finite(r.maxChipThicknessMm) &&
   finite(r.cuttingSpeedMpm) && finite(r.axialDepthMm) && finite(r.radialDepthMm) && finite(r.plungeFeedMmMin) &&
   finite(r.mrrCm3Min) && finite(r.powerKw) && finite(r.torqueNm) && finite(r.forceN) && finite(r.deflectionMm) &&
+  finite(r.meanChipThicknessMm) && finite(r.effectiveDiameterMm) && finite(r.peakForceN) && finite(r.availablePowerKw) &&
+  finite(r.plungeThrustN) && finite(r.plungeFeedPerRevMm) &&
   r.steps.every((step) => Number.isFinite(step.before) && Number.isFinite(step.after));
 
 /** Adapts one sheet operation to a customer's machine; every change is explained in `steps`. */
@@ -44,13 +52,11 @@ export function adaptRecipe(input: AdaptInput): AdaptResult {
 }
 
 function finish(s: AdaptState): AdaptResult {
-  const d = s.input.operation.diameterMm;
-  const r = s.radialDepthMm / d;
   const result: AdaptResult = {
     rpm: s.rpm,
     feedMmMin: s.feedMmMin,
     chipLoadMm: s.chipLoadMm,
-    maxChipThicknessMm: r >= 0.5 ? s.chipLoadMm : s.chipLoadMm * 2 * Math.sqrt(r * (1 - r)),
+    maxChipThicknessMm: s.maxChipThicknessMm,
     cuttingSpeedMpm: s.cuttingSpeedMpm,
     axialDepthMm: s.axialDepthMm,
     radialDepthMm: s.radialDepthMm,

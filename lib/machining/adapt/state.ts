@@ -7,7 +7,7 @@ import type { WarningCode } from "./warning-codes";
 /** Working values while the rules run; rules read and change it in order. */
 export interface AdaptState extends AdaptNumbers {
   input: ResolvedInput;
-  /** hex held from the reference cut (rule 1). */
+  /** hex held from the reference cut (rule 1), lowered by the slotting factor (rule 2). */
   targetHexMm: number;
   /** The chip load wanted before any feed cap (rule 2). */
   targetChipLoadMm: number;
@@ -36,9 +36,50 @@ export function change(s: AdaptState, rule: RuleId, field: NumericField, quantit
   record(s, rule, field, quantity, before, after, why);
 }
 
-export function warn(s: AdaptState, code: WarningCode, message: string, values?: WarningValue[]): void {
-  s.warnings.push(values ? { code, message, values } : { code, message });
+/** Adds a warning once per code (the first one stands: later rules only repeat it). */
+export function warn(s: AdaptState, code: WarningCode, message: string, values?: WarningValue[], field?: string): void {
+  for (const w of s.warnings) if (w.code === code) return;
+  const warning: AdaptWarning = { code, message };
+  if (values) warning.values = values;
+  if (field) warning.field = field;
+  s.warnings.push(warning);
 }
+
+export const hasWarning = (s: AdaptState, code: WarningCode) => s.warnings.some((w) => w.code === code);
+
+// Chip geometry at the state's current numbers (Altintas ch. 2; ball nose: Machinery's Handbook).
+
+/** hex/fz from the radial engagement: sin φs below half width, 1 from there on. */
+export const radialFactor = (aeMm: number, dMm: number) => {
+  const r = aeMm / dMm;
+  return r >= 0.5 ? 1 : 2 * Math.sqrt(r * (1 - r));
+};
+
+/** Diameter that cuts: De = 2·√(ap·(D − ap)) for a ball nose under ap = D/2, else D. */
+export const effectiveDiameter = (s: AdaptState, apMm: number) => {
+  const d = s.input.operation.diameterMm;
+  return s.input.operation.ballNose && apMm < d / 2 ? 2 * Math.sqrt(apMm * (d - apMm)) : d;
+};
+
+/** hex/fz at the given ae and ap: radial thinning times De/D for a ball nose at a shallow cut. */
+export const hexFactor = (s: AdaptState, aeMm: number, apMm: number) => {
+  const d = s.input.operation.diameterMm;
+  return radialFactor(aeMm, d) * (effectiveDiameter(s, apMm) / d);
+};
+
+/** hm/fz = (1 − cos φs)/φs = 2·(ae/D)/φs, times De/D for a ball nose at a shallow cut. */
+export const meanFactor = (s: AdaptState, aeMm: number, apMm: number) => {
+  const d = s.input.operation.diameterMm;
+  const r = Math.min(1, aeMm / d);
+  return ((2 * r) / Math.acos(1 - 2 * r)) * (effectiveDiameter(s, apMm) / d);
+};
+
+/** kc(h) = kc1.1·h^(−mc) (Kienzle 1952); the constant kc when mc = 0. */
+export const kcAt = (s: AdaptState, hMm: number) => {
+  const f = s.input.force;
+  if (f === null) return null;
+  return f.mc === 0 ? f.kc11Nmm2 : f.kc11Nmm2 * hMm ** -f.mc;
+};
 
 /** The state before rule 1: the sheet's numbers, nothing computed yet. */
 export function createState(input: ResolvedInput): AdaptState {

@@ -1,6 +1,6 @@
 import { warn, type AdaptState } from "../state";
 
-/** Rule 10: the cautions every adapted recipe carries. */
+/** Rule 13: the cautions every adapted recipe carries. */
 export function standardCautions(s: AdaptState): void {
   if (s.steps.some((step) => step.rule !== "reference-chip-load")) {
     warn(s, "values-adapted", "These numbers were adapted from the vendor's tested values to your machine. Start with the feed override turned down and bring it up while you listen and watch the chips.");
