@@ -51,9 +51,9 @@ describe("engine inputs from stored rows", () => {
     expect(await getMachine({ vendorId: vendor.id, userId: customer.user.id, machineId: machine.id })).toMatchObject({ spindleKind: "constant-torque", ratedRpm: 12000, zThrustN: 150 });
     const context = (await loadAdaptContext({ vendorId: vendor.id, versionId: sheet.versionId }))!;
     const input = buildAdaptInput(context, 0, machineToInput(machine), {}, { entryCapability: "plunge-only", units: "imperial" });
-    // The factory's catalogue: 3.175 mm cutter with 12 mm of flute in cast acrylic (no band given: the plastics band).
+    // The factory's catalogue: 3.175 mm cutter with 12 mm of flute in cast acrylic (its band 1.2–3.5 % of D).
     expect(input.operation).toMatchObject({ cornerForm: "square", fluteLengthMm: 12, entry: "ramp", rampAngleDeg: 3 });
-    expect(input.material).toMatchObject({ chipLoadPctOfD: { min: 0.012, max: 0.03 }, minChipLoadMm: 0.05, specificCuttingForceNmm2: 100 });
+    expect(input.material).toMatchObject({ chipLoadPctOfD: { min: 0.012, max: 0.035 }, minChipLoadMm: 0.05, specificCuttingForceNmm2: 100 });
     expect(input.referenceMachine).toMatchObject({ rigidity: 0.8, maxFeedMmMin: 10000, maxRpm: 24000 });
     expect(input.machine).toMatchObject({ spindleKind: "constant-torque", ratedRpm: 12000, zThrustN: 150 });
     expect(input.entryCapability).toBe("plunge-only");
