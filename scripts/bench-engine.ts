@@ -4,7 +4,7 @@ import { adaptRecipe, type AdaptInput, OPERATION_KINDS } from "../lib/machining/
 
 import { prng } from "./lib/prng";
 
-const TARGET_PER_SECOND = 200_000;
+const TARGET_PER_SECOND = 500_000;
 const MIX_SIZE = 2_000;
 const WARMUP_CALLS = 200_000;
 const THROUGHPUT_MS = 3_000;
@@ -29,15 +29,21 @@ function sampleInput(): AdaptInput {
       flutes: z,
       rpm,
       feedMmMin: fz * z * rpm,
-      axialDepthMm: d * between(0.2, 2),
+      axialDepthMm: d * between(0.2, 2.5),
       radialDepthMm: ae,
       plungeFeedMmMin: maybe(0.8, () => fz * z * rpm * 0.3),
-      stickoutMm: maybe(0.8, () => d * between(2, 5)),
+      stickoutMm: maybe(0.8, () => d * between(3, 5)),
+      fluteLengthMm: maybe(0.5, () => d * 3),
+      cornerForm: maybe(0.2, () => pick(["square", "ball", "corner-radius"] as const)),
     },
     material: {
       cuttingSpeedWindowMpm: maybe(0.9, () => [between(100, 300), between(350, 900)] as const),
       minChipLoadMm: maybe(0.7, () => between(0.01, 0.08)),
       specificCuttingForceNmm2: maybe(0.9, () => between(100, 2000)),
+      chipLoadPctOfD: maybe(0.6, () => pick([{ min: 0.012, max: 0.03 }, { min: 0.005, max: 0.015 }])),
+      kc11Nmm2: maybe(0.4, () => between(100, 1500)),
+      mc: maybe(0.4, () => between(0.15, 0.35)),
+      meltsWhenRubbing: maybe(0.3, () => true),
     },
     referenceMachine: { rigidity: between(0.5, 1) },
     machine: {
@@ -47,7 +53,10 @@ function sampleInput(): AdaptInput {
       spindlePowerKw: between(0.3, 5),
       rigidity: between(0.2, 1),
       zThrustN: maybe(0.6, () => between(50, 1000)),
+      ratedRpm: maybe(0.5, () => between(12000, 24000)),
+      spindleKind: maybe(0.5, () => pick(["constant-torque", "constant-power"] as const)),
     },
+    entryCapability: maybe(0.7, () => pick(["plunge-only", "ramp", "helix"] as const)),
     overrides: maybe(0.5, () => ({ radialDepthMm: d * between(0.1, 1), stickoutMm: maybe(0.5, () => d * between(2, 6)) })),
   };
 }

@@ -22,7 +22,7 @@ import {
   YOUNGS_MODULUS_GPA,
 } from "@/lib/machining";
 
-// Pure: starting numbers derived by the engine's own rules, so a template or a demo sheet never teaches a
+// Pure: starting numbers derived by the engine's own rules (lib/machining/README.md), so a template or a demo sheet never teaches a
 // number the engine would warn about on the sheet's reference machine:
 //   - n from a cutting speed inside the material's window (judged at De for a ball nose);
 //   - the chip the edge sees (hex) inside the material's chip-load band, with a margin on both sides; light

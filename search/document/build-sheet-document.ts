@@ -1,4 +1,4 @@
-import { OPERATION_KINDS, type OperationKind } from "@/lib/machining/types";
+import { normalizeOperationKind, OPERATION_KINDS, type OperationKind } from "@/lib/machining/types";
 import { classifyMaterial } from "@/search/parse/classify-material";
 import { materialByKey } from "@/search/vocabulary/lookup";
 import { CORNER_FORMS, MATERIAL_GROUPS, type CornerForm, type MaterialGroup } from "@/search/vocabulary/types";
@@ -19,6 +19,7 @@ export type SheetDocumentSource = {
 
 const unique = (values: readonly string[]) => [...new Set(values.map((v) => v.trim()).filter(Boolean))];
 const isKind = (v: unknown): v is OperationKind => (OPERATION_KINDS as readonly unknown[]).includes(v);
+const kindOf = (v: unknown) => (typeof v === "string" ? normalizeOperationKind(v) : v);
 const asCorner = (v: string): CornerForm => ((CORNER_FORMS as readonly string[]).includes(v) ? (v as CornerForm) : "square");
 const asGroup = (v: string): MaterialGroup | null => ((MATERIAL_GROUPS as readonly string[]).includes(v) ? (v as MaterialGroup) : null);
 const iso = (v: Date | string | null) => (v === null ? null : new Date(v).toISOString());
@@ -37,7 +38,8 @@ function frontMatterParts(frontMatter: unknown) {
   const ops = Array.isArray(fm.operations) ? fm.operations : [];
   return {
     summary: typeof fm.summary === "string" ? fm.summary : "",
-    operations: [...new Set(ops.map((op) => (op as { kind?: unknown })?.kind).filter(isKind))],
+    // Stored versions may carry a key from before a rename ("adaptive"): read it as the current one.
+    operations: [...new Set(ops.map((op) => kindOf((op as { kind?: unknown })?.kind)).filter(isKind))],
     tags: Array.isArray(fm.tags) ? fm.tags.filter((t): t is string => typeof t === "string") : [],
   };
 }

@@ -4,24 +4,10 @@ import { DEFAULT_KIENZLE_MC } from "../formulas/force";
 import { defaultZThrustN, rigidityClassFromFactor } from "../formulas/rigidity";
 import { OPERATION_KINDS, toOperationKind, type OperationKind } from "../operation-kinds";
 import type { UnitSystem } from "../quantities";
-import type { AdaptInput, EntryCapability, EntryKind, MachineInput, OverridesInput, RigidityClass, SpindleKind } from "../types";
+import type { AdaptInput, EntryCapability, MachineInput, OperationInput, OverridesInput, RigidityClass, SpindleKind } from "../types";
 import { bounded, fraction, nonNegative } from "../validate";
 import { checkInput, MAX } from "./check-input";
 import { ADAPT_DEFAULTS, BALL_NOSE_TOLERANCE, YOUNGS_MODULUS_GPA } from "./defaults";
-
-export interface ResolvedOperation {
-  kind: OperationKind;
-  diameterMm: number;
-  flutes: number;
-  rpm: number;
-  feedMmMin: number;
-  axialDepthMm: number;
-  radialDepthMm: number;
-  plungeFeedMmMin?: number;
-  fluteLengthMm?: number;
-  ballNose: boolean;
-  entry?: EntryKind;
-}
 
 /** kc(h) = kc11·h^(−mc); a constant kc is kc11 with mc = 0. */
 export interface ResolvedForce {
@@ -29,23 +15,25 @@ export interface ResolvedForce {
   mc: number;
 }
 
-export interface ResolvedMachine extends MachineInput {
+/** The caller's sections as given (never copied: this runs on every call), plus what was derived or defaulted. */
+export interface ResolvedInput {
+  operation: OperationInput;
+  kind: OperationKind;
+  /** Corner form "ball", or a corner radius of D/2. */
+  ballNose: boolean;
+  material: AdaptInput["material"];
+  band: ChipLoadBand;
+  force: ResolvedForce | null;
+  meltsWhenRubbing: boolean;
+  referenceRigidity: number;
+  machine: MachineInput;
+  /** Speed up to which a constant-torque spindle holds torque (default: the top speed). */
   ratedRpm: number;
   spindleKind: SpindleKind;
   rigidityClass: RigidityClass;
   zThrustN: number;
   /** The Z thrust is the rigidity class's default, not the machine's own. */
   zThrustAssumed: boolean;
-}
-
-export interface ResolvedInput {
-  operation: ResolvedOperation;
-  material: AdaptInput["material"];
-  band: ChipLoadBand;
-  force: ResolvedForce | null;
-  meltsWhenRubbing: boolean;
-  referenceRigidity: number;
-  machine: ResolvedMachine;
   overrides: OverridesInput;
   entryCapability: EntryCapability;
   stickoutMm?: number;
@@ -79,32 +67,20 @@ export function resolveInput(input: AdaptInput): ResolvedInput {
   const d = op.diameterMm;
   const rigidityClass = machine.rigidityClass ?? rigidityClassFromFactor(machine.rigidity);
   return {
-    operation: {
-      kind,
-      diameterMm: d,
-      flutes: op.flutes,
-      rpm: op.rpm,
-      feedMmMin: op.feedMmMin,
-      axialDepthMm: op.axialDepthMm,
-      radialDepthMm: Math.min(op.radialDepthMm, d),
-      plungeFeedMmMin: op.plungeFeedMmMin,
-      fluteLengthMm: op.fluteLengthMm,
-      ballNose: op.cornerForm === "ball" || (op.cornerRadiusMm !== undefined && op.cornerRadiusMm >= d / 2 - BALL_NOSE_TOLERANCE * d),
-      entry: op.entry,
-    },
+    operation: op,
+    kind,
+    ballNose: op.cornerForm === "ball" || (op.cornerRadiusMm !== undefined && op.cornerRadiusMm >= d / 2 - BALL_NOSE_TOLERANCE * d),
     material,
     band: chipLoadBand(material, d),
     force: forceModel(material),
     meltsWhenRubbing: material.meltsWhenRubbing === true,
     referenceRigidity: referenceMachine.rigidity,
-    machine: {
-      ...machine,
-      ratedRpm: machine.ratedRpm ?? machine.maxRpm,
-      spindleKind: machine.spindleKind ?? "constant-torque",
-      rigidityClass,
-      zThrustN: machine.zThrustN ?? defaultZThrustN(rigidityClass),
-      zThrustAssumed: machine.zThrustN === undefined,
-    },
+    machine,
+    ratedRpm: machine.ratedRpm ?? machine.maxRpm,
+    spindleKind: machine.spindleKind ?? "constant-torque",
+    rigidityClass,
+    zThrustN: machine.zThrustN ?? defaultZThrustN(rigidityClass),
+    zThrustAssumed: machine.zThrustN === undefined,
     overrides,
     entryCapability: input.entryCapability ?? ADAPT_DEFAULTS.entryCapability,
     stickoutMm: overrides.stickoutMm ?? op.stickoutMm,

@@ -58,7 +58,7 @@ export const radialFactor = (aeMm: number, dMm: number) => {
 /** Diameter that cuts: De = 2·√(ap·(D − ap)) for a ball nose under ap = D/2, else D. */
 export const effectiveDiameter = (s: AdaptState, apMm: number) => {
   const d = s.input.operation.diameterMm;
-  return s.input.operation.ballNose && apMm < d / 2 ? 2 * Math.sqrt(apMm * (d - apMm)) : d;
+  return s.input.ballNose && apMm < d / 2 ? 2 * Math.sqrt(apMm * (d - apMm)) : d;
 };
 
 /** hex/fz at the given ae and ap: radial thinning times De/D for a ball nose at a shallow cut. */

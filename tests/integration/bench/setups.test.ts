@@ -24,11 +24,11 @@ describe("saving a setup", () => {
     const { id } = await createSetup({ vendorId: vendor.id, userId: customer.user.id, input });
     const row = await db("setups").where({ id }).first();
     expect(row.sheet_version_id).toBe(sheet.versionId);
-    // Sheet slot n 18 000 rpm, machine max 16 000 → clamped (rule 3).
+    // Sheet slot n 18 000 rpm, machine max 16 000 → clamped (rule 4).
     expect(row.result.rpm).toBe(16000);
     // fz = vf/(z·n) = 1800/(1·18000) = 0.1 mm; vf = fz·z·n = 0.1·1·16000 = 1600 mm/min (ISO 3002-1).
     expect(row.result.feedMmMin).toBeCloseTo(1600, 6);
-    // ap scales by rigidity share 0.35/0.8 (DOMAIN.md rule 6): 1.5 mm · 0.4375 = 0.65625 mm.
+    // ap scales by rigidity share 0.35/0.8 (lib/machining/README.md, rule 8): 1.5 mm · 0.4375 = 0.65625 mm.
     expect(row.result.axialDepthMm).toBeCloseTo(1.5 * (0.35 / 0.8), 9);
     expect(row.result.steps.map((s: { rule: string }) => s.rule)).toEqual(expect.arrayContaining(["spindle-speed-range", "rigidity"]));
   });
@@ -38,7 +38,7 @@ describe("saving a setup", () => {
     const input = setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id, operationIndex: 0, radialDepthMm: "1/16" });
     const { result } = await createSetup({ vendorId: vendor.id, userId: customer.user.id, input });
     expect(result.radialDepthMm).toBeCloseTo(25.4 / 16, 9);
-    // ae = D/2 exactly: hex = fz (DOMAIN.md), so fz stays 0.1 mm.
+    // ae = D/2 exactly: hex = fz (lib/machining/README.md), so fz stays 0.1 mm.
     expect(result.chipLoadMm).toBeCloseTo(0.1, 9);
   });
 

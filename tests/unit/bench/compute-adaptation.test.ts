@@ -41,7 +41,7 @@ describe("computeAdaptation", () => {
   it("refuses an ae below 5 % of D with the engine's message on the ae field", () => {
     const errors = {};
     const machine = readAdhocMachine(weak, "metric", errors);
-    // 5 % of 3.175 mm is 0.159 mm; 0.1 mm is below it (DOMAIN.md rule 2).
+    // 5 % of 3.175 mm is 0.159 mm; 0.1 mm is below it (lib/machining/README.md, rule 2).
     const out = computeAdaptation({ context: acrylicContext, operationIndex: 0, machine, overrides: { ...none, ae: "0.1 mm" }, units: "metric" });
     expect(out.ok).toBe(false);
     if (!out.ok) expect(Object.keys(out.errors)).toEqual(["ae"]);

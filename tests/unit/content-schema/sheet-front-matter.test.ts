@@ -17,6 +17,13 @@ describe("sheet front matter schema", () => {
     expect(parsed.operations[0].vf).toEqual({ text: "1800 mm/min", value: 1800 });
   });
 
+  it("reads the old key of constant-engagement clearing from stored versions as the current key", () => {
+    const parsed = sheetFrontMatterSchema.parse(frontMatterInput({ operations: [operationInput({ kind: "adaptive" })] }));
+    expect(parsed.operations[0].kind).toBe("constant-engagement");
+    expect(operationKinds).not.toContain("adaptive");
+    expect(operationKindLabels["constant-engagement"]).toBe("Constant-engagement clearing");
+  });
+
   it("needs at least one operation", () => {
     const result = sheetFrontMatterSchema.safeParse(frontMatterInput({ operations: [] }));
     expect(result.error?.issues[0].path).toEqual(["operations"]);

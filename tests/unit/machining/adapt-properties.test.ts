@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 
-import { adaptRecipe, OPERATION_KINDS, RULES, WARNING_CODE_LIST, type AdaptInput, type AdaptResult } from "@/lib/machining";
+import { adaptRecipe, chipLoadBand, OPERATION_KINDS, spindlePowerAt, RULES, WARNING_CODE_LIST, type AdaptInput, type AdaptResult } from "@/lib/machining";
 
 const num = (min: number, max: number) => fc.double({ min, max, noNaN: true });
 const opt = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined });
@@ -30,6 +30,14 @@ const validInput: fc.Arbitrary<AdaptInput> = fc
     zThrust: opt(num(5, 5000)),
     aeOverride: opt(num(0.051, 1)),
     apOverride: opt(num(0.05, 4)),
+    fluteShare: opt(num(1, 1.5)),
+    cornerForm: opt(fc.constantFrom("square" as const, "ball" as const, "corner-radius" as const)),
+    band: opt(fc.tuple(num(0.001, 0.02), num(1, 4))),
+    kc11: opt(fc.tuple(num(50, 3000), num(0, 0.4))),
+    melts: fc.boolean(),
+    ratedShare: opt(num(0.2, 1.5)),
+    spindleKind: opt(fc.constantFrom("constant-torque" as const, "constant-power" as const)),
+    entryCapability: opt(fc.constantFrom("plunge-only" as const, "ramp" as const, "helix" as const)),
   })
   .map((v) => ({
     operation: {
@@ -42,21 +50,40 @@ const validInput: fc.Arbitrary<AdaptInput> = fc
       radialDepthMm: v.aeShare * v.d,
       plungeFeedMmMin: v.plungeShare === undefined ? undefined : v.plungeShare * v.fz * v.z * v.rpm,
       stickoutMm: v.stickShare === undefined ? undefined : v.stickShare * v.d,
+      fluteLengthMm: v.fluteShare === undefined ? undefined : v.fluteShare * v.d * Math.max(v.apShare, v.apOverride ?? 0),
+      cornerForm: v.cornerForm,
     },
     material: {
       cuttingSpeedWindowMpm: v.window ? ([v.window[0], v.window[0] * v.window[1]] as const) : undefined,
       minChipLoadMm: v.minChip,
       specificCuttingForceNmm2: v.kc,
+      chipLoadPctOfD: v.band ? { min: v.band[0], max: v.band[0] * v.band[1] } : undefined,
+      kc11Nmm2: v.kc11?.[0],
+      mc: v.kc11?.[1],
+      meltsWhenRubbing: v.melts,
     },
     referenceMachine: { rigidity: v.refRigidity },
-    machine: { minRpm: v.minRpm, maxRpm: v.minRpm + v.rpmSpan, maxFeedMmMin: v.maxFeed, spindlePowerKw: v.power, rigidity: v.rigidity, zThrustN: v.zThrust },
+    machine: {
+      minRpm: v.minRpm,
+      maxRpm: v.minRpm + v.rpmSpan,
+      maxFeedMmMin: v.maxFeed,
+      spindlePowerKw: v.power,
+      rigidity: v.rigidity,
+      zThrustN: v.zThrust,
+      ratedRpm: v.ratedShare === undefined ? undefined : v.ratedShare * (v.minRpm + v.rpmSpan),
+      spindleKind: v.spindleKind,
+    },
+    entryCapability: v.entryCapability,
     overrides: {
       radialDepthMm: v.aeOverride === undefined ? undefined : v.aeOverride * v.d,
       axialDepthMm: v.apOverride === undefined ? undefined : v.apOverride * v.d,
     },
   }));
 
-const NUMBERS = ["rpm", "feedMmMin", "chipLoadMm", "maxChipThicknessMm", "cuttingSpeedMpm", "axialDepthMm", "radialDepthMm", "plungeFeedMmMin", "mrrCm3Min", "powerKw", "torqueNm", "forceN", "deflectionMm"] as const;
+const NUMBERS = [
+  "rpm", "feedMmMin", "chipLoadMm", "maxChipThicknessMm", "cuttingSpeedMpm", "axialDepthMm", "radialDepthMm", "plungeFeedMmMin", "mrrCm3Min",
+  "powerKw", "torqueNm", "forceN", "deflectionMm", "meanChipThicknessMm", "effectiveDiameterMm", "peakForceN", "availablePowerKw", "plungeThrustN", "plungeFeedPerRevMm",
+] as const;
 const TOL = 1 + 1e-12;
 const RUNS = { numRuns: 500 };
 
@@ -122,6 +149,52 @@ describe("adaptRecipe properties (fast-check)", () => {
         expect(orders.every((o) => o !== undefined)).toBe(true);
         expect(orders).toEqual([...orders].sort((x, y) => x! - y!));
         expect(r.warnings.at(-1)?.code).toBe("standard-cautions");
+      }),
+      RUNS,
+    );
+  });
+
+  it("never leaves hex under the band's floor without saying so", () => {
+    fc.assert(
+      fc.property(validInput, (input) => {
+        const r = adaptRecipe(input);
+        const floor = chipLoadBand(input.material, input.operation.diameterMm).minMm;
+        const said = r.warnings.some((w) => w.code === "chip-load-below-minimum" || w.code === "chip-load-band-impossible");
+        if (r.maxChipThicknessMm < floor * (1 - 1e-9)) expect(said).toBe(true);
+      }),
+      RUNS,
+    );
+  });
+
+  it("never lowers the plunge feed when the Z axis pushes harder", () => {
+    fc.assert(
+      fc.property(validInput, num(1, 20), (input, factor) => {
+        const thrust = input.machine.zThrustN ?? 150;
+        const weak = adaptRecipe({ ...input, machine: { ...input.machine, zThrustN: thrust } });
+        const strong = adaptRecipe({ ...input, machine: { ...input.machine, zThrustN: thrust * factor } });
+        if (weak.plungeFeedMmMin !== null) expect(strong.plungeFeedMmMin!).toBeGreaterThanOrEqual(weak.plungeFeedMmMin / TOL);
+      }),
+      RUNS,
+    );
+  });
+
+  it("never raises the usable power at a lower spindle speed, nor with a higher rated speed", () => {
+    fc.assert(
+      fc.property(num(0.1, 20), num(1000, 30000), num(0.1, 1), num(1000, 30000), (power, rated, share, rpm) => {
+        const at = (n: number, nRated: number) => spindlePowerAt({ ratedPowerKw: power, rpm: n, ratedRpm: nRated });
+        expect(at(rpm * share, rated)).toBeLessThanOrEqual(at(rpm, rated) * TOL);
+        expect(at(rpm, rated / share)).toBeLessThanOrEqual(at(rpm, rated) * TOL);
+      }),
+      RUNS,
+    );
+  });
+
+  it("never cuts deeper with straight plunges only than with a ramp", () => {
+    fc.assert(
+      fc.property(validInput, (input) => {
+        const straight = adaptRecipe({ ...input, entryCapability: "plunge-only" });
+        const ramp = adaptRecipe({ ...input, entryCapability: "ramp" });
+        expect(straight.axialDepthMm).toBeLessThanOrEqual(ramp.axialDepthMm * TOL);
       }),
       RUNS,
     );

@@ -47,6 +47,7 @@ describe("adaptRecipe refuses impossible input, naming the field", () => {
   });
 
   it("refuses a cutter so thin that its deflection cannot be computed", () => {
-    expect(fieldOf(withPatch({ operation: { diameterMm: 1e-300, radialDepthMm: 1e-300 } }))).toBe("operation");
+    // Model 2 refuses cutters outside 0.1–100 mm before any rule runs (rule 12), so the field is named.
+    expect(fieldOf(withPatch({ operation: { diameterMm: 1e-300, radialDepthMm: 1e-300 } }))).toBe("operation.diameterMm");
   });
 });

@@ -68,12 +68,15 @@ describe("runCalculation", () => {
     expect(outcome.message).toMatch(/invalid/i);
   });
 
-  it("maps an engine refusal to the body path", () => {
+  it("maps an engine refusal to the body path, in the caller's units", () => {
     const body = imperialBody();
-    // 0.3 in radial depth on a 0.25 in cutter
+    // 0.3 in radial depth on a 0.25 in cutter: an imperial caller reads inches (model 1 answered 7.62 mm)
     const outcome = runCalculation({ ...body, operation: { ...body.operation, radialDepth: { value: 0.3, unit: "in" } } });
     if (outcome.ok) throw new Error("expected an error");
-    expect(outcome.errors["operation.radialDepth.value"]?.[0]).toMatch(/^operation\.radialDepth\.value \(7\.62 mm\) cannot exceed/);
+    expect(outcome.errors["operation.radialDepth.value"]?.[0]).toMatch(/^operation\.radialDepth\.value \(0\.3\sin\) cannot exceed the cutter diameter \(0\.25\sin\)/);
+    const metric = runCalculation({ ...body, units: "metric", operation: { ...body.operation, radialDepth: { value: 0.3, unit: "in" } } });
+    if (metric.ok) throw new Error("expected an error");
+    expect(metric.errors["operation.radialDepth.value"]?.[0]).toMatch(/\(7\.62\smm\)/);
   });
 
   it("maps min above max on the spindle range", () => {
@@ -101,5 +104,26 @@ describe("runCalculation", () => {
     // 1.778 m/min = 70 in/min, so the same adapted feed as the imperial body
     expect(outcome.result.imperial.feed?.value).toBeCloseTo(46.667, 3);
     expect(outcome.result.units).toBe("metric");
+  });
+
+  it("takes model 2's inputs with units and answers warnings in the caller's units", () => {
+    const body = imperialBody();
+    const outcome = runCalculation({
+      ...body,
+      operation: { ...body.operation, kind: "adaptive", fluteLength: { value: 0.75, unit: "in" }, cornerForm: "square", entry: "plunge", plungeFeed: { value: 30, unit: "in/min" } },
+      material: { ...body.material, specificCuttingForce: undefined, kc11: { value: 120, unit: "N/mm²" }, mc: 0, chipLoadBand: { min: 1.2, max: 3, unit: "% of D" }, meltsWhenRubbing: true },
+      machine: { ...body.machine, spindleSpeed: { min: 10000, max: 10000, unit: "rpm" }, zThrust: undefined, rigidityClass: "light", spindleKind: "constant-torque", ratedSpindleSpeed: { value: 10000, unit: "rpm" } },
+      entryCapability: "plunge-only",
+    });
+    if (!outcome.ok) throw new Error(JSON.stringify(outcome.errors));
+    const { imperial, warnings } = outcome.result;
+    // light class: 150 N assumed; fn = 0.0281 mm/rev at 10 000 rpm = 11.1 in/min (the calibration)
+    expect(imperial.plungeFeed?.value).toBeCloseTo(11.07, 1);
+    expect(imperial.plungeFeedPerRev?.unit).toBe("in/rev");
+    expect(imperial.axialDepth?.value).toBeCloseTo(0.25 / 4, 9); // plunge-only in a melting material: D/4
+    const plunge = warnings.find((w) => w.code === "plunge-thrust-limited");
+    expect(plunge?.message).toMatch(/in\/min.*lbf/);
+    expect(plunge?.message).not.toMatch(/mm\/min/);
+    expect(warnings.map((w) => w.code)).toEqual(expect.arrayContaining(["ramp-entry-recommended", "plunge-only-shallow-passes"]));
   });
 });

@@ -21,7 +21,7 @@ describe("diffParameters", () => {
     const vf = diff[0].changes[0];
     expect(vf.delta).toBe(-180);
     expect(vf.percent).toBeCloseTo(-10, 10);
-    // fz = vf / (z·n): 1800/(2·18000) = 0.05 mm → 1620/(2·18000) = 0.045 mm (DOMAIN.md, vf = fz·z·n).
+    // fz = vf / (z·n): 1800/(2·18000) = 0.05 mm → 1620/(2·18000) = 0.045 mm (lib/machining/README.md, vf = fz·z·n).
     const fz = diff[0].changes[1];
     expect(fz.before).toBeCloseTo(0.05, 12);
     expect(fz.after).toBeCloseTo(0.045, 12);

@@ -2,7 +2,8 @@ import { change, effectiveDiameter, hexFactor, meanFactor, type AdaptState } fro
 
 /** Rule 1: fz = vf/(z·n) of the vendor's cut, and the hex and hm it gives at the sheet's ae (and ap, for a ball nose). */
 export function referenceChipLoad(s: AdaptState): void {
-  const { flutes, rpm, feedMmMin, radialDepthMm, axialDepthMm, ballNose } = s.input.operation;
+  const { flutes, rpm, feedMmMin, radialDepthMm, axialDepthMm } = s.input.operation;
+  const ballNose = s.input.ballNose;
   const fz = feedMmMin / (flutes * rpm);
   s.chipLoadMm = fz;
   s.maxChipThicknessMm = fz;

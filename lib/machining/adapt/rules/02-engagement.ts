@@ -8,7 +8,8 @@ import { change, hexFactor, warn, type AdaptState } from "../state";
  * a slot applies the slotting factor to fz and caps ap at 0.7× the sheet's; an ap override is a step.
  */
 export function engagement(s: AdaptState): void {
-  const { diameterMm: d, radialDepthMm: sheetAe, axialDepthMm: sheetAp, kind } = s.input.operation;
+  const { diameterMm: d, radialDepthMm: sheetAe, axialDepthMm: sheetAp } = s.input.operation;
+  const kind = s.input.kind;
   const units = s.input.units;
   const apOverride = s.input.overrides.axialDepthMm;
   if (apOverride !== undefined && apOverride > sheetAp * (1 + 1e-9)) {

@@ -12,7 +12,7 @@ export function spindleSpeedRange(s: AdaptState): void {
   const de = effectiveDiameter(s, s.axialDepthMm);
   s.effectiveDiameterMm = de;
   const window = s.input.material.cuttingSpeedWindowMpm;
-  if (!s.input.operation.ballNose || !window || de >= s.input.operation.diameterMm) return;
+  if (!s.input.ballNose || !window || de >= s.input.operation.diameterMm) return;
   const wanted = Math.min(maxRpm, (1000 * window[0]) / (Math.PI * de));
   if (wanted > s.rpm * (1 + 1e-9)) {
     change(s, "spindle-speed-range", "rpm", "spindleSpeed", wanted, "This shallow ball-nose cut meets the material on a circle smaller than the cutter, so the cutting speed there is below the material's window; the spindle speeds up toward the window, within its top speed.");

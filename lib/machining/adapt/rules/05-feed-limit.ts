@@ -41,7 +41,7 @@ export function warnBelowFloor(s: AdaptState): void {
   warn(
     s,
     "chip-load-below-minimum",
-    `The chip each tooth takes (${say(units, s.chipLoadMm * factor, "chipLoad")} at its thickest) is below the material's minimum of ${say(units, floor, "chipLoad")}: the cutter will rub rather than cut, heating the tool and part (plastics melt and weld to the tool). It needs a feed of about ${say(units, neededFeed, "feedRate")} at this speed; use fewer flutes, a lower speed or a machine with a faster feed.`,
+    `The chip each tooth takes, at its thickest, is below the material's minimum: the cutter will rub rather than cut, heating the tool and part (plastics melt and weld to the tool). It needs a feed of about ${say(units, neededFeed, "feedRate")} at this speed; use fewer flutes, a lower speed or a machine with a faster feed.`,
     [
       { name: "chipLoadMm", quantity: "chipLoad", value: s.chipLoadMm },
       { name: "maxChipThicknessMm", quantity: "chipLoad", value: s.chipLoadMm * factor },

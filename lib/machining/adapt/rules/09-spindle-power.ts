@@ -11,7 +11,8 @@ export function powerAt(s: AdaptState, apMm: number): number | null {
 
 /** P(n) = P_rated·min(1, n/n_rated) for a constant-torque (VFD) spindle; P_rated for a constant-power one. */
 export function availablePower(s: AdaptState): number {
-  const { spindlePowerKw, ratedRpm, spindleKind } = s.input.machine;
+  const { ratedRpm, spindleKind } = s.input;
+  const spindlePowerKw = s.input.machine.spindlePowerKw;
   return spindleKind === "constant-power" ? spindlePowerKw : spindlePowerKw * Math.min(1, s.rpm / ratedRpm);
 }
 
@@ -29,7 +30,7 @@ export function spindlePower(s: AdaptState): void {
   if (first > usable) {
     let ap = (s.axialDepthMm * usable) / first;
     // A shallow ball nose cuts with a thinner mean chip, where kc rises: settle ap in a few steps.
-    for (let i = 0; i < 4 && s.input.operation.ballNose; i++) {
+    for (let i = 0; i < 4 && s.input.ballNose; i++) {
       const p = powerAt(s, ap) ?? usable;
       if (p <= usable * (1 + 1e-9)) break;
       ap *= usable / p;
@@ -46,13 +47,16 @@ export function spindlePower(s: AdaptState): void {
         : "The cut would need more power than your spindle can give with a safety margin, so the depth of cut is reduced until it fits.",
     );
     if (derated) {
-      warn(s, "power-limited-at-speed", `At ${Math.round(s.rpm)} rpm your spindle gives about ${say(units, s.availablePowerKw, "power")} of its ${say(units, s.input.machine.spindlePowerKw, "power")}; the depth of cut was reduced to fit.`, [
+      const rpm = s.rpm;
+      const available = s.availablePowerKw;
+      warn(s, "power-limited-at-speed", `At ${Math.round(rpm)} rpm your spindle gives about ${say(units, available, "power")} of its ${say(units, s.input.machine.spindlePowerKw, "power")}; the depth of cut was reduced to fit.`, [
         { name: "availablePowerKw", quantity: "power", value: s.availablePowerKw },
       ]);
     }
     const sheetAp = s.input.operation.axialDepthMm;
     if (s.axialDepthMm < MIN_AXIAL_DEPTH_SHARE * sheetAp) {
-      warn(s, "machine-too-small", `Your spindle is too weak for this operation: the depth of cut had to drop to ${say(units, s.axialDepthMm, "length")}, below a tenth of the vendor's. Choose a smaller cutter or a lighter operation.`, [
+      const ap = s.axialDepthMm;
+      warn(s, "machine-too-small", `Your spindle is too weak for this operation: the depth of cut had to drop to ${say(units, ap, "length")}, below a tenth of the vendor's. Choose a smaller cutter or a lighter operation.`, [
         { name: "axialDepthMm", quantity: "length", value: s.axialDepthMm },
       ]);
     }
@@ -62,7 +66,7 @@ export function spindlePower(s: AdaptState): void {
   if (s.powerKw === null) return;
   s.toolPowerKw = s.powerKw * s.input.spindleEfficiency;
   s.torqueNm = (60000 / (2 * Math.PI)) * (s.powerKw / s.rpm);
-  if (s.input.operation.ballNose) {
+  if (s.input.ballNose) {
     s.effectiveDiameterMm = effectiveDiameter(s, s.axialDepthMm);
     s.cuttingSpeedMpm = (Math.PI * s.effectiveDiameterMm * s.rpm) / 1000;
   }

@@ -65,7 +65,7 @@ export function toolDeflection(s: AdaptState): void {
     ...(ae === null ? [] : [{ name: "radialDepthMm", quantity: "length" as const, value: ae }]),
   ];
   const advice = ae === null
-    ? `Shorten the stick-out to ${say(units, shorter, "length")} or cut at most ${say(units, s.axialDepthMm * ratio, "length")} deep; no radial depth the engine will adapt to is light enough at this stick-out.`
-    : `Reduce the radial depth to ${say(units, ae, "length")}, cut at most ${say(units, s.axialDepthMm * ratio, "length")} deep, or shorten the stick-out to ${say(units, shorter, "length")}.`;
-  warn(s, "deflection-above-limit", `The cutter will bend about ${say(units, s.deflectionMm, "deflection")} at its peak tooth force, more than the ${say(units, limit, "deflection")} limit, which hurts accuracy and finish and can break the tool. ${advice}`, values);
+    ? "Shorten the stick-out or cut shallower (see the suggested values); no radial depth the engine will adapt to is light enough at this stick-out."
+    : "Reduce the radial depth, cut shallower or shorten the stick-out (see the suggested values).";
+  warn(s, "deflection-above-limit", `The cutter will bend about ${say(units, s.deflectionMm, "deflection")} at its peak tooth force, more than the limit, which hurts accuracy and finish and can break the tool. ${advice}`, values);
 }

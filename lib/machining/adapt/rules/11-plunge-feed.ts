@@ -9,10 +9,19 @@ const RAMP_ADVICE = "Enter with a ramp or a helix instead of a straight plunge: 
 /** Ff = A·kc·D·fn^0.8 + B·kc·D² (form of Machinery's Handbook's drilling thrust; A and B calibrated). */
 const thrust = (d: number, kc: number, fn: number) => PLUNGE_THRUST_A * kc * d * fn ** PLUNGE_FEED_EXPONENT + PLUNGE_THRUST_B * kc * d * d;
 
+/** The Z thrust in the caller's units, saying when it is the rigidity class's default. */
+function zText(s: AdaptState): string {
+  const { zThrustN, zThrustAssumed, rigidityClass } = s.input;
+  const force = say(s.input.units, zThrustN, "force");
+  return zThrustAssumed ? `${force} (assumed for a ${rigidityClass} machine; enter your Z axis thrust if you know it)` : force;
+}
+
 /** Rule 11: hold fn from the sheet; cap it where the thrust exceeds the Z axis; refuse a straight plunge the centre alone cannot make. */
 export function plungeFeed(s: AdaptState): void {
-  const { diameterMm: d, plungeFeedMmMin, rpm: refRpm, kind } = s.input.operation;
-  const { zThrustN, zThrustAssumed, maxFeedMmMin, rigidityClass } = s.input.machine;
+  const { diameterMm: d, plungeFeedMmMin, rpm: refRpm } = s.input.operation;
+  const kind = s.input.kind;
+  const zThrustN = s.input.zThrustN;
+  const maxFeedMmMin = s.input.machine.maxFeedMmMin;
   const units = s.input.units;
   if (d >= s.input.rampThresholdDiameterMm && !RAMPED.has(kind)) {
     warn(s, "ramp-entry-recommended", `For a cutter this size, enter with a ramp or a helix rather than a straight plunge: a large cutter needs a lot of axial force to plunge, and a ramp allows deeper cuts.`);
@@ -23,9 +32,6 @@ export function plungeFeed(s: AdaptState): void {
   s.plungeFeedMmMin = plungeFeedMmMin;
   record(s, "plunge-feed", "plungeFeedMmMin", "feedRate", plungeFeedMmMin, feed, "The plunge keeps the vendor's feed per revolution, so the plunge feed follows the spindle speed.");
   const kc = s.input.force?.kc11Nmm2;
-  const zText = zThrustAssumed
-    ? `${say(units, zThrustN, "force")} (assumed for a ${rigidityClass} machine; enter your Z axis thrust if you know it)`
-    : say(units, zThrustN, "force");
   const plungeOnly = s.input.entryCapability === "plunge-only";
   if (kc !== undefined) {
     const centre = PLUNGE_THRUST_B * kc * d * d;
@@ -36,8 +42,8 @@ export function plungeFeed(s: AdaptState): void {
         s,
         "straight-plunge-refused",
         plungeOnly
-          ? `Your Z axis (${zText}) cannot push this cutter straight into this material at any feed: the centre of the cutter alone needs about ${say(units, centre, "force")}. Your CAM can only plunge straight, so use a pre-drilled hole, a smaller cutter, or a CAM that ramps or helixes in.`
-          : `Your Z axis (${zText}) cannot push this cutter straight into this material at any feed: the centre of the cutter alone needs about ${say(units, centre, "force")}. A ramp or helical entry is required.`,
+          ? `Your Z axis (${zText(s)}) cannot push this cutter straight into this material at any feed: the centre of the cutter alone needs about ${say(units, centre, "force")}. Your CAM can only plunge straight, so use a pre-drilled hole, a smaller cutter, or a CAM that ramps or helixes in.`
+          : `Your Z axis (${zText(s)}) cannot push this cutter straight into this material at any feed: the centre of the cutter alone needs about ${say(units, centre, "force")}. A ramp or helical entry is required.`,
         [
           { name: "plungeThrustN", quantity: "force", value: centre },
           { name: "zThrustN", quantity: "force", value: zThrustN },
@@ -50,9 +56,10 @@ export function plungeFeed(s: AdaptState): void {
     const fnMax = ((zThrustN - centre) / (PLUNGE_THRUST_A * kc * d)) ** (1 / PLUNGE_FEED_EXPONENT);
     if (fn > fnMax) {
       fn = fnMax;
-      record(s, "plunge-feed", "plungeFeedMmMin", "feedRate", feed, fn * s.rpm, `Pushing the cutter straight down at this feed would take more force than your Z axis gives (${zText}); a light Z axis stalls or loses steps, so the feed per revolution is lowered until the thrust fits.`);
+      record(s, "plunge-feed", "plungeFeedMmMin", "feedRate", feed, fn * s.rpm, `Pushing the cutter straight down at this feed would take more force than your Z axis gives (${zText(s)}); a light Z axis stalls or loses steps, so the feed per revolution is lowered until the thrust fits.`);
       feed = fn * s.rpm;
-      warn(s, "plunge-thrust-limited", `The plunge feed is held to ${say(units, feed, "feedRate")} by your Z axis thrust, ${zText}.`, [
+      const held = feed;
+      warn(s, "plunge-thrust-limited", `The plunge feed is held to ${say(units, held, "feedRate")} by your Z axis thrust, ${zText(s)}.`, [
         { name: "plungeFeedMmMin", quantity: "feedRate", value: feed },
         { name: "zThrustN", quantity: "force", value: zThrustN },
       ], "machine.zThrustN");

@@ -22,5 +22,5 @@ export function sanityLimits(s: AdaptState): void {
   s.meanChipThicknessMm = s.chipLoadMm * meanFactor(s, s.radialDepthMm, s.axialDepthMm);
   const floor = s.input.band.minMm;
   if (floor > 0 && s.maxChipThicknessMm < floor * (1 - 1e-9) && !hasWarning(s, "chip-load-band-impossible")) warnBelowFloor(s);
-  if (s.input.operation.ballNose) cuttingSpeedWindow(s);
+  if (s.input.ballNose) cuttingSpeedWindow(s);
 }

@@ -42,6 +42,12 @@ describe("buildSheetDocument", () => {
     expect(buildSheetDocument({ ...src, version: { ...src.version, frontMatter: null } }).operations).toEqual([]);
   });
 
+  it("reads the operation key stored before the rename as the current one", () => {
+    const src = sheetSource();
+    src.version.frontMatter = { operations: [{ kind: "adaptive" }, { kind: "slotting" }] };
+    expect(buildSheetDocument(src).operations).toEqual(["constant-engagement", "slotting"]);
+  });
+
   it("indexes a cutter by SKU", () => {
     const src = sheetSource();
     const doc = buildCutterDocument(src.vendorId, src.cutter);
