@@ -4,6 +4,7 @@ import { isMachiningInputError, parseFeed, parseLength } from "@/lib/machining";
 
 import { formNumber, optionalFormNumber } from "./catalogue-fields";
 import { RIGIDITY_KEYS } from "./machine-rigidity";
+import { spindleKindSchema } from "./spindle-kind";
 
 const blankToUndefined = (value: unknown) => (typeof value === "string" && value.trim() === "" ? undefined : value);
 
@@ -42,6 +43,8 @@ export const machineFieldsSchema = z
     maxFeedMmMin: quantityText((t) => parseFeed(t), "The highest feed", 200000),
     rigidity: z.enum(RIGIDITY_KEYS, { error: "Choose how stiff the machine is." }),
     zThrustN: optionalFormNumber("Z thrust").pipe(z.number().gt(0, "Z thrust must be more than 0 N, or left empty.").max(100000).optional()),
+    spindleKind: spindleKindSchema,
+    ratedRpm: optionalFormNumber("Rated speed").pipe(z.number().gt(0, "The rated speed must be more than 0 rpm, or left empty.").max(100000, "At most 100 000 rpm.").optional()),
     stickoutMm: z.preprocess(blankToUndefined, quantityText((t) => parseLength(t), "Stick-out", 300).optional()),
     units: z.enum(["metric", "imperial"], { error: "Units are metric or imperial." }).default("metric"),
   })
@@ -52,6 +55,14 @@ export const machineFieldsSchema = z
     when: (payload) => {
       const v = payload.value as { rpmMin?: unknown; rpmMax?: unknown };
       return typeof v?.rpmMin === "number" && typeof v?.rpmMax === "number";
+    },
+  })
+  .refine((m) => m.ratedRpm === undefined || m.ratedRpm <= m.rpmMax, {
+    path: ["ratedRpm"],
+    message: "The rated speed cannot be above the highest spindle speed.",
+    when: (payload) => {
+      const v = payload.value as { ratedRpm?: unknown; rpmMax?: unknown };
+      return typeof v?.ratedRpm === "number" && typeof v?.rpmMax === "number";
     },
   });
 

@@ -24,6 +24,18 @@ export const lengthOverrideSchema = (what: string) =>
       .optional(),
   );
 
+export const ENTRY_CAPABILITY_KEYS = ["plunge-only", "ramp", "helix"] as const;
+export type EntryCapabilityKey = (typeof ENTRY_CAPABILITY_KEYS)[number];
+
+/** What the customer's CAM can do to get the cutter into the material, in the trade's words. */
+export const entryCapabilityLabels: Record<EntryCapabilityKey, string> = {
+  "plunge-only": "Straight plunge only",
+  ramp: "Ramp in",
+  helix: "Helix in (and ramp)",
+};
+
+export const entryCapabilitySchema = z.enum(ENTRY_CAPABILITY_KEYS, { error: "Choose how your CAM enters the material: straight plunge only, ramp or helix." }).default("ramp");
+
 export const setupOverridesSchema = z.object({
   radialDepthMm: lengthOverrideSchema("ae"),
   axialDepthMm: lengthOverrideSchema("ap"),
@@ -39,6 +51,7 @@ export const setupCreateSchema = z
     operationIndex: z.coerce.number().int().min(0).max(50).default(0),
     name: z.string().trim().max(120, "At most 120 characters.").default(""),
     units: z.enum(["metric", "imperial"]).default("metric"),
+    entryCapability: entryCapabilitySchema,
   })
   .and(setupOverridesSchema);
 export type SetupCreate = z.output<typeof setupCreateSchema>;

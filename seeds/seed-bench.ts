@@ -6,6 +6,7 @@ import { adaptOperation } from "@/lib/bench/adapt-context";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 
 import type { SeededIds } from "./seed-foundation";
+import { meltingStorySlug } from "./sheets/demo-sheet-plan";
 
 type MachineSeed = { name: string; preset: string; rpm_min: number; rpm_max: number; power_kw: number; max_feed_mm_min: number; rigidity: number; z_thrust_n: number | null; stickout_mm: number; units: "metric" | "imperial" };
 
@@ -37,7 +38,7 @@ const MIXED: Outcome[] = [
 const daysAgo = (d: number) => new Date(Date.now() - d * 86_400_000);
 
 export async function seedBench(knex: Knex, ids: SeededIds): Promise<void> {
-  for (const vendorId of Object.values(ids.vendors)) {
+  for (const [vendorSlug, vendorId] of Object.entries(ids.vendors)) {
     // Without --reset the seed runs again over existing data: add nothing twice.
     if (await knex("setups").where({ vendor_id: vendorId }).first("id")) continue;
     const customers = await knex("members as m").join("users as u", "u.id", "m.user_id").where({ "m.vendor_id": vendorId, "m.role": "customer" }).select("u.id", "u.email");
@@ -61,9 +62,11 @@ export async function seedBench(knex: Knex, ids: SeededIds): Promise<void> {
     const bySheet = new Map<string, typeof versions>();
     for (const v of versions) bySheet.set(v.sheet_id, [...(bySheet.get(v.sheet_id) ?? []), v]);
     const multi = [...bySheet.values()].filter((list) => list.length > 1);
-    const melting = multi.find((list) => list[0].material_group === "plastics");
+    const meltingSlug = meltingStorySlug(vendorSlug);
+    const melting = multi.find((list) => list[0].slug === meltingSlug);
     let turn = 0;
-    for (const list of multi.slice(0, 4)) {
+    // The melting story first, so it is always among the sheets with setups.
+    for (const list of [...(melting ? [melting] : []), ...multi.filter((l) => l !== melting)].slice(0, 4)) {
       for (const version of list) {
         const context = await loadAdaptContext({ vendorId, versionId: version.id, trx: knex });
         if (!context) continue;
@@ -79,8 +82,8 @@ export async function seedBench(knex: Knex, ids: SeededIds): Promise<void> {
           const [setup] = await knex("setups")
             .insert({ vendor_id: vendorId, user_id: machine.userId, machine_id: machine.id, sheet_version_id: version.id, operation_index: 0, name: `${context.title}: ${context.operations[0].label} on ${machine.seed.name}`, overrides: "{}", result: JSON.stringify(result), units: machine.seed.units, created_at: created, updated_at: created })
             .returning("id");
-          const isLatest = version.number === list[list.length - 1].number;
-          const outcome: Outcome = list === melting ? (isLatest ? CLEAN : MELTED) : MIXED[(turn + k) % MIXED.length];
+          // v1 of the melting story rubbed and welded; v2 raised the chip load and cut, and so does its revision.
+          const outcome: Outcome = list === melting ? (version.number === 1 ? MELTED : CLEAN) : MIXED[(turn + k) % MIXED.length];
           const changes = outcome.result === "worked_after_changes" ? { feedMmMin: { from: result.feedMmMin, to: Math.round(result.feedMmMin * 0.85) } } : {};
           await knex("outcomes").insert({ vendor_id: vendorId, setup_id: setup.id, sheet_version_id: version.id, user_id: machine.userId, machine_id: machine.id, result: outcome.result, symptom: outcome.symptom ?? null, changes: JSON.stringify(changes), notes: outcome.notes, created_at: daysAgo(38 - version.number * 10 - k) });
         }

@@ -12,6 +12,7 @@ import { adaptOperation, type AdaptContext } from "@/lib/bench/adapt-context";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 
 import type { SeededIds } from "./seed-foundation";
+import { meltingStorySlug } from "./sheets/demo-sheet-plan";
 
 type Archetype = { name: string; rpm_min: number; rpm_max: number; power_kw: number; max_feed_mm_min: number; rigidity: number; z_thrust_n: number; stickout_mm: number; count: number };
 
@@ -157,10 +158,11 @@ export async function seedField(knex: Knex, ids: SeededIds): Promise<void> {
     const bySheet = new Map<string, Version[]>();
     for (const v of versions) bySheet.set(v.sheet_id, [...(bySheet.get(v.sheet_id) ?? []), v]);
     // The same plastics sheet seed-bench tells the melting story with.
-    const melting = [...bySheet.values()].find((list) => list.length > 1 && list[0].material_group === "plastics");
+    const melting = [...bySheet.values()].find((list) => list[0].slug === meltingStorySlug(vendorSlug));
     if (melting) {
+      // v1 melted; v2 raised the chip load and fixed it (its revision, v3, came later and has few reports yet).
       await report(knex, vendorId, melting[0], machines, MELT_V1, 50);
-      await report(knex, vendorId, melting[melting.length - 1], machines, MELT_V2, 25);
+      await report(knex, vendorId, melting[1] ?? melting[0], machines, MELT_V2, 25);
     }
     const published = versions.filter((v) => v.state === "published" && v.sheet_id !== melting?.[0].sheet_id);
     // A hardwood sheet on the light router: full ap chatters on a flexible frame.

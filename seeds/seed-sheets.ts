@@ -10,7 +10,7 @@ import { validateSheetSource } from "@/lib/mdx/validate-sheet-source";
 
 import type { SeededIds } from "./seed-foundation";
 import { DEMO_CUTTERS, DEMO_MACHINE_CLASSES, DEMO_MATERIALS } from "./sheets/demo-catalogue";
-import { DEMO_SHEET_PLAN } from "./sheets/demo-sheet-plan";
+import { DEMO_SHEET_PLAN, demoSheetSlug, publishedCount, seededVersions } from "./sheets/demo-sheet-plan";
 import { demoSheetSource } from "./sheets/demo-sheet-source";
 
 const DAY = 86_400_000;
@@ -51,18 +51,18 @@ export async function seedSheets(knex: Knex, { vendors, users }: SeededIds): Pro
       const cutter = DEMO_CUTTERS[vendorSlug].find((c) => c.sku === sheet.cutter)!;
       const material = DEMO_MATERIALS[vendorSlug].find((m) => m.slug === sheet.material)!;
       const machineClass = DEMO_MACHINE_CLASSES[vendorSlug].find((k) => k.slug === sheet.machineClass)!;
-      const slug = `${material.slug}-${cutter.sku.toLowerCase()}-${machineClass.slug}`;
+      const slug = demoSheetSlug(sheet);
       const [{ id: sheetId }] = await knex("sheets")
         .insert({ vendor_id: vendorId, slug, cutter_id: ids.cutters.get(cutter.sku), material_id: ids.materials.get(material.slug), machine_class_id: ids.classes.get(machineClass.slug), created_by: author })
         .returning("id");
       sheets++;
-      const all = sheet.openDraft ? [...sheet.versions, { ...sheet.versions.at(-1)!, chipLoadScale: 0.85, changeNote: "Feed lowered again after more field results." }] : sheet.versions;
+      const all = seededVersions(sheet);
+      const P = publishedCount(sheet);
       for (const [i, version] of all.entries()) {
         const number = i + 1;
         const source = demoSheetSource({ cutter, material, machineClass, sheet, version });
         const frontMatter = checkedSource(source, `${vendorSlug}/${slug} v${number}`);
         const at = new Date(START + (index * 3 + i * 40) * DAY);
-        const P = sheet.versions.length;
         const state = i < P - 1 ? "superseded" : i === P - 1 ? (sheet.withdrawnReason ? "withdrawn" : "published") : sheet.openDraft!;
         const published = i < P;
         await knex("sheet_versions").insert({

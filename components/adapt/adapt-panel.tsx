@@ -3,12 +3,15 @@
 import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
 
+import type { EntryCapabilityKey } from "@/content-schema/setup-fields";
 import type { AdaptContext } from "@/lib/bench/adapt-context";
 import { type AdhocMachineDraft, computeAdaptation, type OverrideDraft, readAdhocMachine } from "@/lib/bench/compute-adaptation";
 import { feedSpeedCurve } from "@/lib/bench/feed-speed-curve";
 import { machineToInput, type Machine } from "@/lib/bench/machine-rows";
 import type { UnitSystem } from "@/lib/machining";
 
+import { EntryAdvice } from "./entry-advice";
+import { EntryCapabilityPicker } from "./entry-capability-picker";
 import { ADHOC, MachinePicker } from "./machine-picker";
 import { resultRows, ResultTable } from "./result-table";
 import { type SaveSetupAction, SaveSetupForm } from "./save-setup-form";
@@ -32,7 +35,7 @@ export type AdaptPanelProps = {
   signInHref?: string;
 };
 
-const EMPTY_DRAFT: AdhocMachineDraft = { rpmMin: "", rpmMax: "", power: "", maxFeed: "", rigidity: "light", zThrust: "", stickout: "" };
+const EMPTY_DRAFT: AdhocMachineDraft = { rpmMin: "", rpmMax: "", power: "", maxFeed: "", rigidity: "light", zThrust: "", stickout: "", spindleKind: "constant-torque", ratedRpm: "" };
 
 /** Adapts one sheet operation to a machine as you type, with the rules that changed each number. */
 export function AdaptPanel({ context, operationIndex = 0, machines = [], units: initialUnits = "metric", vendorSlug, saveAction, signInHref }: AdaptPanelProps) {
@@ -41,13 +44,14 @@ export function AdaptPanel({ context, operationIndex = 0, machines = [], units: 
   const [opIndex, setOpIndex] = useState(context.operations[operationIndex] ? operationIndex : 0);
   const [overrides, setOverrides] = useState<OverrideDraft>({ ae: "", ap: "", stickout: "" });
   const [units, setUnits] = useState<UnitSystem>(initialUnits);
+  const [entryCapability, setEntryCapability] = useState<EntryCapabilityKey>("ramp");
 
   const { adaptation, machine } = useMemo(() => {
     const errors: Record<string, string> = {};
     const saved = machines.find((m) => m.id === machineId);
     const machine = saved ? machineToInput(saved) : machineId === ADHOC ? readAdhocMachine(draft, units, errors) : null;
-    return { machine, adaptation: computeAdaptation({ context, operationIndex: opIndex, machine, overrides, units, errors }) };
-  }, [context, machines, machineId, draft, opIndex, overrides, units]);
+    return { machine, adaptation: computeAdaptation({ context, operationIndex: opIndex, machine, overrides, units, entryCapability, errors }) };
+  }, [context, machines, machineId, draft, opIndex, overrides, units, entryCapability]);
 
   const op = context.operations[opIndex];
   // Nothing typed yet: invite the reader to type a machine instead of greeting them with errors.
@@ -75,6 +79,7 @@ export function AdaptPanel({ context, operationIndex = 0, machines = [], units: 
         <UnitsSwitch units={units} onChange={setUnits} />
       </div>
       <MachinePicker machines={machines} machineId={machineId} onMachineId={setMachineId} draft={draft} onDraft={setDraft} units={units} errors={errors} />
+      <EntryCapabilityPicker value={entryCapability} onChange={setEntryCapability} />
       <fieldset className="grid gap-3 sm:grid-cols-3">
         <legend className="mb-1 text-sm font-semibold">Your changes (optional)</legend>
         <TextInput id="override-ae" label="ae (radial depth)" hint='e.g. 1/16, 1.5 mm or 0.06"' value={overrides.ae} onChange={setOverride("ae")} error={errors.ae} />
@@ -86,6 +91,7 @@ export function AdaptPanel({ context, operationIndex = 0, machines = [], units: 
       {op ? <ResultTable rows={resultRows(op, context.cutter, result)} units={units} /> : null}
       {result ? (
         <>
+          <EntryAdvice result={result} entryCapability={entryCapability} units={units} />
           <section aria-labelledby="adapt-steps">
             <h3 id="adapt-steps" className="text-sm font-semibold">How these numbers were found</h3>
             <StepsTrail steps={result.steps} units={units} />
@@ -96,7 +102,7 @@ export function AdaptPanel({ context, operationIndex = 0, machines = [], units: 
           </section>
           {curve ? <FeedSpeedChart curve={curve} units={units} /> : null}
           {saveAction && savedMachine && adaptation.ok ? (
-            <SaveSetupForm action={saveAction} vendorSlug={vendorSlug} versionId={context.versionId} machineId={machineId} operationIndex={opIndex} overridesMm={adaptation.overridesMm} units={units} />
+            <SaveSetupForm action={saveAction} vendorSlug={vendorSlug} versionId={context.versionId} machineId={machineId} operationIndex={opIndex} overridesMm={adaptation.overridesMm} units={units} entryCapability={entryCapability} />
           ) : saveAction ? (
             <p className="text-sm text-stone-600">Register this machine on your <a className="underline" href={`/${vendorSlug}/bench/machines/new`}>Bench</a> to save the result as a setup.</p>
           ) : signInHref ? (

@@ -2,6 +2,7 @@
 
 import { MACHINE_PRESETS, presetByKey } from "@/content-schema/machine-presets";
 import { RIGIDITY_CLASSES, type RigidityKey } from "@/content-schema/machine-rigidity";
+import { SPINDLE_KIND_KEYS, spindleKindLabels, type SpindleKindKey } from "@/content-schema/spindle-kind";
 import type { AdhocMachineDraft } from "@/lib/bench/compute-adaptation";
 import type { Machine } from "@/lib/bench/machine-rows";
 import type { UnitSystem } from "@/lib/machining";
@@ -35,6 +36,8 @@ export function MachinePicker({ machines, machineId, onMachineId, draft, onDraft
       rigidity: p.rigidity,
       zThrust: p.zThrustN ? (imperial ? String(Math.round(p.zThrustN / 4.4482216152605)) : String(p.zThrustN)) : "",
       stickout: `${p.stickoutMm} mm`,
+      spindleKind: p.spindleKind,
+      ratedRpm: p.ratedRpm ? String(p.ratedRpm) : "",
     });
   }
   return (
@@ -67,6 +70,15 @@ export function MachinePicker({ machines, machineId, onMachineId, draft, onDraft
           <TextInput id="adhoc-power" label={`Spindle power (${units === "imperial" ? "hp" : "kW"})`} inputMode="decimal" value={draft.power} onChange={set("power")} error={errors.power} />
           <TextInput id="adhoc-feed" label={`Highest feed (${units === "imperial" ? "in/min" : "mm/min"})`} value={draft.maxFeed} onChange={set("maxFeed")} error={errors.maxFeed} />
           <TextInput id="adhoc-thrust" label={`Z thrust, if known (${units === "imperial" ? "lbf" : "N"})`} inputMode="decimal" value={draft.zThrust} onChange={set("zThrust")} error={errors.zThrust} />
+          <div className="flex flex-col gap-1">
+            <label htmlFor="adhoc-spindle-kind" className="text-sm font-medium">Spindle drive</label>
+            <select id="adhoc-spindle-kind" value={draft.spindleKind} onChange={(e) => onDraft({ ...draft, spindleKind: e.target.value as SpindleKindKey })} className="min-h-11 rounded border border-stone-300 bg-white px-3 text-base">
+              {SPINDLE_KIND_KEYS.map((k) => (
+                <option key={k} value={k}>{spindleKindLabels[k]}</option>
+              ))}
+            </select>
+          </div>
+          <TextInput id="adhoc-rated-rpm" label="Rated speed, if known (rpm)" hint="where a VFD spindle reaches full power" inputMode="numeric" value={draft.ratedRpm} onChange={set("ratedRpm")} error={errors.ratedRpm} />
           <TextInput id="adhoc-stickout" label="Usual stick-out" hint="e.g. 20 mm or 3/4" value={draft.stickout} onChange={set("stickout")} error={errors.machineStickout} />
           <div className="flex flex-col gap-1 sm:col-span-2">
             <label htmlFor="adhoc-rigidity" className="text-sm font-medium">How stiff is it?</label>

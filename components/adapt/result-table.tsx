@@ -1,15 +1,19 @@
 import type { ContextOperation } from "@/lib/bench/adapt-context";
-import { type AdaptNumbers, formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/machining";
+import { type AdaptNumbers, ballNoseEffectiveDiameter, formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/machining";
 
 type Row = { key: string; label: string; kind: QuantityKind; sheet: number | null; adapted: number | null };
 
-export function resultRows(op: ContextOperation, cutter: { diameterMm: number; flutes: number }, adapted: AdaptNumbers | null): Row[] {
+export function resultRows(op: ContextOperation, cutter: { diameterMm: number; flutes: number; cornerForm?: string }, adapted: AdaptNumbers | null): Row[] {
   const a = (v: number | null | undefined) => (adapted ? (v ?? null) : null);
+  // A ball nose cuts at De < D when shallow; its vc is judged there, on the sheet as on the customer's machine.
+  const ball = cutter.cornerForm === "ball";
+  const sheetDe = ball ? ballNoseEffectiveDiameter({ diameterMm: cutter.diameterMm, axialDepthMm: op.axialDepthMm }) : cutter.diameterMm;
   return [
     { key: "n", label: "n (spindle speed)", kind: "spindleSpeed", sheet: op.rpm, adapted: a(adapted?.rpm) },
     { key: "vf", label: "vf (feed rate)", kind: "feedRate", sheet: op.feedMmMin, adapted: a(adapted?.feedMmMin) },
     { key: "fz", label: "fz (chip load)", kind: "chipLoad", sheet: op.feedMmMin / (cutter.flutes * op.rpm), adapted: a(adapted?.chipLoadMm) },
-    { key: "vc", label: "vc (cutting speed)", kind: "cuttingSpeed", sheet: (Math.PI * cutter.diameterMm * op.rpm) / 1000, adapted: a(adapted?.cuttingSpeedMpm) },
+    ...(ball ? [{ key: "de", label: "De (effective diameter of the ball)", kind: "length" as const, sheet: sheetDe, adapted: a(adapted?.effectiveDiameterMm) }] : []),
+    { key: "vc", label: ball ? "vc (cutting speed at De)" : "vc (cutting speed)", kind: "cuttingSpeed", sheet: (Math.PI * sheetDe * op.rpm) / 1000, adapted: a(adapted?.cuttingSpeedMpm) },
     { key: "ap", label: "ap (axial depth)", kind: "length", sheet: op.axialDepthMm, adapted: a(adapted?.axialDepthMm) },
     { key: "ae", label: "ae (radial depth)", kind: "length", sheet: op.radialDepthMm, adapted: a(adapted?.radialDepthMm) },
     { key: "plunge", label: "Plunge feed", kind: "feedRate", sheet: op.plungeFeedMmMin, adapted: a(adapted?.plungeFeedMmMin) },

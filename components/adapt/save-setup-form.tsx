@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useActionState } from "react";
 
+import type { EntryCapabilityKey } from "@/content-schema/setup-fields";
 import { type ActionState, initialActionState } from "@/lib/actions/action-state";
 import type { UnitSystem } from "@/lib/machining";
 
@@ -16,12 +17,13 @@ type Props = {
   operationIndex: number;
   overridesMm: { radialDepthMm?: number; axialDepthMm?: number; stickoutMm?: number };
   units: UnitSystem;
+  entryCapability: EntryCapabilityKey;
 };
 
 const mm = (v: number | undefined) => (v === undefined ? "" : `${v} mm`);
 
 /** Saves the adaptation as a setup; only references and overrides are sent, the server computes the numbers. */
-export function SaveSetupForm({ action, vendorSlug, versionId, machineId, operationIndex, overridesMm, units }: Props) {
+export function SaveSetupForm({ action, vendorSlug, versionId, machineId, operationIndex, overridesMm, units, entryCapability }: Props) {
   const [state, formAction, pending] = useActionState(action, initialActionState);
   const saved = state.ok && state.data && typeof state.data === "object" && "id" in state.data ? String(state.data.id) : null;
   return (
@@ -34,6 +36,7 @@ export function SaveSetupForm({ action, vendorSlug, versionId, machineId, operat
       <input type="hidden" name="axialDepthMm" value={mm(overridesMm.axialDepthMm)} />
       <input type="hidden" name="stickoutMm" value={mm(overridesMm.stickoutMm)} />
       <input type="hidden" name="units" value={units} />
+      <input type="hidden" name="entryCapability" value={entryCapability} />
       <div className="flex min-w-56 flex-1 flex-col gap-1">
         <label htmlFor="setup-name" className="text-sm font-medium">Setup name (optional)</label>
         <input id="setup-name" name="name" maxLength={120} className="min-h-11 rounded border border-stone-300 bg-white px-3" />

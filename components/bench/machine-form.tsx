@@ -9,9 +9,10 @@ import { useValidatedAction } from "@/components/forms/use-validated-action";
 import { machineFormSchema } from "@/content-schema/machine-fields";
 import { MACHINE_PRESETS, presetByKey } from "@/content-schema/machine-presets";
 import { RIGIDITY_CLASSES } from "@/content-schema/machine-rigidity";
+import { SPINDLE_KIND_KEYS, spindleKindLabels } from "@/content-schema/spindle-kind";
 import type { ActionState } from "@/lib/actions/action-state";
 
-export type MachineFormValues = { name: string; preset: string; rpmMin: string; rpmMax: string; powerKw: string; maxFeedMmMin: string; rigidity: string; zThrustN: string; stickoutMm: string; units: string };
+export type MachineFormValues = { name: string; preset: string; rpmMin: string; rpmMax: string; powerKw: string; maxFeedMmMin: string; rigidity: string; zThrustN: string; spindleKind: string; ratedRpm: string; stickoutMm: string; units: string };
 
 type Props = { vendorSlug: string; id?: string; initial: MachineFormValues; action: (state: ActionState, form: FormData) => Promise<ActionState> };
 
@@ -23,7 +24,7 @@ export function MachineForm({ vendorSlug, id, initial, action }: Props) {
   function applyPreset(key: string) {
     const p = presetByKey(key);
     if (!p) return setValues({ ...values, preset: "" });
-    setValues({ ...values, preset: p.key, name: values.name || p.label, rpmMin: String(p.rpmMin), rpmMax: String(p.rpmMax), powerKw: String(p.powerKw), maxFeedMmMin: `${p.maxFeedMmMin} mm/min`, rigidity: p.rigidity, zThrustN: p.zThrustN ? String(p.zThrustN) : "", stickoutMm: `${p.stickoutMm} mm` });
+    setValues({ ...values, preset: p.key, name: values.name || p.label, rpmMin: String(p.rpmMin), rpmMax: String(p.rpmMax), powerKw: String(p.powerKw), maxFeedMmMin: `${p.maxFeedMmMin} mm/min`, rigidity: p.rigidity, zThrustN: p.zThrustN ? String(p.zThrustN) : "", spindleKind: p.spindleKind, ratedRpm: p.ratedRpm ? String(p.ratedRpm) : "", stickoutMm: `${p.stickoutMm} mm` });
   }
   return (
     <form action={formAction} onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 sm:grid-cols-2">
@@ -55,7 +56,17 @@ export function MachineForm({ vendorSlug, id, initial, action }: Props) {
         </select>
         {errors.rigidity ? <p className="text-sm text-red-800">⚠ {errors.rigidity.join(" ")}</p> : null}
       </div>
-      <Field label="Z thrust limit, if known (N)" name="zThrustN" inputMode="decimal" value={values.zThrustN} onChange={set("zThrustN")} errors={errors.zThrustN} />
+      <Field label="Z thrust limit, if known (N)" name="zThrustN" inputMode="decimal" value={values.zThrustN} onChange={set("zThrustN")} errors={errors.zThrustN} hint="How hard the Z axis can push a cutter down. Left empty: 150 N for a light machine, 400 N for a moderately stiff or stiff one, 1500 N for a very rigid one." />
+      <div className="flex flex-col gap-1">
+        <label htmlFor="f-spindleKind" className="text-sm font-medium">Spindle drive</label>
+        <select id="f-spindleKind" name="spindleKind" value={values.spindleKind} onChange={set("spindleKind")} className="min-h-11 rounded border border-stone-300 bg-white px-3">
+          {SPINDLE_KIND_KEYS.map((k) => (
+            <option key={k} value={k}>{spindleKindLabels[k]}</option>
+          ))}
+        </select>
+        {errors.spindleKind ? <p className="text-sm text-red-800">⚠ {errors.spindleKind.join(" ")}</p> : null}
+      </div>
+      <Field label="Rated speed, if known (rpm)" name="ratedRpm" inputMode="numeric" value={values.ratedRpm} onChange={set("ratedRpm")} errors={errors.ratedRpm} hint="Where a VFD spindle reaches its rated power; below it the power falls with speed. Empty: the highest speed." />
       <Field label="Usual stick-out" name="stickoutMm" value={values.stickoutMm} onChange={set("stickoutMm")} errors={errors.stickoutMm} hint="Collet nut to tool tip, e.g. 20 mm or 3/4 in" />
       <div className="flex flex-col gap-1">
         <label htmlFor="f-units" className="text-sm font-medium">Show numbers in</label>

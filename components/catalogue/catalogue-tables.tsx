@@ -32,6 +32,7 @@ export function MaterialsTable({ vendorSlug, materials }: { vendorSlug: string; 
     { id: "group", accessorFn: (m) => materialGroupLabels[m.materialGroup], header: "Group" },
     { accessorKey: "vcMinMpm", header: "vc window", cell: ({ row }) => mono(`${row.original.vcMinMpm}–${row.original.vcMaxMpm} m/min`) },
     { accessorKey: "minChipLoadMm", header: "Min fz", cell: ({ row }) => mono(`${row.original.minChipLoadMm} mm`) },
+    { accessorKey: "chipLoadMinPctD", header: "Chip band", cell: ({ row }) => mono(`${row.original.chipLoadMinPctD}–${row.original.chipLoadMaxPctD} % of D`) },
     { accessorKey: "kcNmm2", header: "kc", cell: ({ row }) => mono(`${row.original.kcNmm2} N/mm²`) },
   ];
   return <DataTable data={materials} columns={columns} label="materials" empty={<EmptyState title="No materials yet" />} />;

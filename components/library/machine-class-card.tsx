@@ -1,3 +1,4 @@
+import { spindleKindLabels } from "@/content-schema/spindle-kind";
 import type { MachineClass } from "@/lib/catalogue/catalogue-types";
 import { formatFeed, formatForce, formatPower, formatSpindleSpeed, type UnitSystem } from "@/lib/machining";
 
@@ -15,6 +16,7 @@ export function MachineClassCard({ machineClass, units }: { machineClass: Machin
           ["Max feed", formatFeed(machineClass.maxFeedMmMin, units)],
           ["Rigidity", `${machineClass.rigidity.toFixed(2)} (1 = stiffest)`],
           ["Z thrust", machineClass.zThrustN ? formatForce(machineClass.zThrustN, units) : "—"],
+          ["Spindle drive", `${spindleKindLabels[machineClass.spindleKind]}${machineClass.ratedRpm ? `, rated at ${formatSpindleSpeed(machineClass.ratedRpm)}` : ""}`],
         ]}
       />
     </SpecCard>

@@ -1,12 +1,13 @@
 import { rigidityFactor, type RigidityKey } from "@/content-schema/machine-rigidity";
-import { type AdaptResult, hpToKw, isMachiningInputError, lbfToN, parseFeed, parseLength, parseSpindleSpeed, type UnitSystem } from "@/lib/machining";
+import type { SpindleKindKey } from "@/content-schema/spindle-kind";
+import { type AdaptResult, type EntryCapability, hpToKw, isMachiningInputError, lbfToN, parseFeed, parseLength, parseSpindleSpeed, type UnitSystem } from "@/lib/machining";
 
 import { adaptOperation, type AdaptContext, type BenchMachineInput } from "./adapt-context";
 
 // Pure: what the adapt panel computes on every keystroke. Never returns NaN: bad input becomes a message.
 
 /** A machine typed into the panel without signing in; numbers as typed. */
-export type AdhocMachineDraft = { rpmMin: string; rpmMax: string; power: string; maxFeed: string; rigidity: RigidityKey; zThrust: string; stickout: string };
+export type AdhocMachineDraft = { rpmMin: string; rpmMax: string; power: string; maxFeed: string; rigidity: RigidityKey; zThrust: string; stickout: string; spindleKind: SpindleKindKey; ratedRpm: string };
 export type OverrideDraft = { ae: string; ap: string; stickout: string };
 
 export type Adaptation =
@@ -56,8 +57,10 @@ export function readAdhocMachine(draft: AdhocMachineDraft, units: UnitSystem, er
   const power = read(errors, "power", draft.power, guard(plainNumber), `the spindle power in ${units === "imperial" ? "hp" : "kW"}`);
   const maxFeed = read(errors, "maxFeed", draft.maxFeed, (t) => parseFeed(t, { defaultUnit: units === "imperial" ? "in/min" : "mm/min" }), "the highest feed");
   const zThrust = read(errors, "zThrust", draft.zThrust, guard(plainNumber), "the Z thrust", true);
+  const ratedRpm = read(errors, "ratedRpm", draft.ratedRpm, (t) => parseSpindleSpeed(t), "the rated speed", true);
   const stickout = read(errors, "machineStickout", draft.stickout, (t) => parseLength(t, { defaultUnit: lengthUnit }), "the stick-out", true);
   if (minRpm !== undefined && maxRpm !== undefined && minRpm > maxRpm) errors.rpmMin = "The lowest spindle speed is above the highest.";
+  if (ratedRpm !== undefined && maxRpm !== undefined && ratedRpm > maxRpm) errors.ratedRpm = "The rated speed is above the highest spindle speed.";
   if (minRpm === undefined || maxRpm === undefined || power === undefined || maxFeed === undefined || Object.keys(errors).length) return null;
   return {
     minRpm,
@@ -66,12 +69,14 @@ export function readAdhocMachine(draft: AdhocMachineDraft, units: UnitSystem, er
     maxFeedMmMin: maxFeed,
     rigidity: rigidityFactor(draft.rigidity),
     zThrustN: zThrust === undefined ? undefined : units === "imperial" ? lbfToN(zThrust) : zThrust,
+    spindleKind: draft.spindleKind,
+    ratedRpm,
     stickoutMm: stickout,
   };
 }
 
 /** Parses the overrides, adapts the operation, and turns any engine refusal into a message on its field. */
-export function computeAdaptation(options: { context: AdaptContext; operationIndex: number; machine: BenchMachineInput | null; overrides: OverrideDraft; units: UnitSystem; errors?: Record<string, string> }): Adaptation {
+export function computeAdaptation(options: { context: AdaptContext; operationIndex: number; machine: BenchMachineInput | null; overrides: OverrideDraft; units: UnitSystem; entryCapability?: EntryCapability; errors?: Record<string, string> }): Adaptation {
   const errors = { ...options.errors };
   const defaultUnit = options.units === "imperial" ? "in" : "mm";
   const length = (t: string) => parseLength(t, { defaultUnit });
@@ -83,7 +88,7 @@ export function computeAdaptation(options: { context: AdaptContext; operationInd
   if (!options.machine && !Object.keys(errors).length) errors.machine = "Choose a machine or type one in.";
   if (!options.machine || Object.keys(errors).length) return { ok: false, errors };
   try {
-    return { ok: true, result: adaptOperation(options.context, options.operationIndex, options.machine, overridesMm), overridesMm };
+    return { ok: true, result: adaptOperation(options.context, options.operationIndex, options.machine, overridesMm, { entryCapability: options.entryCapability, units: options.units }), overridesMm };
   } catch (error) {
     if (!isMachiningInputError(error)) throw error;
     const field = error.field.includes("radial") ? "ae" : error.field.includes("axial") ? "ap" : error.field.includes("stickout") ? "stickout" : "machine";

@@ -25,7 +25,7 @@ export async function createSetup({ vendorId, userId, input }: { vendorId: strin
   const overrides = { radialDepthMm: input.radialDepthMm, axialDepthMm: input.axialDepthMm, stickoutMm: input.stickoutMm };
   let result;
   try {
-    result = adaptOperation(context, input.operationIndex, machineToInput(machine), overrides);
+    result = adaptOperation(context, input.operationIndex, machineToInput(machine), overrides, { entryCapability: input.entryCapability, units: input.units });
   } catch (error) {
     if (!isMachiningInputError(error)) throw error;
     const field = error.field.startsWith("overrides.radial") ? "radialDepthMm" : error.field.startsWith("overrides.axial") ? "axialDepthMm" : error.field.startsWith("overrides.stick") ? "stickoutMm" : "machineId";
@@ -44,8 +44,9 @@ export async function createSetup({ vendorId, userId, input }: { vendorId: strin
       overrides: JSON.stringify(Object.fromEntries(Object.entries(overrides).filter(([, v]) => v !== undefined))),
       result: JSON.stringify(result),
       units: input.units,
+      entry_capability: input.entryCapability,
     })
     .returning(["id"]);
-  await writeAudit({ vendorId, actorUserId: userId, action: "setup.create", objectType: "setup", objectId: row.id, details: { sheetVersionId: context.versionId, machineId: machine.id } });
+  await writeAudit({ vendorId, actorUserId: userId, action: "setup.create", objectType: "setup", objectId: row.id, details: { sheetVersionId: context.versionId, machineId: machine.id, entryCapability: input.entryCapability } });
   return { id: row.id as string, result };
 }

@@ -1,3 +1,5 @@
+import type { SpindleKindKey } from "@/content-schema/spindle-kind";
+
 import type { BenchMachineInput } from "./adapt-context";
 
 export type MachineRow = {
@@ -12,6 +14,8 @@ export type MachineRow = {
   max_feed_mm_min: number;
   rigidity: number;
   z_thrust_n: number | null;
+  spindle_kind: SpindleKindKey;
+  rated_rpm: number | null;
   stickout_mm: number | null;
   units: "metric" | "imperial";
   created_at: Date;
@@ -29,14 +33,17 @@ export type Machine = {
   maxFeedMmMin: number;
   rigidity: number;
   zThrustN: number | null;
+  spindleKind: SpindleKindKey;
+  /** null: the spindle holds torque up to its top speed. */
+  ratedRpm: number | null;
   stickoutMm: number | null;
   units: "metric" | "imperial";
   updatedAt: string;
 };
 
-export const MACHINE_COLUMNS = ["id", "name", "preset", "rpm_min", "rpm_max", "power_kw", "max_feed_mm_min", "rigidity", "z_thrust_n", "stickout_mm", "units", "updated_at"];
+export const MACHINE_COLUMNS = ["id", "name", "preset", "rpm_min", "rpm_max", "power_kw", "max_feed_mm_min", "rigidity", "z_thrust_n", "spindle_kind", "rated_rpm", "stickout_mm", "units", "updated_at"];
 
-export function rowToMachine(row: Pick<MachineRow, "id" | "name" | "preset" | "rpm_min" | "rpm_max" | "power_kw" | "max_feed_mm_min" | "rigidity" | "z_thrust_n" | "stickout_mm" | "units" | "updated_at">): Machine {
+export function rowToMachine(row: Pick<MachineRow, "id" | "name" | "preset" | "rpm_min" | "rpm_max" | "power_kw" | "max_feed_mm_min" | "rigidity" | "z_thrust_n" | "spindle_kind" | "rated_rpm" | "stickout_mm" | "units" | "updated_at">): Machine {
   return {
     id: row.id,
     name: row.name,
@@ -47,6 +54,8 @@ export function rowToMachine(row: Pick<MachineRow, "id" | "name" | "preset" | "r
     maxFeedMmMin: Number(row.max_feed_mm_min),
     rigidity: Number(row.rigidity),
     zThrustN: row.z_thrust_n === null ? null : Number(row.z_thrust_n),
+    spindleKind: row.spindle_kind,
+    ratedRpm: row.rated_rpm === null ? null : Number(row.rated_rpm),
     stickoutMm: row.stickout_mm === null ? null : Number(row.stickout_mm),
     units: row.units,
     updatedAt: new Date(row.updated_at).toISOString(),
@@ -54,7 +63,7 @@ export function rowToMachine(row: Pick<MachineRow, "id" | "name" | "preset" | "r
 }
 
 /** The engine's machine input (and the usual stick-out) from a stored machine. */
-export function machineToInput(m: Pick<Machine, "rpmMin" | "rpmMax" | "powerKw" | "maxFeedMmMin" | "rigidity" | "zThrustN" | "stickoutMm">): BenchMachineInput {
+export function machineToInput(m: Pick<Machine, "rpmMin" | "rpmMax" | "powerKw" | "maxFeedMmMin" | "rigidity" | "zThrustN" | "spindleKind" | "ratedRpm" | "stickoutMm">): BenchMachineInput {
   return {
     minRpm: m.rpmMin,
     maxRpm: m.rpmMax,
@@ -62,6 +71,8 @@ export function machineToInput(m: Pick<Machine, "rpmMin" | "rpmMax" | "powerKw" 
     maxFeedMmMin: m.maxFeedMmMin,
     rigidity: m.rigidity,
     zThrustN: m.zThrustN ?? undefined,
+    spindleKind: m.spindleKind,
+    ratedRpm: m.ratedRpm ?? undefined,
     stickoutMm: m.stickoutMm,
   };
 }

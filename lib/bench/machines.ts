@@ -31,6 +31,8 @@ const toRow = (f: MachineFields) => ({
   max_feed_mm_min: f.maxFeedMmMin,
   rigidity: rigidityFactor(f.rigidity),
   z_thrust_n: f.zThrustN ?? null,
+  spindle_kind: f.spindleKind,
+  rated_rpm: f.ratedRpm ?? null,
   stickout_mm: f.stickoutMm ?? null,
   units: f.units,
 });

@@ -1,6 +1,8 @@
 import { sheetOperationSchema, type SheetOperation } from "@/content-schema/sheet-front-matter";
 import { operationKindLabels } from "@/content-schema/sheet-kinds";
 
+import type { EntryKind } from "@/lib/machining";
+
 import type { ContextOperation } from "./adapt-context";
 
 const FIELDS = ["kind", "label", "n", "vf", "ap", "ae", "plungeFeed", "entry", "rampAngleDeg", "notes"] as const;
@@ -28,6 +30,9 @@ export function readStoredCautions(frontMatter: unknown): { kind: string; text: 
   return list.flatMap((c) => (typeof c?.text === "string" ? [{ kind: String(c.kind ?? "general"), text: c.text as string }] : []));
 }
 
+// A sheet's entry method in the engine's words; pre-drilled and side entries have no entry move to judge.
+const ENGINE_ENTRY: Partial<Record<SheetOperation["entry"], EntryKind>> = { plunge: "plunge", ramp: "ramp", helical: "helix" };
+
 /** A sheet operation in metric machining units; ae as a share of D becomes mm. */
 export function toContextOperation(op: SheetOperation, index: number, diameterMm: number): ContextOperation {
   return {
@@ -39,5 +44,7 @@ export function toContextOperation(op: SheetOperation, index: number, diameterMm
     axialDepthMm: op.ap.value,
     radialDepthMm: op.ae.unit === "%D" ? (op.ae.value / 100) * diameterMm : op.ae.value,
     plungeFeedMmMin: op.plungeFeed?.value ?? null,
+    entry: ENGINE_ENTRY[op.entry] ?? null,
+    rampAngleDeg: op.rampAngleDeg ?? null,
   };
 }

@@ -31,7 +31,7 @@ export async function readaptSetup({ vendorId, userId, setup, oldContext }: { ve
   const match = context.operations.find((op) => op.kind === old?.kind && op.label === old?.label) ?? (context.operations[setup.operationIndex]?.kind === old?.kind ? context.operations[setup.operationIndex] : undefined);
   if (!match) return { context, operationIndex: null, result: null, error: "This operation is no longer on the current version.", changes: [] };
   try {
-    const result = adaptOperation(context, match.index, machineToInput(machine), setup.overrides);
+    const result = adaptOperation(context, match.index, machineToInput(machine), setup.overrides, { entryCapability: setup.entryCapability, units: setup.units });
     return { context, operationIndex: match.index, result, error: null, changes: diffAdapted(setup.result, result) };
   } catch (error) {
     if (!isMachiningInputError(error)) throw error;

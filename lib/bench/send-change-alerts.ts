@@ -5,7 +5,7 @@ import { db } from "@/lib/db/knex";
 import type { SheetEvent } from "@/lib/events/sheet-events";
 import { appUrl } from "@/lib/http/app-url";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
-import { isMachiningInputError, type UnitSystem } from "@/lib/machining";
+import { type EntryCapability, isMachiningInputError, type UnitSystem } from "@/lib/machining";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 
 import { adaptOperation, type AdaptContext } from "./adapt-context";
@@ -16,7 +16,7 @@ import { loadAdaptContext } from "./load-adapt-context";
 import { machineToInput, rowToMachine } from "./machine-rows";
 import { readStoredOperations } from "./read-front-matter";
 
-type SetupRow = { id: string; user_id: string; email: string; name: string; operation_index: number; overrides: Record<string, number>; units: UnitSystem } & Parameters<typeof rowToMachine>[0] & { machine_name: string };
+type SetupRow = { id: string; user_id: string; email: string; name: string; operation_index: number; overrides: Record<string, number>; units: UnitSystem; entry_capability: EntryCapability } & Parameters<typeof rowToMachine>[0] & { machine_name: string };
 
 /** The new version's operation for an old one: same kind and label, else the same position. */
 function matchOperation(oldCtx: AdaptContext, newCtx: AdaptContext, index: number): number | null {
@@ -32,9 +32,9 @@ function reAdapt(oldCtx: AdaptContext, newCtx: AdaptContext, row: SetupRow, setu
   if (index === null) return { ...base, changes: [], error: "this operation is no longer on the sheet." };
   try {
     const machine = machineToInput(rowToMachine({ ...row, id: row.id, name: row.machine_name }));
-    const next = adaptOperation(newCtx, index, machine, row.overrides);
+    const next = adaptOperation(newCtx, index, machine, row.overrides, { entryCapability: row.entry_capability, units: row.units });
     // Both versions on the machine as it is now, so the diff shows the sheet's change and nothing else.
-    const before = adaptOperation(oldCtx, row.operation_index, machine, row.overrides);
+    const before = adaptOperation(oldCtx, row.operation_index, machine, row.overrides, { entryCapability: row.entry_capability, units: row.units });
     return { ...base, changes: diffAdapted(before, next), error: null };
   } catch (error) {
     if (!isMachiningInputError(error)) throw error;
@@ -74,7 +74,7 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
     .where({ "st.vendor_id": vendorId, "st.sheet_version_id": supersededVersionId })
     .andWhere((q) => q.whereNull("mp.change_alerts").orWhere("mp.change_alerts", true))
     .orderBy(["st.user_id", "st.created_at"])
-    .select("st.id", "st.user_id", "u.email", "st.name", "st.operation_index", "st.overrides", "st.units", "m.name as machine_name", "m.preset", "m.rpm_min", "m.rpm_max", "m.power_kw", "m.max_feed_mm_min", "m.rigidity", "m.z_thrust_n", "m.stickout_mm", "m.updated_at");
+    .select("st.id", "st.user_id", "u.email", "st.name", "st.operation_index", "st.overrides", "st.units", "st.entry_capability", "m.name as machine_name", "m.preset", "m.rpm_min", "m.rpm_max", "m.power_kw", "m.max_feed_mm_min", "m.rigidity", "m.z_thrust_n", "m.spindle_kind", "m.rated_rpm", "m.stickout_mm", "m.updated_at");
   if (!rows.length) return 0;
   const [before, after] = await Promise.all([frontMatterOf(vendorId, supersededVersionId), frontMatterOf(vendorId, versionId)]);
   const sheetDiff = diffParameters(before.frontMatter, after.frontMatter, newCtx.cutter);

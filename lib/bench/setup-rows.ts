@@ -1,5 +1,5 @@
 import type { SetupOverrides } from "@/content-schema/setup-fields";
-import type { AdaptResult, UnitSystem } from "@/lib/machining";
+import type { AdaptResult, EntryCapability, UnitSystem } from "@/lib/machining";
 
 export type Setup = {
   id: string;
@@ -10,12 +10,14 @@ export type Setup = {
   overrides: SetupOverrides;
   result: AdaptResult;
   units: UnitSystem;
+  /** What the customer's CAM can do to enter the material; the setup was computed with it. */
+  entryCapability: EntryCapability;
   createdAt: string;
 };
 
-export const SETUP_COLUMNS = ["st.id", "st.name", "st.machine_id", "st.sheet_version_id", "st.operation_index", "st.overrides", "st.result", "st.units", "st.created_at"];
+export const SETUP_COLUMNS = ["st.id", "st.name", "st.machine_id", "st.sheet_version_id", "st.operation_index", "st.overrides", "st.result", "st.units", "st.entry_capability", "st.created_at"];
 
-type Row = { id: string; name: string; machine_id: string; sheet_version_id: string; operation_index: number; overrides: SetupOverrides; result: AdaptResult; units: UnitSystem; created_at: Date };
+type Row = { id: string; name: string; machine_id: string; sheet_version_id: string; operation_index: number; overrides: SetupOverrides; result: AdaptResult; units: UnitSystem; entry_capability: EntryCapability; created_at: Date };
 
 export const rowToSetup = (row: Row): Setup => ({
   id: row.id,
@@ -26,5 +28,6 @@ export const rowToSetup = (row: Row): Setup => ({
   overrides: row.overrides ?? {},
   result: row.result,
   units: row.units,
+  entryCapability: row.entry_capability,
   createdAt: new Date(row.created_at).toISOString(),
 });

@@ -54,7 +54,7 @@ export function setupSheetData({ context, operationIndex, result, setupName, mac
     machineName,
     versionLabel: `${context.sheetSlug}, version ${context.versionNumber}`,
     cutterLine: `${context.cutter.sku}: ${context.cutter.name}, D ${formatQuantity(d, "length", units)}, ${context.cutter.flutes} flute${context.cutter.flutes === 1 ? "" : "s"}`,
-    materialLine: `${context.material.name}, vc ${formatQuantity(context.material.vcMinMpm, "cuttingSpeed", units)} to ${formatQuantity(context.material.vcMaxMpm, "cuttingSpeed", units)}, minimum fz ${formatQuantity(context.material.minChipLoadMm, "chipLoad", units)}`,
+    materialLine: `${context.material.name}, vc ${formatQuantity(context.material.vcMinMpm, "cuttingSpeed", units)} to ${formatQuantity(context.material.vcMaxMpm, "cuttingSpeed", units)}, minimum fz ${formatQuantity(context.material.minChipLoadMm, "chipLoad", units)}, chip load band ${context.material.chipLoadMinPctD}–${context.material.chipLoadMaxPctD} % of D`,
     operationLabel: op?.label ?? "Operation",
     rows,
     steps: result.steps.map((s) => `${title(s.rule)}: ${formatQuantity(s.before, s.quantity, units)} → ${formatQuantity(s.after, s.quantity, units)}. ${s.why}`),

@@ -53,6 +53,10 @@ export const materialToRow = (m: MaterialFields) => ({
   vc_max_mpm: m.vcMaxMpm,
   min_chip_load_mm: m.minChipLoadMm,
   kc_nmm2: m.kcNmm2,
+  chip_load_min_pct_d: m.chipLoadMinPctD,
+  chip_load_max_pct_d: m.chipLoadMaxPctD,
+  kc11_nmm2: m.kc11Nmm2 ?? null,
+  mc: m.mc ?? null,
   synonyms: m.synonyms,
   cautions: JSON.stringify(m.cautions),
   notes: m.notes,
@@ -67,6 +71,10 @@ export const rowToMaterial = (r: Row): Material => ({
   vcMaxMpm: r.vc_max_mpm as number,
   minChipLoadMm: r.min_chip_load_mm as number,
   kcNmm2: r.kc_nmm2 as number,
+  chipLoadMinPctD: r.chip_load_min_pct_d as number,
+  chipLoadMaxPctD: r.chip_load_max_pct_d as number,
+  kc11Nmm2: opt(r.kc11_nmm2),
+  mc: opt(r.mc),
   synonyms: (r.synonyms as string[]) ?? [],
   cautions: (r.cautions as Material["cautions"]) ?? [],
   notes: r.notes as string,
@@ -83,6 +91,8 @@ export const machineClassToRow = (k: MachineClassFields) => ({
   max_feed_mm_min: k.maxFeedMmMin,
   rigidity: k.rigidity,
   z_thrust_n: k.zThrustN ?? null,
+  spindle_kind: k.spindleKind,
+  rated_rpm: k.ratedRpm ?? null,
 });
 
 export const rowToMachineClass = (r: Row): MachineClass => ({
@@ -96,5 +106,7 @@ export const rowToMachineClass = (r: Row): MachineClass => ({
   maxFeedMmMin: r.max_feed_mm_min as number,
   rigidity: r.rigidity as number,
   zThrustN: opt(r.z_thrust_n),
+  spindleKind: r.spindle_kind as MachineClass["spindleKind"],
+  ratedRpm: opt(r.rated_rpm),
   updatedAt: r.updated_at as Date,
 });

@@ -6,7 +6,7 @@ import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 import { adaptRecipe, isMachiningInputError, RULES, WARNING_CODES } from "@/lib/machining";
 
-import { type CutterRow, type MachineRow, type MaterialRow, readOperations, toAdaptInput } from "./card-input";
+import { type CutterRow, type MachineClassRow, type MachineRow, type MaterialRow, readOperations, toAdaptInput } from "./card-input";
 import { READABLE_STATES } from "./resolve-ticket-links";
 
 type Options = { vendorId: string; sheetVersionId: string; machineId: string; customerId: string };
@@ -23,8 +23,8 @@ export async function buildCard({ vendorId, sheetVersionId, machineId, customerI
   if (!machine) throw new InvalidInput("Please correct the marked fields.", { cardMachineId: ["Choose one of the customer's machines."] });
   const [cutter, material, machineClass] = await Promise.all([
     db("cutters").where({ id: version.cutter_id, vendor_id: vendorId }).first<CutterRow>(),
-    db("materials").where({ id: version.material_id, vendor_id: vendorId }).first<MaterialRow & { cautions: unknown }>(),
-    db("machine_classes").where({ id: version.machine_class_id, vendor_id: vendorId }).first<{ rigidity: number }>(),
+    db("materials").where({ id: version.material_id, vendor_id: vendorId }).first<MaterialRow>(),
+    db("machine_classes").where({ id: version.machine_class_id, vendor_id: vendorId }).first<MachineClassRow>(),
   ]);
 
   const operations = readOperations(version.front_matter).map((op): TicketCardOperation => {
@@ -32,7 +32,7 @@ export async function buildCard({ vendorId, sheetVersionId, machineId, customerI
     const reference = { rpm: op.n.value, feedMmMin: op.vf.value, axialDepthMm: op.ap.value, radialDepthMm: op.ae.unit === "%D" ? (op.ae.value / 100) * d : op.ae.value };
     const base = { label: op.label ?? operationKindLabels[op.kind], kind: op.kind, reference };
     try {
-      const result = adaptRecipe(toAdaptInput(op, cutter, material, machineClass.rigidity, machine));
+      const result = adaptRecipe(toAdaptInput(op, cutter, material, machineClass, machine));
       const { warnings, steps, ...adapted } = result;
       return {
         ...base,

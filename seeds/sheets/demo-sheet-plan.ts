@@ -2,7 +2,9 @@
 // and the later versions with their change notes.
 import type { OperationKind } from "@/content-schema/sheet-kinds";
 
-export type PlannedVersion = { chipLoadScale: number; depthScale: number; changeNote: string };
+/** `first-edition`: numbers as first published (seeds/sheets/first-edition-numbers.ts); `current`: derived by today's rules. */
+export type Derivation = "first-edition" | "current";
+export type PlannedVersion = { chipLoadScale: number; depthScale: number; changeNote: string; derivation?: Derivation };
 export type PlannedSheet = { cutter: string; material: string; machineClass: string; kinds: OperationKind[]; versions: PlannedVersion[]; withdrawnReason?: string; openDraft?: "draft" | "in_review" };
 
 const FIRST: PlannedVersion = { chipLoadScale: 1, depthScale: 1, changeNote: "First version, from test cuts on the reference machine." };
@@ -10,6 +12,33 @@ const FEED_DOWN: PlannedVersion = { chipLoadScale: 0.9, depthScale: 1, changeNot
 // The plastics sheet of the Field-results melting story (seeds/seed-field.ts): v1 rubbed and welded, v2 cuts.
 const CHIP_UP: PlannedVersion = { chipLoadScale: 1.25, depthScale: 1, changeNote: "Chip load raised 25 %: at the old feed the cutter rubbed and the chips welded in the slot." };
 const DEPTH_DOWN: PlannedVersion = { chipLoadScale: 0.9, depthScale: 0.8, changeNote: "Axial depth reduced 20 %: customers reported deflection at long stick-out." };
+
+// Every sheet published before the cutting-data model was revised gets a revised version with the same
+// scales: its plunge came from a third of the feed, its slot ran at the pocketing chip, its light passes
+// rubbed under the material's floor. The customers who saved setups from it get the change alert.
+export const REVISION_NOTE =
+  "Numbers re-derived with the revised cutting-data rules: plunge feed from the Z thrust of the reference machine instead of a third of the feed, " +
+  "full-width slots at 75 % of the pocketing chip load, light passes fed up for chip thinning so the chip stays inside the material's band, feeds within 80 % of the machine's maximum.";
+const revised = (last: PlannedVersion): PlannedVersion => ({ chipLoadScale: last.chipLoadScale, depthScale: last.depthScale, changeNote: REVISION_NOTE, derivation: "current" });
+
+/** The versions to seed: the published history, then (unless withdrawn) the revision; an open draft after that. */
+export function seededVersions(sheet: PlannedSheet): PlannedVersion[] {
+  const history = sheet.versions.map((v) => ({ ...v, derivation: v.derivation ?? ("first-edition" as const) }));
+  const published = sheet.withdrawnReason ? history : [...history, revised(history.at(-1)!)];
+  if (!sheet.openDraft) return published;
+  return [...published, { ...published.at(-1)!, chipLoadScale: 0.85, changeNote: "Feed lowered again after more field results.", derivation: "current" }];
+}
+
+/** Number of published versions (the last one current, or withdrawn). */
+export const publishedCount = (sheet: PlannedSheet) => seededVersions(sheet).length - (sheet.openDraft ? 1 : 0);
+
+export const demoSheetSlug = (sheet: Pick<PlannedSheet, "cutter" | "material" | "machineClass">) => `${sheet.material}-${sheet.cutter.toLowerCase()}-${sheet.machineClass}`;
+
+/** The plastics sheet of the melting story (seeds/seed-bench.ts, seeds/seed-field.ts): v1 rubbed and welded, v2 cut. */
+export const meltingStorySlug = (vendor: string) => {
+  const sheet = DEMO_SHEET_PLAN[vendor]?.find((s) => s.versions.includes(CHIP_UP));
+  return sheet ? demoSheetSlug(sheet) : undefined;
+};
 
 const KINDS: Record<string, OperationKind[]> = {
   single: ["slotting", "profile"],

@@ -25,7 +25,7 @@ export async function createCatalogue(vendorId: string, userId: string | null = 
   const material = await saveMaterial({
     vendorId,
     userId,
-    fields: materialFieldsSchema.parse({ slug: "cast-acrylic", name: "Cast acrylic", materialGroup: "plastics", vcMinMpm: 150, vcMaxMpm: 300, minChipLoadMm: 0.05, kcNmm2: 120, cautions: "melting: Keep the feed up." }),
+    fields: materialFieldsSchema.parse({ slug: "cast-acrylic", name: "Cast acrylic", materialGroup: "plastics", vcMinMpm: 150, vcMaxMpm: 300, minChipLoadMm: 0.05, kcNmm2: 120, chipLoadMaxPctD: 3.5, cautions: "melting: Keep the feed up." }),
   });
   const machineClass = await saveMachineClass({
     vendorId,

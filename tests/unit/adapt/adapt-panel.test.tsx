@@ -69,7 +69,7 @@ describe("adapt panel", () => {
   });
 
   it("starts with the customer's first registered machine and switches units", () => {
-    const machine: Machine = { id: "m1", name: "Garage router", preset: null, rpmMin: 8000, rpmMax: 20000, powerKw: 1.5, maxFeedMmMin: 5000, rigidity: 0.55, zThrustN: null, stickoutMm: 20, units: "metric", updatedAt: "" };
+    const machine: Machine = { id: "m1", name: "Garage router", preset: null, rpmMin: 8000, rpmMax: 20000, powerKw: 1.5, maxFeedMmMin: 5000, rigidity: 0.55, zThrustN: null, spindleKind: "constant-torque", ratedRpm: null, stickoutMm: 20, units: "metric", updatedAt: "" };
     render(<AdaptPanel context={acrylicContext} vendorSlug="northbeck" machines={[machine]} />);
     expect(adapted("n")).toContain(formatQuantity(18000, "spindleSpeed", "metric"));
     fireEvent.click(screen.getByRole("button", { name: "in, hp" }));
@@ -87,5 +87,45 @@ describe("adapt panel", () => {
     fireEvent.change(screen.getByLabelText("Start from a kind of machine"), { target: { value: "light-trim-router" } });
     expect(adapted("n")).toContain(formatQuantity(18000, "spindleSpeed", "metric"));
     expect(screen.getByRole("link", { name: "Sign in" }).getAttribute("href")).toBe("/sign-in");
+  });
+
+  it("with straight plunges only in a material that melts, cuts at most D/4 per pass and says why in the steps (common practice)", () => {
+    const { container } = render(<AdaptPanel context={acrylicContext} vendorSlug="northbeck" />);
+    typeWeakMachine();
+    const rampAp = Number.parseFloat(adapted("ap"));
+    fireEvent.click(screen.getByLabelText(/Straight plunge only/));
+    // D/4 = 3.175/4 = 0.79375 mm, then scaled for the lighter frame: never deeper than with a ramp.
+    expect(Number.parseFloat(adapted("ap"))).toBeLessThanOrEqual(0.79375);
+    expect(Number.parseFloat(adapted("ap"))).toBeLessThanOrEqual(rampAp);
+    expect(container.querySelector('[data-rule="entry-capability"]')?.textContent).toMatch(/quarter of the cutter diameter/);
+    expect(container.querySelector('[data-entry-warning="plunge-only-shallow-passes"]')).not.toBeNull();
+    fireEvent.click(screen.getByLabelText(/Ramp in/));
+    expect(container.querySelector('[data-rule="entry-capability"]')).toBeNull();
+  });
+
+  it("caps the plunge by the Z thrust, recommends a ramp, and requires one where even the cutter's centre needs more thrust", () => {
+    const { container } = render(<AdaptPanel context={acrylicContext} vendorSlug="northbeck" />);
+    typeWeakMachine();
+    fireEvent.click(screen.getByLabelText(/Straight plunge only/));
+    // Centre term B·kc·D² = 0.012·100·3.175² ≈ 12.1 N (calibrated thrust model): 20 N leaves a little for the lip.
+    type(/Z thrust/, "20");
+    const advice = () => container.querySelector("[data-entry-advice]");
+    expect(advice()?.querySelector('[data-entry-warning="plunge-thrust-limited"]')).not.toBeNull();
+    expect(advice()?.textContent).toMatch(/ramp or helix recommended/i);
+    expect(container.querySelector('[data-rule="plunge-feed"]')).not.toBeNull();
+    type(/Z thrust/, "10");
+    expect(advice()?.querySelector('[data-entry-warning="straight-plunge-refused"]')).not.toBeNull();
+    expect(advice()?.textContent).toMatch(/ramp or helix required/i);
+  });
+
+  it("shows a ball nose's vc at its effective diameter De = 2·√(ap·(D − ap)) (geometry of a sphere)", () => {
+    const ball = { ...acrylicContext, cutter: { ...acrylicContext.cutter, diameterMm: 6, cornerForm: "ball" as const, cornerRadiusMm: 3 }, operations: [{ ...acrylicContext.operations[1], axialDepthMm: 0.2, radialDepthMm: 0.3 }] };
+    // A machine as stiff as the reference keeps the sheet's ap, so De is the sheet's.
+    const stiff: Machine = { id: "m2", name: "Stiff router", preset: null, rpmMin: 8000, rpmMax: 18000, powerKw: 2.2, maxFeedMmMin: 10000, rigidity: 0.8, zThrustN: 600, spindleKind: "constant-power", ratedRpm: null, stickoutMm: 20, units: "metric", updatedAt: "" };
+    render(<AdaptPanel context={ball} vendorSlug="northbeck" machines={[stiff]} />);
+    const de = 2 * Math.sqrt(0.2 * 5.8);
+    expect(screen.getByText("vc (cutting speed at De)")).toBeTruthy();
+    expect(adapted("de")).toContain(formatQuantity(de, "length", "metric"));
+    expect(adapted("vc")).toContain(formatQuantity((Math.PI * de * 18000) / 1000, "cuttingSpeed", "metric"));
   });
 });

@@ -4,7 +4,7 @@ import { computeAdaptation, readAdhocMachine } from "@/lib/bench/compute-adaptat
 
 import { acrylicContext } from "../adapt/adapt-context-fixture";
 
-const weak = { rpmMin: "10000", rpmMax: "16000", power: "0.8", maxFeed: "3000", rigidity: "light" as const, zThrust: "", stickout: "" };
+const weak = { rpmMin: "10000", rpmMax: "16000", power: "0.8", maxFeed: "3000", rigidity: "light" as const, zThrust: "", stickout: "", spindleKind: "constant-torque" as const, ratedRpm: "" };
 const none = { ae: "", ap: "", stickout: "" };
 
 describe("computeAdaptation", () => {

@@ -4,7 +4,7 @@ import { chipLoad, cuttingSpeed } from "@/lib/machining";
 import { validateSheetSource } from "@/lib/mdx/validate-sheet-source";
 import { newSheetSource } from "@/lib/sheets/new-sheet-source";
 import { DEMO_CUTTERS, DEMO_MACHINE_CLASSES, DEMO_MATERIALS } from "@/seeds/sheets/demo-catalogue";
-import { DEMO_SHEET_PLAN } from "@/seeds/sheets/demo-sheet-plan";
+import { DEMO_SHEET_PLAN, REVISION_NOTE, seededVersions } from "@/seeds/sheets/demo-sheet-plan";
 import { demoSheetSource } from "@/seeds/sheets/demo-sheet-source";
 
 const all = Object.entries(DEMO_SHEET_PLAN).flatMap(([vendor, plan]) =>
@@ -26,10 +26,20 @@ describe("demo sheets (invented demo data)", () => {
     expect(all.filter((s) => s.sheet.withdrawnReason)).toHaveLength(1);
   });
 
+  it("every published sheet ends with the version re-derived by the revised rules, with its change note; the withdrawn one keeps its history", () => {
+    for (const { sheet } of all) {
+      const versions = seededVersions(sheet);
+      const published = sheet.openDraft ? versions.slice(0, -1) : versions;
+      if (sheet.withdrawnReason) expect(published.every((v) => v.derivation === "first-edition")).toBe(true);
+      else expect(published.at(-1)).toMatchObject({ derivation: "current", changeNote: REVISION_NOTE });
+      expect(published.slice(0, sheet.versions.length).every((v) => v.derivation === "first-edition")).toBe(true);
+    }
+  });
+
   it("every version's source validates, and its numbers follow vc = π·D·n/1000 inside the material window", () => {
     for (const { cutter, material, machineClass, sheet } of all) {
       expect(cutter && material && machineClass, `${sheet.cutter} × ${sheet.material}`).toBeTruthy();
-      for (const version of sheet.versions) {
+      for (const version of seededVersions(sheet)) {
         const result = validateSheetSource(demoSheetSource({ cutter, material, machineClass, sheet, version }));
         expect(result.issues, `${sheet.cutter} × ${sheet.material}`).toEqual([]);
         const op = result.frontMatter!.operations[0];
@@ -50,5 +60,21 @@ describe("demo sheets (invented demo data)", () => {
       machineClass: { slug: machineClass.slug, name: machineClass.name, rpmMin: 8000, rpmMax: 24000, maxFeedMmMin: 5000, rigidity: 0.4 },
     });
     expect(validateSheetSource(source).ok).toBe(true);
+  });
+
+  it("the template gives a 1/32 in two-flute cutter in acrylic a chip under the band's ceiling, not one that snaps it", () => {
+    const source = newSheetSource({
+      cutter: { sku: "T-132", name: "1/32 in two-flute", diameterMm: 0.79375, flutes: 2, cornerForm: "square", fluteLengthMm: 2.4 },
+      material: { slug: "cast-acrylic", name: "Cast acrylic", materialGroup: "plastics", vcMinMpm: 150, vcMaxMpm: 300, minChipLoadMm: 0.05, chipLoadMinPctD: 1.2, chipLoadMaxPctD: 3, kcNmm2: 120 },
+      machineClass: { slug: "light-router", name: "Light router", rpmMin: 8000, rpmMax: 24000, maxFeedMmMin: 5000, rigidity: 0.4, zThrustN: 150 },
+    });
+    const result = validateSheetSource(source);
+    expect(result.ok).toBe(true);
+    for (const op of result.frontMatter!.operations) {
+      const fz = chipLoad({ feedMmMin: op.vf.value, rpm: op.n.value, flutes: 2 });
+      // Ceiling 3 % of D = 0.0238 mm per tooth; the first template gave 0.055 mm.
+      expect(fz).toBeLessThanOrEqual(0.03 * 0.79375 * (op.kind === "slotting" ? 1 : 2.5));
+      expect(fz).toBeLessThan(0.055 / 2);
+    }
   });
 });

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 
+import { EntryAdvice } from "@/components/adapt/entry-advice";
 import { resultRows, ResultTable } from "@/components/adapt/result-table";
 import { StepsTrail } from "@/components/adapt/steps-trail";
 import { WarningList } from "@/components/adapt/warning-list";
@@ -10,6 +11,7 @@ import { OutcomeForm } from "@/components/bench/outcome-form";
 import { OutcomeHistory } from "@/components/bench/outcome-history";
 import { ReadaptCompare } from "@/components/bench/readapt-compare";
 import { PageHeader } from "@/components/ui/page-header";
+import { entryCapabilityLabels } from "@/content-schema/setup-fields";
 import { feedSpeedCurve } from "@/lib/bench/feed-speed-curve";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 import { machineToInput } from "@/lib/bench/machine-rows";
@@ -68,7 +70,9 @@ export default async function SetupPage({ params }: { params: Promise<{ vendor: 
       <div className="grid gap-8 lg:grid-cols-2">
         <section aria-labelledby="numbers">
           <h2 id="numbers" className="text-lg font-semibold">Numbers on this machine</h2>
+          <p className="mt-1 text-sm text-stone-700" data-entry-capability={setup.entryCapability}>Entry moves your CAM makes: {entryCapabilityLabels[setup.entryCapability]}.</p>
           {op ? <ResultTable rows={resultRows(op, context.cutter, r)} units={units} headings={[`Sheet v${context.versionNumber}`, setup.machineName]} /> : null}
+          <EntryAdvice result={r} entryCapability={setup.entryCapability} units={units} />
           {curve ? <FeedSpeedChart curve={curve} units={units} /> : null}
         </section>
         <section aria-labelledby="steps">

@@ -22,6 +22,6 @@ export default async function DetailPage({ params }: Props) {
   const item = await loadMachineClass(vendorSlug, slug);
   if (!item) notFound();
   const { id, updatedAt: _updatedAt, ...fields } = item;
-  const editForm = can(member?.role, "catalogue.edit") ? <MachineClassForm vendorSlug={vendorSlug} action={saveMachineClassAction} id={id} defaultValues={{ ...fields, zThrustN: fields.zThrustN ?? "" }} /> : null;
+  const editForm = can(member?.role, "catalogue.edit") ? <MachineClassForm vendorSlug={vendorSlug} action={saveMachineClassAction} id={id} defaultValues={{ ...fields, zThrustN: fields.zThrustN ?? "", ratedRpm: fields.ratedRpm ?? "" }} /> : null;
   return <CatalogueItemView title={item.name} detail={<DetailCard item={item} />} editForm={editForm} />;
 }
