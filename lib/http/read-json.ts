@@ -10,8 +10,8 @@ const JSON_TYPE = /^application\/(?:[\w.+-]+\+)?json\s*(?:;|$)/i;
  * The body's bytes, read from the stream with a cap: past `maxBytes` the read stops and answers 413, whether or
  * not the client declared a Content-Length.
  */
-export async function readBodyBytes(request: Request, maxBytes: number): Promise<Uint8Array> {
-  const tooLarge = () => new TooLarge(`The body is larger than ${maxBytes} bytes.`);
+export async function readBodyBytes(request: Request, maxBytes: number, tooLargeMessage = `The body is larger than ${maxBytes} bytes.`): Promise<Uint8Array<ArrayBuffer>> {
+  const tooLarge = () => new TooLarge(tooLargeMessage);
   if (Number(request.headers.get("content-length") ?? "0") > maxBytes) throw tooLarge();
   if (!request.body) return new Uint8Array();
   const reader = request.body.getReader();
@@ -27,7 +27,13 @@ export async function readBodyBytes(request: Request, maxBytes: number): Promise
     }
     chunks.push(value);
   }
-  return Buffer.concat(chunks);
+  const bytes = new Uint8Array(total);
+  let offset = 0;
+  for (const chunk of chunks) {
+    bytes.set(chunk, offset);
+    offset += chunk.byteLength;
+  }
+  return bytes;
 }
 
 /** Read a JSON body: application/json only (415), a size cap (413) and a clear 400 for malformed JSON. */
