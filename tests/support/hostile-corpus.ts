@@ -11,3 +11,12 @@ export function hostileCorpus(kind: string): Array<[string, string]> {
     .sort()
     .map((name) => [name, readFileSync(path.join(dir, name), "utf8")]);
 }
+
+/** The same files as bytes, for input paths that read raw request bodies. */
+export function hostileCorpusBytes(kind: string): Array<[string, Uint8Array]> {
+  const dir = path.join(ROOT, kind);
+  return readdirSync(dir)
+    .filter((name) => !name.startsWith("."))
+    .sort()
+    .map((name) => [name, new Uint8Array(readFileSync(path.join(dir, name)))]);
+}
