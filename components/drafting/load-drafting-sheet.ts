@@ -2,10 +2,12 @@ import "server-only";
 
 import { cache } from "react";
 
+import { safeDecode } from "@/lib/http/safe-decode";
 import { getDraftingSheet } from "@/lib/sheets/get-drafting-sheet";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
 export const loadDraftingSheet = cache(async (vendorSlug: string, slug: string) => {
   const vendor = await getVendorBySlug(vendorSlug);
-  return vendor ? getDraftingSheet({ vendorId: vendor.id, slug: decodeURIComponent(slug) }) : null;
+  const decoded = safeDecode(slug);
+  return vendor && decoded !== null ? getDraftingSheet({ vendorId: vendor.id, slug: decoded }) : null;
 });

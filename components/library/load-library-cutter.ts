@@ -2,12 +2,15 @@ import "server-only";
 
 import { cache } from "react";
 
+import { requirePageAccess } from "@/lib/auth/page-access";
 import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { safeDecode } from "@/lib/http/safe-decode";
 
 export const loadLibraryCutter = cache(async (vendorSlug: string, sku: string) => {
-  const vendor = await getVendorBySlug(vendorSlug);
-  if (!vendor) return null;
-  const cutter = await getCutterBySku({ vendorId: vendor.id, sku: decodeURIComponent(sku) });
+  // The access check runs here, so the page checks it as well as the layout (a page segment can render alone).
+  const { vendor } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/cutters/${sku}`);
+  const decoded = safeDecode(sku);
+  if (decoded === null) return null;
+  const cutter = await getCutterBySku({ vendorId: vendor.id, sku: decoded });
   return cutter ? { vendor, cutter } : null;
 });

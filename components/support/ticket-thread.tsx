@@ -25,7 +25,7 @@ export function AttachmentList({ vendorSlug, attachments }: { vendorSlug: string
 }
 
 /** The thread as a list of messages; internal notes are marked (and only ever given to staff). */
-export function TicketThreadView({ vendorSlug, messages, attachments }: { vendorSlug: string; messages: TicketMessage[]; attachments: TicketAttachment[] }) {
+export function TicketThreadView({ vendorSlug, messages, attachments }: { vendorSlug: string; messages: Omit<TicketMessage, "authorId">[]; attachments: TicketAttachment[] }) {
   if (!messages.length) return <p className="text-sm text-stone-600">No replies yet.</p>;
   return (
     <ol className="space-y-4" aria-label="Thread">

@@ -3,7 +3,7 @@ export type FieldErrors = Record<string, string[]>;
 
 export class DomainError extends Error {
   constructor(
-    readonly code: "not_found" | "forbidden" | "unauthenticated" | "conflict" | "invalid_input" | "rate_limited" | "too_large",
+    readonly code: "not_found" | "forbidden" | "unauthenticated" | "conflict" | "invalid_input" | "rate_limited" | "too_large" | "unsupported_media_type",
     message: string,
     readonly fieldErrors?: FieldErrors,
   ) {
@@ -54,6 +54,12 @@ export class TooLarge extends DomainError {
   }
 }
 
+export class UnsupportedMediaType extends DomainError {
+  constructor(message = "Send the body as application/json.") {
+    super("unsupported_media_type", message);
+  }
+}
+
 export const HTTP_STATUS: Record<DomainError["code"], number> = {
   not_found: 404,
   forbidden: 403,
@@ -62,4 +68,5 @@ export const HTTP_STATUS: Record<DomainError["code"], number> = {
   invalid_input: 400,
   rate_limited: 429,
   too_large: 413,
+  unsupported_media_type: 415,
 };

@@ -12,6 +12,7 @@ import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 
 import { clientIp } from "./client-ip";
 import { errorResponse } from "./error-response";
+import { requireSameOrigin } from "./same-origin";
 
 type Params = Record<string, string | string[] | undefined>;
 type Ctx<P extends Params> = { params: Promise<P> };
@@ -32,7 +33,8 @@ function scaled(rate: { limit: number; windowSeconds: number }) {
 
 /**
  * Wraps every /api/v1/vendors/{vendor}/... handler: rate limit, session or bearer token,
- * vendor and membership through the one access helper, typed errors to JSON.
+ * vendor and membership through the one access helper, the app's own Origin for changes made with a session
+ * cookie, typed errors to JSON.
  */
 export function withVendor<P extends Params & { vendor: string }>(handler: VendorHandler<P>, options: WithVendorOptions = {}) {
   return async (request: NextRequest, ctx: Ctx<P>): Promise<Response> => {
@@ -53,6 +55,8 @@ export function withVendor<P extends Params & { vendor: string }>(handler: Vendo
         user = await getSessionUser();
       }
       const access = await resolveVendorAccess(params.vendor, user, options.permission);
+      // After access, so another vendor's route stays a plain 404.
+      if (!bearer) requireSameOrigin(request);
       return await handler(request, { access, params });
     } catch (error) {
       return errorResponse(error);

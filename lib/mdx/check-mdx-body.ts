@@ -35,6 +35,11 @@ export function checkMdxBody(body: string, bodyLine: number, operationKinds?: re
     return [syntaxIssue(error, lineOffset)];
   }
   // Only the remark stage matters here: the tree is checked, never compiled or run.
-  remarkSheetGuard({ mode: "collect", lineOffset, operationKinds })(tree, file);
+  try {
+    remarkSheetGuard({ mode: "collect", lineOffset, operationKinds })(tree, file);
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    return [{ line: bodyLine, message: "The sheet nests quotes, lists or components too deeply to check. Flatten it.", severity: "error" }];
+  }
   return file.data.sheetIssues ?? [];
 }

@@ -42,7 +42,14 @@ export function checkFrontMatter(yamlText: string, firstLine: number): FrontMatt
   ];
   if (doc.errors.length) return { issues: yamlIssues };
 
-  const parsed = sheetFrontMatterSchema.safeParse(doc.toJS({ maxAliasCount: 50 }) ?? {}, { reportInput: true });
+  let value: unknown;
+  try {
+    value = doc.toJS({ maxAliasCount: 50 });
+  } catch {
+    // yaml refuses to expand aliases past the count (an "alias bomb"): a problem with the sheet, not a crash.
+    return { issues: [...yamlIssues, { line: firstLine, message: "YAML: too many aliases (*name) to expand. Write the values out.", severity: "error" }] };
+  }
+  const parsed = sheetFrontMatterSchema.safeParse(value ?? {}, { reportInput: true });
   if (parsed.success) return { frontMatter: parsed.data, issues: yamlIssues };
 
   const schemaIssues = parsed.error.issues.flatMap((issue): SheetIssue[] => {

@@ -3,10 +3,10 @@ import "server-only";
 import { db } from "@/lib/db/knex";
 
 import { selectTickets, toTicketDetail } from "./ticket-select";
-import type { TicketDetail } from "./ticket-types";
+import { type CustomerTicket, toCustomerTicket } from "./customer-view";
 
-/** A customer's own tickets in one vendor, newest activity first. */
-export async function listCustomerTickets({ vendorId, customerId, limit = 200 }: { vendorId: string; customerId: string; limit?: number }): Promise<TicketDetail[]> {
+/** A customer's own tickets in one vendor, newest activity first, in the customer's view. */
+export async function listCustomerTickets({ vendorId, customerId, limit = 200 }: { vendorId: string; customerId: string; limit?: number }): Promise<CustomerTicket[]> {
   const rows = await selectTickets(db, vendorId).where("t.customer_id", customerId).orderBy("t.last_activity_at", "desc").limit(limit);
-  return rows.map(toTicketDetail);
+  return rows.map((row: Record<string, unknown>) => toCustomerTicket(toTicketDetail(row)));
 }

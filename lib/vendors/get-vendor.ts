@@ -3,6 +3,7 @@ import "server-only";
 import { cache } from "react";
 
 import { db } from "@/lib/db/knex";
+import { safeDecode } from "@/lib/http/safe-decode";
 
 import { vendorSlugSchema } from "./reserved-slugs";
 import { type Vendor, vendorSettingsSchema } from "./vendor-schema";
@@ -22,7 +23,7 @@ export function toVendor(row: VendorRow): Vendor {
 
 /** The vendor named by a route segment, or null (reserved or malformed slugs never reach the database). */
 export const getVendorBySlug = cache(async (slug: string): Promise<Vendor | null> => {
-  const parsed = vendorSlugSchema.safeParse(decodeURIComponent(slug));
+  const parsed = vendorSlugSchema.safeParse(safeDecode(slug));
   if (!parsed.success) return null;
   const row = await db("vendors")
     .select("id", "slug", "name", "accent_color", "settings", db.raw("logo is not null as has_logo"))

@@ -1,13 +1,10 @@
 import { SignInForms } from "@/components/auth/sign-in-forms";
+import { appUrl } from "@/lib/http/app-url";
+import { safeCallbackPath, safeVendorParam } from "@/lib/http/safe-callback";
 
 export const metadata = { title: "Sign in" };
 
 type Search = Promise<{ callbackUrl?: string; error?: string; vendor?: string }>;
-
-// Only same-site paths are followed after sign-in.
-function safeCallback(url: string | undefined): string {
-  return url && url.startsWith("/") && !url.startsWith("//") ? url : "/";
-}
 
 export default async function SignInPage({ searchParams }: { searchParams: Search }) {
   const { callbackUrl, error, vendor } = await searchParams;
@@ -19,7 +16,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
           ⚠ {error === "CredentialsSignin" ? "E-mail or password is not right." : error === "AccessDenied" ? "There is no account for that e-mail, or too many links were asked for. Try again later." : "Sign-in failed. Try again."}
         </p>
       ) : null}
-      <SignInForms callbackUrl={safeCallback(callbackUrl)} vendor={vendor} />
+      <SignInForms callbackUrl={safeCallbackPath(callbackUrl, appUrl("/"))} vendor={safeVendorParam(vendor)} />
     </div>
   );
 }

@@ -4,7 +4,8 @@ import { appUrl } from "@/lib/http/app-url";
 import { replyAddress } from "@/lib/inbound-mail/reply-address";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 
-import { loadTicketMailContext, REPLY_ABOVE, supportTeamEmails } from "./ticket-mail-context";
+import { renderReplyMail } from "./reply-mail";
+import { loadTicketMailContext, supportTeamEmails } from "./ticket-mail-context";
 
 type Options = { vendorId: string; ticketId: string; authorName: string; body: string; hasCard: boolean };
 
@@ -13,11 +14,11 @@ export async function notifyCustomerOfReply({ vendorId, ticketId, authorName, bo
   const ctx = await loadTicketMailContext(vendorId, ticketId);
   if (!ctx) return;
   const link = appUrl(`/${ctx.vendorSlug}/support/tickets/${ticketId}`);
-  const card = hasCard ? "\nThe reply includes a sheet adapted to your machine: open the ticket to see it.\n" : "";
+  const note = hasCard ? "The reply includes a sheet adapted to your machine: open the ticket to see it." : undefined;
   await enqueueMail({
     to: ctx.customer.email,
     subject: `[${ctx.vendorName} #${ctx.number}] ${ctx.subject}`,
-    text: `${REPLY_ABOVE}\n\n${authorName} replied to your ticket #${ctx.number}:\n\n${body}\n${card}\nSee the whole thread: ${link}\n`,
+    ...renderReplyMail({ intro: `${authorName} replied to your ticket #${ctx.number}:`, body, note, linkLabel: "See the whole thread", link }),
     replyTo: replyAddress(ticketId),
   });
 }
@@ -32,7 +33,7 @@ export async function notifyStaffOfCustomerReply({ vendorId, ticketId, authorNam
     await enqueueMail({
       to,
       subject: `[${ctx.vendorName} #${ctx.number}] Customer reply: ${ctx.subject}`,
-      text: `${REPLY_ABOVE}\n\n${authorName} wrote on ticket #${ctx.number}:\n\n${body}\n\nOpen it on the Desk: ${link}\n`,
+      ...renderReplyMail({ intro: `${authorName} wrote on ticket #${ctx.number}:`, body, linkLabel: "Open it on the Desk", link }),
       replyTo: replyAddress(ticketId),
     });
   }

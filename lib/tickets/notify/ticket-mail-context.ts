@@ -12,7 +12,7 @@ export type TicketMailContext = {
   assignee: { email: string; name: string } | null;
 };
 
-export const REPLY_ABOVE = "-- Reply above this line to add to the ticket --";
+export { REPLY_ABOVE } from "./reply-mail";
 
 export async function loadTicketMailContext(vendorId: string, ticketId: string): Promise<TicketMailContext | null> {
   const row = await db("tickets as t")

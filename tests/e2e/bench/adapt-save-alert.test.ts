@@ -10,6 +10,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { waitForMail } from "../support/maildev";
+import { BASE_URL } from "../support/env";
 import { signInWithPassword } from "../support/sign-in";
 
 const CUSTOMER = "maker@example.test";
@@ -31,7 +32,8 @@ async function pickSheet() {
 }
 
 async function api(page: Page, method: "PUT" | "POST", url: string, data?: unknown) {
-  const res = await page.request.fetch(url, { method, data, headers: { "content-type": "application/json" } });
+  // A change made with the session cookie must name the app's origin, as the browser does for its own fetches.
+  const res = await page.request.fetch(url, { method, data, headers: { "content-type": "application/json", origin: new URL(BASE_URL).origin } });
   expect(res.status(), `${method} ${url}: ${await res.text()}`).toBeLessThan(300);
   return res.json();
 }

@@ -3,6 +3,7 @@ import { afterEach, describe, expect, it } from "vitest";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { firstLink, waitForMail } from "../support/maildev";
 import { signInWithPassword } from "../support/sign-in";
+import { BASE_URL } from "../support/env";
 
 describe("sign-in", () => {
   let session: Session | undefined;
@@ -52,5 +53,17 @@ describe("sign-in", () => {
     await page.waitForURL(/\/northbeck\/desk/);
     await expect(page.getByRole("banner").textContent()).resolves.toContain("Dev Kapoor");
     await screenshot(page, "magic-link-signed-in");
+  });
+
+  it("stays on the site after signing in, whatever the callback says", async () => {
+    session = await openBrowser();
+    const { page } = session;
+    for (const callbackUrl of ["/\\evil.example", "/\t/evil.example", "https://evil.example/"]) {
+      await signInWithPassword(page, "maker@example.test", callbackUrl);
+      const landed = new URL(page.url());
+      expect(landed.origin).toBe(new URL(BASE_URL).origin);
+      expect(landed.pathname).toBe("/");
+      await page.context().clearCookies();
+    }
   });
 });

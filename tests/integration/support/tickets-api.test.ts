@@ -4,11 +4,13 @@ import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 
 import { GET as getOne } from "@/app/api/v1/vendors/[vendor]/tickets/[ticket]/route";
-import { POST as create } from "@/app/api/v1/vendors/[vendor]/tickets/route";
+import { GET as list, POST as create } from "@/app/api/v1/vendors/[vendor]/tickets/route";
 import { hashToken, newTokenSecret } from "@/lib/auth/api-tokens";
 import { db } from "@/lib/db/knex";
 import { addStaffMessage } from "@/lib/tickets/add-message";
+import { updateTicket } from "@/lib/tickets/update-ticket";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
+import { loadVendor } from "@/tests/factories/tickets";
 
 async function tokenFor(vendorId: string, userId: string) {
   const token = newTokenSecret();
@@ -27,6 +29,28 @@ const get = (slug: string, token: string, id: string) =>
   });
 
 describe("tickets API", () => {
+  it("gives a customer the customer's view only: no tags, priority, assignee or staff e-mail", async () => {
+    const { vendor, customer, support } = await createVendorWithStaff();
+    await db("users").where({ id: support.user.id }).update({ name: "" });
+    const token = await tokenFor(vendor.id, customer.user.id);
+    const { ticket } = await (await post(vendor.slug, token, { subject: "Burn marks", body: "On every pass.", idempotencyKey: randomUUID() })).json();
+    const staffVendor = await loadVendor(vendor.id);
+    await updateTicket({ vendor: staffVendor, actorUserId: support.user.id, input: { ticketId: ticket.id, assigneeId: support.user.id, priority: "high", tags: ["difficult-customer"] } });
+    await addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Lower the spindle speed.", visibility: "public" });
+
+    const one = await (await get(vendor.slug, token, ticket.id)).json();
+    const many = await (await list(new NextRequest(`http://localhost/api/v1/vendors/${vendor.slug}/tickets`, { headers: { authorization: `Bearer ${token}` } }), { params: Promise.resolve({ vendor: vendor.slug }) })).json();
+    for (const text of [JSON.stringify(one), JSON.stringify(many)]) {
+      expect(text).not.toContain("difficult-customer");
+      expect(text).not.toContain(support.user.email);
+      expect(text).not.toContain(support.user.id);
+      expect(text).not.toMatch(/"(tags|priority|assigneeId|assigneeName|overdue|customerEmail)"/);
+    }
+    expect(one.ticket.subject).toBe("Burn marks");
+    expect(one.messages.map((m: { authorName: string; body: string }) => [m.authorName, m.body])).toEqual([["Support team", "Lower the spindle speed."]]);
+    expect(many.tickets.map((t: { id: string }) => t.id)).toEqual([ticket.id]);
+  });
+
   it("creates once per idempotency key (201 then 200) and reads the customer's view without notes", async () => {
     const { vendor, customer, support } = await createVendorWithStaff();
     const token = await tokenFor(vendor.id, customer.user.id);

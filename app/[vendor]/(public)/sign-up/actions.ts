@@ -18,8 +18,9 @@ const vendorField = z.object({ vendor: z.string().max(60) });
 
 export async function signUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const values = { name: String(form.get("name") ?? ""), email: String(form.get("email") ?? "") };
-  const vendor = await getVendorBySlug(vendorField.parse({ vendor: form.get("vendor") }).vendor);
-  if (!vendor) return { ok: false, message: "Not found." };
+  const field = vendorField.safeParse({ vendor: form.get("vendor") });
+  const vendor = field.success ? await getVendorBySlug(field.data.vendor) : null;
+  if (!vendor) return { ok: false, message: "This sign-up form names no vendor we know. Open the sign-up page from the vendor's Library.", values };
   const parsed = signUpSchema.safeParse(Object.fromEntries(form.entries()));
   if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error), values };
   try {

@@ -60,16 +60,22 @@ export const handoffAction = vendorAction({ permission: "desk.use", schema: prob
   return { ok: true, message: "Handed to engineering as a problem report on that sheet version." };
 });
 
-const saveViewSchema = z.object({ name: z.string().trim().min(1, "Name the view.").max(60), filters: z.string().max(2000) });
+const filtersJson = z
+  .string()
+  .max(2000, "The filters are too long.")
+  .transform((text, ctx) => {
+    try {
+      return JSON.parse(text || "{}") as unknown;
+    } catch {
+      ctx.addIssue({ code: "custom", message: "The filters could not be read. Choose them again and save." });
+      return z.NEVER;
+    }
+  })
+  .pipe(queueFiltersSchema);
+const saveViewSchema = z.object({ name: z.string().trim().min(1, "Name the view.").max(60), filters: filtersJson });
 
 export const saveViewAction = vendorAction({ permission: "desk.use", schema: saveViewSchema }, async (input, { vendor, user }) => {
-  let raw: unknown = {};
-  try {
-    raw = JSON.parse(input.filters);
-  } catch {
-    raw = {};
-  }
-  const filters = queueFiltersSchema.parse(raw);
+  const { filters } = input;
   await saveDeskView({ vendorId: vendor.id, userId: user.id, name: input.name, filters });
   return { ok: true, message: `View “${input.name}” saved.` };
 });

@@ -103,7 +103,9 @@ export const previewDraftAction = vendorAction(
     try {
       preview = await renderDraftPreview({ check, source: input.source, cutter, units: input.units });
     } catch (error) {
-      renderError = error instanceof Error ? error.message : "The preview could not be rendered.";
+      // The checks above report every problem with its line; anything left is ours, so it is logged, not shown.
+      console.error("[preview]", error);
+      renderError = "The preview could not be rendered. Fix the problems listed above, or save and try again.";
     }
     return { ok: true, data: { issues: check.issues, valid: check.ok, preview, renderError } };
   },

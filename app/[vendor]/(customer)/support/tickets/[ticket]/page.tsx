@@ -7,6 +7,7 @@ import { formatDateTime, StatusBadge } from "@/components/support/ticket-badges"
 import { AttachmentList, TicketThreadView } from "@/components/support/ticket-thread";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
+import { toCustomerThread } from "@/lib/tickets/customer-view";
 import { getTicketThread } from "@/lib/tickets/get-ticket-thread";
 
 export const metadata = { title: "Ticket" };
@@ -14,7 +15,7 @@ export const metadata = { title: "Ticket" };
 export default async function CustomerTicketPage({ params }: { params: Promise<{ vendor: string; ticket: string }> }) {
   const { vendor: slug, ticket: ticketId } = await params;
   const { vendor, user } = await requirePageAccess(slug, "support.use", `/${slug}/support`);
-  const { ticket, messages, attachments, links } = await getTicketThread({ vendorId: vendor.id, ticketId, viewer: { kind: "customer", userId: user!.id } });
+  const { ticket, messages, attachments, links } = toCustomerThread(await getTicketThread({ vendorId: vendor.id, ticketId, viewer: { kind: "customer", userId: user!.id } }));
   return (
     <>
       <PageHeader title={ticket.subject} lead={<>Ticket <span className="num">#{ticket.number}</span> · opened {formatDateTime(ticket.createdAt)}</>} actions={<StatusBadge status={ticket.status} />} />

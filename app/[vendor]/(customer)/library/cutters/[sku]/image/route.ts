@@ -1,12 +1,14 @@
 import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
 import { getImage } from "@/lib/catalogue/image-store";
 import { NotFound } from "@/lib/errors/domain-errors";
+import { safeDecode } from "@/lib/http/safe-decode";
 import { withVendor } from "@/lib/http/with-vendor";
 
 // GET /{vendor}/library/cutters/{sku}/image: the cutter's picture, for whoever may read the Library.
 export const GET = withVendor<{ vendor: string; sku: string }>(
   async (_request, { access, params }) => {
-    const cutter = await getCutterBySku({ vendorId: access.vendor.id, sku: decodeURIComponent(params.sku) });
+    const sku = safeDecode(params.sku);
+    const cutter = sku === null ? null : await getCutterBySku({ vendorId: access.vendor.id, sku });
     const image = cutter?.imageKey ? await getImage({ vendorId: access.vendor.id, key: cutter.imageKey }) : null;
     if (!image) throw new NotFound("No image.");
     return new Response(new Uint8Array(image.bytes), {

@@ -3,18 +3,20 @@ import { NextResponse } from "next/server";
 import { MAX_IMAGE_BYTES } from "@/lib/catalogue/check-image";
 import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
 import { setCutterImage } from "@/lib/catalogue/set-cutter-image";
-import { NotFound, TooLarge } from "@/lib/errors/domain-errors";
+import { NotFound } from "@/lib/errors/domain-errors";
+import { readBodyBytes } from "@/lib/http/read-json";
+import { safeDecode } from "@/lib/http/safe-decode";
 import { withVendor } from "@/lib/http/with-vendor";
 import { apiActor } from "@/lib/sheets/api-actor";
 
 // POST /{vendor}/drafting/cutters/{sku}/image: the raw image bytes as the body; checked by content.
 export const POST = withVendor<{ vendor: string; sku: string }>(
   async (request, { access, params }) => {
-    if (Number(request.headers.get("content-length") ?? 0) > MAX_IMAGE_BYTES) throw new TooLarge("The image is larger than 5 MB.");
     const actor = apiActor(access);
-    const cutter = await getCutterBySku({ vendorId: actor.vendorId, sku: decodeURIComponent(params.sku) });
+    const sku = safeDecode(params.sku);
+    const cutter = sku === null ? null : await getCutterBySku({ vendorId: actor.vendorId, sku });
     if (!cutter) throw new NotFound("No such cutter.");
-    const bytes = new Uint8Array(await request.arrayBuffer());
+    const bytes = await readBodyBytes(request, MAX_IMAGE_BYTES, "The image is larger than 5 MB.");
     const saved = await setCutterImage({ ...actor, cutterId: cutter.id, bytes });
     return NextResponse.json({ contentType: saved.contentType }, { status: 201 });
   },

@@ -1,11 +1,13 @@
 import { cutterQr } from "@/lib/bench/cutter-links";
 import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
 import { NotFound } from "@/lib/errors/domain-errors";
+import { safeDecode } from "@/lib/http/safe-decode";
 import { withVendor } from "@/lib/http/with-vendor";
 
 // GET /api/v1/vendors/{vendor}/cutters/{sku}/qr?format=png|svg[&download=1]: QR code of the cutter's short link.
 export const GET = withVendor<{ vendor: string; sku: string }>(async (request, { access, params }) => {
-  const cutter = await getCutterBySku({ vendorId: access.vendor.id, sku: decodeURIComponent(params.sku) });
+  const sku = safeDecode(params.sku);
+  const cutter = sku === null ? null : await getCutterBySku({ vendorId: access.vendor.id, sku });
   if (!cutter) throw new NotFound();
   const query = new URL(request.url).searchParams;
   const format = query.get("format") === "svg" ? "svg" : "png";

@@ -3,8 +3,9 @@ import { outcomeFormSchema } from "@/content-schema/outcome-form";
 import { requireMember } from "@/lib/auth/access";
 import { getSetup } from "@/lib/bench/list-setups";
 import { recordOutcome } from "@/lib/bench/outcomes";
-import { NotFound, TooLarge } from "@/lib/errors/domain-errors";
+import { NotFound } from "@/lib/errors/domain-errors";
 import { parseInput } from "@/lib/errors/zod-field-errors";
+import { readForm } from "@/lib/http/read-form";
 import { readJson } from "@/lib/http/read-json";
 import { withVendor } from "@/lib/http/with-vendor";
 import { MAX_UPLOAD_BYTES } from "@/lib/storage";
@@ -18,8 +19,8 @@ export const POST = withVendor<{ vendor: string; id: string }>(async (request, {
   if (!(await getSetup(owner))) throw new NotFound();
   let outcome;
   if ((request.headers.get("content-type") ?? "").startsWith("multipart/form-data")) {
-    if (Number(request.headers.get("content-length") ?? "0") > MAX_UPLOAD_BYTES + 64 * 1024) throw new TooLarge("A photo may be at most 10 MB.");
-    const { vendor: _v, setupId: _s, photo, ...fields } = parseInput(outcomeFormSchema, { ...formValues(await request.formData()), vendor: access.vendor.slug, setupId: params.id });
+    const form = await readForm(request, MAX_UPLOAD_BYTES + 64 * 1024, "A photo may be at most 10 MB.");
+    const { vendor: _v, setupId: _s, photo, ...fields } = parseInput(outcomeFormSchema, { ...formValues(form), vendor: access.vendor.slug, setupId: params.id });
     outcome = await recordOutcome({ ...owner, fields, photo: photo ? Buffer.from(await photo.arrayBuffer()) : null });
   } else {
     outcome = await recordOutcome({ ...owner, fields: parseInput(outcomeFieldsSchema, await readJson(request)) });
