@@ -33,7 +33,9 @@ export async function authorizePassword(raw: unknown, headers: Record<string, st
     if (error instanceof RateLimited) throw new Error("rate_limited");
     throw error;
   }
-  const user = await db("users").where({ email }).first<{ id: string; email: string; name: string; password_hash: string | null } | undefined>();
+  const user = await db("users")
+    .where({ email })
+    .first<{ id: string; email: string; name: string; password_hash: string | null; email_verified: Date | null } | undefined>();
   // Verify even for unknown accounts so timing does not reveal which e-mails exist.
   const ok = await verifyPassword(user?.password_hash ?? "$argon2id$v=19$m=19456,t=2,p=1$c2FsdHNhbHQ$ZmFrZWZha2VmYWtlZmFrZQ", password);
   if (!user || !ok) {
@@ -42,6 +44,8 @@ export async function authorizePassword(raw: unknown, headers: Record<string, st
     return null;
   }
   await resetRateLimit(accountKey);
+  // Told only to someone who knows the password: the address must be proven before the password works.
+  if (!user.email_verified) throw new Error("email_unverified");
   return { id: user.id, email: user.email, name: user.name };
 }
 
