@@ -4,7 +4,7 @@ import { appUrl } from "@/lib/http/app-url";
 import { replyAddress } from "@/lib/inbound-mail/reply-address";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 
-import { loadTicketMailContext, REPLY_ABOVE, supportTeamEmails } from "./ticket-mail-context";
+import { loadTicketMailContext, REPLY_ABOVE, supportTeam } from "./ticket-mail-context";
 
 type Options = { vendorId: string; ticketId: string; authorName: string; body: string; hasCard: boolean };
 
@@ -18,7 +18,7 @@ export async function notifyCustomerOfReply({ vendorId, ticketId, authorName, bo
     to: ctx.customer.email,
     subject: `[${ctx.vendorName} #${ctx.number}] ${ctx.subject}`,
     text: `${REPLY_ABOVE}\n\n${authorName} replied to your ticket #${ctx.number}:\n\n${body}\n${card}\nSee the whole thread: ${link}\n`,
-    replyTo: replyAddress(ticketId),
+    replyTo: replyAddress({ ticketId, userId: ctx.customer.id }),
   });
 }
 
@@ -27,13 +27,13 @@ export async function notifyStaffOfCustomerReply({ vendorId, ticketId, authorNam
   const ctx = await loadTicketMailContext(vendorId, ticketId);
   if (!ctx) return;
   const link = appUrl(`/${ctx.vendorSlug}/desk/tickets/${ticketId}`);
-  const recipients = ctx.assignee ? [ctx.assignee.email] : await supportTeamEmails(vendorId);
-  for (const to of recipients) {
+  const recipients = ctx.assignee ? [ctx.assignee] : await supportTeam(vendorId);
+  for (const person of recipients) {
     await enqueueMail({
-      to,
+      to: person.email,
       subject: `[${ctx.vendorName} #${ctx.number}] Customer reply: ${ctx.subject}`,
       text: `${REPLY_ABOVE}\n\n${authorName} wrote on ticket #${ctx.number}:\n\n${body}\n\nOpen it on the Desk: ${link}\n`,
-      replyTo: replyAddress(ticketId),
+      replyTo: replyAddress({ ticketId, userId: person.id }),
     });
   }
 }
