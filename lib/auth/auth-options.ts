@@ -103,11 +103,18 @@ export const authOptions: NextAuthOptions = {
       return Boolean(await db("users").where({ email }).first("id"));
     },
     async jwt({ token, user }) {
-      if (user) token.sub = user.id;
+      if (user) {
+        token.sub = user.id;
+        const row = await db("users").where({ id: user.id }).first<{ session_epoch: number } | undefined>("session_epoch");
+        token.epoch = row?.session_epoch ?? 0;
+      }
       return token;
     },
     async session({ session, token }) {
-      if (session.user && token.sub) session.user.id = token.sub;
+      if (session.user && token.sub) {
+        session.user.id = token.sub;
+        session.user.epoch = token.epoch ?? 0;
+      }
       return session;
     },
   },

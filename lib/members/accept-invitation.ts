@@ -6,6 +6,7 @@ import type { Role } from "@/lib/auth/roles";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput, NotFound, Unauthenticated } from "@/lib/errors/domain-errors";
+import { endSessions } from "@/lib/users/end-sessions";
 
 type Invitation = { id: string; vendor_id: string; email: string; role: Role };
 
@@ -50,6 +51,7 @@ export async function acceptInvitation(opts: { vendorId: string; token: string; 
       const account = { name: opts.name, password_hash: passwordHash, email_verified: trx.fn.now(), updated_at: trx.fn.now() };
       if (existing) {
         await trx("users").where({ id: existing.id }).update(account);
+        await endSessions(existing.id, trx);
         userId = existing.id;
       } else {
         [{ id: userId }] = await trx("users").insert({ email: invitation.email, ...account }).returning<{ id: string }[]>("id");
