@@ -93,7 +93,7 @@ export const authOptions: NextAuthOptions = {
       // Count link requests (not the click that uses one). Per address and account, with a looser per-account
       // ceiling against mail floods, so one stranger cannot use up the owner's links.
       if (emailInfo?.verificationRequest) {
-        const ip = clientIp(Object.fromEntries((await headers()).entries()));
+        const ip = clientIp(await headers());
         await consumeRateLimit({ key: `magic-link:${email}:${ip}`, limit: 5, windowSeconds: 15 * 60 })
           .then(() => consumeRateLimit({ key: `magic-link:${email}`, limit: 20, windowSeconds: 60 * 60 }))
           .catch(() => {

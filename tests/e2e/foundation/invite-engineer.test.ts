@@ -33,7 +33,7 @@ describe("admin invites an engineer", () => {
     await invitee.page.getByLabel("Choose a password").fill("a-long-new-password");
     await invitee.page.getByRole("button", { name: "Accept invitation" }).click();
     // Accepting signs the invitee in with the password just chosen.
-    await invitee.page.waitForURL((url) => url.pathname === "/northbeck", { timeout: 30_000 });
+    await invitee.page.waitForURL((url) => url.pathname === "/northbeck/library", { timeout: 30_000 });
     await screenshot(invitee.page, "invitation-accepted");
 
     await invitee.page.goto("/northbeck/drafting");

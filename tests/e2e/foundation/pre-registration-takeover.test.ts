@@ -66,7 +66,7 @@ describe("an account registered in advance with an invitee's address", () => {
     await invitee.page.getByLabel("Choose a password").fill("the-real-hire-password");
     await invitee.page.getByRole("button", { name: "Accept invitation" }).click();
     // Accepting signs the person in.
-    await invitee.page.waitForURL((url) => url.pathname === "/northbeck", { timeout: 30_000 });
+    await invitee.page.waitForURL((url) => url.pathname === "/northbeck/library", { timeout: 30_000 });
     await invitee.page.goto("/northbeck/drafting");
     expect(new URL(invitee.page.url()).pathname).toBe("/northbeck/drafting");
     await expect(invitee.page.getByRole("banner").textContent()).resolves.toContain("Real New Hire");
@@ -107,7 +107,7 @@ describe("an account registered in advance with an invitee's address", () => {
     await person.page.getByRole("button", { name: "Sign in", exact: true }).click();
     await person.page.waitForURL((url) => url.pathname === new URL(link).pathname, { timeout: 30_000 });
     await person.page.getByRole("button", { name: "Accept invitation" }).click();
-    await person.page.waitForURL((url) => url.pathname === "/northbeck", { timeout: 30_000 });
+    await person.page.waitForURL((url) => url.pathname === "/northbeck/library", { timeout: 30_000 });
     await person.page.goto("/northbeck/drafting");
     expect(new URL(person.page.url()).pathname).toBe("/northbeck/drafting");
   });
