@@ -4,6 +4,7 @@ import Link from "next/link";
 import { signIn } from "next-auth/react";
 import { type FormEvent, useState } from "react";
 
+import { resendVerificationAction } from "@/app/(site)/sign-in/actions";
 import { Field } from "@/components/forms/field";
 import { credentialsSchema, emailSchema } from "@/lib/auth/auth-schemas";
 import type { FieldErrors } from "@/lib/errors/domain-errors";
@@ -12,6 +13,8 @@ export function SignInForms({ callbackUrl, vendor }: { callbackUrl: string; vend
   const [errors, setErrors] = useState<FieldErrors>({});
   const [linkErrors, setLinkErrors] = useState<string[] | undefined>();
   const [busy, setBusy] = useState(false);
+  const [unconfirmed, setUnconfirmed] = useState<string | null>(null);
+  const [resent, setResent] = useState<{ ok: boolean; message?: string } | null>(null);
 
   async function onPassword(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -28,8 +31,19 @@ export function SignInForms({ callbackUrl, vendor }: { callbackUrl: string; vend
     const result = await signIn("password", { ...parsed.data, redirect: false, callbackUrl });
     setBusy(false);
     // Stay on this origin: next-auth's absolute URL uses NEXTAUTH_URL, which may name another host alias.
-    if (result?.ok && !result.error) window.location.assign(callbackUrl);
-    else setErrors({ _form: [result?.error === "rate_limited" ? "Too many attempts. Wait 15 minutes and try again." : "E-mail or password is not right."] });
+    if (result?.ok && !result.error) return window.location.assign(callbackUrl);
+    if (result?.error === "email_unverified") {
+      setUnconfirmed(parsed.data.email);
+      setResent(null);
+      return setErrors({ _form: [`Confirm your e-mail first: open the link we sent to ${parsed.data.email}, then sign in.`] });
+    }
+    setUnconfirmed(null);
+    setErrors({ _form: [result?.error === "rate_limited" ? "Too many attempts. Wait 15 minutes and try again." : "E-mail or password is not right."] });
+  }
+
+  async function onResend() {
+    if (!unconfirmed) return;
+    setResent(await resendVerificationAction({ email: unconfirmed, vendor }));
   }
 
   async function onMagicLink(event: FormEvent<HTMLFormElement>) {
@@ -47,6 +61,14 @@ export function SignInForms({ callbackUrl, vendor }: { callbackUrl: string; vend
         <Field label="E-mail" name="email" type="email" autoComplete="email" errors={errors.email} id="pw-email" />
         <Field label="Password" name="password" type="password" autoComplete="current-password" errors={errors.password} id="pw-password" />
         {errors._form ? <p role="alert" className="text-sm text-red-800">⚠ {errors._form.join(" ")}</p> : null}
+        {unconfirmed ? (
+          <div className="space-y-2">
+            <button type="button" onClick={onResend} className="min-h-11 rounded border border-stone-400 bg-white px-4 py-2 text-sm font-medium">
+              Send the link again
+            </button>
+            {resent ? <p role={resent.ok ? "status" : "alert"} className="text-sm">{resent.ok ? "✓" : "⚠"} {resent.message}</p> : null}
+          </div>
+        ) : null}
         <button type="submit" disabled={busy} className="min-h-11 w-full rounded bg-stone-900 px-4 py-2 font-medium text-white disabled:opacity-60">
           {busy ? "Signing in…" : "Sign in"}
         </button>

@@ -19,10 +19,14 @@ export function newTokenSecret(): string {
 /** The user behind a personal access token, only if the token belongs to this vendor. */
 export async function userForApiToken(token: string, vendorId: string): Promise<SessionUser | null> {
   if (!token.startsWith(TOKEN_PREFIX) || token.length > 100) return null;
+  // The token works only during the membership it was made in: removing the member ends it, and rejoining
+  // (a new membership row, created after the token) does not bring it back.
   const row = await db("api_tokens as t")
     .join("users as u", "u.id", "t.user_id")
+    .join("members as m", (j) => j.on("m.vendor_id", "t.vendor_id").andOn("m.user_id", "t.user_id"))
     .where({ "t.token_hash": hashToken(token), "t.vendor_id": vendorId })
     .whereNull("t.revoked_at")
+    .whereRaw("m.created_at <= t.created_at")
     .first<{ token_id: string; id: string; email: string; name: string; is_operator: boolean } | undefined>(
       "t.id as token_id", "u.id", "u.email", "u.name", "u.is_operator",
     );

@@ -1,6 +1,7 @@
 import "server-only";
 
 import type { NextAuthOptions } from "next-auth";
+import { headers } from "next/headers";
 import CredentialsProvider from "next-auth/providers/credentials";
 import EmailProvider from "next-auth/providers/email";
 
@@ -8,40 +9,55 @@ import { db } from "@/lib/db/knex";
 import { RateLimited } from "@/lib/errors/domain-errors";
 import { clientIp } from "@/lib/http/client-ip";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
-import { assertUnderRateLimit, consumeRateLimit, resetRateLimit } from "@/lib/rate-limit/consume-rate-limit";
+import { consumeRateLimit, resetRateLimit } from "@/lib/rate-limit/consume-rate-limit";
+import { refundRateLimit } from "@/lib/rate-limit/refund-rate-limit";
 
 import { credentialsSchema } from "./auth-schemas";
 import { knexAdapter } from "./knex-adapter";
 import { verifyPassword } from "./passwords";
 
+const WINDOW = 15 * 60;
 export const SIGN_IN_LIMITS = {
-  perAccount: { limit: 8, windowSeconds: 15 * 60 },
-  perIp: { limit: 40, windowSeconds: 15 * 60 },
+  /** Attempts on one account from one address: a guesser is stopped without locking the owner out elsewhere. */
+  perAccountAndIp: { limit: 8, windowSeconds: WINDOW },
+  /** Attempts from one address over all accounts. */
+  perIp: { limit: 40, windowSeconds: WINDOW },
+  /** Past this many attempts on one account from all addresses, password attempts on it are only slowed. */
+  perAccountCeiling: { limit: 30, windowSeconds: WINDOW },
+  slowed: { limit: 1, windowSeconds: 10 },
 };
+
+async function countAttempt(keys: { ip: string; accountIp: string; account: string; slow: string }) {
+  try {
+    // Counted before the password is checked, in one atomic statement each: a burst of parallel guesses cannot
+    // all pass a check made before any of them was counted.
+    await consumeRateLimit({ key: keys.ip, ...SIGN_IN_LIMITS.perIp });
+    await consumeRateLimit({ key: keys.accountIp, ...SIGN_IN_LIMITS.perAccountAndIp });
+    const accountHits = await consumeRateLimit({ key: keys.account, limit: Number.MAX_SAFE_INTEGER, windowSeconds: WINDOW });
+    if (accountHits > SIGN_IN_LIMITS.perAccountCeiling.limit) await consumeRateLimit({ key: keys.slow, ...SIGN_IN_LIMITS.slowed });
+  } catch (error) {
+    if (error instanceof RateLimited) throw new Error("rate_limited");
+    throw error;
+  }
+}
 
 export async function authorizePassword(raw: unknown, headers: Record<string, string | string[] | undefined>) {
   const parsed = credentialsSchema.safeParse(raw);
   if (!parsed.success) return null;
   const { email, password } = parsed.data;
-  const accountKey = `sign-in:account:${email}`;
-  const ipKey = `sign-in:ip:${clientIp(headers)}`;
-  try {
-    // Only failures count, so a busy office behind one address is not locked out by its own sign-ins.
-    await assertUnderRateLimit({ key: ipKey, ...SIGN_IN_LIMITS.perIp });
-    await assertUnderRateLimit({ key: accountKey, ...SIGN_IN_LIMITS.perAccount });
-  } catch (error) {
-    if (error instanceof RateLimited) throw new Error("rate_limited");
-    throw error;
-  }
-  const user = await db("users").where({ email }).first<{ id: string; email: string; name: string; password_hash: string | null } | undefined>();
+  const ip = clientIp(headers);
+  const keys = { ip: `sign-in:ip:${ip}`, accountIp: `sign-in:account-ip:${email}:${ip}`, account: `sign-in:account:${email}`, slow: `sign-in:slow:${email}` };
+  await countAttempt(keys);
+  const user = await db("users")
+    .where({ email })
+    .first<{ id: string; email: string; name: string; password_hash: string | null; email_verified: Date | null } | undefined>();
   // Verify even for unknown accounts so timing does not reveal which e-mails exist.
   const ok = await verifyPassword(user?.password_hash ?? "$argon2id$v=19$m=19456,t=2,p=1$c2FsdHNhbHQ$ZmFrZWZha2VmYWtlZmFrZQ", password);
-  if (!user || !ok) {
-    await consumeRateLimit({ key: ipKey, limit: Number.MAX_SAFE_INTEGER, windowSeconds: SIGN_IN_LIMITS.perIp.windowSeconds });
-    await consumeRateLimit({ key: accountKey, limit: Number.MAX_SAFE_INTEGER, windowSeconds: SIGN_IN_LIMITS.perAccount.windowSeconds });
-    return null;
-  }
-  await resetRateLimit(accountKey);
+  if (!user || !ok) return null;
+  // A success gives its attempt back, so a busy office behind one address is not limited by its own sign-ins.
+  await Promise.all([refundRateLimit(keys.ip), refundRateLimit(keys.account), resetRateLimit(keys.accountIp)]);
+  // Told only to someone who knows the password: the address must be proven before the password works.
+  if (!user.email_verified) throw new Error("email_unverified");
   return { id: user.id, email: user.email, name: user.name };
 }
 
@@ -70,21 +86,35 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
-    async signIn({ user, account }) {
+    async signIn({ user, account, email: emailInfo }) {
       if (account?.provider !== "email") return true;
       // Magic links only for existing accounts: new people sign up or accept an invitation.
       const email = (user.email ?? "").toLowerCase();
-      await consumeRateLimit({ key: `magic-link:${email}`, limit: 5, windowSeconds: 15 * 60 }).catch(() => {
-        throw new Error("rate_limited");
-      });
+      // Count link requests (not the click that uses one). Per address and account, with a looser per-account
+      // ceiling against mail floods, so one stranger cannot use up the owner's links.
+      if (emailInfo?.verificationRequest) {
+        const ip = clientIp(await headers());
+        await consumeRateLimit({ key: `magic-link:${email}:${ip}`, limit: 5, windowSeconds: 15 * 60 })
+          .then(() => consumeRateLimit({ key: `magic-link:${email}`, limit: 20, windowSeconds: 60 * 60 }))
+          .catch(() => {
+            throw new Error("rate_limited");
+          });
+      }
       return Boolean(await db("users").where({ email }).first("id"));
     },
     async jwt({ token, user }) {
-      if (user) token.sub = user.id;
+      if (user) {
+        token.sub = user.id;
+        const row = await db("users").where({ id: user.id }).first<{ session_epoch: number } | undefined>("session_epoch");
+        token.epoch = row?.session_epoch ?? 0;
+      }
       return token;
     },
     async session({ session, token }) {
-      if (session.user && token.sub) session.user.id = token.sub;
+      if (session.user && token.sub) {
+        session.user.id = token.sub;
+        session.user.epoch = token.epoch ?? 0;
+      }
       return session;
     },
   },

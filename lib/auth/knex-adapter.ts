@@ -27,12 +27,18 @@ export const knexAdapter: Adapter = {
   async createUser() {
     throw new Error("Accounts are created by sign-up or invitation.");
   },
+  // Called when a magic link signs someone in, which proves the address. A password set on a never-confirmed
+  // account was chosen by whoever signed up, not necessarily the owner of the address, so it is dropped.
   async updateUser(user) {
-    const [row] = await db("users")
-      .where({ id: user.id })
-      .update({ email_verified: user.emailVerified ?? null, updated_at: db.fn.now() })
-      .returning<UserRow[]>(["id", "email", "name", "email_verified"]);
-    return toAdapterUser(row);
+    const { rows } = await db.raw<{ rows: UserRow[] }>(
+      `update users set
+         password_hash = case when email_verified is null then null else password_hash end,
+         email_verified = coalesce(email_verified, ?::timestamptz),
+         updated_at = now()
+       where id = ? returning id, email, name, email_verified`,
+      [user.emailVerified ?? null, user.id],
+    );
+    return toAdapterUser(rows[0]);
   },
   async getUserByAccount() {
     return null;

@@ -5,6 +5,7 @@ import { rigidityFactor } from "@/content-schema/machine-rigidity";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
+import { drainUploadDeletions, queueUploadDeletions } from "@/lib/storage/cleanup-uploads";
 
 import { MACHINE_COLUMNS, type Machine, rowToMachine } from "./machine-rows";
 
@@ -54,8 +55,20 @@ export async function updateMachine({ vendorId, userId, machineId, fields }: Own
 }
 
 /** Deleting a machine deletes its setups (and their outcomes) too: the numbers were for that machine. */
+/** Outcome photos go with it: their files are marked for deletion in the same transaction. */
 export async function deleteMachine({ vendorId, userId, machineId }: Owner & { machineId: string }): Promise<void> {
-  const count = await owned({ vendorId, userId }).andWhere({ id: machineId }).delete();
-  if (!count) throw new NotFound("That machine was not found.");
-  await writeAudit({ vendorId, actorUserId: userId, action: "machine.delete", objectType: "machine", objectId: machineId, details: {} });
+  const photoKeys = await db.transaction(async (trx) => {
+    const keys: string[] = await trx("outcomes as o")
+      .join("setups as s", "s.id", "o.setup_id")
+      .where({ "s.vendor_id": vendorId, "s.user_id": userId, "s.machine_id": machineId, "o.vendor_id": vendorId })
+      .whereNotNull("o.photo_key")
+      .pluck("o.photo_key");
+    const count = await trx("machines").where({ vendor_id: vendorId, user_id: userId, id: machineId }).delete();
+    if (!count) throw new NotFound("That machine was not found.");
+    await queueUploadDeletions(trx, keys);
+    await writeAudit({ vendorId, actorUserId: userId, action: "machine.delete", objectType: "machine", objectId: machineId, details: {} }, trx);
+    return keys;
+  });
+  // Right away when storage answers; the hourly cleanup retries what it did not.
+  if (photoKeys.length) await drainUploadDeletions({ keys: photoKeys }).catch((error: unknown) => console.warn("[uploads] photo deletion deferred", error));
 }

@@ -6,6 +6,7 @@ import { db } from "@/lib/db/knex";
 import { scheduleFieldRefresh } from "@/lib/field/refresh-rollups";
 import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
 import { getStorage, newStorageKey, sniffUpload } from "@/lib/storage";
+import { assertUploadQuota } from "@/lib/storage/upload-quota";
 
 export type Outcome = {
   id: string;
@@ -25,11 +26,14 @@ export async function recordOutcome({ vendorId, userId, setupId, fields, photo }
   const setup = await db("setups").where({ vendor_id: vendorId, user_id: userId, id: setupId }).first("id", "sheet_version_id", "machine_id");
   if (!setup) throw new NotFound("That setup was not found.");
   let photoKey: string | null = null;
+  let photoSize: number | null = null;
   if (photo && photo.byteLength > 0) {
     const sniffed = await sniffUpload(photo, "photo");
     if (sniffed.kind !== "image") throw new InvalidInput("Please correct the marked fields.", { photo: ["The photo must be a PNG, JPEG or WebP image."] });
+    await assertUploadQuota({ userId, addBytes: photo.byteLength });
     photoKey = newStorageKey();
     await getStorage().put(photoKey, photo, sniffed.contentType);
+    photoSize = photo.byteLength;
   }
   const [row] = await db("outcomes")
     .insert({
@@ -43,6 +47,7 @@ export async function recordOutcome({ vendorId, userId, setupId, fields, photo }
       changes: JSON.stringify(fields.result === "worked_after_changes" ? fields.changes : {}),
       notes: fields.notes,
       photo_key: photoKey,
+      photo_size_bytes: photoSize,
     })
     .returning("id");
   await writeAudit({ vendorId, actorUserId: userId, action: "outcome.create", objectType: "outcome", objectId: row.id, details: { setupId, result: fields.result } });

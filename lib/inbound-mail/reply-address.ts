@@ -1,7 +1,9 @@
 import { createHmac, timingSafeEqual } from "node:crypto";
 
-const UUID = "[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}";
-const ADDRESS = new RegExp(`^reply\\+(${UUID})\\.([0-9a-f]{32})@(.+)$`, "i");
+// reply+<ticket>.<recipient>.<mac>@<domain>: both ids as 32 hex digits (mail systems may change the case of a
+// local part, so only case-free characters), the MAC over both ids. The address is bound to the person it was
+// mailed to: a reply is attributed to that person, never to whoever the From header names.
+const ADDRESS = /^reply\+([0-9a-f]{32})\.([0-9a-f]{32})\.([0-9a-f]{32})@(.+)$/i;
 
 export const inboundMailDomain = () => process.env.INBOUND_MAIL_DOMAIN ?? "swarfbook.localhost";
 
@@ -11,20 +13,27 @@ function secret(): string {
   return value;
 }
 
-const sign = (ticketId: string) => createHmac("sha256", secret()).update(`ticket-reply:${ticketId.toLowerCase()}`).digest("hex").slice(0, 32);
+const compact = (uuid: string) => uuid.replace(/-/g, "").toLowerCase();
+const expand = (hex: string) => `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`.toLowerCase();
+const sign = (ticketHex: string, userHex: string) =>
+  createHmac("sha256", secret()).update(`ticket-reply:${ticketHex.toLowerCase()}:${userHex.toLowerCase()}`).digest("hex").slice(0, 32);
 
-/** The Reply-To of a ticket notification: reply+<ticketId>.<hmac>@<domain>. */
-export function replyAddress(ticketId: string): string {
-  return `reply+${ticketId.toLowerCase()}.${sign(ticketId)}@${inboundMailDomain()}`;
+export type ReplyTarget = { ticketId: string; userId: string };
+
+/** The Reply-To of a ticket notification mailed to one person. */
+export function replyAddress({ ticketId, userId }: ReplyTarget): string {
+  const t = compact(ticketId);
+  const u = compact(userId);
+  return `reply+${t}.${u}.${sign(t, u)}@${inboundMailDomain()}`;
 }
 
-/** The ticket id of a genuine reply address, or null for anything unsigned, forged or for another domain. */
-export function verifyReplyAddress(address: string): string | null {
+/** The ticket and recipient of a genuine reply address, or null for anything unsigned, forged or for another domain. */
+export function verifyReplyAddress(address: string): ReplyTarget | null {
   const match = ADDRESS.exec(address.trim());
   if (!match) return null;
-  const [, ticketId, mac, domain] = match;
+  const [, t, u, mac, domain] = match;
   if (domain.toLowerCase() !== inboundMailDomain().toLowerCase()) return null;
-  const expected = Buffer.from(sign(ticketId), "hex");
+  const expected = Buffer.from(sign(t, u), "hex");
   const given = Buffer.from(mac.toLowerCase(), "hex");
-  return given.length === expected.length && timingSafeEqual(given, expected) ? ticketId.toLowerCase() : null;
+  return given.length === expected.length && timingSafeEqual(given, expected) ? { ticketId: expand(t), userId: expand(u) } : null;
 }

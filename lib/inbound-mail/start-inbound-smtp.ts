@@ -24,9 +24,18 @@ export async function startInboundSmtp({ host = "127.0.0.1", port = Number(proce
             const parsed = await simpleParser(Buffer.concat(chunks));
             const from = parsed.from?.value[0]?.address || (session.envelope.mailFrom ? session.envelope.mailFrom.address : "");
             const attachments = parsed.attachments.map((a) => ({ fileName: a.filename ?? "attachment", content: a.content }));
-            await handleInboundMail({ rcptTo: session.envelope.rcptTo.map((r) => r.address), from, text: parsed.text ?? "", attachments });
+            const authenticationResults = parsed.headerLines.filter((h) => h.key === "authentication-results").map((h) => h.line.replace(/^[^:]*:/, ""));
+            await handleInboundMail({
+              rcptTo: session.envelope.rcptTo.map((r) => r.address),
+              from,
+              text: parsed.text ?? "",
+              attachments,
+              messageId: parsed.messageId,
+              authenticationResults,
+            });
             callback();
           } catch (error) {
+            // 451 (try again later) only while nothing was stored; handleInboundMail answers normally after that.
             console.error("[inbound-mail]", error);
             callback(Object.assign(new Error("Temporary failure"), { responseCode: 451 }));
           }

@@ -4,6 +4,7 @@ import type { Role } from "@/lib/auth/roles";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { Conflict, NotFound } from "@/lib/errors/domain-errors";
+import { endSessions } from "@/lib/users/end-sessions";
 
 async function assertAnotherAdminRemains(trx: typeof db, vendorId: string, memberId: string) {
   const others = await trx("members").where({ vendor_id: vendorId, role: "admin" }).whereNot({ id: memberId }).count<{ count: string }[]>("id as count");
@@ -30,6 +31,9 @@ export async function removeMember(opts: { vendorId: string; actorUserId: string
     if (!member) throw new NotFound();
     if (member.role === "admin") await assertAnotherAdminRemains(trx as unknown as typeof db, opts.vendorId, opts.memberId);
     await trx("members").where({ id: opts.memberId, vendor_id: opts.vendorId }).delete();
+    // Their tokens for this vendor stop, and their sessions end (a JWT cannot be recalled otherwise).
+    await trx("api_tokens").where({ vendor_id: opts.vendorId, user_id: member.user_id }).whereNull("revoked_at").update({ revoked_at: trx.fn.now() });
+    await endSessions(member.user_id, trx);
     await writeAudit(
       { vendorId: opts.vendorId, actorUserId: opts.actorUserId, action: "member.remove", objectType: "member", objectId: opts.memberId, details: { role: member.role, userId: member.user_id } },
       trx,

@@ -24,6 +24,8 @@ export async function inviteMember(opts: {
   const existing = await db("members as m")
     .join("users as u", "u.id", "m.user_id")
     .where({ "m.vendor_id": opts.vendorId, "u.email": opts.email })
+    // An unconfirmed sign-up may be someone squatting the address; it must not block the real person's invitation.
+    .whereNotNull("u.email_verified")
     .first("m.id");
   if (existing) throw new Conflict(`${opts.email} is already a member.`);
   const token = randomBytes(32).toString("base64url");

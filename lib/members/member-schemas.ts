@@ -22,6 +22,7 @@ export const removeMemberSchema = z.object({ vendor: z.string(), memberId: z.uui
 export const acceptInvitationSchema = z.object({
   vendor: z.string(),
   token: z.string().min(20).max(200),
-  name: z.string().trim().min(1, "Enter your name.").max(120),
+  // Name and password are asked only when the invitation creates the account (a signed-in account has both).
+  name: z.string().trim().max(120).optional(),
   password: z.string().min(10, "At least 10 characters.").max(200).optional().or(z.literal("").transform(() => undefined)),
 });

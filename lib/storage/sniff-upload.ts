@@ -1,4 +1,5 @@
 import { fileTypeFromBuffer } from "file-type";
+import { imageSize } from "image-size";
 
 import { InvalidInput, TooLarge } from "@/lib/errors/domain-errors";
 
@@ -13,6 +14,25 @@ const BY_MIME: Record<string, SniffedUpload> = {
   "image/webp": { kind: "image", contentType: "image/webp", extension: "webp" },
   "application/pdf": { kind: "pdf", contentType: "application/pdf", extension: "pdf" },
 };
+
+// A header can claim any size; decoding a 100,000 × 100,000 image would take tens of gigabytes. Photos from a phone
+// or a camera stay well inside these.
+export const MAX_IMAGE_SIDE = 20_000;
+export const MAX_IMAGE_PIXELS = 100_000_000;
+
+/** The dimensions the image's header states, refused when unreadable or beyond any real photo. */
+function assertSaneDimensions(bytes: Buffer): void {
+  let size: { width?: number; height?: number };
+  try {
+    size = imageSize(bytes);
+  } catch {
+    throw new InvalidInput("This image is damaged: its size cannot be read.");
+  }
+  const { width = 0, height = 0 } = size;
+  if (!width || !height || width > MAX_IMAGE_SIDE || height > MAX_IMAGE_SIDE || width * height > MAX_IMAGE_PIXELS) {
+    throw new InvalidInput(`This image claims to be ${width} × ${height} pixels, larger than any photo we accept (at most ${MAX_IMAGE_SIDE} pixels a side).`);
+  }
+}
 
 const TEXT_EXTENSIONS = new Set(["nc", "gcode", "ngc", "tap", "cnc", "txt"]);
 // Markup that a browser would render if it were ever served as HTML; never accepted as "text".
@@ -40,6 +60,7 @@ export async function sniffUpload(bytes: Buffer, fileName = ""): Promise<Sniffed
   const detected = await fileTypeFromBuffer(bytes);
   if (detected) {
     const known = BY_MIME[detected.mime];
+    if (known?.kind === "image") assertSaneDimensions(bytes);
     if (known) return known;
     throw new InvalidInput(`Files of type ${detected.mime} are not accepted: send a photo (PNG, JPEG, WebP), a PDF or a G-code text file.`);
   }

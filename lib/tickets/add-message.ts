@@ -11,7 +11,8 @@ import { auditTicketChange } from "./audit-change";
 import { notifyCustomerOfReply, notifyStaffOfCustomerReply } from "./notify/notify-reply";
 
 type Source = "web" | "email" | "api";
-type Base = { vendorId: string; ticketId: string; authorId: string; body: string; source?: Source; attachmentIds?: string[] };
+// emailMessageKey: the Message-ID of a reply by e-mail; unique per ticket, so a retried delivery posts once.
+type Base = { vendorId: string; ticketId: string; authorId: string; body: string; source?: Source; attachmentIds?: string[]; emailMessageKey?: string };
 
 async function insertMessage(
   trx: Knex.Transaction,
@@ -26,6 +27,7 @@ async function insertMessage(
       source: o.source ?? "web",
       body: o.body,
       card: o.card ? JSON.stringify(o.card) : null,
+      email_message_key: o.emailMessageKey ?? null,
     })
     .returning<{ id: string }[]>("id");
   if (o.attachmentIds?.length) {

@@ -5,21 +5,31 @@ import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { Conflict } from "@/lib/errors/domain-errors";
 
+import { sendVerificationMail } from "./send-verification-mail";
+
 /**
- * Customer self sign-up on a vendor's portal. An existing account (a customer of another
- * vendor) is not taken over: that person signs in first and joins from the vendor's page.
+ * Customer self sign-up on a vendor's portal. The password signs in only after the e-mailed link proves the
+ * address, so nobody can hold an account in someone else's name. A confirmed account (a customer of another
+ * vendor) is not taken over: that person signs in first and joins from the vendor's page. An unconfirmed one
+ * never proved its address, so signing up again replaces its pending password and mails a new link.
  */
-export async function signUpCustomer(opts: { vendorId: string; name: string; email: string; password: string }) {
-  return db.transaction(async (trx) => {
-    const existing = await trx("users").where({ email: opts.email }).first("id");
-    if (existing) throw new Conflict("An account with this e-mail exists. Sign in, then join this vendor from its page.");
-    const [user] = await trx("users")
-      .insert({ email: opts.email, name: opts.name, password_hash: await hashPassword(opts.password) })
-      .returning("id");
-    await trx("members").insert({ vendor_id: opts.vendorId, user_id: user.id, role: "customer" });
-    await writeAudit({ vendorId: opts.vendorId, actorUserId: user.id, action: "member.sign-up", objectType: "user", objectId: user.id }, trx);
-    return { userId: user.id as string };
+export async function signUpCustomer(opts: { vendorId: string; vendorSlug?: string; name: string; email: string; password: string }) {
+  const passwordHash = await hashPassword(opts.password);
+  const userId = await db.transaction(async (trx) => {
+    const existing = await trx("users").where({ email: opts.email }).forUpdate().first<{ id: string; email_verified: Date | null } | undefined>("id", "email_verified");
+    if (existing?.email_verified) throw new Conflict("An account with this e-mail exists. Sign in, then join this vendor from its page.");
+    let id = existing?.id;
+    if (id) {
+      await trx("users").where({ id }).update({ name: opts.name, password_hash: passwordHash, updated_at: trx.fn.now() });
+    } else {
+      [{ id }] = await trx("users").insert({ email: opts.email, name: opts.name, password_hash: passwordHash }).returning<{ id: string }[]>("id");
+    }
+    await trx("members").insert({ vendor_id: opts.vendorId, user_id: id, role: "customer" }).onConflict(["vendor_id", "user_id"]).ignore();
+    await writeAudit({ vendorId: opts.vendorId, actorUserId: id, action: "member.sign-up", objectType: "user", objectId: id }, trx);
+    return id as string;
   });
+  await sendVerificationMail({ userId, email: opts.email, passwordHash, vendorSlug: opts.vendorSlug });
+  return { userId };
 }
 
 /** A signed-in person becomes a customer of one more vendor. */

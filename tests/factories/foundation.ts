@@ -18,11 +18,18 @@ export async function createVendor(overrides: { slug?: string; name?: string; se
   return row as { id: string; slug: string; name: string };
 }
 
-export async function createUser(overrides: { email?: string; name?: string; isOperator?: boolean } = {}) {
+/** A person with a confirmed e-mail (pass `verified: false` for an account that never proved its address). */
+export async function createUser(overrides: { email?: string; name?: string; isOperator?: boolean; verified?: boolean } = {}) {
   passwordHash ??= hash(FACTORY_PASSWORD);
   const email = overrides.email ?? `${uniq("u")}@example.test`;
   const [row] = await db("users")
-    .insert({ email, name: overrides.name ?? email.split("@")[0], password_hash: await passwordHash, is_operator: overrides.isOperator ?? false })
+    .insert({
+      email,
+      name: overrides.name ?? email.split("@")[0],
+      password_hash: await passwordHash,
+      is_operator: overrides.isOperator ?? false,
+      email_verified: overrides.verified === false ? null : db.fn.now(),
+    })
     .returning(["id", "email", "name"]);
   return row as { id: string; email: string; name: string };
 }

@@ -5,7 +5,7 @@ import { replyAddress } from "@/lib/inbound-mail/reply-address";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 
 import { renderReplyMail } from "./reply-mail";
-import { loadTicketMailContext, supportTeamEmails } from "./ticket-mail-context";
+import { loadTicketMailContext, supportTeam } from "./ticket-mail-context";
 
 type Options = { vendorId: string; ticketId: string; authorName: string; body: string; hasCard: boolean };
 
@@ -19,7 +19,7 @@ export async function notifyCustomerOfReply({ vendorId, ticketId, authorName, bo
     to: ctx.customer.email,
     subject: `[${ctx.vendorName} #${ctx.number}] ${ctx.subject}`,
     ...renderReplyMail({ intro: `${authorName} replied to your ticket #${ctx.number}:`, body, note, linkLabel: "See the whole thread", link }),
-    replyTo: replyAddress(ticketId),
+    replyTo: replyAddress({ ticketId, userId: ctx.customer.id }),
   });
 }
 
@@ -28,13 +28,13 @@ export async function notifyStaffOfCustomerReply({ vendorId, ticketId, authorNam
   const ctx = await loadTicketMailContext(vendorId, ticketId);
   if (!ctx) return;
   const link = appUrl(`/${ctx.vendorSlug}/desk/tickets/${ticketId}`);
-  const recipients = ctx.assignee ? [ctx.assignee.email] : await supportTeamEmails(vendorId);
-  for (const to of recipients) {
+  const recipients = ctx.assignee ? [ctx.assignee] : await supportTeam(vendorId);
+  for (const person of recipients) {
     await enqueueMail({
-      to,
+      to: person.email,
       subject: `[${ctx.vendorName} #${ctx.number}] Customer reply: ${ctx.subject}`,
       ...renderReplyMail({ intro: `${authorName} wrote on ticket #${ctx.number}:`, body, linkLabel: "Open it on the Desk", link }),
-      replyTo: replyAddress(ticketId),
+      replyTo: replyAddress({ ticketId, userId: person.id }),
     });
   }
 }

@@ -8,8 +8,8 @@ export type TicketMailContext = {
   subject: string;
   vendorSlug: string;
   vendorName: string;
-  customer: { email: string; name: string };
-  assignee: { email: string; name: string } | null;
+  customer: { id: string; email: string; name: string };
+  assignee: { id: string; email: string; name: string } | null;
 };
 
 export { REPLY_ABOVE } from "./reply-mail";
@@ -20,7 +20,7 @@ export async function loadTicketMailContext(vendorId: string, ticketId: string):
     .join("users as c", "c.id", "t.customer_id")
     .leftJoin("users as a", "a.id", "t.assignee_id")
     .where({ "t.id": ticketId, "t.vendor_id": vendorId })
-    .first("t.id", "t.number", "t.subject", "v.slug", "v.name as vendor_name", "c.email", "c.name", "a.email as a_email", "a.name as a_name");
+    .first("t.id", "t.number", "t.subject", "v.slug", "v.name as vendor_name", "c.id as c_id", "c.email", "c.name", "a.id as a_id", "a.email as a_email", "a.name as a_name");
   if (!row) return null;
   return {
     ticketId: row.id,
@@ -28,14 +28,14 @@ export async function loadTicketMailContext(vendorId: string, ticketId: string):
     subject: row.subject,
     vendorSlug: row.slug,
     vendorName: row.vendor_name,
-    customer: { email: row.email, name: row.name },
-    assignee: row.a_email ? { email: row.a_email, name: row.a_name } : null,
+    customer: { id: row.c_id, email: row.email, name: row.name },
+    assignee: row.a_id ? { id: row.a_id, email: row.a_email, name: row.a_name } : null,
   };
 }
 
-/** E-mail addresses of the vendor's support team (support staff; admins when there are none). */
-export async function supportTeamEmails(vendorId: string): Promise<string[]> {
-  const rows = await db("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).select("u.email", "m.role");
+/** The vendor's support team (support staff; admins when there are none), each with the id their reply address is bound to. */
+export async function supportTeam(vendorId: string): Promise<{ id: string; email: string }[]> {
+  const rows = await db("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).select("u.id", "u.email", "m.role");
   const support = rows.filter((r) => r.role === "support");
-  return (support.length ? support : rows).map((r) => r.email as string);
+  return (support.length ? support : rows).map((r) => ({ id: r.id as string, email: r.email as string }));
 }

@@ -1,3 +1,5 @@
+import { createHash, randomBytes } from "node:crypto";
+
 import type { Knex } from "knex";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
@@ -106,6 +108,39 @@ describe("cross-vendor probe", () => {
       }
     }
     expect(failures).toEqual([]);
+  });
+
+  it("a token of a removed member gets 404 from every API route of its former vendor, also after rejoining", async () => {
+    const db = e2eDb();
+    const vendor = await db("vendors").where({ slug: TARGET }).first("id");
+    const secret = `sbk_${randomBytes(24).toString("base64url")}`;
+    const [user] = await db("users").insert({ email: `removed-${randomBytes(4).toString("hex")}@example.test`, name: "Removed probe", email_verified: db.fn.now() }).returning("id");
+    const [member] = await db("members").insert({ vendor_id: vendor.id, user_id: user.id, role: "admin", created_at: new Date(Date.now() - 60_000) }).returning("id");
+    await db("api_tokens").insert({ vendor_id: vendor.id, user_id: user.id, name: "probe", prefix: secret.slice(0, 12), token_hash: createHash("sha256").update(secret).digest("hex") });
+    const probe = async (label: string, expectOk: boolean) => {
+      const failures: string[] = [];
+      for (const route of routes.filter((r) => r.kind === "api" && !(r.pattern in PUBLIC_BY_DESIGN))) {
+        const url = fillPattern(route.pattern, values);
+        for (const method of expectOk ? ["GET"] : route.methods) {
+          if (!route.methods.includes(method)) continue;
+          const response = await session.context.request.fetch(url, {
+            method, data: method === "GET" ? undefined : {}, failOnStatusCode: false, headers: { authorization: `Bearer ${secret}` },
+          });
+          if (!expectOk && response.status() !== 404) failures.push(`${label}: ${method} ${url} → ${response.status()}`);
+          if (expectOk && response.status() === 200) return [];
+        }
+      }
+      return expectOk ? [`${label}: the token never worked, so the probe proves nothing`] : failures;
+    };
+    try {
+      expect(await probe("while a member", true)).toEqual([]);
+      await db("members").where({ id: member.id }).delete();
+      expect(await probe("removed", false)).toEqual([]);
+      await db("members").insert({ vendor_id: vendor.id, user_id: user.id, role: "admin" });
+      expect(await probe("rejoined", false)).toEqual([]);
+    } finally {
+      await db("users").where({ id: user.id }).delete();
+    }
   });
 
   it("cannot use a forged invitation link", async () => {

@@ -3,7 +3,14 @@ import { describe, expect, it } from "vitest";
 import { authorizePassword, SIGN_IN_LIMITS } from "@/lib/auth/auth-options";
 import { createUser, FACTORY_PASSWORD } from "@/tests/factories/foundation";
 
-const headersFrom = (ip: string) => ({ "x-forwarded-for": ip });
+// As the app's server stamps them: the TCP peer is the client (no trusted proxies in tests).
+const headersFrom = (ip: string) => ({ "x-swarfbook-peer": ip, "x-swarfbook-forwarded-for": "" });
+
+const outcome = (p: Promise<unknown>) =>
+  p.then(
+    (user) => (user ? "signed-in" : "refused"),
+    (error: Error) => error.message,
+  );
 
 describe("password sign-in", () => {
   it("accepts the right password and refuses a wrong one", async () => {
@@ -13,13 +20,34 @@ describe("password sign-in", () => {
     await expect(authorizePassword({ email: "nobody@example.test", password: "x" }, headersFrom("10.9.0.1"))).resolves.toBeNull();
   });
 
-  it("rate-limits failed attempts per account, even from many addresses", async () => {
+  it("a parallel burst of wrong passwords is limited: attempts are counted before the password is checked", async () => {
     const user = await createUser();
-    for (let i = 0; i < SIGN_IN_LIMITS.perAccount.limit; i++) {
-      await expect(authorizePassword({ email: user.email, password: "nope" }, headersFrom(`10.8.0.${i}`))).resolves.toBeNull();
+    const burst = await Promise.all(
+      Array.from({ length: 30 }, () => outcome(authorizePassword({ email: user.email, password: "guess-password" }, headersFrom("10.8.0.1")))),
+    );
+    expect(burst.filter((o) => o === "refused")).toHaveLength(SIGN_IN_LIMITS.perAccountAndIp.limit);
+    expect(burst.filter((o) => o === "rate_limited")).toHaveLength(30 - SIGN_IN_LIMITS.perAccountAndIp.limit);
+    // That address is stopped even with the right password…
+    await expect(outcome(authorizePassword({ email: user.email, password: FACTORY_PASSWORD }, headersFrom("10.8.0.1")))).resolves.toBe("rate_limited");
+    // …but the attacker has not locked the owner out: from the owner's own address the password works.
+    await expect(authorizePassword({ email: user.email, password: FACTORY_PASSWORD }, headersFrom("10.8.9.9"))).resolves.toMatchObject({ id: user.id });
+  });
+
+  it("past the per-account ceiling, guesses from many addresses are only slowed, and the owner still gets in", async () => {
+    const user = await createUser();
+    const { limit } = SIGN_IN_LIMITS.perAccountCeiling;
+    for (let i = 0; i < limit; i++) {
+      await expect(authorizePassword({ email: user.email, password: "nope-nope" }, headersFrom(`10.5.${i}.1`))).resolves.toBeNull();
     }
-    // Locked now: even the right password is refused until the window passes.
-    await expect(authorizePassword({ email: user.email, password: FACTORY_PASSWORD }, headersFrom("10.8.1.1"))).rejects.toThrow("rate_limited");
+    // Over the ceiling: one attempt per slow window for the account, whoever makes it.
+    const burst = await Promise.all(
+      Array.from({ length: 10 }, (_, i) => outcome(authorizePassword({ email: user.email, password: "nope-nope" }, headersFrom(`10.5.200.${i}`)))),
+    );
+    expect(burst.filter((o) => o === "refused")).toHaveLength(SIGN_IN_LIMITS.slowed.limit);
+    // The owner waits out the short slow window and signs in (simulated: the window's bucket is expired).
+    const { db } = await import("@/lib/db/knex");
+    await db("rate_limit_buckets").where({ key: `sign-in:slow:${user.email}` }).update({ window_start: new Date(Date.now() - 60_000) });
+    await expect(authorizePassword({ email: user.email, password: FACTORY_PASSWORD }, headersFrom("10.5.250.1"))).resolves.toMatchObject({ id: user.id });
   });
 
   it("rate-limits attempts per address across accounts", async () => {
@@ -28,6 +56,15 @@ describe("password sign-in", () => {
       await authorizePassword({ email: `probe-${i}@example.test`, password: "nope" }, headersFrom(ip));
     }
     await expect(authorizePassword({ email: "probe-last@example.test", password: "nope" }, headersFrom(ip))).rejects.toThrow("rate_limited");
+  });
+
+  it("a rotating X-Forwarded-For does not give a guesser new addresses", async () => {
+    const user = await createUser();
+    const results: string[] = [];
+    for (let i = 0; i < SIGN_IN_LIMITS.perAccountAndIp.limit + 2; i++) {
+      results.push(await outcome(authorizePassword({ email: user.email, password: "nope-nope" }, { ...headersFrom("10.4.0.1"), "x-swarfbook-forwarded-for": `172.16.0.${i}`, "x-forwarded-for": `172.16.0.${i}` })));
+    }
+    expect(results.slice(-2)).toEqual(["rate_limited", "rate_limited"]);
   });
 
   it("does not count successful sign-ins against the address", async () => {

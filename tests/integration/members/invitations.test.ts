@@ -16,11 +16,11 @@ describe("staff invitations", () => {
   it("creates the account and membership once, and the link is single use", async () => {
     const v = await createVendorWithStaff();
     const { token, email } = await invite(v);
-    const result = await acceptInvitation({ vendorId: v.vendor.id, token, name: "New Engineer", password: "a-long-password" });
+    const result = await acceptInvitation({ vendorId: v.vendor.id, token, name: "New Engineer", password: "a-long-password", sessionUserId: null });
     expect(result).toMatchObject({ email, role: "engineer" });
     const member = await db("members").where({ vendor_id: v.vendor.id, user_id: result.userId }).first();
     expect(member.role).toBe("engineer");
-    await expect(acceptInvitation({ vendorId: v.vendor.id, token, name: "Again", password: "a-long-password" })).rejects.toBeInstanceOf(NotFound);
+    await expect(acceptInvitation({ vendorId: v.vendor.id, token, name: "Again", password: "a-long-password", sessionUserId: null })).rejects.toBeInstanceOf(NotFound);
     const audit = await db("audit_log").where({ vendor_id: v.vendor.id }).pluck("action");
     expect(audit).toEqual(expect.arrayContaining(["member.invite", "member.join"]));
   });
@@ -29,9 +29,9 @@ describe("staff invitations", () => {
     const v = await createVendorWithStaff();
     const other = await createVendorWithStaff();
     const { token } = await invite(v);
-    await expect(acceptInvitation({ vendorId: other.vendor.id, token, name: "X", password: "a-long-password" })).rejects.toBeInstanceOf(NotFound);
+    await expect(acceptInvitation({ vendorId: other.vendor.id, token, name: "X", password: "a-long-password", sessionUserId: null })).rejects.toBeInstanceOf(NotFound);
     await db("invitations").where({ vendor_id: v.vendor.id }).update({ expires_at: new Date(Date.now() - 1000) });
-    await expect(acceptInvitation({ vendorId: v.vendor.id, token, name: "X", password: "a-long-password" })).rejects.toBeInstanceOf(NotFound);
+    await expect(acceptInvitation({ vendorId: v.vendor.id, token, name: "X", password: "a-long-password", sessionUserId: null })).rejects.toBeInstanceOf(NotFound);
   });
 
   it("queues the invitation e-mail with the link", async () => {

@@ -26,7 +26,7 @@ describe("ticket e-mail", () => {
     const [reply] = await mailsTo(customer.user.email);
     expect(reply.text).toContain("Use a helical entry.");
     expect(reply.text).not.toContain("Secret internal remark");
-    expect(verifyReplyAddress(reply.replyTo ?? "")).toBe(ticket.id);
+    expect(verifyReplyAddress(reply.replyTo ?? "")).toEqual({ ticketId: ticket.id, userId: customer.user.id });
 
     await updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: ticket.id, assigneeId: admin.user.id } });
     await addCustomerMessage({ vendorId: v.id, ticketId: ticket.id, authorId: customer.user.id, body: "Helix worked." });

@@ -2,6 +2,7 @@ import { createHmac } from "node:crypto";
 
 import { afterEach, describe, expect, it } from "vitest";
 
+import { failedAuthentication } from "@/lib/inbound-mail/authentication-results";
 import { replyAddress, verifyReplyAddress } from "@/lib/inbound-mail/reply-address";
 import { stripQuotedText } from "@/lib/inbound-mail/strip-quoted";
 
@@ -12,24 +13,45 @@ afterEach(() => {
   delete process.env.INBOUND_MAIL_DOMAIN;
 });
 
+const USER = "7f1c2d3e-4b5a-4c6d-8e9f-0a1b2c3d4e5f";
+const hex = (uuid: string) => uuid.replace(/-/g, "");
+
 describe("signed reply addresses", () => {
-  it("is reply+<ticket>.<HMAC-SHA256 prefix>@domain and verifies back to the ticket", () => {
+  it("is reply+<ticket>.<recipient>.<HMAC-SHA256 prefix>@domain and verifies back to both", () => {
     process.env.REPLY_SECRET = "test-secret";
-    const mac = createHmac("sha256", "test-secret").update(`ticket-reply:${ID}`).digest("hex").slice(0, 32);
-    expect(replyAddress(ID)).toBe(`reply+${ID}.${mac}@swarfbook.localhost`);
-    expect(verifyReplyAddress(replyAddress(ID).toUpperCase().replace("SWARFBOOK.LOCALHOST", "swarfbook.localhost"))).toBe(ID);
+    const mac = createHmac("sha256", "test-secret").update(`ticket-reply:${hex(ID)}:${hex(USER)}`).digest("hex").slice(0, 32);
+    expect(replyAddress({ ticketId: ID, userId: USER })).toBe(`reply+${hex(ID)}.${hex(USER)}.${mac}@swarfbook.localhost`);
+    const upper = replyAddress({ ticketId: ID, userId: USER }).toUpperCase().replace("SWARFBOOK.LOCALHOST", "swarfbook.localhost");
+    expect(verifyReplyAddress(upper)).toEqual({ ticketId: ID, userId: USER });
   });
 
-  it("rejects another secret, another ticket id, another domain and unsigned forms", () => {
+  it("rejects another secret, another ticket or recipient, another domain and unsigned forms", () => {
     process.env.REPLY_SECRET = "one";
-    const address = replyAddress(ID);
+    const address = replyAddress({ ticketId: ID, userId: USER });
     process.env.REPLY_SECRET = "two";
     expect(verifyReplyAddress(address)).toBeNull();
     process.env.REPLY_SECRET = "one";
-    expect(verifyReplyAddress(address.replace(ID, "0b8a4b52-3c1f-4c7e-9d51-6a1e2f3b4c5e"))).toBeNull();
+    expect(verifyReplyAddress(address.replace(hex(ID), hex("0b8a4b52-3c1f-4c7e-9d51-6a1e2f3b4c5e")))).toBeNull();
+    // A recipient id swapped for another person's: the signature no longer holds.
+    expect(verifyReplyAddress(address.replace(hex(USER), hex("7f1c2d3e-4b5a-4c6d-8e9f-0a1b2c3d4e50")))).toBeNull();
     expect(verifyReplyAddress(address.replace("swarfbook.localhost", "evil.test"))).toBeNull();
     expect(verifyReplyAddress(`reply+${ID}@swarfbook.localhost`)).toBeNull();
+    // The earlier form, bound to the ticket only, is not accepted any more.
+    const oldMac = createHmac("sha256", "one").update(`ticket-reply:${ID}`).digest("hex").slice(0, 32);
+    expect(verifyReplyAddress(`reply+${ID}.${oldMac}@swarfbook.localhost`)).toBeNull();
     expect(verifyReplyAddress("support@swarfbook.localhost")).toBeNull();
+  });
+});
+
+describe("Authentication-Results", () => {
+  it("finds a failed SPF, DKIM or DMARC check and ignores comments and passes", () => {
+    expect(failedAuthentication([" mx.example.net; spf=pass smtp.mailfrom=a@b.test; dkim=pass header.d=b.test; dmarc=pass"])).toBeNull();
+    expect(failedAuthentication([" mx.example.net; spf=pass; dmarc=fail (p=reject) header.from=b.test"])).toBe("dmarc=fail");
+    expect(failedAuthentication([" mx.example.net; dkim=fail reason=\"bad signature\""])).toBe("dkim=fail");
+    expect(failedAuthentication([" mx.example.net;\r\n\tspf=FAIL smtp.mailfrom=x@y.test"])).toBe("spf=fail");
+    expect(failedAuthentication([" mx.example.net; spf=pass (not dkim=fail at all)"])).toBeNull();
+    expect(failedAuthentication([" mx.example.net; spf=softfail; dkim=none"])).toBeNull();
+    expect(failedAuthentication([])).toBeNull();
   });
 });
 

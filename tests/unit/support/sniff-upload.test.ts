@@ -7,8 +7,13 @@ const PNG = Buffer.from(
   "89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da63f8cfc0f01f0005000201a2a0e1df0000000049454e44ae426082",
   "hex",
 );
-// JPEG starts with SOI FF D8 and an APP0/JFIF marker.
-const JPEG = Buffer.concat([Buffer.from("ffd8ffe000104a46494600010100000100010000", "hex"), Buffer.alloc(64, 0), Buffer.from("ffd9", "hex")]);
+// JPEG starts with SOI FF D8 and an APP0/JFIF marker; its SOF0 frame header states 64 × 48 pixels.
+const JPEG = Buffer.concat([
+  Buffer.from("ffd8ffe000104a46494600010100000100010000", "hex"),
+  Buffer.from("ffc0001108003000400301220002110103110100", "hex"),
+  Buffer.alloc(64, 0),
+  Buffer.from("ffd9", "hex"),
+]);
 const PDF = Buffer.from("%PDF-1.4\n1 0 obj\n<<>>\nendobj\ntrailer\n<<>>\n%%EOF\n");
 const HTML = Buffer.from("<!doctype html><html><body><script>alert(1)</script></body></html>");
 

@@ -25,12 +25,16 @@ export async function signUpAction(_prev: ActionState, form: FormData): Promise<
   if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error), values };
   try {
     await consumeRateLimit({ key: `sign-up:${clientIp(await headers())}`, limit: 10, windowSeconds: 3600 });
-    await signUpCustomer({ vendorId: vendor.id, ...parsed.data });
+    await signUpCustomer({ vendorId: vendor.id, vendorSlug: vendor.slug, ...parsed.data });
   } catch (error) {
     if (error instanceof DomainError) return { ok: false, message: error.message, values };
     throw error;
   }
-  return { ok: true, message: "Account created. Sign in with your e-mail and password.", values: { email: parsed.data.email } };
+  return {
+    ok: true,
+    message: `Almost done: we sent a link to ${parsed.data.email}. Open it to confirm the address, then sign in with your password.`,
+    values: { email: parsed.data.email },
+  };
 }
 
 export async function joinAsCustomerAction(form: FormData): Promise<void> {
