@@ -51,7 +51,8 @@ export function vendorAction<S extends z.ZodType>(
       // Next's redirect() and notFound() signal by throwing; let them through.
       if (error && typeof error === "object" && "digest" in error) throw error;
       console.error("[action]", error);
-      return { ok: false, message: "Something went wrong on our side. Nothing was saved.", values };
+      // Not "nothing was saved": a failure after the commit (a revalidation, say) leaves the write in place.
+      return { ok: false, message: "Something went wrong on our side. Please try again; a form sent twice is saved once.", values };
     }
   };
 }

@@ -1,6 +1,6 @@
 import "server-only";
 
-import { db } from "@/lib/db/knex";
+import type { Knex } from "knex";
 
 export type TicketMailContext = {
   ticketId: string;
@@ -14,8 +14,9 @@ export type TicketMailContext = {
 
 export const REPLY_ABOVE = "-- Reply above this line to add to the ticket --";
 
-export async function loadTicketMailContext(vendorId: string, ticketId: string): Promise<TicketMailContext | null> {
-  const row = await db("tickets as t")
+/** Read inside the writing transaction, so a ticket or message not yet committed is seen. */
+export async function loadTicketMailContext(trx: Knex.Transaction, vendorId: string, ticketId: string): Promise<TicketMailContext | null> {
+  const row = await trx("tickets as t")
     .join("vendors as v", "v.id", "t.vendor_id")
     .join("users as c", "c.id", "t.customer_id")
     .leftJoin("users as a", "a.id", "t.assignee_id")
@@ -34,8 +35,8 @@ export async function loadTicketMailContext(vendorId: string, ticketId: string):
 }
 
 /** E-mail addresses of the vendor's support team (support staff; admins when there are none). */
-export async function supportTeamEmails(vendorId: string): Promise<string[]> {
-  const rows = await db("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).select("u.email", "m.role");
+export async function supportTeamEmails(trx: Knex.Transaction, vendorId: string): Promise<string[]> {
+  const rows = await trx("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).select("u.email", "m.role");
   const support = rows.filter((r) => r.role === "support");
   return (support.length ? support : rows).map((r) => r.email as string);
 }

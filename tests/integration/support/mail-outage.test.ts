@@ -54,7 +54,7 @@ describe("mail while SMTP is down", () => {
     await getBoss();
     await db.raw("delete from pgboss.job where name = 'mail.send'");
     const subject = `Outage test ${port}`;
-    await enqueueMail({ to: "maker@example.test", subject, text: "Your ticket has a reply." });
+    await enqueueMail(db, { to: "maker@example.test", subject, text: "Your ticket has a reply." });
     await startWorker();
 
     // SMTP is down: the first attempt fails and the job waits for a retry instead of being lost.
