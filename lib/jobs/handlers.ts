@@ -5,6 +5,7 @@ import { FIELD_REFRESH_QUEUE, refreshFieldRollupsJob } from "@/lib/field/refresh
 import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
 import { SHEET_EVENTS_QUEUE } from "@/lib/events/sheet-events";
 import { MAIL_QUEUE, mailRetrySchedule } from "@/lib/mail/enqueue-mail";
+import { DEAD_LETTER_CHECK_CRON, DEAD_LETTER_CHECK_QUEUE, deadLetterCheckJob } from "@/lib/mail/notify-dead-letters";
 import { sendMailJob } from "@/lib/mail/send-mail-job";
 import { reindexVendorJob, SEARCH_REINDEX_VENDOR_QUEUE } from "@/search/indexing/search-index-jobs";
 
@@ -20,6 +21,7 @@ export const JOB_HANDLERS: Record<string, JobHandler> = {
   [SEARCH_REINDEX_VENDOR_QUEUE]: reindexVendorJob,
   [FIELD_REFRESH_QUEUE]: refreshFieldRollupsJob,
   [FIELD_DIGEST_QUEUE]: weeklyDigestJob,
+  [DEAD_LETTER_CHECK_QUEUE]: deadLetterCheckJob,
 };
 
 // Queues that also run on a clock (cron, UTC).
@@ -27,6 +29,7 @@ export const JOB_SCHEDULES: Record<string, string> = {
   // Views and adaptations only reach the rollup through this; outcomes and hand-offs also ask for a refresh.
   [FIELD_REFRESH_QUEUE]: "*/5 * * * *",
   [FIELD_DIGEST_QUEUE]: FIELD_DIGEST_CRON,
+  [DEAD_LETTER_CHECK_QUEUE]: DEAD_LETTER_CHECK_CRON,
 };
 
 // Queues whose retries follow a capped exponential backoff over a long window (the rest use DEFAULT_JOB_OPTIONS).

@@ -45,6 +45,8 @@ describe("mail while SMTP is down", () => {
   it("keeps the job and delivers it once SMTP is back", { timeout: 120_000 }, async () => {
     const port = await freePort();
     process.env.SMTP_PORT = String(port);
+    // The schedule shortened by configuration: retries after 1 s, 2 s, 2 s, ...
+    Object.assign(process.env, { MAIL_RETRY_BASE_SECONDS: "1", MAIL_RETRY_CAP_SECONDS: "2" });
     const { enqueueMail } = await import("@/lib/mail/enqueue-mail");
     const { startWorker } = await import("@/lib/jobs/start-worker");
     const { getBoss } = await import("@/lib/jobs/boss");
