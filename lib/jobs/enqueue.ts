@@ -9,7 +9,7 @@ import { getBoss, jobWriter } from "./boss";
 import { inTransaction, knexExecutor } from "./knex-executor";
 
 // Retries with backoff: a job outlives a search engine that is down for a while. Mail has its own, longer schedule.
-export const DEFAULT_JOB_OPTIONS = { retryLimit: 12, retryDelay: 5, retryBackoff: true, expireInSeconds: 300 };
+export const DEFAULT_JOB_OPTIONS = { retryLimit: 12, retryDelay: Math.max(1, Number(process.env.JOBS_RETRY_DELAY_SECONDS ?? 5)), retryBackoff: true, expireInSeconds: 300 };
 
 export type EnqueueOptions = Omit<PgBoss.SendOptions, "db" | "id"> & {
   /** The job's identity for its purpose (say "reply:<message>:<recipient>"): the same key is queued once. */
