@@ -17,17 +17,30 @@ export type EnqueueOptions = Omit<PgBoss.SendOptions, "db" | "id"> & {
 };
 
 const ready = new Set<string>();
+let creating: Promise<unknown> = Promise.resolve();
+
+// pg-boss makes a table partition per queue; two creations at once can deadlock, so this process makes
+// one at a time, and a deadlock with another process is retried.
+async function createQueueOnce(name: string, options: Omit<PgBoss.Queue, "name">): Promise<void> {
+  for (let attempt = 0; ; attempt++) {
+    try {
+      if (await jobWriter().getQueue(name).catch(() => null)) return;
+      // No queue, or no pg-boss schema yet: a started pg-boss installs the schema, then the queue is made.
+      const boss = await getBoss();
+      await boss.createQueue(name, { name, ...options });
+      return;
+    } catch (error) {
+      if ((error as { code?: string }).code !== "40P01" || attempt >= 3) throw error;
+    }
+  }
+}
 
 /** Queues must exist before a job row can be inserted (pg-boss joins on them); created once per process. */
 export async function ensureQueue(name: string, options: Omit<PgBoss.Queue, "name"> = {}): Promise<void> {
   if (ready.has(name)) return;
-  const writer = jobWriter();
-  const exists = await writer.getQueue(name).catch(() => null);
-  if (!exists) {
-    // No queue, or no pg-boss schema yet: a started pg-boss installs the schema, then the queue is made.
-    const boss = await getBoss();
-    await boss.createQueue(name, { name, ...options });
-  }
+  const turn = creating.then(() => createQueueOnce(name, options));
+  creating = turn.catch(() => undefined);
+  await turn;
   ready.add(name);
 }
 
