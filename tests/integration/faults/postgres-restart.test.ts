@@ -13,7 +13,7 @@ import { createFieldCustomer } from "@/tests/factories/field";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { loadVendor } from "@/tests/factories/tickets";
 
-import { faultPg, type MailDev, report, startMailDev, waitFor } from "./support/services";
+import { emptyQueue, faultPg, type MailDev, report, startMailDev, waitFor } from "./support/services";
 
 Object.assign(process.env, { MAIL_RETRY_BASE_SECONDS: "1", MAIL_RETRY_CAP_SECONDS: "2" });
 
@@ -30,6 +30,7 @@ type Attempt = { kind: Kind; key: string; body: string; ok: boolean; id?: string
 
 describe("fault: PostgreSQL stopped and started under a write load", () => {
   it("keeps every acknowledged write, loses or doubles nothing, and runs each committed write's jobs once", async () => {
+    await emptyQueue();
     const { startWorker } = await import("@/lib/jobs/start-worker");
     stopBoss = (await import("@/lib/jobs/boss")).stopBoss;
     maildev = await startMailDev();

@@ -6,7 +6,7 @@ import { createTicket } from "@/lib/tickets/create-ticket";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { loadVendor } from "@/tests/factories/tickets";
 
-import { faultPg, type MailDev, report, startMailDev, waitFor } from "./support/services";
+import { emptyQueue, faultPg, type MailDev, report, startMailDev, waitFor } from "./support/services";
 
 let maildev: MailDev | null = null;
 let stopBoss: (() => Promise<void>) | null = null;
@@ -18,6 +18,7 @@ afterAll(async () => {
 
 describe("fault: the queue cannot start at boot", () => {
   it("keeps trying, and work flows once the database is back, without a restart", async () => {
+    await emptyQueue();
     const { vendor: v, support, customer } = await createVendorWithStaff();
     const vendor = await loadVendor(v.id);
     maildev = await startMailDev();

@@ -3,7 +3,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { db } from "@/lib/db/knex";
 import { createDraftingScenario, publishOpenDraft } from "@/tests/factories/sheets";
 
-import { report, waitFor } from "./support/services";
+import { emptyQueue, report, waitFor } from "./support/services";
 
 let stopBoss: (() => Promise<void>) | null = null;
 afterAll(async () => {
@@ -15,6 +15,7 @@ const indexed = async (vendorId: string, versionId: string) => Number((await db(
 
 describe("fault: the search engine is unavailable during publishing", () => {
   it("publishes anyway, and the index catches up when the engine is back", async () => {
+    await emptyQueue();
     const { startWorker } = await import("@/lib/jobs/start-worker");
     stopBoss = (await import("@/lib/jobs/boss")).stopBoss;
     const scenarios = await Promise.all(Array.from({ length: 3 }, () => createDraftingScenario()));

@@ -5,7 +5,7 @@ import { addStaffMessage } from "@/lib/tickets/add-message";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
 import { openTicket } from "@/tests/factories/tickets";
 
-import { type MailDev, report, startMailDev, waitFor } from "./support/services";
+import { emptyQueue, type MailDev, report, startMailDev, waitFor } from "./support/services";
 
 // The retry schedule shortened by configuration: one second stands for one hour. Mail retries for
 // 50 "hours" (waits of 1 s, then 2 s); SMTP stays down for 24 "hours", a simulated day.
@@ -21,6 +21,7 @@ afterAll(async () => {
 
 describe("fault: SMTP down for a simulated day", () => {
   it("delivers every mail of 200 tickets and replies made meanwhile exactly once", async () => {
+    await emptyQueue();
     const { startWorker } = await import("@/lib/jobs/start-worker");
     const boss = await import("@/lib/jobs/boss");
     stopBoss = boss.stopBoss;

@@ -17,6 +17,8 @@ const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 /** MailDev on the fault ports; stop() ends exactly this process. */
 export async function startMailDev(): Promise<MailDev> {
   const web = `http://127.0.0.1:${faultMailDevPort()}`;
+  // An earlier file's MailDev may still be letting go of the ports.
+  for (let i = 0; i < 40 && (await fetch(`${web}/api/healthz`).then(() => true).catch(() => false)); i++) await sleep(250);
   const child: ChildProcess = spawn(
     path.join(root, "node_modules/.bin/maildev"),
     ["--ip", "127.0.0.1", "--smtp", String(faultSmtpPort()), "--web", String(faultMailDevPort()), "--mail-directory", mkdtempSync(path.join(tmpdir(), "fault-maildev-"))],
@@ -51,3 +53,11 @@ export async function waitFor(check: () => Promise<boolean>, { timeoutMs, interv
 }
 
 export const report = (name: string, figures: Record<string, unknown>) => console.log(`[fault] ${name}: ${JSON.stringify(figures)}`);
+
+/** Each fault test starts with an empty queue (its own cluster): an earlier file's leftovers would blur its figures. */
+export async function emptyQueue(): Promise<void> {
+  const { db } = await import("@/lib/db/knex");
+  await db.raw("delete from pgboss.job where name not like '\\_\\_%'").catch((error: { code?: string }) => {
+    if (error.code !== "42P01") throw error;
+  });
+}
