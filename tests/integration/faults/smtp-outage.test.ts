@@ -61,7 +61,7 @@ describe("fault: SMTP down for a simulated day", () => {
     await new Promise((resolve) => setTimeout(resolve, 3_000));
     const mails = await maildev.mails();
     const counts = new Map<string, number>();
-    for (const [key, to] of expected) counts.set(key, mails.filter((m) => m.subject.includes(key) && m.to.some((a) => a.address === to)).length);
+    for (const [key, to] of expected) counts.set(key, mails.filter((m) => m.subject.endsWith(key) && m.to.some((a) => a.address === to)).length);
     const notOnce = [...counts].filter(([, n]) => n !== 1);
     const states = (await db.raw("select state, count(*)::int as n from pgboss.job where name = 'mail.send' group by state")).rows;
     report("smtp-outage", {
