@@ -17,12 +17,27 @@ export default defineConfig({
         test: {
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
+          exclude: ["tests/integration/faults/**"],
           environment: "node",
           globalSetup: ["tests/support/integration-global-setup.ts"],
           setupFiles: ["tests/support/integration-setup.ts"],
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,
+        },
+      },
+      {
+        // Fault tests: their own PostgreSQL cluster and MailDev, stopped and started on purpose (npm run test:faults).
+        resolve: { alias: { ...alias, ...serverOnlyStub } },
+        test: {
+          name: "faults",
+          include: ["tests/integration/faults/**/*.test.ts"],
+          environment: "node",
+          globalSetup: ["tests/integration/faults/support/fault-global-setup.ts"],
+          setupFiles: ["tests/integration/faults/support/fault-setup.ts"],
+          fileParallelism: false,
+          testTimeout: 180_000,
+          hookTimeout: 120_000,
         },
       },
       {

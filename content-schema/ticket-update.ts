@@ -1,12 +1,13 @@
 import { z } from "zod";
 
-import { idList, optionalId, tagList } from "./ticket-form-fields";
+import { idempotencyKeySchema, idList, optionalId, tagList } from "./ticket-form-fields";
 import { messageVisibilitySchema, ticketPrioritySchema, ticketStatusSchema } from "./ticket-status";
 
 export const ticketReplySchema = z.object({
   ticketId: z.uuid(),
   body: z.string().trim().min(1, "Write a reply.").max(20_000),
   visibility: messageVisibilitySchema.default("public"),
+  idempotencyKey: idempotencyKeySchema.optional(),
   // Staff only: embed this sheet version adapted to the customer's machine.
   cardSheetVersionId: optionalId,
   cardMachineId: optionalId,
@@ -38,6 +39,7 @@ export const problemReportSchema = z.object({
   sheetVersionId: z.uuid(),
   summary: z.string().trim().min(3, "Say what is wrong with the sheet.").max(200),
   details: z.string().trim().max(5000).default(""),
+  idempotencyKey: idempotencyKeySchema.optional(),
 });
 
 export const snippetSchema = z.object({

@@ -14,6 +14,9 @@ SMTP_PORT=${TEST_SMTP_PORT:-1026}
 MAILDEV_WEB_PORT=${TEST_MAILDEV_PORT:-1081}
 S3_PORT=${TEST_S3_PORT:-4570}
 INBOUND_PORT=${TEST_INBOUND_SMTP_PORT:-2526}
+# The fault tests' own PostgreSQL and MailDev (they stop and start them on purpose).
+export FAULT_PG_PORT=${TEST_FAULT_PG_PORT:-$((PG_PORT + 10))} FAULT_SMTP_PORT=${TEST_FAULT_SMTP_PORT:-$((SMTP_PORT + 100))}
+export FAULT_MAILDEV_PORT=${TEST_FAULT_MAILDEV_PORT:-$((MAILDEV_WEB_PORT + 100))} FAULT_PG_DIR=$PWD/.tmp/fault-pg
 mkdir -p .tmp test-results
 pids=()
 cleanup() {
@@ -22,7 +25,7 @@ cleanup() {
 }
 trap cleanup EXIT
 
-for port in "$APP_PORT" "$SMTP_PORT" "$MAILDEV_WEB_PORT" "$PG_PORT"; do
+for port in "$APP_PORT" "$SMTP_PORT" "$MAILDEV_WEB_PORT" "$PG_PORT" "$FAULT_PG_PORT" "$FAULT_SMTP_PORT" "$FAULT_MAILDEV_PORT"; do
   if ss -ltn 2>/dev/null | grep -q "127.0.0.1:$port "; then echo "Port $port is in use; stop what runs there (or set TEST_*_PORT)." >&2; exit 1; fi
 done
 bash scripts/pg.sh destroy >/dev/null 2>&1 || true
@@ -62,8 +65,15 @@ wait_for_url "$E2E_BASE_URL/api/health" 90
 
 echo "== vitest: unit, integration, e2e"
 set +e
-npx vitest run "$@"
+npx vitest run --project unit --project integration --project e2e --passWithNoTests "$@"
 status=$?
+# The fault tests run after, on their own services, so their load does not slow the e2e run; a run limited
+# to some files runs them only when asked (tests/integration/faults/...).
+if [ $status -eq 0 ] && { [ $# -eq 0 ] || [[ "$*" == *tests/integration/faults* ]]; }; then
+  echo "== vitest: fault tests (own PostgreSQL and MailDev)"
+  if [ $# -eq 0 ]; then npm run test:faults; else npx vitest run --project faults "$@"; fi
+  status=$?
+fi
 set -e
 if [ $status -ne 0 ]; then
   echo "--- last lines of the app log"; tail -40 .tmp/test-app.log || true

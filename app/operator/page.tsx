@@ -1,13 +1,15 @@
 import { CreateVendorForm } from "@/components/operator/create-vendor-form";
+import { DeadLetterList } from "@/components/operator/dead-letter-list";
 import { PageHeader } from "@/components/ui/page-header";
 import { requireOperator } from "@/lib/auth/require-operator";
+import { listDeadLetters, summariseDeadLetters } from "@/lib/mail/dead-letters";
 import { listVendorsForOperator } from "@/lib/vendors/list-vendors-for-operator";
 
 export const metadata = { title: "Operator" };
 
 export default async function OperatorPage() {
   await requireOperator();
-  const vendors = await listVendorsForOperator();
+  const [vendors, deadLetterSummary, deadLetters] = await Promise.all([listVendorsForOperator(), summariseDeadLetters(), listDeadLetters()]);
   return (
     <div className="mx-auto max-w-5xl px-4 py-10">
       <PageHeader title="Operator" lead="Create vendor workspaces. Vendors' private data (sheets in draft, tickets, customers) is not shown here." />
@@ -24,6 +26,8 @@ export default async function OperatorPage() {
           ))}
         </tbody>
       </table>
+      <h2 className="mt-10 mb-3 text-lg font-semibold">Undelivered e-mail</h2>
+      <DeadLetterList summary={deadLetterSummary} letters={deadLetters} />
     </div>
   );
 }

@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 
+import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
 import { CHANGEABLE_PARAMS, changeableParamLabels, OUTCOME_RESULTS, OUTCOME_SYMPTOMS, outcomeResultLabels, outcomeSymptomLabels, type OutcomeResult } from "@/content-schema/outcome-fields";
 
 type Props = { vendorSlug: string; setupId: string; units: string; current: Record<string, string> };
@@ -22,7 +23,10 @@ export function OutcomeForm({ vendorSlug, setupId, units, current }: Props) {
     setPending(true);
     setMessage(null);
     try {
-      const res = await fetch(`/api/v1/vendors/${vendorSlug}/setups/${setupId}/outcomes`, { method: "POST", body: new FormData(form) });
+      const data = new FormData(form);
+      // A resubmit after an error carries the same key, so the report is recorded once.
+      const headers = { "Idempotency-Key": String(data.get("idempotencyKey")) };
+      const res = await fetch(`/api/v1/vendors/${vendorSlug}/setups/${setupId}/outcomes`, { method: "POST", body: data, headers });
       const body = (await res.json().catch(() => ({}))) as { message?: string; fieldErrors?: Errors };
       if (!res.ok) {
         setErrors(body.fieldErrors ?? {});
@@ -43,6 +47,7 @@ export function OutcomeForm({ vendorSlug, setupId, units, current }: Props) {
   return (
     <form onSubmit={submit} className="space-y-4" aria-label="Report an outcome">
       <input type="hidden" name="units" value={units} />
+      <IdempotencyKeyField renewOn={message?.ok ? message : null} />
       <fieldset>
         <legend className="text-sm font-semibold">How did the cut go?</legend>
         <div className="mt-2 flex flex-wrap gap-2">

@@ -4,6 +4,7 @@ import { useActionState } from "react";
 
 import { handoffAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { FormMessage } from "@/components/forms/form-message";
+import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 
@@ -15,6 +16,7 @@ export function HandoffForm({ vendor, ticketId, versions }: { vendor: string; ti
     <form action={action} className="space-y-2 text-sm" aria-label="Hand off to engineering">
       <input type="hidden" name="vendor" value={vendor} />
       <input type="hidden" name="ticketId" value={ticketId} />
+      <IdempotencyKeyField renewOn={state.ok ? state : null} />
       <label className="block">Sheet version
         <select name="sheetVersionId" className="min-h-9 w-full rounded border border-stone-300 bg-white px-2">
           {versions.map((v) => <option key={v.id} value={v.id}>{v.name}</option>)}

@@ -4,6 +4,7 @@ import { useEffect, useRef, useState } from "react";
 
 import { staffReplyAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { FormMessage } from "@/components/forms/form-message";
+import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import { SafeMarkdown } from "@/components/support/safe-markdown";
@@ -53,6 +54,7 @@ export function ReplyEditor({ vendor, ticketId, versions, machines, defaultMachi
     <form ref={form} action={formAction} onSubmit={onSubmit} className="space-y-3 rounded-lg border border-stone-300 bg-white p-4" aria-label="Reply editor">
       <input type="hidden" name="vendor" value={vendor} />
       <input type="hidden" name="ticketId" value={ticketId} />
+      <IdempotencyKeyField renewOn={state.ok ? state : null} />
       <fieldset className="flex flex-wrap gap-4 text-sm">
         <legend className="sr-only">Kind of message</legend>
         <label className="flex items-center gap-2"><input type="radio" name="visibility" value="public" defaultChecked /> Reply to customer</label>

@@ -5,6 +5,7 @@ import { z } from "zod";
 
 import { customerReplyAction } from "@/app/[vendor]/(customer)/support/actions";
 import { FormMessage } from "@/components/forms/form-message";
+import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 
@@ -28,6 +29,7 @@ export function CustomerReplyForm({ vendor, ticketId }: { vendor: string; ticket
     <form ref={form} action={formAction} onSubmit={onSubmit} className="space-y-3" aria-label="Reply">
       <input type="hidden" name="vendor" value={vendor} />
       <input type="hidden" name="ticketId" value={ticketId} />
+      <IdempotencyKeyField renewOn={state.ok ? state : null} />
       <label htmlFor="f-reply" className="text-sm font-medium">Your reply</label>
       <textarea id="f-reply" name="body" rows={4} className="w-full rounded border border-stone-300 bg-white px-3 py-2" />
       {errors.body ? <p className="text-sm text-red-800"><span aria-hidden>⚠ </span>{errors.body.join(" ")}</p> : null}

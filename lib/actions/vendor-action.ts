@@ -6,6 +6,7 @@ import { resolveVendorAccess, type VendorAccess } from "@/lib/auth/access";
 import type { Member } from "@/lib/auth/membership";
 import type { Permission } from "@/lib/auth/permissions";
 import { getSessionUser, type SessionUser } from "@/lib/auth/session-user";
+import { CATCHING_UP, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
 
@@ -50,8 +51,10 @@ export function vendorAction<S extends z.ZodType>(
       }
       // Next's redirect() and notFound() signal by throwing; let them through.
       if (error && typeof error === "object" && "digest" in error) throw error;
+      if (isDatabaseUnavailable(error)) return { ok: false, message: CATCHING_UP, values };
       console.error("[action]", error);
-      return { ok: false, message: "Something went wrong on our side. Nothing was saved.", values };
+      // Not "nothing was saved": a failure after the commit (a revalidation, say) leaves the write in place.
+      return { ok: false, message: "Something went wrong on our side. Please try again; a form sent twice is saved once.", values };
     }
   };
 }

@@ -77,7 +77,8 @@ export const authOptions: NextAuthOptions = {
       from: process.env.MAIL_FROM ?? "Swarfbook <no-reply@swarfbook.localhost>",
       maxAge: 15 * 60,
       async sendVerificationRequest({ identifier, url }) {
-        await enqueueMail({
+        // next-auth stored the link's token already; the mail only needs to be queued.
+        await enqueueMail(db, {
           to: identifier,
           subject: "Your Swarfbook sign-in link",
           text: `Sign in to Swarfbook with this link (valid for 15 minutes, once):\n\n${url}\n\nIf you did not ask for it, ignore this e-mail.`,

@@ -2,6 +2,7 @@ import "server-only";
 
 import type { OutcomeFields, OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { writeAudit } from "@/lib/audit/write-audit";
+import { lockIdempotencyKey } from "@/lib/db/idempotent";
 import { db } from "@/lib/db/knex";
 import { scheduleFieldRefresh } from "@/lib/field/refresh-rollups";
 import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
@@ -22,7 +23,7 @@ export type Outcome = {
 type Options = { vendorId: string; userId: string; setupId: string };
 
 /** Records how a cut went, against the setup's pinned version and machine. The photo must sniff as an image. */
-export async function recordOutcome({ vendorId, userId, setupId, fields, photo }: Options & { fields: OutcomeFields; photo?: Buffer | null }) {
+export async function recordOutcome({ vendorId, userId, setupId, fields, photo, idempotencyKey }: Options & { fields: OutcomeFields; photo?: Buffer | null; idempotencyKey?: string }) {
   const setup = await db("setups").where({ vendor_id: vendorId, user_id: userId, id: setupId }).first("id", "sheet_version_id", "machine_id");
   if (!setup) throw new NotFound("That setup was not found.");
   let photoKey: string | null = null;
@@ -35,24 +36,32 @@ export async function recordOutcome({ vendorId, userId, setupId, fields, photo }
     await getStorage().put(photoKey, photo, sniffed.contentType);
     photoSize = photo.byteLength;
   }
-  const [row] = await db("outcomes")
-    .insert({
-      vendor_id: vendorId,
-      setup_id: setup.id,
-      sheet_version_id: setup.sheet_version_id,
-      user_id: userId,
-      machine_id: setup.machine_id,
-      result: fields.result,
-      symptom: fields.result === "failed" ? (fields.symptom ?? null) : null,
-      changes: JSON.stringify(fields.result === "worked_after_changes" ? fields.changes : {}),
-      notes: fields.notes,
-      photo_key: photoKey,
-      photo_size_bytes: photoSize,
-    })
-    .returning("id");
-  await writeAudit({ vendorId, actorUserId: userId, action: "outcome.create", objectType: "outcome", objectId: row.id, details: { setupId, result: fields.result } });
-  await scheduleFieldRefresh();
-  return { id: row.id as string };
+  return db.transaction(async (trx) => {
+    if (idempotencyKey) {
+      await lockIdempotencyKey(trx, "outcome", idempotencyKey);
+      const earlier = await trx("outcomes").where({ vendor_id: vendorId, user_id: userId, idempotency_key: idempotencyKey }).first<{ id: string } | undefined>("id");
+      if (earlier) return { id: earlier.id, created: false };
+    }
+    const [row] = await trx("outcomes")
+      .insert({
+        vendor_id: vendorId,
+        setup_id: setup.id,
+        sheet_version_id: setup.sheet_version_id,
+        user_id: userId,
+        machine_id: setup.machine_id,
+        result: fields.result,
+        symptom: fields.result === "failed" ? (fields.symptom ?? null) : null,
+        changes: JSON.stringify(fields.result === "worked_after_changes" ? fields.changes : {}),
+        notes: fields.notes,
+        photo_key: photoKey,
+        photo_size_bytes: photoSize,
+        idempotency_key: idempotencyKey ?? null,
+      })
+      .returning("id");
+    await writeAudit({ vendorId, actorUserId: userId, action: "outcome.create", objectType: "outcome", objectId: row.id, details: { setupId, result: fields.result } }, trx);
+    await scheduleFieldRefresh(trx);
+    return { id: row.id as string, created: true };
+  });
 }
 
 export async function listOutcomes({ vendorId, userId, setupId }: Options): Promise<Outcome[]> {

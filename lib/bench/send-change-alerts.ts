@@ -102,9 +102,10 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
         .ignore()
         .returning("user_id");
       if (!inserted.length) return;
-      // Queued before the commit: if queueing fails the row rolls back and the retry sends it.
+      // The mail job commits with the "sent" row: both or neither. The key makes a second queueing a no-op.
       const stop = appUrl(`/api/v1/vendors/${vendor.slug}/setups/alerts/stop?token=${createAlertStopToken({ vendorId, userId })}`);
-      await enqueueMail({ to: setups[0].email, ...mail, headers: { "List-Unsubscribe": `<${stop}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" } });
+      const headers = { "List-Unsubscribe": `<${stop}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" };
+      await enqueueMail(trx, { to: setups[0].email, ...mail, headers }, { key: `change-alert:${versionId}:${userId}` });
       sent += 1;
     });
   }

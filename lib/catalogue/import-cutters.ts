@@ -2,7 +2,6 @@ import "server-only";
 
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
-import { emitSheetEvent } from "@/lib/events/emit-sheet-event";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 
 import { checkCutterCsv, formatCellError, type CutterCsvReport } from "./cutter-csv";
@@ -28,14 +27,13 @@ export async function importCutters({ vendorId, userId, csv, mode, onProgress }:
     throw new InvalidInput(`Nothing was imported: ${bad.length} row(s) have errors.`, { csv: messages });
   }
   const good = report.rows.filter((r) => r.fields);
-  const ids: string[] = [];
+  // Each insert queues its catalogue event in this transaction.
   await db.transaction(async (trx) => {
     for (const [index, row] of good.entries()) {
-      ids.push((await insertCutter({ vendorId, userId, fields: row.fields!, trx })).id);
+      await insertCutter({ vendorId, userId, fields: row.fields!, trx });
       onProgress?.(index + 1, good.length);
     }
     await writeAudit({ vendorId, actorUserId: userId, action: "cutter.import", objectType: "cutter", details: { imported: good.length, skipped: bad.length, mode } }, trx);
   });
-  for (const entityId of ids) await emitSheetEvent({ type: "catalogue.changed", vendorId, entity: "cutter", entityId });
   return { imported: good.length, skipped: bad.length, report };
 }

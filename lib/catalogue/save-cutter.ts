@@ -17,15 +17,15 @@ type Actor = { vendorId: string; userId: string | null };
 const duplicateSku = (sku: string) => `A cutter with SKU ${sku} already exists.`;
 
 /** Inserts one cutter (inside the caller's transaction when given). */
-export async function insertCutter({ vendorId, userId, fields, trx }: Actor & { fields: CutterFields; trx: Knex }): Promise<Cutter> {
+export async function insertCutter({ vendorId, userId, fields, trx }: Actor & { fields: CutterFields; trx: Knex.Transaction }): Promise<Cutter> {
   const [row] = await trx("cutters").insert({ ...cutterToRow(fields), vendor_id: vendorId, short_code: newShortCode() }).returning("*");
   await writeAudit({ vendorId, actorUserId: userId, action: "cutter.create", objectType: "cutter", objectId: row.id, details: { sku: fields.sku } }, trx);
+  await emitSheetEvent(trx, { type: "catalogue.changed", vendorId, entity: "cutter", entityId: row.id });
   return rowToCutter(row);
 }
 
 export async function createCutter(options: Actor & { fields: CutterFields }): Promise<Cutter> {
   const cutter = await withUniqueField("sku", duplicateSku(options.fields.sku), () => db.transaction((trx) => insertCutter({ ...options, trx })));
-  await emitSheetEvent({ type: "catalogue.changed", vendorId: options.vendorId, entity: "cutter", entityId: cutter.id });
   return cutter;
 }
 
@@ -35,9 +35,9 @@ export async function updateCutter({ vendorId, userId, id, fields }: Actor & { i
       const [row] = await trx("cutters").where({ vendor_id: vendorId, id }).update({ ...cutterToRow(fields), updated_at: trx.fn.now() }).returning("*");
       if (!row) throw new NotFound("No such cutter.");
       await writeAudit({ vendorId, actorUserId: userId, action: "cutter.update", objectType: "cutter", objectId: id, details: { sku: fields.sku } }, trx);
+      await emitSheetEvent(trx, { type: "catalogue.changed", vendorId, entity: "cutter", entityId: id });
       return rowToCutter(row);
     }),
   );
-  await emitSheetEvent({ type: "catalogue.changed", vendorId, entity: "cutter", entityId: id });
   return cutter;
 }

@@ -22,9 +22,9 @@ export async function saveMachineClass({ vendorId, userId, fields, id }: Options
       if (!row) throw new NotFound("No such machine class.");
       const action = id ? "machine_class.update" : "machine_class.create";
       await writeAudit({ vendorId, actorUserId: userId, action, objectType: "machine_class", objectId: row.id, details: { slug: fields.slug } }, trx);
+      await emitSheetEvent(trx, { type: "catalogue.changed", vendorId, entity: "machine_class", entityId: row.id });
       return rowToMachineClass(row);
     }),
   );
-  await emitSheetEvent({ type: "catalogue.changed", vendorId, entity: "machine_class", entityId: saved.id });
   return saved;
 }

@@ -21,9 +21,9 @@ export async function saveMaterial({ vendorId, userId, fields, id }: Options): P
         : await trx("materials").insert({ ...materialToRow(fields), vendor_id: vendorId }).returning("*");
       if (!row) throw new NotFound("No such material.");
       await writeAudit({ vendorId, actorUserId: userId, action: id ? "material.update" : "material.create", objectType: "material", objectId: row.id, details: { slug: fields.slug } }, trx);
+      await emitSheetEvent(trx, { type: "catalogue.changed", vendorId, entity: "material", entityId: row.id });
       return rowToMaterial(row);
     }),
   );
-  await emitSheetEvent({ type: "catalogue.changed", vendorId, entity: "material", entityId: saved.id });
   return saved;
 }

@@ -1,5 +1,7 @@
 import "server-only";
 
+import { db } from "@/lib/db/knex";
+import type { JobMeta } from "@/lib/jobs/job-meta";
 import { enqueue } from "@/lib/jobs/enqueue";
 
 import { sheetEventSchema } from "./sheet-events";
@@ -7,12 +9,17 @@ import { SHEET_EVENT_SUBSCRIBERS } from "./subscribers";
 
 export const SHEET_EVENT_DELIVERY_QUEUE = "sheet.events.deliver";
 
-/** Fan one event out into one job per subscriber, so each retries on its own. */
-export async function dispatchSheetEvent(data: unknown): Promise<void> {
+/**
+ * Fan one event out into one job per subscriber, so each retries on its own. The deliveries are keyed by
+ * the event's job, so a retried fan-out queues nothing twice; one transaction queues all or none.
+ */
+export async function dispatchSheetEvent(data: unknown, job?: JobMeta): Promise<void> {
   const event = sheetEventSchema.parse(data);
-  for (const subscriber of SHEET_EVENT_SUBSCRIBERS) {
-    await enqueue(SHEET_EVENT_DELIVERY_QUEUE, { subscriber: subscriber.name, event });
-  }
+  await db.transaction(async (trx) => {
+    for (const subscriber of SHEET_EVENT_SUBSCRIBERS) {
+      await enqueue(trx, SHEET_EVENT_DELIVERY_QUEUE, { subscriber: subscriber.name, event }, { key: job ? `${job.id}:${subscriber.name}` : undefined });
+    }
+  });
 }
 
 export async function deliverSheetEvent(data: unknown): Promise<void> {

@@ -1,5 +1,6 @@
 import "server-only";
 
+import { db } from "@/lib/db/knex";
 import type { SheetEventSubscriber } from "@/lib/events/subscribers";
 
 import { scheduleFieldRefresh } from "./refresh-rollups";
@@ -8,6 +9,6 @@ import { scheduleFieldRefresh } from "./refresh-rollups";
 export const fieldRefreshSubscriber: SheetEventSubscriber = {
   name: "field-refresh",
   handle: async (event) => {
-    if (event.type === "version.published" || event.type === "version.withdrawn") await scheduleFieldRefresh();
+    if (event.type === "version.published" || event.type === "version.withdrawn") await scheduleFieldRefresh(db);
   },
 };

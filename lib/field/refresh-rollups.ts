@@ -3,8 +3,9 @@ import "server-only";
 import type { Knex } from "knex";
 
 import { db } from "@/lib/db/knex";
+import { jobWriter } from "@/lib/jobs/boss";
 import { DEFAULT_JOB_OPTIONS, ensureQueue } from "@/lib/jobs/enqueue";
-import { getBoss } from "@/lib/jobs/boss";
+import { inTransaction, knexExecutor } from "@/lib/jobs/knex-executor";
 
 export const FIELD_REFRESH_QUEUE = "field.refresh-rollups";
 const VIEWS = ["field_version_rollups", "field_change_rollups"] as const;
@@ -30,16 +31,11 @@ export async function refreshFieldRollupsJob(): Promise<void> {
 
 /**
  * After a new outcome or hand-off: one refresh per 20 s at most, however many reports arrive.
- * Best effort: the report is already saved, and the five-minute schedule refreshes anyway.
+ * Queued in the report's own transaction, so a saved report always brings its refresh.
  */
-export async function scheduleFieldRefresh(): Promise<void> {
-  try {
-    await ensureQueue(FIELD_REFRESH_QUEUE);
-    const boss = await getBoss();
-    await boss.sendDebounced(FIELD_REFRESH_QUEUE, {}, { ...DEFAULT_JOB_OPTIONS, retryLimit: 3 }, 20, "field");
-  } catch (error) {
-    console.error("[field] could not schedule a rollup refresh", error);
-  }
+export async function scheduleFieldRefresh(trx: Knex | Knex.Transaction): Promise<void> {
+  await ensureQueue(FIELD_REFRESH_QUEUE);
+  await inTransaction(trx, (t) => jobWriter().sendDebounced(FIELD_REFRESH_QUEUE, {}, { ...DEFAULT_JOB_OPTIONS, retryLimit: 3, db: knexExecutor(t) }, 20, "field"));
 }
 
 export async function lastFieldRefresh(): Promise<Date | null> {

@@ -95,8 +95,8 @@ export async function sendVendorDigests(vendor: Vendor, now = new Date()): Promi
     await db.transaction(async (trx) => {
       const inserted = await trx("field_digests_sent").insert({ vendor_id: vendor.id, user_id: person.id, week_start: week }).onConflict(["vendor_id", "user_id", "week_start"]).ignore().returning("user_id");
       if (!inserted.length) return;
-      // Queued before the commit: if queueing fails the row rolls back and the retry sends it.
-      await enqueueMail({ to: person.email, ...mail, headers: { "List-Unsubscribe": `<${stopUrl}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" } });
+      // The mail job commits with the "sent" row: both or neither. The key makes a second queueing a no-op.
+      await enqueueMail(trx, { to: person.email, ...mail, headers: { "List-Unsubscribe": `<${stopUrl}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" } }, { key: `digest:${vendor.id}:${person.id}:${week}` });
       sent += 1;
     });
   }
@@ -109,12 +109,12 @@ export async function sendDigestOnRequest(vendor: Vendor, userId: string, now = 
   if (!person) return false;
   const stopUrl = digestStopUrl(vendor, person.id);
   const mail = renderDigest({ ...(await buildDigestContent(vendor, weekStartOf(now))), stopUrl });
-  await enqueueMail({ to: person.email, ...mail, headers: { "List-Unsubscribe": `<${stopUrl}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" } });
+  await enqueueMail(db, { to: person.email, ...mail, headers: { "List-Unsubscribe": `<${stopUrl}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" } });
   return true;
 }
 
 export async function requestDigest(vendorId: string, userId: string): Promise<void> {
-  await enqueue(FIELD_DIGEST_QUEUE, { vendorId, userId });
+  await enqueue(db, FIELD_DIGEST_QUEUE, { vendorId, userId });
 }
 
 /**
@@ -126,7 +126,9 @@ export async function weeklyDigestJob(data: unknown): Promise<void> {
   const vendors = await listVendors();
   if (!job.vendorId) {
     const week = weekStartOf(new Date());
-    for (const vendor of vendors) await enqueue(FIELD_DIGEST_QUEUE, { vendorId: vendor.id }, { singletonKey: `${vendor.id}:${week}` });
+    await db.transaction(async (trx) => {
+      for (const vendor of vendors) await enqueue(trx, FIELD_DIGEST_QUEUE, { vendorId: vendor.id }, { key: `${vendor.id}:${week}` });
+    });
     return;
   }
   const vendor = vendors.find((v) => v.id === job.vendorId);

@@ -4,12 +4,15 @@ import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/fi
 import { FIELD_REFRESH_QUEUE, refreshFieldRollupsJob } from "@/lib/field/refresh-rollups";
 import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
 import { SHEET_EVENTS_QUEUE } from "@/lib/events/sheet-events";
-import { MAIL_QUEUE } from "@/lib/mail/enqueue-mail";
+import { MAIL_QUEUE, mailRetrySchedule } from "@/lib/mail/enqueue-mail";
+import { DEAD_LETTER_CHECK_CRON, DEAD_LETTER_CHECK_QUEUE, deadLetterCheckJob } from "@/lib/mail/notify-dead-letters";
 import { sendMailJob } from "@/lib/mail/send-mail-job";
 import { cleanupUploadsJob, UPLOAD_CLEANUP_CRON, UPLOAD_CLEANUP_QUEUE } from "@/lib/storage/cleanup-uploads";
 import { reindexVendorJob, SEARCH_REINDEX_VENDOR_QUEUE } from "@/search/indexing/search-index-jobs";
 
-export type JobHandler = (data: unknown) => Promise<void>;
+import type { JobMeta } from "./job-meta";
+
+export type JobHandler = (data: unknown, job: JobMeta) => Promise<void>;
 
 // Every background job of the app, by queue name. Features add their queues here.
 export const JOB_HANDLERS: Record<string, JobHandler> = {
@@ -20,6 +23,7 @@ export const JOB_HANDLERS: Record<string, JobHandler> = {
   [FIELD_REFRESH_QUEUE]: refreshFieldRollupsJob,
   [FIELD_DIGEST_QUEUE]: weeklyDigestJob,
   [UPLOAD_CLEANUP_QUEUE]: cleanupUploadsJob,
+  [DEAD_LETTER_CHECK_QUEUE]: deadLetterCheckJob,
 };
 
 // Queues that also run on a clock (cron, UTC).
@@ -28,4 +32,10 @@ export const JOB_SCHEDULES: Record<string, string> = {
   [FIELD_REFRESH_QUEUE]: "*/5 * * * *",
   [FIELD_DIGEST_QUEUE]: FIELD_DIGEST_CRON,
   [UPLOAD_CLEANUP_QUEUE]: UPLOAD_CLEANUP_CRON,
+  [DEAD_LETTER_CHECK_QUEUE]: DEAD_LETTER_CHECK_CRON,
+};
+
+// Queues whose retries follow a capped exponential backoff over a long window (the rest use DEFAULT_JOB_OPTIONS).
+export const JOB_RETRY_SCHEDULES: Record<string, () => { baseSeconds: number; capSeconds: number }> = {
+  [MAIL_QUEUE]: mailRetrySchedule,
 };

@@ -48,13 +48,17 @@ export async function inviteMember(opts: {
       { vendorId: opts.vendorId, actorUserId: opts.actorUserId, action: "member.invite", objectType: "invitation", objectId: row.id, details: { email: opts.email, role: opts.role } },
       trx,
     );
+    const link = appUrl(`/${opts.vendorSlug}/join/${token}`);
+    await enqueueMail(
+      trx,
+      {
+        to: opts.email,
+        subject: `You are invited to ${opts.vendorName} on Swarfbook`,
+        text: `You have been invited to join ${opts.vendorName} on Swarfbook as ${opts.role}.\n\nAccept the invitation (valid for ${INVITATION_DAYS} days, once):\n${link}\n`,
+      },
+      { key: `invitation:${row.id}` },
+    );
     return row.id as string;
-  });
-  const link = appUrl(`/${opts.vendorSlug}/join/${token}`);
-  await enqueueMail({
-    to: opts.email,
-    subject: `You are invited to ${opts.vendorName} on Swarfbook`,
-    text: `You have been invited to join ${opts.vendorName} on Swarfbook as ${opts.role}.\n\nAccept the invitation (valid for ${INVITATION_DAYS} days, once):\n${link}\n`,
   });
   return { invitationId, token };
 }

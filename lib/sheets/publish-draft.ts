@@ -26,8 +26,8 @@ export async function publishDraft({ vendorId, userId, slug }: { vendorId: strin
     if (previous) {
       await writeAudit({ vendorId, actorUserId: userId, action: "sheet.supersede", objectType: "sheet_version", objectId: previous.id, details: { slug, number: previous.number, by: draft.number } }, trx);
     }
+    await emitSheetEvent(trx, { type: "version.published", vendorId, sheetId: sheet.id, versionId: draft.id, supersededVersionId: previous?.id ?? null });
     return { number: draft.number, state: "published" as const, superseded: previous?.number ?? null, versionId: draft.id, previousVersionId: previous?.id ?? null, sheetId: sheet.id };
   });
-  await emitSheetEvent({ type: "version.published", vendorId, sheetId: result.sheetId, versionId: result.versionId, supersededVersionId: result.previousVersionId });
   return result;
 }

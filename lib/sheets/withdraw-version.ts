@@ -21,8 +21,8 @@ export async function withdrawVersion({ vendorId, userId, slug, reason, number }
     if (target.state !== "published" && target.state !== "superseded") throw new Conflict(`Version ${target.number} is ${target.state.replace("_", " ")}; only published or superseded versions are withdrawn.`);
     await trx("sheet_versions").where({ vendor_id: vendorId, id: target.id }).update({ state: "withdrawn", withdrawn_at: trx.fn.now(), withdrawn_reason: text, updated_at: trx.fn.now() });
     await writeAudit({ vendorId, actorUserId: userId, action: "sheet.withdraw", objectType: "sheet_version", objectId: target.id, details: { slug, number: target.number, reason: text } }, trx);
+    await emitSheetEvent(trx, { type: "version.withdrawn", vendorId, sheetId: sheet.id, versionId: target.id });
     return { number: target.number, state: "withdrawn" as const, sheetId: sheet.id, versionId: target.id };
   });
-  await emitSheetEvent({ type: "version.withdrawn", vendorId, sheetId: result.sheetId, versionId: result.versionId });
   return result;
 }

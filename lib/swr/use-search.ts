@@ -5,6 +5,7 @@ import useSWR from "swr";
 import type { SearchResponse } from "@/search/run/search-response";
 
 import { searchApiUrl } from "./search-url";
+import { onErrorRetry } from "./retry";
 import { fetchJson } from "./use-api-json";
 
 /** Search results for a URL query string; the previous results stay on screen while the next ones load. */
@@ -13,5 +14,6 @@ export function useSearch(vendorSlug: string, query: string) {
     keepPreviousData: true,
     revalidateOnFocus: false,
     dedupingInterval: 5000,
+    onErrorRetry,
   });
 }

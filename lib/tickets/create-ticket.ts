@@ -57,8 +57,8 @@ export async function createTicket({ vendor, customerId, input }: Options): Prom
       { vendorId: vendor.id, actorUserId: customerId, action: "ticket.create", objectType: "ticket", objectId: row.id, details: { number: row.number } },
       trx,
     );
+    await notifyNewTicket(trx, { vendor, ticketId: row.id });
     return { ...row, created: true };
   });
-  if (result.created) await notifyNewTicket({ vendor, ticketId: result.id });
   return result;
 }

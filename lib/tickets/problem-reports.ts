@@ -1,6 +1,7 @@
 import "server-only";
 
 import { writeAudit } from "@/lib/audit/write-audit";
+import { lockIdempotencyKey } from "@/lib/db/idempotent";
 import { db } from "@/lib/db/knex";
 import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
 import { scheduleFieldRefresh } from "@/lib/field/refresh-rollups";
@@ -18,23 +19,27 @@ export type ProblemReport = {
   createdAt: string;
 };
 
-type CreateOptions = { vendorId: string; actorUserId: string; ticketId: string; sheetVersionId: string; summary: string; details: string };
+type CreateOptions = { vendorId: string; actorUserId: string; ticketId: string; sheetVersionId: string; summary: string; details: string; idempotencyKey?: string };
 
 /** Hand-off to engineering: a problem with one sheet version, raised from a ticket. */
-export async function createProblemReport(o: CreateOptions): Promise<{ id: string }> {
-  const created = await db.transaction(async (trx) => {
+export async function createProblemReport(o: CreateOptions): Promise<{ id: string; created: boolean }> {
+  return db.transaction(async (trx) => {
+    if (o.idempotencyKey) {
+      await lockIdempotencyKey(trx, "problem-report", o.idempotencyKey);
+      const earlier = await trx("problem_reports").where({ vendor_id: o.vendorId, reported_by: o.actorUserId, idempotency_key: o.idempotencyKey }).first<{ id: string } | undefined>("id");
+      if (earlier) return { id: earlier.id, created: false };
+    }
     const ticket = await trx("tickets").where({ id: o.ticketId, vendor_id: o.vendorId }).first("id");
     if (!ticket) throw new NotFound();
     const version = await trx("sheet_versions").where({ id: o.sheetVersionId, vendor_id: o.vendorId }).first("id");
     if (!version) throw new InvalidInput("Please correct the marked fields.", { sheetVersionId: ["Choose a sheet version of this vendor."] });
     const [row] = await trx("problem_reports")
-      .insert({ vendor_id: o.vendorId, sheet_version_id: o.sheetVersionId, ticket_id: o.ticketId, reported_by: o.actorUserId, summary: o.summary, details: o.details })
+      .insert({ vendor_id: o.vendorId, sheet_version_id: o.sheetVersionId, ticket_id: o.ticketId, reported_by: o.actorUserId, summary: o.summary, details: o.details, idempotency_key: o.idempotencyKey ?? null })
       .returning<{ id: string }[]>("id");
     await writeAudit({ vendorId: o.vendorId, actorUserId: o.actorUserId, action: "ticket.handoff", objectType: "ticket", objectId: o.ticketId, details: { problemReportId: row.id, sheetVersionId: o.sheetVersionId } }, trx);
-    return row;
+    await scheduleFieldRefresh(trx);
+    return { id: row.id, created: true };
   });
-  await scheduleFieldRefresh();
-  return created;
 }
 
 /** Problem reports for the Drafting side, newest first; optionally for one sheet version or one sheet's versions. */

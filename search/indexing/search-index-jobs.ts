@@ -1,5 +1,6 @@
 import "server-only";
 
+import type { Knex } from "knex";
 import { z } from "zod";
 
 import type { SheetEvent } from "@/lib/events/sheet-events";
@@ -29,4 +30,4 @@ export async function reindexVendorJob(data: unknown): Promise<void> {
   await reindexVendor({ engine: getSearchEngine(), vendorId: vendorJob.parse(data).vendorId });
 }
 
-export const enqueueVendorReindex = (vendorId: string) => enqueue(SEARCH_REINDEX_VENDOR_QUEUE, { vendorId }, { singletonKey: `search-reindex-${vendorId}` });
+export const enqueueVendorReindex = (trx: Knex | Knex.Transaction, vendorId: string) => enqueue(trx, SEARCH_REINDEX_VENDOR_QUEUE, { vendorId });

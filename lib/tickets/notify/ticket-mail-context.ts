@@ -1,6 +1,6 @@
 import "server-only";
 
-import { db } from "@/lib/db/knex";
+import type { Knex } from "knex";
 
 export type TicketMailContext = {
   ticketId: string;
@@ -14,8 +14,9 @@ export type TicketMailContext = {
 
 export { REPLY_ABOVE } from "./reply-mail";
 
-export async function loadTicketMailContext(vendorId: string, ticketId: string): Promise<TicketMailContext | null> {
-  const row = await db("tickets as t")
+/** Read inside the writing transaction, so a ticket or message not yet committed is seen. */
+export async function loadTicketMailContext(trx: Knex.Transaction, vendorId: string, ticketId: string): Promise<TicketMailContext | null> {
+  const row = await trx("tickets as t")
     .join("vendors as v", "v.id", "t.vendor_id")
     .join("users as c", "c.id", "t.customer_id")
     .leftJoin("users as a", "a.id", "t.assignee_id")
@@ -34,8 +35,8 @@ export async function loadTicketMailContext(vendorId: string, ticketId: string):
 }
 
 /** The vendor's support team (support staff; admins when there are none), each with the id their reply address is bound to. */
-export async function supportTeam(vendorId: string): Promise<{ id: string; email: string }[]> {
-  const rows = await db("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).select("u.id", "u.email", "m.role");
+export async function supportTeam(trx: Knex.Transaction, vendorId: string): Promise<{ id: string; email: string }[]> {
+  const rows = await trx("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).select("u.id", "u.email", "m.role");
   const support = rows.filter((r) => r.role === "support");
   return (support.length ? support : rows).map((r) => ({ id: r.id as string, email: r.email as string }));
 }

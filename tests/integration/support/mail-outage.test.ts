@@ -45,6 +45,8 @@ describe("mail while SMTP is down", () => {
   it("keeps the job and delivers it once SMTP is back", { timeout: 120_000 }, async () => {
     const port = await freePort();
     process.env.SMTP_PORT = String(port);
+    // The schedule shortened by configuration: retries after 1 s, 2 s, 2 s, ...
+    Object.assign(process.env, { MAIL_RETRY_BASE_SECONDS: "1", MAIL_RETRY_CAP_SECONDS: "2" });
     const { enqueueMail } = await import("@/lib/mail/enqueue-mail");
     const { startWorker } = await import("@/lib/jobs/start-worker");
     const { getBoss } = await import("@/lib/jobs/boss");
@@ -54,7 +56,7 @@ describe("mail while SMTP is down", () => {
     await getBoss();
     await db.raw("delete from pgboss.job where name = 'mail.send'");
     const subject = `Outage test ${port}`;
-    await enqueueMail({ to: "maker@example.test", subject, text: "Your ticket has a reply." });
+    await enqueueMail(db, { to: "maker@example.test", subject, text: "Your ticket has a reply." });
     await startWorker();
 
     // SMTP is down: the first attempt fails and the job waits for a retry instead of being lost.

@@ -5,7 +5,7 @@ import { redirect } from "next/navigation";
 import { z } from "zod";
 
 import { createTicketSchema } from "@/content-schema/ticket-create";
-import { idList } from "@/content-schema/ticket-form-fields";
+import { idempotencyKeySchema, idList } from "@/content-schema/ticket-form-fields";
 import { ticketRatingSchema } from "@/content-schema/ticket-update";
 import { vendorAction } from "@/lib/actions/vendor-action";
 import { addCustomerMessage } from "@/lib/tickets/add-message";
@@ -18,10 +18,10 @@ export const createTicketAction = vendorAction({ permission: "support.use", sche
   redirect(`/${vendor.slug}/support/tickets/${ticket.id}`);
 });
 
-const customerReplySchema = z.object({ ticketId: z.uuid(), body: z.string().trim().min(1, "Write a reply.").max(20_000), attachmentIds: idList(10) });
+const customerReplySchema = z.object({ ticketId: z.uuid(), body: z.string().trim().min(1, "Write a reply.").max(20_000), attachmentIds: idList(10), idempotencyKey: idempotencyKeySchema.optional() });
 
 export const customerReplyAction = vendorAction({ permission: "support.use", schema: customerReplySchema }, async (input, { vendor, user }) => {
-  await addCustomerMessage({ vendorId: vendor.id, ticketId: input.ticketId, authorId: user.id, body: input.body, attachmentIds: input.attachmentIds });
+  await addCustomerMessage({ vendorId: vendor.id, ticketId: input.ticketId, authorId: user.id, body: input.body, attachmentIds: input.attachmentIds, idempotencyKey: input.idempotencyKey });
   revalidatePath(`/${vendor.slug}/support/tickets/${input.ticketId}`);
   return { ok: true, message: "Reply sent." };
 });

@@ -49,7 +49,7 @@ export const staffReplyAction = vendorAction({ permission: "desk.use", schema: t
     if (!input.cardMachineId) throw new InvalidInput("Please correct the marked fields.", { cardMachineId: ["Choose the customer's machine to adapt the sheet to."] });
     card = await buildCard({ vendorId: vendor.id, sheetVersionId: input.cardSheetVersionId, machineId: input.cardMachineId, customerId: ticket.customer_id });
   }
-  await addStaffMessage({ vendorId: vendor.id, ticketId: input.ticketId, authorId: user.id, body: input.body, visibility: input.visibility, card, attachmentIds: input.attachmentIds });
+  await addStaffMessage({ vendorId: vendor.id, ticketId: input.ticketId, authorId: user.id, body: input.body, visibility: input.visibility, card, attachmentIds: input.attachmentIds, idempotencyKey: input.idempotencyKey });
   revalidatePath(ticketPath(vendor.slug, input.ticketId));
   return { ok: true, message: input.visibility === "note" ? "Note added." : "Reply sent." };
 });

@@ -25,7 +25,8 @@ export const GET = withVendor<P>(
 );
 
 // PUT /api/v1/vendors/{vendor}/sheets/{slug}/draft: { source, revision } saves the open draft; without an
-// open draft (and without revision) it starts the next version from this source. A stale revision is 409.
+// open draft (and without revision) it starts the next version from this source. A stale revision is 409,
+// a missing one on an open draft 428.
 export const PUT = withVendor<P>(
   async (request, { access, params }) => {
     const body = parseInput(saveDraftSchema, await readJson(request, 256 * 1024));
@@ -36,8 +37,19 @@ export const PUT = withVendor<P>(
       const created = await startNewVersion({ ...actor, slug: params.slug, source: body.source });
       return NextResponse.json({ number: created.number, state: "draft", revision: created.revision, issues: created.issues }, { status: 201 });
     }
+    if (body.revision === undefined) {
+      // Saving over an open draft without saying which revision it edits would skip the optimistic lock.
+      return NextResponse.json(
+        {
+          error: "revision_required",
+          message: `This sheet has an open draft (revision ${draft?.revision}). GET the draft, edit its source, and PUT { source, revision } with the revision you read; a newer save answers 409 with the current text.`,
+          current: { revision: draft?.revision },
+        },
+        { status: 428 },
+      );
+    }
     try {
-      const saved = await saveDraft({ ...actor, slug: params.slug, source: body.source, revision: body.revision ?? draft?.revision ?? 0 });
+      const saved = await saveDraft({ ...actor, slug: params.slug, source: body.source, revision: body.revision });
       return NextResponse.json({ number: draft?.number, state: "draft", revision: saved.revision, valid: saved.valid, issues: saved.issues });
     } catch (error) {
       if (error instanceof DraftConflict) {

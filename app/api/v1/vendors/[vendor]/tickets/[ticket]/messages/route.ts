@@ -3,20 +3,21 @@ import { z } from "zod";
 
 import { NotFound } from "@/lib/errors/domain-errors";
 import { parseInput } from "@/lib/errors/zod-field-errors";
+import { idempotencyKeyOf } from "@/lib/http/idempotency-key";
 import { readJson } from "@/lib/http/read-json";
 import { withVendor } from "@/lib/http/with-vendor";
 import { addCustomerMessage } from "@/lib/tickets/add-message";
 
 const bodySchema = z.object({ body: z.string().trim().min(1).max(20_000) });
 
-// POST /api/v1/vendors/{vendor}/tickets/{id}/messages: the customer adds to their own ticket.
+// POST /api/v1/vendors/{vendor}/tickets/{id}/messages: the customer adds to their own ticket (201; 200 for a repeated Idempotency-Key).
 export const POST = withVendor<{ vendor: string; ticket: string }>(
   async (request, { access, params }) => {
     const ticketId = z.uuid().safeParse(params.ticket).data;
     if (!ticketId || !access.user) throw new NotFound();
     const { body } = parseInput(bodySchema, await readJson(request));
-    const message = await addCustomerMessage({ vendorId: access.vendor.id, ticketId, authorId: access.user.id, body, source: "api" });
-    return NextResponse.json({ message }, { status: 201 });
+    const { created, ...message } = await addCustomerMessage({ vendorId: access.vendor.id, ticketId, authorId: access.user.id, body, source: "api", idempotencyKey: idempotencyKeyOf(request) });
+    return NextResponse.json({ message }, { status: created ? 201 : 200 });
   },
   { permission: "support.use", rateLimit: { limit: 60, windowSeconds: 60 } },
 );
