@@ -1,8 +1,6 @@
 import "server-only";
 
 import type { Knex } from "knex";
-import { cookies } from "next/headers";
-import { unstable_rethrow } from "next/navigation";
 
 import { db } from "./knex";
 import { maxLagSeconds, replicaDb, replicaState } from "./replica";
@@ -30,7 +28,14 @@ export function pinSeconds(): number {
   return Math.ceil(maxLagSeconds()) + 3;
 }
 
+// Imported on use: scripts and jobs (seeds, benchmarks) load this module outside Next, without a replica.
+const nextRequest = async () => {
+  const [{ cookies }, { unstable_rethrow }] = await Promise.all([import("next/headers"), import("next/navigation")]);
+  return { cookies, unstable_rethrow };
+};
+
 async function pinnedToPrimary(): Promise<boolean> {
+  const { cookies, unstable_rethrow } = await nextRequest();
   try {
     return (await cookies()).has(PRIMARY_PIN_COOKIE);
   } catch (error) {
@@ -43,6 +48,7 @@ async function pinnedToPrimary(): Promise<boolean> {
 /** Called after a successful write in a server action. */
 export async function pinReadsToPrimary(): Promise<void> {
   if (!replicaDb()) return;
+  const { cookies, unstable_rethrow } = await nextRequest();
   try {
     (await cookies()).set(PRIMARY_PIN_COOKIE, "1", { maxAge: pinSeconds(), httpOnly: true, sameSite: "lax", path: "/" });
   } catch (error) {
