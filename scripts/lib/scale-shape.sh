@@ -50,8 +50,9 @@ scale_standby_start() {
   fi
   if ! as_postgres "$bin/pg_ctl" -D "$dir" status >/dev/null 2>&1; then
     as_postgres "$bin/pg_ctl" -D "$dir" -w -l "$dir/server.log" \
-      -o "-c listen_addresses=127.0.0.1 -p $SCALE_STANDBY_PORT -k /tmp -c hot_standby=on -c fsync=${PG_FSYNC:-on}" start >/dev/null
+      -o "-c listen_addresses=127.0.0.1 -p $SCALE_STANDBY_PORT -k /tmp -c hot_standby=on -c max_connections=200 -c fsync=${PG_FSYNC:-on}" start >/dev/null
   fi
+  # A standby needs at least the primary's max_connections (scripts/pg.sh starts it with 200).
   scale_pids+=("$(scale_postmaster_pid "$SCALE_STANDBY_PORT")")
   echo "PostgreSQL standby on 127.0.0.1:$SCALE_STANDBY_PORT (streaming from $SCALE_PRIMARY_PORT; data in $dir)"
 }
