@@ -115,7 +115,6 @@ scale_haproxy_start() {
   mkdir -p "$dir"
   cat >"$dir/haproxy.cfg" <<CFG
 global
-  pidfile $dir/haproxy.pid
   maxconn 1000
 
 defaults
