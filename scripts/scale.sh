@@ -38,8 +38,11 @@ DATABASE_URL=$(scale_primary_url) migrate
 DATABASE_URL=$(scale_primary_url) npm run --silent db:seed
 scale_standby_start
 scale_pgbouncer_start
-echo "== production build (into $SCALE_DIST_DIR)"
-NEXT_DIST_DIR=$SCALE_DIST_DIR node_modules/.bin/next build >"$SCALE_DIR/build.log" 2>&1 || { tail -40 "$SCALE_DIR/build.log"; exit 1; }
+# SCALE_REUSE_BUILD=1 serves an existing build in SCALE_DIST_DIR (for instance .next-test) instead of building.
+if [ "${SCALE_REUSE_BUILD:-}" != 1 ] || [ ! -f "$SCALE_DIST_DIR/BUILD_ID" ]; then
+  echo "== production build (into $SCALE_DIST_DIR)"
+  NEXT_DIST_DIR=$SCALE_DIST_DIR node_modules/.bin/next build >"$SCALE_DIR/build.log" 2>&1 || { tail -40 "$SCALE_DIR/build.log"; exit 1; }
+fi
 scale_app_env
 scale_app_start APP1 "$SCALE_APP1_PORT" "$SCALE_DIR/app1.log"
 scale_app_start APP2 "$SCALE_APP2_PORT" "$SCALE_DIR/app2.log" INBOUND_SMTP=off

@@ -148,9 +148,11 @@ CFG
 
 scale_haproxy_stop() { local pid; pid=$(head -1 "$SCALE_DIR/haproxy/haproxy.pid" 2>/dev/null) && kill "$pid" 2>/dev/null || true; }
 
+scale_stop_app() { [ -n "${1:-}" ] || return 0; pkill -P "$1" 2>/dev/null; kill "$1" 2>/dev/null; return 0; }
+
 scale_stop_all() {
-  [ -n "${SCALE_APP1_PID:-}" ] && kill "$SCALE_APP1_PID" 2>/dev/null
-  [ -n "${SCALE_APP2_PID:-}" ] && kill "$SCALE_APP2_PID" 2>/dev/null
+  scale_stop_app "${SCALE_APP1_PID:-}"
+  scale_stop_app "${SCALE_APP2_PID:-}"
   scale_haproxy_stop
   scale_pgbouncer_stop
   scale_standby_stop
