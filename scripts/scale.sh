@@ -25,8 +25,8 @@ if [ -z "${NEXTAUTH_SECRET:-}" ]; then
 fi
 
 maildev_pid=
-trap 'echo; echo "Stopping..."; scale_stop_all; [ -n "$maildev_pid" ] && kill "$maildev_pid" 2>/dev/null; exit 0' INT TERM
-trap 'scale_stop_all; [ -n "$maildev_pid" ] && kill "$maildev_pid" 2>/dev/null || true' EXIT
+trap 'echo; echo "Stopping..."; scale_stop_all || true; [ -n "$maildev_pid" ] && kill "$maildev_pid" 2>/dev/null; exit 0' INT TERM
+trap 'scale_stop_all || true; [ -n "$maildev_pid" ] && kill "$maildev_pid" 2>/dev/null || true' EXIT
 
 if ! curl -fsS -o /dev/null http://127.0.0.1:1080/api/email 2>/dev/null; then
   maildev_pid=$(start_maildev "$SMTP_PORT" 1080 "$SCALE_DIR/maildev.log")

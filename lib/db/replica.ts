@@ -21,9 +21,11 @@ export function maxLagSeconds(): number {
 }
 
 // A streaming standby that has replayed all it received is caught up, however old its last transaction.
+// The receiver's status is visible only with pg_read_all_stats (the scale shape grants it to the app role, so a
+// standby cut off from its primary counts as lagging); without it, receiving WAL at all stands in for streaming.
 const LAG_SQL = `
   select pg_is_in_recovery() as standby,
-    exists (select 1 from pg_stat_wal_receiver where status = 'streaming') as streaming,
+    coalesce((select status = 'streaming' from pg_stat_wal_receiver limit 1), pg_last_wal_receive_lsn() is not null) as streaming,
     coalesce(pg_last_wal_receive_lsn() = pg_last_wal_replay_lsn(), false) as caught_up,
     extract(epoch from now() - pg_last_xact_replay_timestamp())::float8 as since_replay`;
 

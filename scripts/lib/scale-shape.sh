@@ -35,6 +35,8 @@ scale_primary_start() {
     echo "host replication all 127.0.0.1/32 trust" >>"$hba"
     scale_psql "$SCALE_PRIMARY_PORT" -c "select pg_reload_conf()" >/dev/null
   fi
+  # Lets the app see the standby's receiver status (lib/db/replica.ts): a standby cut off from the primary then lags.
+  scale_psql "$SCALE_PRIMARY_PORT" -c "grant pg_read_all_stats to swarfbook" >/dev/null
   scale_pids+=("$(scale_postmaster_pid "$SCALE_PRIMARY_PORT")")
 }
 
@@ -148,7 +150,7 @@ CFG
 
 scale_haproxy_stop() { local pid; pid=$(head -1 "$SCALE_DIR/haproxy/haproxy.pid" 2>/dev/null) && kill "$pid" 2>/dev/null || true; }
 
-scale_stop_app() { [ -n "${1:-}" ] || return 0; pkill -P "$1" 2>/dev/null; kill "$1" 2>/dev/null; return 0; }
+scale_stop_app() { [ -n "${1:-}" ] || return 0; pkill -P "$1" 2>/dev/null || true; kill "$1" 2>/dev/null || true; }
 
 scale_stop_all() {
   scale_stop_app "${SCALE_APP1_PID:-}"
