@@ -45,9 +45,22 @@ export default defineConfig({
         test: {
           name: "e2e",
           include: ["tests/e2e/**/*.test.ts"],
+          // The scale journeys need the scaled-out shape: `npm run test:scale`.
+          exclude: ["tests/e2e/scale/**", "**/node_modules/**"],
           environment: "node",
           fileParallelism: false,
           testTimeout: 120_000,
+          hookTimeout: 120_000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "scale",
+          include: ["tests/e2e/scale/**/*.test.ts"],
+          environment: "node",
+          fileParallelism: false,
+          testTimeout: 180_000,
           hookTimeout: 120_000,
         },
       },

@@ -6,7 +6,8 @@
 // by version, so the needs-attention ranking has real work to do. The load runs in one transaction with the
 // foreign-key triggers skipped (superuser only) and the big tables' secondary indexes rebuilt afterwards, the
 // usual bulk-load tricks; the schema the queries see is exactly the migrated one. It then measures:
-//   · refreshFieldRollups(), the job that rebuilds both materialized rollups;
+//   · the full rebuild of both rollup tables, then refreshFieldRollups() after one new outcome report (the
+//     job's usual case: only the touched version is recomputed, so it should not grow with the total);
 //   · each Field-results query on its own, p50/p95/p99 (sequential, round-robin over vendors);
 //   · the overview page load: its four queries in parallel, as the page runs them;
 //   · the drill-in, loadSheetFieldResults(), for random sheets;
@@ -14,6 +15,7 @@
 // Each measured phase stops after --iterations runs or PHASE_BUDGET_MS, whichever comes first.
 // The database is always dropped at the end.
 // Run: npm run bench:field -- [--outcomes 1000000] [--versions 20000] [--vendors 20] [--machines 50000] [--iterations 200]
+// Only the refresh figures, at several sizes (one throwaway database each): npm run bench:field -- --refresh-at 1000000,5000000
 import type { Knex } from "knex";
 import pg from "pg";
 
@@ -540,15 +542,40 @@ async function printPlans(url: string, field: Field, vendorId: string, sheet: Sh
 
 // ── Main ───────────────────────────────────────────────────────────────────────────────────────────
 
-async function run(url: string, knex: Knex, o: Options) {
+type RefreshFigures = { outcomes: number; rebuildMs: number; oneReportMs: number };
+const ONE_REPORT_RUNS = 5;
+
+/**
+ * The bulk load ran with triggers off, so the rollups start with a full rebuild (what every refresh cost
+ * before); then, ONE_REPORT_RUNS times, one new outcome report on a random version and the refresh the job runs.
+ */
+async function measureRefresh(knex: Knex, field: Field, outcomes: number): Promise<RefreshFigures> {
+  const rebuilt = await field.refreshFieldRollups(knex, { rebuild: true });
+  console.log(`full rebuild of both rollups: ${fmt(rebuilt.durationMs)} (${rebuilt.versions.toLocaleString("en-GB")} versions)`);
+  await knex.raw("analyze field_version_rollups, field_change_rollups, field_rollup_changes");
+  const times: number[] = [];
+  for (let i = 0; i < ONE_REPORT_RUNS; i++) {
+    await knex.raw(
+      `insert into outcomes (vendor_id, setup_id, sheet_version_id, user_id, machine_id, result, symptom, changes)
+       select vendor_id, setup_id, sheet_version_id, user_id, machine_id, result, symptom, changes
+       from outcomes where id > gen_random_uuid() order by id limit 1`,
+    );
+    const { durationMs, versions } = await field.refreshFieldRollups(knex);
+    if (versions !== 1) throw new Error(`expected one version recomputed, got ${versions}`);
+    times.push(durationMs);
+  }
+  const oneReportMs = [...times].sort((a, b) => a - b)[Math.floor(times.length / 2)];
+  console.log(`refresh after one new outcome report: ${fmt(oneReportMs)} (median of ${ONE_REPORT_RUNS}: ${times.map(fmt).join(", ")})`);
+  return { outcomes, rebuildMs: rebuilt.durationMs, oneReportMs };
+}
+
+async function run(url: string, knex: Knex, o: Options, refreshOnly = false): Promise<RefreshFigures> {
   console.log(`${o.outcomes.toLocaleString("en-GB")} outcomes over ${o.versions.toLocaleString("en-GB")} versions, ${o.vendors} vendors, ${o.machines.toLocaleString("en-GB")} machines`);
   await seed(knex, o);
   const field = await loadFieldModules(url);
   try {
-    const started = performance.now();
-    const { durationMs } = await field.refreshFieldRollups(knex);
-    console.log(`refreshFieldRollups: ${fmt(durationMs)} (both views, concurrently; ${fmt(performance.now() - started)} with bookkeeping)`);
-    await knex.raw("analyze field_version_rollups, field_change_rollups");
+    const figures = await measureRefresh(knex, field, o.outcomes);
+    if (refreshOnly) return figures;
     await printDataShape(knex);
 
     const vendorIds = (await knex("vendors").orderBy("slug").select("id")).map((v: { id: string }) => v.id);
@@ -560,14 +587,36 @@ async function run(url: string, knex: Knex, o: Options) {
     const drill = stats.get("page    drill-in loadSheetFieldResults") ?? Infinity;
     console.log(`\nOverview page load p95 ${page.toFixed(1)} ms; drill-in p95 ${drill.toFixed(1)} ms (${drill <= TARGET_P95_MS ? "within" : "over"} ${TARGET_P95_MS} ms)`);
     console.log(`Target p95 ≤ ${TARGET_P95_MS} ms (page load): ${page <= TARGET_P95_MS ? "PASS" : "BELOW"}`);
+    return figures;
   } finally {
     await field.db.destroy();
   }
 }
 
+/** `--refresh-at 1000000,5000000`: outcome totals to measure the refresh at, or none. */
+function refreshSizes(): number[] {
+  const at = process.argv.indexOf("--refresh-at");
+  if (at === -1) return [];
+  const sizes = String(process.argv[at + 1] ?? "").split(",").map(Number);
+  if (!sizes.length || sizes.some((n) => !Number.isInteger(n) || n < 1_000 || n > 5_000_000)) throw new Error("--refresh-at takes outcome totals from 1000 to 5000000, comma-separated.");
+  return sizes;
+}
+
 async function main() {
   const options = readOptions();
-  await withBenchDatabase({ prefix: "swarfbook_bench_field", poolMax: 4 }, (url, knex) => run(url, knex, options));
+  const sizes = refreshSizes();
+  if (!sizes.length) {
+    await withBenchDatabase({ prefix: "swarfbook_bench_field", poolMax: 4 }, (url, knex) => run(url, knex, options));
+    return;
+  }
+  const figures: RefreshFigures[] = [];
+  for (const outcomes of sizes) {
+    await withBenchDatabase({ prefix: "swarfbook_bench_field", poolMax: 4 }, async (url, knex) => void figures.push(await run(url, knex, { ...options, outcomes }, true)));
+  }
+  console.log(`\n${"outcomes".padStart(12)}${"full rebuild".padStart(16)}${"one new report".padStart(18)}`);
+  for (const f of figures) console.log(`${f.outcomes.toLocaleString("en-GB").padStart(12)}${fmt(f.rebuildMs).padStart(16)}${fmt(f.oneReportMs).padStart(18)}`);
+  const [first, last] = [figures[0], figures.at(-1)!];
+  if (figures.length > 1) console.log(`one-report refresh at ${last.outcomes.toLocaleString("en-GB")} vs ${first.outcomes.toLocaleString("en-GB")}: ${(last.oneReportMs / Math.max(1, first.oneReportMs)).toFixed(2)}× (full rebuild ${(last.rebuildMs / Math.max(1, first.rebuildMs)).toFixed(2)}×)`);
 }
 
 main().catch((error: unknown) => {

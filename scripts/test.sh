@@ -63,6 +63,9 @@ API_RATE_LIMIT_MULTIPLIER=50 node_modules/.bin/next start -H 127.0.0.1 -p "$APP_
 pids+=("$!")
 wait_for_url "$E2E_BASE_URL/api/health" 90
 
+echo "== every service of this run listens on loopback only"
+bash scripts/lib/check-loopback.sh "${pids[@]}" "$(pg_pid)"
+
 echo "== vitest: unit, integration, e2e"
 set +e
 npx vitest run --project unit --project integration --project e2e --passWithNoTests "$@"
@@ -75,6 +78,8 @@ if [ $status -eq 0 ] && { [ $# -eq 0 ] || [[ "$*" == *tests/integration/faults* 
   status=$?
 fi
 set -e
+# Again after the suite: a listener started on demand (a job, a lazily opened port) counts too.
+bash scripts/lib/check-loopback.sh "${pids[@]}" "$(pg_pid)" || status=1
 if [ $status -ne 0 ]; then
   echo "--- last lines of the app log"; tail -40 .tmp/test-app.log || true
 fi

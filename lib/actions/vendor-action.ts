@@ -9,6 +9,7 @@ import { getSessionUser, type SessionUser } from "@/lib/auth/session-user";
 import { CATCHING_UP, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
+import { pinReadsToPrimary } from "@/lib/db/read-db";
 
 import type { ActionState } from "./action-state";
 
@@ -23,6 +24,19 @@ function formValues(input: FormData | Record<string, unknown>): Record<string, u
     else out[key] = value;
   }
   return out;
+}
+
+// The author's next reads (a redirect to the published page, say) come from the primary, not a lagging replica.
+async function pinAfterWrite(run: () => Promise<ActionState | void>): Promise<ActionState | void> {
+  try {
+    const result = await run();
+    if (result?.ok !== false) await pinReadsToPrimary();
+    return result;
+  } catch (error) {
+    // redirect() after a successful write also signals by throwing.
+    if (error && typeof error === "object" && "digest" in error && String(error.digest).startsWith("NEXT_REDIRECT")) await pinReadsToPrimary();
+    throw error;
+  }
 }
 
 /**
@@ -43,7 +57,7 @@ export function vendorAction<S extends z.ZodType>(
       if (!access.user || !access.member) return { ok: false, message: "Sign in to continue.", values };
       const parsed = options.schema.safeParse(raw);
       if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error), values };
-      const result = await run(parsed.data, access as MemberAccess);
+      const result = await pinAfterWrite(() => run(parsed.data, access as MemberAccess));
       return result ?? { ok: true };
     } catch (error) {
       if (error instanceof DomainError) {

@@ -1,6 +1,6 @@
 import "server-only";
 
-import { db } from "@/lib/db/knex";
+import { readDb } from "@/lib/db/read-db";
 
 import { type CoverageReport, findCoverageGaps } from "./coverage-gaps";
 
@@ -9,6 +9,7 @@ import { type CoverageReport, findCoverageGaps } from "./coverage-gaps";
  * Machines are read grouped by their numbers, never one by one, and no name or owner leaves the database.
  */
 export async function loadCoverageGaps({ vendorId }: { vendorId: string }): Promise<CoverageReport> {
+  const db = await readDb();
   const [classes, machines] = await Promise.all([
     db("machine_classes as mc")
       .where("mc.vendor_id", vendorId)

@@ -1,6 +1,8 @@
 import "server-only";
 
-import { db } from "@/lib/db/knex";
+import type { Knex } from "knex";
+
+import { readDb } from "@/lib/db/read-db";
 
 import type { ChangeRollup } from "./describe-change";
 
@@ -22,7 +24,7 @@ const read = (r: Record<string, unknown>): ChangeItem => ({
   raised: Number(r.raised),
 });
 
-const base = (vendorId: string) =>
+const base = (db: Knex, vendorId: string) =>
   db("field_change_rollups as c")
     .join("sheet_versions as v", function () {
       this.on("v.id", "c.sheet_version_id").andOn("v.vendor_id", "c.vendor_id");
@@ -41,12 +43,12 @@ const base = (vendorId: string) =>
  * One report is an anecdote, so the vendor-wide list starts at two.
  */
 export async function listCustomerChanges({ vendorId, limit = 25, minReports = 2 }: { vendorId: string; limit?: number; minReports?: number }): Promise<ChangeItem[]> {
-  const rows = await base(vendorId).where("v.state", "published").where("c.reports", ">=", minReports).orderBy([{ column: "c.reports", order: "desc" }, { column: "s.slug" }, { column: "c.param" }]).limit(limit);
+  const rows = await base(await readDb(), vendorId).where("v.state", "published").where("c.reports", ">=", minReports).orderBy([{ column: "c.reports", order: "desc" }, { column: "s.slug" }, { column: "c.param" }]).limit(limit);
   return rows.map(read);
 }
 
 /** Every version of one sheet. */
 export async function listSheetChanges({ vendorId, sheetId }: { vendorId: string; sheetId: string }): Promise<ChangeItem[]> {
-  const rows = await base(vendorId).where("v.sheet_id", sheetId).orderBy([{ column: "v.number", order: "desc" }, { column: "c.reports", order: "desc" }]);
+  const rows = await base(await readDb(), vendorId).where("v.sheet_id", sheetId).orderBy([{ column: "v.number", order: "desc" }, { column: "c.reports", order: "desc" }]);
   return rows.map(read);
 }

@@ -1,11 +1,12 @@
 import "server-only";
 
-import { db } from "@/lib/db/knex";
+import { readDb } from "@/lib/db/read-db";
 
 export type FieldSummary = { versionsWithReports: number; outcomes: number; failed: number; workedAfterChanges: number; setups: number; views: number; adaptations: number; tickets: number; openHandoffs: number };
 
 /** The vendor's totals, from the rollup (one row per version), never from raw outcomes. */
 export async function loadFieldSummary({ vendorId }: { vendorId: string }): Promise<FieldSummary> {
+  const db = await readDb();
   const row = await db("field_version_rollups")
     .where({ vendor_id: vendorId })
     .first(

@@ -1,12 +1,13 @@
 import "server-only";
 
-import { db } from "@/lib/db/knex";
+import { readDb } from "@/lib/db/read-db";
 
 import { readRollup, type VersionRollup } from "./rollup-rows";
 import { WILSON_LOWER_SQL } from "./wilson-sql";
 
 /** How many published versions have a failure: the whole list, of which the page and digest show the top. */
 export async function countNeedsAttention({ vendorId }: { vendorId: string }): Promise<number> {
+  const db = await readDb();
   const row = await db("field_version_rollups as r")
     .join("sheet_versions as v", function () {
       this.on("v.id", "r.sheet_version_id").andOn("v.vendor_id", "r.vendor_id");
@@ -25,6 +26,7 @@ export type AttentionItem = VersionRollup & { sheetSlug: string; title: string; 
  * 30 in 100 (0.22). Superseded or withdrawn since the last refresh: left out (the live state decides).
  */
 export async function listNeedsAttention({ vendorId, z, limit = 25 }: { vendorId: string; z: number; limit?: number }): Promise<AttentionItem[]> {
+  const db = await readDb();
   const { rows } = await db.raw(
     `select r.*, v.title, s.slug as sheet_slug, mc.name as machine_class, ${WILSON_LOWER_SQL} as lower_bound
      from field_version_rollups r

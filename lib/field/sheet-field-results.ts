@@ -1,6 +1,6 @@
 import "server-only";
 
-import { db } from "@/lib/db/knex";
+import { readDb } from "@/lib/db/read-db";
 import { listProblemReports, type ProblemReport } from "@/lib/tickets/problem-reports";
 
 import { type ChangeItem, listSheetChanges } from "./customer-changes";
@@ -17,11 +17,13 @@ export type SheetFieldResults = {
 };
 
 export async function findFieldSheet({ vendorId, slug }: { vendorId: string; slug: string }): Promise<{ id: string; slug: string } | null> {
+  const db = await readDb();
   return (await db("sheets").where({ vendor_id: vendorId, slug }).first("id", "slug")) ?? null;
 }
 
 /** Everything Field results knows about one sheet, version by version (oldest first). */
 export async function loadSheetFieldResults({ vendorId, sheetId, z }: { vendorId: string; sheetId: string; z: number }): Promise<SheetFieldResults | null> {
+  const db = await readDb();
   const sheet = await db("sheets as s")
     .join("machine_classes as mc", function () {
       this.on("mc.id", "s.machine_class_id").andOn("mc.vendor_id", "s.vendor_id");

@@ -6,6 +6,7 @@ import { resolveVendorAccess, type VendorAccess } from "@/lib/auth/access";
 import { userForApiToken } from "@/lib/auth/api-tokens";
 import type { Permission } from "@/lib/auth/permissions";
 import { getSessionUser } from "@/lib/auth/session-user";
+import { pinCookieHeader } from "@/lib/db/read-db";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
@@ -57,11 +58,19 @@ export function withVendor<P extends Params & { vendor: string }>(handler: Vendo
       const access = await resolveVendorAccess(params.vendor, user, options.permission);
       // After access, so another vendor's route stays a plain 404.
       if (!bearer) requireSameOrigin(request);
-      return await handler(request, { access, params });
+      const response = await handler(request, { access, params });
+      return request.method === "GET" || request.method === "HEAD" || response.status >= 400 ? response : pinned(response);
     } catch (error) {
       return errorResponse(error);
     }
   };
+}
+
+// A browser that wrote through the API reads its next pages from the primary (see lib/db/read-db.ts).
+function pinned(response: Response): Response {
+  const cookie = pinCookieHeader();
+  if (cookie) response.headers.append("set-cookie", cookie);
+  return response;
 }
 
 /** For public, vendor-free endpoints such as /api/v1/calculate. */

@@ -3,7 +3,7 @@ import "server-only";
 import pg from "pg";
 import PgBoss from "pg-boss";
 
-import { databaseUrl } from "@/lib/db/config";
+import { directDatabaseUrl } from "@/lib/db/config";
 
 import { backoffSeconds } from "./backoff";
 
@@ -17,10 +17,11 @@ function setStatus(state: QueueState["state"], patch: Partial<QueueState> = {}) 
   slot.status = { ...slot.status, state, since: new Date().toISOString(), ...patch };
 }
 
-// The queue's own small pool; pg's pool reconnects by itself after the database comes back.
+// The queue's own small pool, directly on the primary (never through PgBouncer: pg-boss needs session
+// features); pg's pool reconnects by itself after the database comes back.
 function pool(): pg.Pool {
   if (!slot.pool) {
-    slot.pool = new pg.Pool({ connectionString: databaseUrl(), max: 4, connectionTimeoutMillis: 5_000 });
+    slot.pool = new pg.Pool({ connectionString: directDatabaseUrl(), max: 4, connectionTimeoutMillis: 5_000 });
     slot.pool.on("error", (error) => console.error("[jobs] idle connection lost", error.message));
   }
   return slot.pool;

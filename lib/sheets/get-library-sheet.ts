@@ -1,7 +1,7 @@
 import "server-only";
 
 import { getCutterById, getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
-import { db } from "@/lib/db/knex";
+import { readDb } from "@/lib/db/read-db";
 
 import { findSheet } from "./find-sheet";
 import { READABLE_STATES, type SheetVersion } from "./sheet-types";
@@ -12,7 +12,8 @@ import { rowToVersion, versionQuery } from "./version-rows";
  * latest withdrawn one) and the history of readable versions. Drafts and versions in review never appear.
  */
 export async function getLibrarySheet({ vendorId, slug, number }: { vendorId: string; slug: string; number?: number }) {
-  const sheet = await findSheet({ vendorId, slug });
+  const db = await readDb();
+  const sheet = await findSheet({ vendorId, slug, trx: db });
   if (!sheet) return null;
   const history: SheetVersion[] = (
     await versionQuery(vendorId, db).where("v.sheet_id", sheet.id).whereIn("v.state", READABLE_STATES).orderBy("v.number", "desc")

@@ -1,6 +1,6 @@
 import "server-only";
 
-import { db } from "@/lib/db/knex";
+import { readDb } from "@/lib/db/read-db";
 
 export type PublishedSheetSummary = {
   slug: string;
@@ -22,6 +22,7 @@ export type LibraryFilters = { cutter?: string; material?: string; machineClass?
 
 /** Current published versions, optionally narrowed to one cutter (SKU), material or machine class (slugs). */
 export async function listPublishedSheets({ vendorId, limit = 500, filters = {} }: { vendorId: string; limit?: number; filters?: LibraryFilters }): Promise<PublishedSheetSummary[]> {
+  const db = await readDb();
   const query = db("sheet_versions as v")
     .join("sheets as s", function () {
       this.on("s.id", "v.sheet_id").andOn("s.vendor_id", "v.vendor_id");

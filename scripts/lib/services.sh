@@ -9,7 +9,7 @@ wait_for_url() { # url seconds
 }
 
 start_maildev() { # smtp_port web_port log
-  node_modules/.bin/maildev --ip 127.0.0.1 --smtp "$1" --web "$2" --mail-directory "$(mktemp -d)" >"$3" 2>&1 &
+  node_modules/.bin/maildev --ip 127.0.0.1 --web-ip 127.0.0.1 --smtp "$1" --web "$2" --mail-directory "$(mktemp -d)" >"$3" 2>&1 &
   echo $!
 }
 
@@ -19,5 +19,8 @@ start_s3_fake() { # port dir log
     echo $!
   fi
 }
+
+# The PID of the postmaster of the cluster scripts/pg.sh manages (PG_DIR from env).
+pg_pid() { bash scripts/pg.sh status 2>/dev/null | sed -n 's/.*(PID: \([0-9]*\)).*/\1/p'; }
 
 migrate() { node --import tsx node_modules/knex/bin/cli.js --knexfile knexfile.ts migrate:latest >/dev/null; }

@@ -1,6 +1,7 @@
 import "server-only";
 
 import { db } from "@/lib/db/knex";
+import { readDb } from "@/lib/db/read-db";
 
 import type { SearchEngine } from "./engine-types";
 import { createMeilisearchEngine } from "./meilisearch/meilisearch-engine";
@@ -15,7 +16,7 @@ export function getSearchEngine(): SearchEngine {
   const host = process.env.MEILISEARCH_HOST?.trim();
   const engine = host
     ? createMeilisearchEngine({ host, apiKey: process.env.MEILISEARCH_API_KEY || undefined, indexUid: process.env.MEILISEARCH_INDEX || undefined })
-    : createPostgresEngine(db);
+    : createPostgresEngine(db, readDb);
   chosen = engine;
   return engine;
 }

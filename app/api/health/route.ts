@@ -1,10 +1,14 @@
+import { connection } from "next/server";
+
 import { databaseState } from "@/lib/db/database-state";
+import { replicaState } from "@/lib/db/replica";
 import { queueState } from "@/lib/jobs/boss";
 
-export const dynamic = "force-dynamic";
-
-// GET /api/health: liveness for a load balancer (always 200 while the process runs), with the database's
-// and the job queue's state for people and for the "catching up" page.
+// GET /api/health: liveness for a load balancer (always 200 while the process runs), with the database's, the
+// job queue's and the read replica's state (reads fall back to the primary when the replica is down or behind,
+// so a replica problem never makes this process unhealthy).
 export async function GET() {
-  return Response.json({ ok: true, database: await databaseState(), queue: queueState() }, { headers: { "Cache-Control": "no-store" } });
+  await connection();
+  const [database, replica] = await Promise.all([databaseState(), replicaState()]);
+  return Response.json({ ok: true, database, queue: queueState(), replica }, { headers: { "Cache-Control": "no-store" } });
 }

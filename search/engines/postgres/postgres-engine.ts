@@ -15,8 +15,11 @@ function facetCounts(rows: Raw["facets"]): FacetCounts {
   return out;
 }
 
-/** The default engine: the search_documents table (weighted tsvector, pg_trgm, unaccent) in the app's own database. */
-export function createPostgresEngine(knex: Knex): SearchEngine {
+/**
+ * The default engine: the search_documents table (weighted tsvector, pg_trgm, unaccent) in the app's own database.
+ * Writes go to `knex`; searches to the connection `reads` picks (the read replica when there is one).
+ */
+export function createPostgresEngine(knex: Knex, reads: () => Promise<Knex> = async () => knex): SearchEngine {
   return {
     name: "postgres",
     // The migration declares the settings (weights, trigram indexes); nothing to apply at run time.
@@ -26,7 +29,7 @@ export function createPostgresEngine(knex: Knex): SearchEngine {
     replaceVendor: (vendorId, docs) => replaceVendorRows(knex, vendorId, docs),
     async search(query: EngineQuery): Promise<EngineResult> {
       const { sql, bindings } = buildSearchSql(query);
-      const [row] = await preparedQuery<Raw>(knex, sql, bindings);
+      const [row] = await preparedQuery<Raw>(await reads(), sql, bindings);
       return {
         total: row.total,
         hits: row.hits.map((h) => ({ doc: rowToDoc(h), score: Number(h.score) })),

@@ -8,8 +8,12 @@ type PgConnection = { query: (config: { name: string; text: string; values: read
  * Runs a statement as a named prepared statement on the pooled connection, so PostgreSQL plans each
  * shape of the search statement once per connection instead of on every keystroke. The name is a
  * hash of the text: the shapes are few (which parts are present), the values are always parameters.
+ *
+ * Behind PgBouncer in transaction mode (DATABASE_POOL_MODE=transaction) a named statement prepared on one
+ * server connection is unknown on the next, so the statement then runs unnamed.
  */
 export async function preparedQuery<T>(knex: Knex, sql: string, bindings: readonly unknown[]): Promise<T[]> {
+  if (process.env.DATABASE_POOL_MODE === "transaction") return (await knex.raw(sql, bindings as Knex.ValueDict[])).rows as T[];
   const native = knex.raw(sql, bindings as Knex.ValueDict[]).toSQL().toNative();
   const name = `sbk_${createHash("sha1").update(native.sql).digest("hex").slice(0, 24)}`;
   const connection = (await knex.client.acquireConnection()) as PgConnection;
