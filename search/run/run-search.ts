@@ -5,7 +5,7 @@ import { oneWaySynonyms, synonymGroups } from "@/search/vocabulary/synonyms";
 
 import type { EngineQuery, EngineResult, SearchEngine } from "../engines/engine-types";
 import { correctTypos } from "./correct-typos";
-import { toHit } from "./to-hit";
+import { toHits } from "./to-hit";
 import { type ExplicitFilters, planSearch } from "./plan-search";
 import type { SearchResponse } from "./search-response";
 
@@ -54,7 +54,7 @@ export async function runSearch(engine: SearchEngine, req: SearchRequest): Promi
     page,
     perPage,
     total: result.total,
-    hits: result.hits.map((h) => toHit(h.doc, parsed, corrections)),
+    hits: toHits(result.hits.map((h) => h.doc), parsed, corrections),
     facets: result.facets,
     cutters: result.cutters.map((c) => ({ sku: c.cutterSku, name: c.cutterName, diameterMm: c.diameterMm, flutes: c.flutes })),
     chips: parsed.chips,

@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 
+import { compareFacetValues } from "../facet-order";
 import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
 import { rowToDoc } from "./pg-columns";
 import { buildSearchSql } from "./pg-search-sql";
@@ -11,7 +12,7 @@ type Raw = { total: number; hits: Record<string, unknown>[]; facets: { facet: Fa
 function facetCounts(rows: Raw["facets"]): FacetCounts {
   const out: FacetCounts = {};
   for (const { facet, value, count } of rows) (out[facet] ??= []).push({ value, count });
-  for (const list of Object.values(out)) list.sort((a, b) => b.count - a.count || a.value.localeCompare(b.value, "en", { numeric: true }));
+  for (const list of Object.values(out)) list.sort((a, b) => b.count - a.count || compareFacetValues(a.value, b.value));
   return out;
 }
 
