@@ -29,7 +29,11 @@ async function main() {
     console.log(`generated ${versions} published versions across ${vendorCount} vendors in ${Math.round(performance.now() - t)} ms`);
     const pgEngine = createPostgresEngine(knex);
     let roundTrips = 0;
-    const engine = { ...pgEngine, search: (query: Parameters<typeof pgEngine.search>[0]) => (roundTrips++, pgEngine.search(query)) };
+    const engine = {
+      ...pgEngine,
+      search: (query: Parameters<typeof pgEngine.search>[0]) => (roundTrips++, pgEngine.search(query)),
+      searchSteps: (queries: Parameters<NonNullable<typeof pgEngine.searchSteps>>[0]) => (roundTrips++, pgEngine.searchSteps!(queries)),
+    };
     t = performance.now();
     for (const v of vendors) await reindexVendor({ engine, knex, vendorId: v.id });
     await knex.raw("analyze");

@@ -22,7 +22,8 @@ export function highlightRanges(text: string, terms: readonly string[]): Highlig
 }
 
 function rangesOf(text: string, terms: readonly string[]): HighlightRange[] {
-  if (Array.from(text).length !== text.length) return [];
+  // Offsets count UTF-16 units; text with astral characters (emoji) is not marked rather than marked wrong.
+  if (/[\uD800-\uDFFF]/.test(text)) return [];
   const hay = foldChars(text);
   const ranges: HighlightRange[] = [];
   for (const term of terms) {

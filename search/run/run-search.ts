@@ -43,10 +43,16 @@ export async function runSearch(engine: SearchEngine, req: SearchRequest): Promi
   const { parsed, corrections, page, perPage, steps } = engineQueriesFor(req);
   let result: EngineResult = { total: 0, hits: [], facets: {}, cutters: [] };
   let relaxed: SearchResponse["relaxed"] = [];
-  for (const step of steps) {
-    result = await engine.search(step.query);
-    relaxed = step.dropped;
-    if (result.total > 0) break;
+  if (engine.searchSteps) {
+    const found = await engine.searchSteps(steps.map((s) => s.query));
+    result = found.result;
+    relaxed = steps[found.step].dropped;
+  } else {
+    for (const step of steps) {
+      result = await engine.search(step.query);
+      relaxed = step.dropped;
+      if (result.total > 0) break;
+    }
   }
   if (result.total === 0) relaxed = [];
   return {

@@ -3,7 +3,7 @@ import type { Knex } from "knex";
 import { compareFacetValues } from "../facet-order";
 import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
 import { rowToDoc } from "./pg-columns";
-import { buildSearchSql } from "./pg-search-sql";
+import { buildSearchSql, buildSearchStepsSql } from "./pg-search-sql";
 import { preparedQuery } from "./prepared-query";
 import { removeRows, replaceVendorRows, upsertRows } from "./pg-write";
 
@@ -15,6 +15,13 @@ function facetCounts(rows: Raw["facets"]): FacetCounts {
   for (const list of Object.values(out)) list.sort((a, b) => b.count - a.count || compareFacetValues(a.value, b.value));
   return out;
 }
+
+const toResult = (row: Raw): EngineResult => ({
+  total: row.total,
+  hits: row.hits.map((h) => ({ doc: rowToDoc(h), score: Number(h.score) })),
+  facets: facetCounts(row.facets),
+  cutters: row.cutters.map(rowToDoc),
+});
 
 /** The default engine: the search_documents table (weighted tsvector, pg_trgm, unaccent) in the app's own database. */
 export function createPostgresEngine(knex: Knex): SearchEngine {
@@ -28,12 +35,13 @@ export function createPostgresEngine(knex: Knex): SearchEngine {
     async search(query: EngineQuery): Promise<EngineResult> {
       const { sql, bindings } = buildSearchSql(query);
       const [row] = await preparedQuery<Raw>(knex, sql, bindings);
-      return {
-        total: row.total,
-        hits: row.hits.map((h) => ({ doc: rowToDoc(h), score: Number(h.score) })),
-        facets: facetCounts(row.facets),
-        cutters: row.cutters.map(rowToDoc),
-      };
+      return toResult(row);
+    },
+    async searchSteps(queries: readonly EngineQuery[]) {
+      const { sql, bindings } = buildSearchStepsSql(queries);
+      const rows = await preparedQuery<Raw & { step: number }>(knex, sql, bindings);
+      const row = rows.find((r) => r.total > 0) ?? rows.reduce((last, r) => (r.step > last.step ? r : last));
+      return { step: row.step, result: toResult(row) };
     },
   };
 }
