@@ -1,18 +1,20 @@
 // Benchmark of the PostgreSQL search engine: synthetic catalogues in a throwaway database of the
-// local cluster (never the dev database), 20 concurrent clients, p50/p95/p99 and the main query plan.
-// Run: node --conditions=react-server --import tsx scripts/bench-search.ts [--versions 20000] [--vendors 20] [--queries 4000]
+// local cluster (never the dev database), 20 concurrent clients, p50/p95/p99 and the main query plan, and the
+// ratio of a whole search to its first SQL statement run bare with the same clients, in alternating blocks.
+// Run: node --conditions=react-server --import tsx scripts/bench-search.ts [--versions 20000] [--vendors 20] [--queries 4000] [--clients 20] [--seconds 120]
 import type { Knex } from "knex";
 
 import { createPostgresEngine } from "../search/engines/postgres/postgres-engine";
 import { buildSearchSql } from "../search/engines/postgres/pg-search-sql";
+import { preparedQuery, preparedStatementsEnabled } from "../search/engines/postgres/prepared-query";
 import { reindexVendor } from "../search/indexing/reindex";
 import { engineQueriesFor, runSearch } from "../search/run/run-search";
 
 import { type BenchVendor, createBenchVendor, queryMix } from "./bench-search-data";
 import { arg, percentile } from "./lib/bench-args";
+import { runBlocks } from "./lib/bench-blocks";
 import { withBenchDatabase } from "./lib/bench-database";
-
-const TARGET_P95_MS = 30;
+import { reportRatio, summarize } from "./lib/bench-report";
 
 async function main() {
   const versions = arg("versions", 20_000, 200_000);
@@ -27,7 +29,11 @@ async function main() {
     console.log(`generated ${versions} published versions across ${vendorCount} vendors in ${Math.round(performance.now() - t)} ms`);
     const pgEngine = createPostgresEngine(knex);
     let roundTrips = 0;
-    const engine = { ...pgEngine, search: (query: Parameters<typeof pgEngine.search>[0]) => (roundTrips++, pgEngine.search(query)) };
+    const engine = {
+      ...pgEngine,
+      search: (query: Parameters<typeof pgEngine.search>[0]) => (roundTrips++, pgEngine.search(query)),
+      searchSteps: (queries: Parameters<NonNullable<typeof pgEngine.searchSteps>>[0]) => (roundTrips++, pgEngine.searchSteps!(queries)),
+    };
     t = performance.now();
     for (const v of vendors) await reindexVendor({ engine, knex, vendorId: v.id });
     await knex.raw("analyze");
@@ -36,22 +42,21 @@ async function main() {
 
     const mix = queryMix(vendors, queries);
     for (const item of mix.slice(0, 200)) await runSearch(engine, item); // warm-up
-    const latencies: number[] = [];
+    // The bare statement: the first SQL statement of the same search, built beforehand, run on the same pool.
+    const bare = mix.map((item) => buildSearchSql(engineQueriesFor(item).steps[0].query));
     roundTrips = 0;
-    let next = 0;
-    t = performance.now();
-    await Promise.all(
-      Array.from({ length: CLIENTS }, async () => {
-        while (next < mix.length) {
-          const item = mix[next++];
-          const started = performance.now();
-          await runSearch(engine, item);
-          latencies.push(performance.now() - started);
-        }
-      }),
-    );
-    const wall = performance.now() - t;
-    const tripsPerSearch = roundTrips / latencies.length;
+    const [searchResult, bareResult] = await runBlocks({
+      kinds: [
+        { name: "runSearch", run: async (i) => void (await runSearch(engine, mix[i % mix.length])) },
+        { name: "bare SQL", run: async (i) => void (await preparedQuery(knex, bare[i % bare.length].sql, bare[i % bare.length].bindings)) },
+      ],
+      clients: CLIENTS,
+      perBlock: Math.max(CLIENTS, Math.floor(queries / 8)),
+      blocks: 8,
+      maxSeconds: arg("seconds", 120, 600),
+    });
+    const latencies = searchResult.latencies;
+    const tripsPerSearch = roundTrips / Math.max(1, latencies.length);
     if (process.argv.includes("--by-query")) {
       const byQuery = new Map<string, number[]>();
       for (const item of mix.slice(0, 300)) {
@@ -62,7 +67,6 @@ async function main() {
       }
       for (const [q, ms] of byQuery) console.log(`  ${(ms.reduce((a, b) => a + b, 0) / ms.length).toFixed(1).padStart(6)} ms  “${q}”`);
     }
-    latencies.sort((a, b) => a - b);
     const [p50, p95, p99] = [50, 95, 99].map((p) => percentile(latencies, p));
 
     const at = process.argv.indexOf("--explain");
@@ -81,9 +85,11 @@ async function main() {
         console.log(`  exec ${ms("Execution Time").padStart(7)} ms  plan ${ms("Planning Time").padStart(6)} ms  “${q}”`);
       }
     }
-    console.log(`\n${latencies.length} searches, ${CLIENTS} concurrent clients, ${Math.round((latencies.length / wall) * 1000)} searches/s, ${tripsPerSearch.toFixed(2)} engine round trips per search`);
+    const search = summarize(searchResult);
+    console.log(`\n${latencies.length} searches, ${CLIENTS} concurrent clients, ${Math.round(search.perSecond)} searches/s, ${tripsPerSearch.toFixed(2)} engine round trips per search`);
     console.log(`p50 ${p50.toFixed(1)} ms · p95 ${p95.toFixed(1)} ms · p99 ${p99.toFixed(1)} ms · max ${latencies.at(-1)!.toFixed(1)} ms`);
-    console.log(`target p95 ≤ ${TARGET_P95_MS} ms: ${p95 <= TARGET_P95_MS ? "PASS" : "BELOW"}`);
+    console.log(`plan reuse (named prepared statements): ${preparedStatementsEnabled() ? "on" : "off"}`);
+    reportRatio("search/bare-SQL", search, summarize(bareResult), { p95: 1.3, throughput: 0.8 });
   });
 }
 

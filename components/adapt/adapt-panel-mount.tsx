@@ -9,18 +9,28 @@ import { listMachines } from "@/lib/bench/machines";
 import type { UnitSystem } from "@/lib/machining";
 
 import { AdaptPanel } from "./adapt-panel";
+import { LazyAdaptPanel } from "./lazy-adapt-panel";
 
-type Props = { vendor: { id: string; slug: string }; versionId: string; operationIndex: number; units: UnitSystem; returnTo: string };
+type Props = {
+  vendor: { id: string; slug: string };
+  versionId: string;
+  operationIndex: number;
+  units: UnitSystem;
+  returnTo: string;
+  /** Load the panel's code when it scrolls into view (Library pages) instead of with the page. */
+  lazy?: boolean;
+};
 
 /** Server side of the adapt panel: the sheet-derived inputs and, for a signed-in customer, their machines. */
-export async function AdaptPanelMount({ vendor, versionId, operationIndex, units, returnTo }: Props) {
+export async function AdaptPanelMount({ vendor, versionId, operationIndex, units, returnTo, lazy = false }: Props) {
   const [context, user] = await Promise.all([loadAdaptContext({ vendorId: vendor.id, versionId }), getSessionUser()]);
   if (!context || !context.operations.length) return <p className="mt-1 text-sm text-stone-600">This version cannot be adapted.</p>;
   const member = user ? await findMembership(vendor.id, user.id) : null;
   const benchUser = user && member && can(member.role, "bench.use") ? user : null;
   const machines = benchUser ? await listMachines({ vendorId: vendor.id, userId: benchUser.id }) : [];
+  const Panel = lazy ? LazyAdaptPanel : AdaptPanel;
   return (
-    <AdaptPanel
+    <Panel
       context={context}
       operationIndex={operationIndex}
       machines={machines}
@@ -33,8 +43,8 @@ export async function AdaptPanelMount({ vendor, versionId, operationIndex, units
 }
 
 /** For the Library pages: `renderAdaptPanel` of getCompiledSheet / SheetView. */
-export function adaptPanelRenderer(options: Omit<Props, "operationIndex">) {
+export function adaptPanelRenderer(options: Omit<Props, "operationIndex" | "lazy">) {
   return function renderAdaptPanel({ index }: { index: number }) {
-    return <AdaptPanelMount {...options} operationIndex={index} />;
+    return <AdaptPanelMount {...options} operationIndex={index} lazy />;
   };
 }

@@ -4,15 +4,16 @@ import { cache } from "react";
 
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { safeDecode } from "@/lib/http/safe-decode";
-import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
 
-/** One lookup per request, shared by a segment's layout (404 check) and its page. */
+import { getCachedLibrarySheet } from "./cached-library-sheet";
+
+/** One lookup per request, shared by a segment's layout (404 check) and its page; the vendor (and its access settings) fresh, the sheet from the cache. */
 export const loadLibrarySheet = cache(async (vendorSlug: string, sheetSlug: string, number?: number) => {
   // The access check runs here, so the page checks it as well as the layout (a page segment can render alone).
   const { vendor } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/${sheetSlug}`);
   const slug = safeDecode(sheetSlug);
   if (slug === null) return null;
-  const data = await getLibrarySheet({ vendorId: vendor.id, slug, number });
+  const data = await getCachedLibrarySheet(vendor.id, slug, number);
   return data ? { vendor, data } : null;
 });
 

@@ -3,6 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 
 import { enqueue } from "@/lib/jobs/enqueue";
+import { invalidateLibrary } from "@/lib/library/library-cache";
 
 import { SHEET_EVENTS_QUEUE, type SheetEvent, sheetEventSchema } from "./sheet-events";
 
@@ -12,5 +13,10 @@ import { SHEET_EVENTS_QUEUE, type SheetEvent, sheetEventSchema } from "./sheet-e
  * down loses nothing.
  */
 export async function emitSheetEvent(trx: Knex.Transaction, event: SheetEvent): Promise<void> {
-  await enqueue(trx, SHEET_EVENTS_QUEUE, sheetEventSchema.parse(event));
+  const parsed = sheetEventSchema.parse(event);
+  await enqueue(trx, SHEET_EVENTS_QUEUE, parsed);
+  // The cached Library pages of this process go once the change is committed (earlier, a concurrent render
+  // could cache the old state again); the subscribers follow in jobs.
+  const sheetId = parsed.type === "catalogue.changed" ? undefined : parsed.sheetId;
+  trx.executionPromise.then(() => invalidateLibrary({ vendorId: parsed.vendorId, sheetId })).catch(() => undefined);
 }

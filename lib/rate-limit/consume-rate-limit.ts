@@ -3,30 +3,25 @@ import "server-only";
 import { db } from "@/lib/db/knex";
 import { RateLimited } from "@/lib/errors/domain-errors";
 
+import { createLeasedLimiter } from "./leased-limiter";
+
 type Limit = { key: string; limit: number; windowSeconds: number };
 
+// One limiter per server process; the global survives hot reloads in development.
+const globalForLimiter = globalThis as unknown as { swarfbookLimiter?: ReturnType<typeof createLeasedLimiter> };
+const limiter = (globalForLimiter.swarfbookLimiter ??= createLeasedLimiter(db));
+
 /**
- * Fixed-window counter in PostgreSQL, so a limit holds across app instances.
+ * Fixed-window counter in PostgreSQL, so a limit holds across app instances; generous limits are spent
+ * from small local leases of the bucket (see leased-limiter.ts), so most calls write nothing.
  * Returns the hits in the current window; throws RateLimited past the limit.
  */
 export async function consumeRateLimit({ key, limit, windowSeconds }: Limit): Promise<number> {
-  const { rows } = await db.raw<{ rows: { hits: number; window_start: Date }[] }>(
-    `insert into rate_limit_buckets (key, window_start, hits) values (?, now(), 1)
-     on conflict (key) do update set
-       hits = case when rate_limit_buckets.window_start < now() - make_interval(secs => ?) then 1 else rate_limit_buckets.hits + 1 end,
-       window_start = case when rate_limit_buckets.window_start < now() - make_interval(secs => ?) then now() else rate_limit_buckets.window_start end
-     returning hits, window_start`,
-    [key, windowSeconds, windowSeconds],
-  );
-  const { hits, window_start } = rows[0];
-  if (hits > limit) {
-    const retry = Math.max(1, Math.ceil(windowSeconds - (Date.now() - new Date(window_start).getTime()) / 1000));
-    throw new RateLimited(retry);
-  }
-  return hits;
+  return limiter.consume({ key, limit, windowSeconds });
 }
 
 export async function resetRateLimit(key: string): Promise<void> {
+  limiter.forget(key);
   await db("rate_limit_buckets").where({ key }).delete();
 }
 

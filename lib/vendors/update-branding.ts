@@ -5,6 +5,7 @@ import { fileTypeFromBuffer } from "file-type";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
+import { invalidateLibrary } from "@/lib/library/library-cache";
 
 import { type BrandingInput, LOGO_MAX_BYTES, LOGO_TYPES } from "./branding-schema";
 
@@ -42,4 +43,5 @@ export async function updateBranding(opts: { vendorId: string; actorUserId: stri
       trx,
     );
   });
+  invalidateLibrary({ vendorId: opts.vendorId });
 }

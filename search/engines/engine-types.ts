@@ -51,4 +51,9 @@ export interface SearchEngine {
   /** Replace every document of a vendor (full reindex). */
   replaceVendor(vendorId: string, docs: readonly SearchDocument[]): Promise<void>;
   search(query: EngineQuery): Promise<EngineResult>;
+  /**
+   * Optional: the steps of a search (strictest first) in one round trip, answering the first step that
+   * matched anything (else the last) and its index. Without it, runSearch calls `search` step by step.
+   */
+  searchSteps?(queries: readonly EngineQuery[]): Promise<{ step: number; result: EngineResult }>;
 }

@@ -5,7 +5,7 @@ import { oneWaySynonyms, synonymGroups } from "@/search/vocabulary/synonyms";
 
 import type { EngineQuery, EngineResult, SearchEngine } from "../engines/engine-types";
 import { correctTypos } from "./correct-typos";
-import { toHit } from "./to-hit";
+import { toHits } from "./to-hit";
 import { type ExplicitFilters, planSearch } from "./plan-search";
 import type { SearchResponse } from "./search-response";
 
@@ -43,10 +43,16 @@ export async function runSearch(engine: SearchEngine, req: SearchRequest): Promi
   const { parsed, corrections, page, perPage, steps } = engineQueriesFor(req);
   let result: EngineResult = { total: 0, hits: [], facets: {}, cutters: [] };
   let relaxed: SearchResponse["relaxed"] = [];
-  for (const step of steps) {
-    result = await engine.search(step.query);
-    relaxed = step.dropped;
-    if (result.total > 0) break;
+  if (engine.searchSteps) {
+    const found = await engine.searchSteps(steps.map((s) => s.query));
+    result = found.result;
+    relaxed = steps[found.step].dropped;
+  } else {
+    for (const step of steps) {
+      result = await engine.search(step.query);
+      relaxed = step.dropped;
+      if (result.total > 0) break;
+    }
   }
   if (result.total === 0) relaxed = [];
   return {
@@ -54,7 +60,7 @@ export async function runSearch(engine: SearchEngine, req: SearchRequest): Promi
     page,
     perPage,
     total: result.total,
-    hits: result.hits.map((h) => toHit(h.doc, parsed, corrections)),
+    hits: toHits(result.hits.map((h) => h.doc), parsed, corrections),
     facets: result.facets,
     cutters: result.cutters.map((c) => ({ sku: c.cutterSku, name: c.cutterName, diameterMm: c.diameterMm, flutes: c.flutes })),
     chips: parsed.chips,

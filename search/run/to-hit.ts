@@ -4,7 +4,7 @@ import { materialByKey, materialKeysWithin } from "@/search/vocabulary/lookup";
 import { operations } from "@/search/vocabulary/operations";
 
 import type { Correction } from "./correct-typos";
-import { highlightRanges } from "./highlight";
+import { highlighter, type HighlightRange } from "./highlight";
 import type { SearchHit } from "./search-response";
 
 /** Words to mark in a hit: what was typed, what it was corrected to, and the vocabulary's words for each part. */
@@ -15,8 +15,13 @@ export function highlightTerms(parsed: ParsedQuery, corrections: readonly Correc
   return terms.filter((t) => t && t.length >= 2);
 }
 
-export function toHit(doc: SearchDocument, parsed: ParsedQuery, corrections: readonly Correction[]): SearchHit {
-  const terms = highlightTerms(parsed, corrections);
+/** Maps the engine's documents to hits; the highlight terms are worked out once for all of them. */
+export function toHits(docs: readonly SearchDocument[], parsed: ParsedQuery, corrections: readonly Correction[]): SearchHit[] {
+  const mark = highlighter(highlightTerms(parsed, corrections));
+  return docs.map((doc) => toHit(doc, mark));
+}
+
+export function toHit(doc: SearchDocument, mark: (text: string) => HighlightRange[]): SearchHit {
   return {
     slug: doc.slug,
     version: doc.versionNumber ?? 0,
@@ -28,10 +33,10 @@ export function toHit(doc: SearchDocument, parsed: ParsedQuery, corrections: rea
     operations: doc.operations,
     publishedAt: doc.publishedAt,
     highlights: {
-      title: highlightRanges(doc.title, terms),
-      summary: highlightRanges(doc.summary, terms),
-      cutter: highlightRanges(`${doc.cutterSku} ${doc.cutterName}`, terms),
-      material: highlightRanges(doc.materialName ?? "", terms),
+      title: mark(doc.title),
+      summary: mark(doc.summary),
+      cutter: mark(`${doc.cutterSku} ${doc.cutterName}`),
+      material: mark(doc.materialName ?? ""),
     },
   };
 }

@@ -3,6 +3,7 @@ import { Meilisearch, type Task } from "meilisearch";
 import { type SearchDocument, searchDocumentSchema } from "@/search/document/document-schema";
 import { searchSettings } from "@/search/settings";
 
+import { compareFacetValues } from "../facet-order";
 import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
 import { buildMeiliFilter, quote, vendorFilter } from "./meili-filter";
 import { meiliSettings } from "./meili-settings";
@@ -20,7 +21,7 @@ function facetCounts(distribution: Record<string, Record<string, number>> | unde
   for (const [facet, values] of Object.entries(distribution ?? {})) {
     out[facet as FacetName] = Object.entries(values)
       .map(([value, count]) => ({ value, count }))
-      .sort((a, b) => b.count - a.count || a.value.localeCompare(b.value, "en", { numeric: true }));
+      .sort((a, b) => b.count - a.count || compareFacetValues(a.value, b.value));
   }
   return out;
 }

@@ -84,3 +84,18 @@ select (select count(*)::int from matched) as total,
     frag("d.vendor_id = ?", q.vendorId),
   );
 }
+
+/**
+ * The steps of a search in one statement: step i runs only when every earlier step matched nothing (a
+ * one-time filter on already computed totals), so relaxing a search costs no extra round trip.
+ */
+export function buildSearchStepsSql(queries: readonly EngineQuery[]): Fragment {
+  const steps = queries.map(buildSearchSql);
+  if (steps.length === 1) return { sql: `select 0 as step, s0.* from (${steps[0].sql}) as s0`, bindings: steps[0].bindings };
+  const ctes = joinFrags(steps.map((step, i) => ({ sql: `s${i} as (${step.sql})`, bindings: step.bindings })), ",\n");
+  const branches = steps.map((_, i) => {
+    const earlierEmpty = Array.from({ length: i }, (__, j) => `(select total from s${j}) = 0`);
+    return `select ${i} as step, s${i}.* from s${i}${earlierEmpty.length ? ` where ${earlierEmpty.join(" and ")}` : ""}`;
+  });
+  return { sql: `with ${ctes.sql}\n${branches.join("\nunion all ")}`, bindings: ctes.bindings };
+}

@@ -2,7 +2,13 @@ import { createHash } from "node:crypto";
 
 import type { Knex } from "knex";
 
-type PgConnection = { query: (config: { name: string; text: string; values: readonly unknown[] }) => Promise<{ rows: unknown[] }> };
+type PgConnection = { query: (config: { name?: string; text: string; values: readonly unknown[] }) => Promise<{ rows: unknown[] }> };
+
+/**
+ * Named prepared statements are on unless DATABASE_PREPARED_STATEMENTS=off: a pooler in transaction mode
+ * (pgbouncer before 1.21) hands each statement to any server connection and cannot keep them.
+ */
+export const preparedStatementsEnabled = () => !/^(off|false|0|no)$/i.test(process.env.DATABASE_PREPARED_STATEMENTS ?? "");
 
 /**
  * Runs a statement as a named prepared statement on the pooled connection, so PostgreSQL plans each
@@ -15,7 +21,7 @@ type PgConnection = { query: (config: { name: string; text: string; values: read
 export async function preparedQuery<T>(knex: Knex, sql: string, bindings: readonly unknown[]): Promise<T[]> {
   if (process.env.DATABASE_POOL_MODE === "transaction") return (await knex.raw(sql, bindings as Knex.ValueDict[])).rows as T[];
   const native = knex.raw(sql, bindings as Knex.ValueDict[]).toSQL().toNative();
-  const name = `sbk_${createHash("sha1").update(native.sql).digest("hex").slice(0, 24)}`;
+  const name = preparedStatementsEnabled() ? `sbk_${createHash("sha1").update(native.sql).digest("hex").slice(0, 24)}` : undefined;
   const connection = (await knex.client.acquireConnection()) as PgConnection;
   try {
     return (await connection.query({ name, text: native.sql, values: native.bindings })).rows as T[];

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 
-import { buildSearchSql } from "@/search/engines/postgres/pg-search-sql";
+import type { EngineQuery } from "@/search/engines/engine-types";
+import { buildSearchSql, buildSearchStepsSql } from "@/search/engines/postgres/pg-search-sql";
 import { compose, frag } from "@/search/engines/postgres/sql-fragment";
 import { buildTsQuery, lexemeOf, typoWords } from "@/search/engines/postgres/ts-query";
 
@@ -54,5 +55,18 @@ describe("the search statement", () => {
 describe("sql fragments", () => {
   it("keeps bindings in placeholder order", () => {
     expect(compose("a $2 b $1", frag("?", 1), frag("? ?", 2, 3))).toEqual({ sql: "a ? ? b ?", bindings: [2, 3, 1] });
+  });
+});
+
+describe("search steps in one statement", () => {
+  const step = (filters: EngineQuery["filters"]): EngineQuery => ({ vendorId: "00000000-0000-4000-8000-000000000001", words: ["acrylic"], alternatives: [], boosts: {}, filters, page: 1, perPage: 20 });
+
+  it("runs a later step only when every earlier one matched nothing, with all bindings in order", () => {
+    const steps = [step({ flutes: 2, diameterMm: 3.175 }), step({ diameterMm: 3.175 }), step({})];
+    const { sql, bindings } = buildSearchStepsSql(steps);
+    expect(sql).toContain("select 0 as step, s0.* from s0\nunion all select 1 as step, s1.* from s1 where (select total from s0) = 0");
+    expect(sql).toContain("select 2 as step, s2.* from s2 where (select total from s0) = 0 and (select total from s1) = 0");
+    expect(bindings).toEqual(steps.flatMap((s) => buildSearchSql(s).bindings));
+    expect(sql.split("?").length - 1).toBe(bindings.length);
   });
 });

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { parseQuery } from "@/search/parse/parse-query";
 import { correctTypos, correctWord } from "@/search/run/correct-typos";
 import { editDistance } from "@/search/run/edit-distance";
-import { highlightRanges } from "@/search/run/highlight";
+import { highlighter, highlightRanges } from "@/search/run/highlight";
 import { planSearch } from "@/search/run/plan-search";
 
 describe("edit distance", () => {
@@ -38,6 +38,11 @@ describe("highlight ranges", () => {
     expect(highlightRanges("Cast acrylic, 1/8 in", ["acrylic", "ACRY", "1/8"])).toEqual([[5, 12], [14, 17]]);
     expect(highlightRanges("Acrylique coulé", ["coule"])).toEqual([[10, 15]]);
     expect(highlightRanges("polyacrylic", ["acrylic"])).toEqual([]);
+  });
+
+  it("folds accented and upper-case text and terms alike, with offsets into the original text", () => {
+    expect(highlighter(["Coulé", "acrylique"])("ACRYLIQUE COULÉ")).toEqual([[0, 9], [10, 15]]);
+    expect(highlighter(["cafe"])("Café Ångström cafe")).toEqual([[0, 4], [14, 18]]);
   });
 
   it("returns only offsets, never markup, so `<script>` in a title stays text", () => {

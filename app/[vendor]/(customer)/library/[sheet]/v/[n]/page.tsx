@@ -4,7 +4,7 @@ import { after } from "next/server";
 
 import { loadLibrarySheet, parseVersionNumber } from "@/components/library/load-library-sheet";
 import { readUnits } from "@/components/library/read-units";
-import { SheetView } from "@/components/library/sheet-view";
+import { CachedSheetView } from "@/components/library/cached-sheet-view";
 import { adaptPanelRenderer } from "@/components/adapt/adapt-panel-mount";
 import { countSheetView } from "@/lib/field/count-sheet-view";
 
@@ -25,5 +25,5 @@ export default async function SheetVersionPage({ params }: Props) {
   after(() => countSheetView(found.vendor.id, found.data.version.id));
   const units = await readUnits();
   const renderAdaptPanel = adaptPanelRenderer({ vendor: found.vendor, versionId: found.data.version.id, units, returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}` });
-  return <SheetView data={found.data} units={units} vendorSlug={found.vendor.slug} renderAdaptPanel={renderAdaptPanel} />;
+  return <CachedSheetView vendorId={found.vendor.id} data={found.data} units={units} vendorSlug={found.vendor.slug} renderAdaptPanel={renderAdaptPanel} />;
 }

@@ -3,8 +3,6 @@ import { withVendor } from "@/lib/http/with-vendor";
 
 import { loadSetupSheet } from "../load-setup-sheet";
 
-export const runtime = "nodejs";
-
 // GET /api/v1/vendors/{vendor}/setups/{id}/pdf: the one-page setup sheet for the machine.
 export const GET = withVendor<{ vendor: string; id: string }>(async (_request, { access, params }) => {
   const { data, versionUrl, fileName, vendorName } = await loadSetupSheet(access, params.id);

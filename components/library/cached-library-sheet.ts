@@ -1,0 +1,20 @@
+import "server-only";
+
+import { cacheLife, cacheTag } from "next/cache";
+
+import { libraryTag, librarySheetTag } from "@/lib/library/library-cache";
+import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
+
+/**
+ * A Library sheet's readable data from Next's cache. A published version never changes; publishing,
+ * withdrawing and catalogue or branding edits drop the entry by tag (lib/library/library-cache.ts) in the
+ * process that made the change, and other app instances renew theirs within a minute.
+ */
+export async function getCachedLibrarySheet(vendorId: string, slug: string, number: number | undefined) {
+  "use cache";
+  cacheLife("minutes");
+  cacheTag(libraryTag(vendorId));
+  const data = await getLibrarySheet({ vendorId, slug, number });
+  if (data) cacheTag(librarySheetTag(data.sheet.id));
+  return data;
+}
