@@ -9,6 +9,7 @@ import { loadBenchSetup } from "@/components/bench/load-bench";
 import { OutcomeForm } from "@/components/bench/outcome-form";
 import { OutcomeHistory } from "@/components/bench/outcome-history";
 import { ReadaptCompare } from "@/components/bench/readapt-compare";
+import { AskAboutSheet } from "@/components/support/ask-about-sheet";
 import { PageHeader } from "@/components/ui/page-header";
 import { feedSpeedCurve } from "@/lib/bench/feed-speed-curve";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
@@ -49,6 +50,7 @@ export default async function SetupPage({ params }: { params: Promise<{ vendor: 
   const api = `/api/v1/vendors/${vendor.slug}/setups/${setup.id}`;
   const downloads = (
     <>
+      <AskAboutSheet vendorSlug={vendor.slug} vendorName={vendor.name} sheetVersionId={setup.sheetVersionId} machineId={setup.machineId} />
       <a href={`${api}/pdf`} className="inline-flex min-h-11 items-center rounded bg-accent px-4 font-medium text-accent-ink">Setup sheet (PDF)</a>
       <a href={`${api}/csv`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4">Numbers (CSV)</a>
     </>
