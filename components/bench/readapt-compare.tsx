@@ -25,7 +25,8 @@ export function ReadaptCompare({ old, oldNumber, next, units, vendorSlug }: Prop
         <p role="alert" className="mt-2 text-sm text-red-800"><span aria-hidden>⚠ </span>{next.error ?? "Cannot be re-adapted."}</p>
       ) : (
         <>
-          <table className="mt-3 w-full border-collapse text-sm">
+          <div role="region" aria-label={`Saved numbers beside version ${n}`} tabIndex={0} className="mt-3 max-w-full overflow-x-auto">
+          <table className="w-full border-collapse text-sm">
             <thead>
               <tr className="border-b border-stone-300 text-left">
                 <th scope="col" className="py-2 pr-2 font-medium">Quantity</th>
@@ -49,6 +50,7 @@ export function ReadaptCompare({ old, oldNumber, next, units, vendorSlug }: Prop
               })}
             </tbody>
           </table>
+          </div>
           <details className="mt-3">
             <summary className="min-h-11 cursor-pointer py-2 text-sm font-medium">Steps on version {n}</summary>
             <StepsTrail steps={next.result.steps} units={units} />
