@@ -7,13 +7,14 @@ import { getSessionUser } from "@/lib/auth/session-user";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 import { listMachines } from "@/lib/bench/machines";
 import type { UnitSystem } from "@/lib/machining";
+import type { AdaptStart } from "@/lib/bench/readapt-start";
 
 import { AdaptPanel } from "./adapt-panel";
 
-type Props = { vendor: { id: string; slug: string }; versionId: string; operationIndex: number; units: UnitSystem; returnTo: string };
+type Props = { vendor: { id: string; slug: string }; versionId: string; operationIndex: number; units: UnitSystem; returnTo: string; start?: AdaptStart };
 
 /** Server side of the adapt panel: the sheet-derived inputs and, for a signed-in customer, their machines. */
-export async function AdaptPanelMount({ vendor, versionId, operationIndex, units, returnTo }: Props) {
+export async function AdaptPanelMount({ vendor, versionId, operationIndex, units, returnTo, start }: Props) {
   const [context, user] = await Promise.all([loadAdaptContext({ vendorId: vendor.id, versionId }), getSessionUser()]);
   if (!context || !context.operations.length) return <p className="mt-1 text-sm text-stone-600">This version cannot be adapted.</p>;
   const member = user ? await findMembership(vendor.id, user.id) : null;
@@ -24,6 +25,8 @@ export async function AdaptPanelMount({ vendor, versionId, operationIndex, units
       context={context}
       operationIndex={operationIndex}
       machines={machines}
+      initialMachineId={start?.machineId}
+      initialOverrides={start?.overrides}
       units={machines[0]?.units ?? units}
       vendorSlug={vendor.slug}
       saveAction={benchUser && context.versionState !== "withdrawn" ? saveSetupAction : undefined}

@@ -1,4 +1,5 @@
 import type { ContextOperation } from "@/lib/bench/adapt-context";
+import { numbersDiffer } from "@/lib/bench/setup-sheet-data";
 import { type AdaptNumbers, formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/machining";
 
 type Row = { key: string; label: string; kind: QuantityKind; sheet: number | null; adapted: number | null };
@@ -19,7 +20,7 @@ export function resultRows(op: ContextOperation, cutter: { diameterMm: number; f
   ];
 }
 
-const differs = (r: Row) => r.sheet !== null && r.adapted !== null && Math.abs(r.adapted - r.sheet) > 1e-9 * Math.max(1, Math.abs(r.sheet));
+const differs = (r: Row) => numbersDiffer(r.sheet, r.adapted);
 
 /** The sheet's numbers beside the adapted ones; a changed number is marked with a word, not only a colour. */
 export function ResultTable({ rows, units, headings = ["Sheet", "Your machine"] }: { rows: Row[]; units: UnitSystem; headings?: [string, string] }) {

@@ -68,6 +68,9 @@ describe.each([
     await Promise.all([c.page.waitForURL(/\/bench\/setups\//, { timeout: 60_000 }), open.click()]);
     await c.page.getByRole("heading", { name: "Numbers on this machine" }).waitFor();
     await expectNoSidewaysPan(c.page, "the setup page");
+    // The setup says what the customer changed, the stick-out and the entry, on the page and in print.
+    await c.page.locator("[data-your-changes]").waitFor();
+    await expect(c.page.locator("[data-setup-facts]").textContent()).resolves.toMatch(/Stick-out.+Entry/);
     await screenshot(c.page, `${name}-setup`);
 
     // Print: the setup sheet downloads as a PDF.
@@ -77,7 +80,11 @@ describe.each([
       const file = path.join(dir, "setup.pdf");
       await download.saveAs(file);
       expect(readFileSync(file).subarray(0, 5).toString()).toBe("%PDF-");
-      expect(execFileSync("pdftotext", ["-layout", file, "-"]).toString()).toMatch(/rpm/);
+      const text = execFileSync("pdftotext", ["-layout", file, "-"]).toString();
+      expect(text).toMatch(/rpm/);
+      expect(text).toContain("Your changes");
+      expect(text).toContain("Stick-out:");
+      expect(text).toContain("Entry:");
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }

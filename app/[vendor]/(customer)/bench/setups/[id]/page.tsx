@@ -17,6 +17,7 @@ import { machineToInput } from "@/lib/bench/machine-rows";
 import { getMachine } from "@/lib/bench/machines";
 import { listOutcomes } from "@/lib/bench/outcomes";
 import { readaptSetup } from "@/lib/bench/readapt-setup";
+import { setupSheetData } from "@/lib/bench/setup-sheet-data";
 import { versionNumbers } from "@/lib/bench/version-numbers";
 import { formatNumber } from "@/lib/machining";
 
@@ -47,6 +48,7 @@ export default async function SetupPage({ params }: { params: Promise<{ vendor: 
     radialDepthMm: formatNumber(r.radialDepthMm, "length", units),
     plungeFeedMmMin: r.plungeFeedMmMin === null ? "" : formatNumber(r.plungeFeedMmMin, "feedRate", units),
   };
+  const sheetData = setupSheetData({ context, operationIndex: setup.operationIndex, result: r, setupName: setup.name, machineName: setup.machineName, units, overrides: setup.overrides, machineStickoutMm: machine?.stickoutMm ?? null });
   const api = `/api/v1/vendors/${vendor.slug}/setups/${setup.id}`;
   const downloads = (
     <>
@@ -71,16 +73,30 @@ export default async function SetupPage({ params }: { params: Promise<{ vendor: 
         <section aria-labelledby="numbers">
           <h2 id="numbers" className="text-lg font-semibold">Numbers on this machine</h2>
           {op ? <ResultTable rows={resultRows(op, context.cutter, r)} units={units} headings={[`Sheet v${context.versionNumber}`, setup.machineName]} /> : null}
+          <dl className="mt-3 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm" data-setup-facts>
+            <dt className="font-medium">Stick-out</dt>
+            <dd className="num">{sheetData.stickout}</dd>
+            <dt className="font-medium">Entry</dt>
+            <dd>{sheetData.entryMethod}</dd>
+          </dl>
+          <section aria-labelledby="your-changes" className="mt-4" data-your-changes>
+            <h3 id="your-changes" className="font-semibold">Your changes</h3>
+            {sheetData.yourChanges.length ? (
+              <ul className="num mt-1 list-disc pl-5 text-sm">{sheetData.yourChanges.map((line) => <li key={line}>{line}</li>)}</ul>
+            ) : (
+              <p className="mt-1 text-sm text-stone-600">None: the sheet&apos;s own depths and the machine&apos;s usual stick-out.</p>
+            )}
+          </section>
           {curve ? <FeedSpeedChart curve={curve} units={units} /> : null}
         </section>
         <section aria-labelledby="steps">
           <h2 id="steps" className="text-lg font-semibold">How they were found</h2>
-          <StepsTrail steps={r.steps} units={units} />
+          <StepsTrail steps={r.steps} units={units} emptyText={sheetData.noStepsNote} />
           <h2 className="mt-6 text-lg font-semibold">Before you cut</h2>
           <WarningList warnings={r.warnings} />
         </section>
       </div>
-      {readapt ? <ReadaptCompare old={r} oldNumber={setup.versionNumber} next={readapt} units={units} vendorSlug={vendor.slug} /> : null}
+      {readapt ? <ReadaptCompare old={r} oldNumber={setup.versionNumber} next={readapt} units={units} vendorSlug={vendor.slug} setupId={setup.id} yourChanges={sheetData.yourChanges} /> : null}
       <div className="mt-8 grid gap-8 lg:grid-cols-2">
         <section aria-labelledby="report">
           <h2 id="report" className="mb-3 text-lg font-semibold">Report an outcome</h2>
