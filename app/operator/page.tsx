@@ -9,7 +9,7 @@ export default async function OperatorPage() {
   await requireOperator();
   const vendors = await listVendorsForOperator();
   return (
-    <div className="mx-auto max-w-5xl px-4 py-10">
+    <div>
       <PageHeader title="Operator" lead="Create vendor workspaces. Vendors' private data (sheets in draft, tickets, customers) is not shown here." />
       <h2 className="mb-3 text-lg font-semibold">New workspace</h2>
       <CreateVendorForm />
