@@ -1,6 +1,7 @@
 import { CreateVendorForm } from "@/components/operator/create-vendor-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { requireOperator } from "@/lib/auth/require-operator";
+import { formatDate } from "@/lib/ui/dates";
 import { listVendorsForOperator } from "@/lib/vendors/list-vendors-for-operator";
 
 export const metadata = { title: "Operator" };
@@ -19,7 +20,7 @@ export default async function OperatorPage() {
         <tbody>
           {vendors.map((v) => (
             <tr key={v.id} className="border-t border-stone-100">
-              <td className="px-3 py-2">{v.name}</td><td className="num px-3 py-2">/{v.slug}</td><td className="num px-3 py-2">{v.memberCount}</td><td className="num px-3 py-2">{v.createdAt.toISOString().slice(0, 10)}</td>
+              <td className="px-3 py-2">{v.name}</td><td className="num px-3 py-2">/{v.slug}</td><td className="num px-3 py-2">{v.memberCount}</td><td className="num px-3 py-2">{formatDate(v.createdAt)}</td>
             </tr>
           ))}
         </tbody>

@@ -1,5 +1,6 @@
 import type { TicketCard } from "@/content-schema/ticket-card";
 import { formatQuantity, type QuantityKind, QUANTITY_KINDS } from "@/lib/machining";
+import { formatDateTime } from "@/lib/ui/dates";
 
 const kindOf = (q: string): QuantityKind => (QUANTITY_KINDS as string[]).includes(q) ? (q as QuantityKind) : "length";
 
@@ -61,7 +62,7 @@ export function AdaptedCard({ card, vendorSlug }: { card: TicketCard; vendorSlug
           {card.cautions.map((c, i) => <li key={i} className="rounded border-l-4 border-amber-600 bg-amber-50 px-2 py-1"><span aria-hidden>⚠ </span>{c.text}</li>)}
         </ul>
       ) : null}
-      <p className="mt-3 text-xs text-stone-600">Starting values computed {new Date(card.computedAt).toISOString().slice(0, 16).replace("T", " ")} UTC from the sheet and your machine; they are not a promise of safety.</p>
+      <p className="mt-3 text-xs text-stone-600">Starting values computed {formatDateTime(card.computedAt)} from the sheet and your machine; they are not a promise of safety.</p>
     </section>
   );
 }

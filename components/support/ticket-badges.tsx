@@ -28,11 +28,7 @@ export function PriorityBadge({ priority }: { priority: TicketPriority }) {
   );
 }
 
-const dateTime = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
-
-export function formatDateTime(iso: string): string {
-  return `${dateTime.format(new Date(iso))} UTC`;
-}
+export { formatDateTime } from "@/lib/ui/dates";
 
 /** The first-response target: when it is due, or that it is overdue (never colour alone). */
 export function DueBadge({ dueAt, respondedAt, overdue }: { dueAt: string; respondedAt: string | null; overdue: boolean }) {
