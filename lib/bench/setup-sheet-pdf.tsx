@@ -64,7 +64,7 @@ function SetupSheet({ data, qr, url, vendorName }: { data: SetupSheetData; qr: s
         <Text style={{ marginTop: 6 }}>{t(`Stick-out: ${data.stickout}`)}</Text>
         <Text>{t(`Entry: ${data.entryMethod}`)}</Text>
         <Text style={s.h2}>Your changes</Text>
-        {data.yourChanges.length ? data.yourChanges.map((line, i) => <Text key={i} style={s.li}>{t(`- ${line}`)}</Text>) : <Text>None: the sheet's own depths and the machine's usual stick-out.</Text>}
+        {data.yourChanges.length ? data.yourChanges.map((line, i) => <Text key={i} style={s.li}>{t(`- ${line}`)}</Text>) : <Text>{t("None: the sheet's own depths and the machine's usual stick-out.")}</Text>}
         <Text style={s.h2}>How the numbers were adapted</Text>
         {data.steps.length ? data.steps.map((step, i) => <Text key={i} style={s.li}>{t(`${i + 1}. ${step}`)}</Text>) : <Text>{t(data.noStepsNote)}</Text>}
         {data.warnings.length ? (
