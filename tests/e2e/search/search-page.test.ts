@@ -16,7 +16,7 @@ describe("Library search", () => {
     const { page } = session;
     const response = await page.goto("/northbeck/library/search");
     expect(response?.status()).toBe(200);
-    const box = page.getByRole("searchbox", { name: "Search the Library" });
+    const box = page.locator("#library-search");
     await box.pressSequentially("1/8 acrylic slot", { delay: 40 });
     await page.waitForURL((url) => url.searchParams.get("q") === "1/8 acrylic slot", { timeout: 30_000 });
 
@@ -55,7 +55,7 @@ describe("Library search", () => {
   it("results are plain links: Tab and the arrow keys reach them, Enter opens one, a click too", async () => {
     const { page } = session;
     await page.goto(`/northbeck/library/search?q=${encodeURIComponent("6mm mdf profile")}`);
-    const box = page.getByRole("searchbox", { name: "Search the Library" });
+    const box = page.locator("#library-search");
     const links = page.getByRole("list", { name: "Matching sheets" }).getByRole("link");
     await expect.poll(() => links.count(), { timeout: 30_000 }).toBeGreaterThan(0);
     const first = await links.first().getAttribute("href");
