@@ -19,6 +19,8 @@ export function proxy(request: NextRequest) {
   ].join("; ");
   const requestHeaders = new Headers(request.headers);
   requestHeaders.set("x-nonce", nonce);
+  // For a 404 page to explain itself (not-found pages get no params); set here, so a client cannot choose it.
+  requestHeaders.set("x-request-path", request.nextUrl.pathname);
   requestHeaders.set("Content-Security-Policy", csp);
   const response = NextResponse.next({ request: { headers: requestHeaders } });
   response.headers.set("Content-Security-Policy", csp);

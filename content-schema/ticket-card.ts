@@ -22,7 +22,8 @@ export const cardNumbersSchema = z.object({
 export const cardOperationSchema = z.object({
   label: z.string(),
   kind: z.string(),
-  reference: z.object({ rpm: num, feedMmMin: num, axialDepthMm: num, radialDepthMm: num }),
+  // The sheet's own numbers; fz, vc and the plunge feed were added later, so older cards lack them.
+  reference: z.object({ rpm: num, feedMmMin: num, axialDepthMm: num, radialDepthMm: num, chipLoadMm: num.optional(), cuttingSpeedMpm: num.optional(), plungeFeedMmMin: nullableNum.optional() }),
   adapted: cardNumbersSchema.nullable(),
   error: z.string().optional(),
   steps: z.array(

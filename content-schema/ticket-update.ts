@@ -15,6 +15,16 @@ export const ticketReplySchema = z.object({
 });
 export type TicketReplyInput = z.infer<typeof ticketReplySchema>;
 
+/** What the editor showed for the fields it changed; a field whose stored value differs was changed by someone else. */
+export const ticketExpectedSchema = z
+  .object({
+    status: z.string().max(40),
+    priority: z.string().max(40),
+    assigneeId: z.string().max(40),
+    tags: z.string().max(2000),
+  })
+  .partial();
+
 /** A staff change to one ticket; only the fields present change. `assigneeId: ""` unassigns. */
 export const ticketUpdateSchema = z.object({
   ticketId: z.uuid(),
@@ -22,6 +32,7 @@ export const ticketUpdateSchema = z.object({
   priority: ticketPrioritySchema.optional(),
   assigneeId: z.union([z.literal(""), z.uuid()]).optional(),
   tags: tagList.optional(),
+  expected: ticketExpectedSchema.optional(),
 });
 export type TicketUpdateInput = z.infer<typeof ticketUpdateSchema>;
 
@@ -45,4 +56,13 @@ export const problemReportSchema = z.object({
 export const snippetSchema = z.object({
   title: z.string().trim().min(1).max(80),
   body: z.string().trim().min(1).max(5000),
+});
+
+/** The ticket panel's four fields as the form shows them (tags as "a, b"); also what a save answers with. */
+export type TicketPanelValues = { status: string; priority: string; assigneeId: string; tags: string };
+export const panelValuesOf = (t: { status: string; priority: string; assigneeId: string | null; tags: string[] }): TicketPanelValues => ({
+  status: t.status,
+  priority: t.priority,
+  assigneeId: t.assigneeId ?? "",
+  tags: t.tags.join(", "),
 });

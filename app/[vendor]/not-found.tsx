@@ -1,5 +1,6 @@
+import { PrivateLibraryNote } from "@/components/shell/private-library-note";
 import { NotFoundMessage } from "@/components/ui/not-found-message";
 
-export default function VendorNotFound() {
-  return <NotFoundMessage />;
+export default async function VendorNotFound() {
+  return (await PrivateLibraryNote()) ?? <NotFoundMessage />;
 }

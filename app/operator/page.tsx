@@ -3,6 +3,7 @@ import { DeadLetterList } from "@/components/operator/dead-letter-list";
 import { PageHeader } from "@/components/ui/page-header";
 import { requireOperator } from "@/lib/auth/require-operator";
 import { listDeadLetters, summariseDeadLetters } from "@/lib/mail/dead-letters";
+import { formatDate } from "@/lib/ui/dates";
 import { listVendorsForOperator } from "@/lib/vendors/list-vendors-for-operator";
 
 export const metadata = { title: "Operator" };
@@ -11,7 +12,7 @@ export default async function OperatorPage() {
   await requireOperator();
   const [vendors, deadLetterSummary, deadLetters] = await Promise.all([listVendorsForOperator(), summariseDeadLetters(), listDeadLetters()]);
   return (
-    <div className="mx-auto max-w-5xl px-4 py-10">
+    <div>
       <PageHeader title="Operator" lead="Create vendor workspaces. Vendors' private data (sheets in draft, tickets, customers) is not shown here." />
       <h2 className="mb-3 text-lg font-semibold">New workspace</h2>
       <CreateVendorForm />
@@ -21,7 +22,7 @@ export default async function OperatorPage() {
         <tbody>
           {vendors.map((v) => (
             <tr key={v.id} className="border-t border-stone-100">
-              <td className="px-3 py-2">{v.name}</td><td className="num px-3 py-2">/{v.slug}</td><td className="num px-3 py-2">{v.memberCount}</td><td className="num px-3 py-2">{v.createdAt.toISOString().slice(0, 10)}</td>
+              <td className="px-3 py-2">{v.name}</td><td className="num px-3 py-2">/{v.slug}</td><td className="num px-3 py-2">{v.memberCount}</td><td className="num px-3 py-2">{formatDate(v.createdAt)}</td>
             </tr>
           ))}
         </tbody>

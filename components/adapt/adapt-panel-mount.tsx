@@ -7,6 +7,7 @@ import { getSessionUser } from "@/lib/auth/session-user";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 import { listMachines } from "@/lib/bench/machines";
 import type { UnitSystem } from "@/lib/machining";
+import type { AdaptStart } from "@/lib/bench/readapt-start";
 
 import { AdaptPanel } from "./adapt-panel";
 import { LazyAdaptPanel } from "./lazy-adapt-panel";
@@ -19,10 +20,11 @@ type Props = {
   returnTo: string;
   /** Load the panel's code when it scrolls into view (Library pages) instead of with the page. */
   lazy?: boolean;
+  start?: AdaptStart;
 };
 
 /** Server side of the adapt panel: the sheet-derived inputs and, for a signed-in customer, their machines. */
-export async function AdaptPanelMount({ vendor, versionId, operationIndex, units, returnTo, lazy = false }: Props) {
+export async function AdaptPanelMount({ vendor, versionId, operationIndex, units, returnTo, lazy = false, start }: Props) {
   const [context, user] = await Promise.all([loadAdaptContext({ vendorId: vendor.id, versionId }), getSessionUser()]);
   if (!context || !context.operations.length) return <p className="mt-1 text-sm text-stone-600">This version cannot be adapted.</p>;
   const member = user ? await findMembership(vendor.id, user.id) : null;
@@ -34,6 +36,8 @@ export async function AdaptPanelMount({ vendor, versionId, operationIndex, units
       context={context}
       operationIndex={operationIndex}
       machines={machines}
+      initialMachineId={start?.machineId}
+      initialOverrides={start?.overrides}
       units={machines[0]?.units ?? units}
       vendorSlug={vendor.slug}
       saveAction={benchUser && context.versionState !== "withdrawn" ? saveSetupAction : undefined}

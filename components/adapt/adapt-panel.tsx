@@ -8,6 +8,7 @@ import type { AdaptContext } from "@/lib/bench/adapt-context";
 import { type AdhocMachineDraft, computeAdaptation, type OverrideDraft, readAdhocMachine } from "@/lib/bench/compute-adaptation";
 import { feedSpeedCurve } from "@/lib/bench/feed-speed-curve";
 import { machineToInput, type Machine } from "@/lib/bench/machine-rows";
+import { noStepsNote, numbersDiffer } from "@/lib/bench/setup-sheet-data";
 import type { UnitSystem } from "@/lib/machining";
 
 import { EntryAdvice } from "./entry-advice";
@@ -33,16 +34,19 @@ export type AdaptPanelProps = {
   /** Present for signed-in customers: saves a setup. */
   saveAction?: SaveSetupAction;
   signInHref?: string;
+  /** Re-adapting a saved setup: start on its machine with the customer's own changes. */
+  initialMachineId?: string;
+  initialOverrides?: OverrideDraft;
 };
 
 const EMPTY_DRAFT: AdhocMachineDraft = { rpmMin: "", rpmMax: "", power: "", maxFeed: "", rigidity: "light", zThrust: "", stickout: "", spindleKind: "constant-torque", ratedRpm: "" };
 
 /** Adapts one sheet operation to a machine as you type, with the rules that changed each number. */
-export function AdaptPanel({ context, operationIndex = 0, machines = [], units: initialUnits = "metric", vendorSlug, saveAction, signInHref }: AdaptPanelProps) {
-  const [machineId, setMachineId] = useState(machines[0]?.id ?? ADHOC);
+export function AdaptPanel({ context, operationIndex = 0, machines = [], units: initialUnits = "metric", vendorSlug, saveAction, signInHref, initialMachineId, initialOverrides }: AdaptPanelProps) {
+  const [machineId, setMachineId] = useState(machines.find((m) => m.id === initialMachineId)?.id ?? machines[0]?.id ?? ADHOC);
   const [draft, setDraft] = useState(EMPTY_DRAFT);
   const [opIndex, setOpIndex] = useState(context.operations[operationIndex] ? operationIndex : 0);
-  const [overrides, setOverrides] = useState<OverrideDraft>({ ae: "", ap: "", stickout: "" });
+  const [overrides, setOverrides] = useState<OverrideDraft>(initialOverrides ?? { ae: "", ap: "", stickout: "" });
   const [units, setUnits] = useState<UnitSystem>(initialUnits);
   const [entryCapability, setEntryCapability] = useState<EntryCapabilityKey>("ramp");
 
@@ -94,7 +98,7 @@ export function AdaptPanel({ context, operationIndex = 0, machines = [], units: 
           <EntryAdvice result={result} entryCapability={entryCapability} units={units} />
           <section aria-labelledby="adapt-steps">
             <h3 id="adapt-steps" className="text-sm font-semibold">How these numbers were found</h3>
-            <StepsTrail steps={result.steps} units={units} />
+            <StepsTrail steps={result.steps} units={units} emptyText={op ? noStepsNote(resultRows(op, context.cutter, result).filter((r) => numbersDiffer(r.sheet, r.adapted)).length, Object.values(overrides).some((v) => v.trim())) : undefined} />
           </section>
           <section aria-labelledby="adapt-warnings">
             <h3 id="adapt-warnings" className="text-sm font-semibold">Before you cut</h3>

@@ -1,4 +1,5 @@
 import type { ContextOperation } from "@/lib/bench/adapt-context";
+import { numbersDiffer } from "@/lib/bench/setup-sheet-data";
 import { type AdaptNumbers, ballNoseEffectiveDiameter, formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/machining";
 
 type Row = { key: string; label: string; kind: QuantityKind; sheet: number | null; adapted: number | null };
@@ -23,31 +24,34 @@ export function resultRows(op: ContextOperation, cutter: { diameterMm: number; f
   ];
 }
 
-const differs = (r: Row) => r.sheet !== null && r.adapted !== null && Math.abs(r.adapted - r.sheet) > 1e-9 * Math.max(1, Math.abs(r.sheet));
+const differs = (r: Row) => numbersDiffer(r.sheet, r.adapted);
 
 /** The sheet's numbers beside the adapted ones; a changed number is marked with a word, not only a colour. */
 export function ResultTable({ rows, units, headings = ["Sheet", "Your machine"] }: { rows: Row[]; units: UnitSystem; headings?: [string, string] }) {
   return (
-    <table className="mt-3 w-full border-collapse text-sm">
-      <thead>
-        <tr className="border-b border-stone-300 text-left">
-          <th scope="col" className="py-2 pr-2 font-medium">Quantity</th>
-          <th scope="col" className="py-2 pr-2 text-right font-medium">{headings[0]}</th>
-          <th scope="col" className="py-2 text-right font-medium">{headings[1]}</th>
-        </tr>
-      </thead>
-      <tbody>
-        {rows.map((r) => (
-          <tr key={r.key} data-row={r.key} className="border-b border-stone-200">
-            <th scope="row" className="py-2 pr-2 text-left font-normal">{r.label}</th>
-            <td className="num py-2 pr-2 text-right text-stone-600">{formatQuantity(r.sheet, r.kind, units)}</td>
-            <td data-testid={`adapted-${r.key}`} className={`num py-2 text-right ${differs(r) ? "font-semibold text-stone-950" : ""}`}>
-              {formatQuantity(r.adapted, r.kind, units)}
-              {differs(r) ? <span className="ml-1 text-xs font-normal text-amber-800">changed</span> : null}
-            </td>
+    // On a phone the table scrolls inside its own box instead of pushing the page sideways.
+    <div role="region" aria-label="Numbers: the sheet's and your machine's" tabIndex={0} className="mt-3 max-w-full overflow-x-auto" data-result-table>
+      <table className="w-full border-collapse text-sm">
+        <thead>
+          <tr className="border-b border-stone-300 text-left">
+            <th scope="col" className="py-2 pr-2 font-medium">Quantity</th>
+            <th scope="col" className="py-2 pr-2 text-right font-medium">{headings[0]}</th>
+            <th scope="col" className="py-2 text-right font-medium">{headings[1]}</th>
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <tr key={r.key} data-row={r.key} className="border-b border-stone-200">
+              <th scope="row" className="py-2 pr-2 text-left font-normal">{r.label}</th>
+              <td className="num py-2 pr-2 text-right text-stone-600">{formatQuantity(r.sheet, r.kind, units)}</td>
+              <td data-testid={`adapted-${r.key}`} className={`num py-2 text-right ${differs(r) ? "font-semibold text-stone-950" : ""}`}>
+                {formatQuantity(r.adapted, r.kind, units)}
+                {differs(r) ? <span className="block text-xs font-normal text-amber-800 sm:ml-1 sm:inline">changed</span> : null}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
   );
 }

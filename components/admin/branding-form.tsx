@@ -9,12 +9,14 @@ import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import { brandingSchema, WILSON_CONFIDENCE_CHOICES } from "@/lib/vendors/branding-schema";
 import { contrastRatio, inkFor } from "@/lib/ui/contrast";
+import { explainAccentColor } from "@/lib/vendors/explain-accent-color";
 import type { Vendor } from "@/lib/vendors/vendor-schema";
 
 export function BrandingForm({ vendor }: { vendor: Vendor }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(updateBrandingAction, brandingSchema.passthrough());
   const [accent, setAccent] = useState(vendor.accentColor);
-  const valid = /^#[0-9a-fA-F]{6}$/.test(accent);
+  const why = explainAccentColor(accent);
+  const valid = why === null;
   return (
     <form action={formAction} onSubmit={onSubmit} noValidate className="grid gap-4 rounded-lg border border-stone-200 bg-white p-5 sm:grid-cols-2">
       <input type="hidden" name="vendor" value={vendor.slug} />
@@ -26,6 +28,8 @@ export function BrandingForm({ vendor }: { vendor: Vendor }) {
             <span className="rounded px-3 py-1" style={{ backgroundColor: accent, color: inkFor(accent) }}>Sample</span>
             <span className="num">{contrastRatio(accent, inkFor(accent)).toFixed(1)} : 1</span>
           </p>
+        ) : !errors.accentColor ? (
+          <p className="mt-2 text-sm text-amber-900" aria-live="polite" data-accent-why>{why}</p>
         ) : null}
       </div>
       <div className="flex flex-col gap-1">

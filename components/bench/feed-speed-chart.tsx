@@ -1,5 +1,6 @@
 "use client";
 
+import { useId } from "react";
 import { Area, CartesianGrid, ComposedChart, Line, ReferenceArea, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 
 import type { FeedSpeedCurve } from "@/lib/bench/feed-speed-curve";
@@ -9,9 +10,19 @@ import type { UnitSystem } from "@/lib/machining";
 export function FeedSpeedChart({ curve, units }: { curve: FeedSpeedCurve; units: UnitSystem }) {
   const feedUnit = units === "imperial" ? "in/min" : "mm/min";
   const digits = units === "imperial" ? 1 : 0;
+  const captionId = useId();
+  const rpm = (v: number) => Math.round(v).toLocaleString("en-GB");
+  const feed = (v: number) => `${v.toFixed(digits)} ${feedUnit}`;
+  // What the picture shows, in words, for screen readers (the drawing itself is one image to them).
+  const summary = [
+    `Chart of feed rate against spindle speed from ${rpm(curve.points[0]?.rpm ?? 0)} to ${rpm(curve.points.at(-1)?.rpm ?? 0)} rpm.`,
+    `The adapted point is ${rpm(curve.adapted.rpm)} rpm at ${feed(curve.adapted.feed)}; the machine's highest feed is ${feed(curve.maxFeed)}.`,
+    curve.vcWindowRpm ? `The material's cutting-speed window lies between ${rpm(curve.vcWindowRpm[0])} and ${rpm(curve.vcWindowRpm[1])} rpm.` : "No speed on this machine reaches the material's cutting-speed window.",
+  ].join(" ");
   return (
-    <figure className="mt-4" aria-label="Feed against spindle speed">
-      <div className="h-64 w-full">
+    <figure className="mt-4" aria-labelledby={`${captionId}-name`} aria-describedby={captionId}>
+      <p id={`${captionId}-name`} className="text-sm font-semibold">Feed against spindle speed</p>
+      <div className="h-64 w-full overflow-hidden" role="img" aria-label={summary}>
         <ResponsiveContainer width="100%" height="100%">
           <ComposedChart data={curve.points} margin={{ top: 8, right: 16, bottom: 24, left: 8 }}>
             <CartesianGrid stroke="#e7e5e4" />
@@ -26,7 +37,7 @@ export function FeedSpeedChart({ curve, units }: { curve: FeedSpeedCurve; units:
           </ComposedChart>
         </ResponsiveContainer>
       </div>
-      <figcaption className="mt-1 text-xs text-stone-600">
+      <figcaption id={captionId} className="mt-1 text-xs text-stone-600">
         Green band: spindle speeds inside the material&apos;s cutting-speed window. Amber area: feeds below the minimum chip load, where the cutter rubs and plastics melt. Dot: the adapted point.
       </figcaption>
     </figure>

@@ -27,7 +27,7 @@ export function MachineForm({ vendorSlug, id, initial, action }: Props) {
     setValues({ ...values, preset: p.key, name: values.name || p.label, rpmMin: String(p.rpmMin), rpmMax: String(p.rpmMax), powerKw: String(p.powerKw), maxFeedMmMin: `${p.maxFeedMmMin} mm/min`, rigidity: p.rigidity, zThrustN: p.zThrustN ? String(p.zThrustN) : "", spindleKind: p.spindleKind, ratedRpm: p.ratedRpm ? String(p.ratedRpm) : "", stickoutMm: `${p.stickoutMm} mm` });
   }
   return (
-    <form action={formAction} onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 sm:grid-cols-2">
+    <form action={formAction} onSubmit={onSubmit} noValidate className="grid max-w-3xl grid-cols-1 gap-4 sm:grid-cols-2">
       <input type="hidden" name="vendor" value={vendorSlug} />
       {id ? <input type="hidden" name="id" value={id} /> : null}
       <div className="flex flex-col gap-1 sm:col-span-2">

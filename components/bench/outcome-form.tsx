@@ -4,15 +4,19 @@ import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 
 import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
-import { CHANGEABLE_PARAMS, changeableParamLabels, OUTCOME_RESULTS, OUTCOME_SYMPTOMS, outcomeResultLabels, outcomeSymptomLabels, type OutcomeResult } from "@/content-schema/outcome-fields";
+import { type ChangeableParam, CHANGEABLE_PARAMS, changeableParamLabels, OUTCOME_RESULTS, OUTCOME_SYMPTOMS, outcomeResultLabels, outcomeSymptomLabels, type OutcomeResult } from "@/content-schema/outcome-fields";
+import { QUANTITIES, type QuantityKind } from "@/lib/machining";
 
 type Props = { vendorSlug: string; setupId: string; units: string; current: Record<string, string> };
 type Errors = Record<string, string[]>;
 
+const paramKinds: Record<ChangeableParam, QuantityKind> = { rpm: "spindleSpeed", feedMmMin: "feedRate", axialDepthMm: "length", radialDepthMm: "length", plungeFeedMmMin: "feedRate" };
+
 /** Report how the cut went; posted as multipart so a photo can go with it. */
 export function OutcomeForm({ vendorSlug, setupId, units, current }: Props) {
   const router = useRouter();
-  const [result, setResult] = useState<OutcomeResult>("worked_as_written");
+  // Nothing chosen at first: a preselected answer would be sent by people who never read the question.
+  const [result, setResult] = useState<OutcomeResult | null>(null);
   const [errors, setErrors] = useState<Errors>({});
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
   const [pending, setPending] = useState(false);
@@ -35,7 +39,7 @@ export function OutcomeForm({ vendorSlug, setupId, units, current }: Props) {
       }
       setErrors({});
       form.reset();
-      setResult("worked_as_written");
+      setResult(null);
       setMessage({ ok: true, text: "Thank you: the outcome is recorded against this setup's version." });
       router.refresh();
     } finally {
@@ -50,6 +54,7 @@ export function OutcomeForm({ vendorSlug, setupId, units, current }: Props) {
       <IdempotencyKeyField renewOn={message?.ok ? message : null} />
       <fieldset>
         <legend className="text-sm font-semibold">How did the cut go?</legend>
+        {err("result")}
         <div className="mt-2 flex flex-wrap gap-2">
           {OUTCOME_RESULTS.map((r) => (
             <label key={r} className="inline-flex min-h-11 cursor-pointer items-center gap-2 rounded border border-stone-300 bg-white px-3 has-[:checked]:border-stone-900 has-[:checked]:bg-stone-100">
@@ -75,19 +80,22 @@ export function OutcomeForm({ vendorSlug, setupId, units, current }: Props) {
         <fieldset>
           <legend className="text-sm font-semibold">Which numbers did you change? (fill in only those)</legend>
           <div className="mt-2 grid gap-2">
-            {CHANGEABLE_PARAMS.filter((p) => current[p]).map((p) => (
-              <div key={p} className="grid items-end gap-2 sm:grid-cols-[12rem_1fr_1fr]">
-                <span className="text-sm">{changeableParamLabels[p]}</span>
-                <label className="flex flex-col text-xs text-stone-600">
-                  from
-                  <input name={`from_${p}`} defaultValue={current[p]} className="num min-h-11 rounded border border-stone-300 bg-white px-3 text-base text-stone-900" />
-                </label>
-                <label className="flex flex-col text-xs text-stone-600">
-                  to
-                  <input name={`to_${p}`} aria-label={`${changeableParamLabels[p]}: changed to`} className="num min-h-11 rounded border border-stone-300 bg-white px-3 text-base text-stone-900" />
-                </label>
-              </div>
-            ))}
+            {CHANGEABLE_PARAMS.filter((p) => current[p]).map((p) => {
+              const unit = QUANTITIES[paramKinds[p]][units === "imperial" ? "imperial" : "metric"];
+              return (
+                <div key={p} className="grid items-end gap-2 sm:grid-cols-[12rem_1fr_1fr]" data-change={p}>
+                  <span className="text-sm" aria-hidden>{changeableParamLabels[p]}</span>
+                  <label className="flex flex-col text-xs text-stone-600">
+                    <span>from ({unit})</span>
+                    <input name={`from_${p}`} defaultValue={current[p]} aria-label={`${changeableParamLabels[p]}: from, in ${unit}`} className="num min-h-11 rounded border border-stone-300 bg-white px-3 text-base text-stone-900" />
+                  </label>
+                  <label className="flex flex-col text-xs text-stone-600">
+                    <span>to ({unit})</span>
+                    <input name={`to_${p}`} aria-label={`${changeableParamLabels[p]}: changed to, in ${unit}`} className="num min-h-11 rounded border border-stone-300 bg-white px-3 text-base text-stone-900" />
+                  </label>
+                </div>
+              );
+            })}
           </div>
           {err("changes")}
         </fieldset>

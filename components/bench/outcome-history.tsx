@@ -3,6 +3,7 @@ import type { Outcome } from "@/lib/bench/outcomes";
 import { formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/machining";
 
 import { OutcomeBadge } from "./outcome-badge";
+import { formatDateTime } from "@/lib/ui/dates";
 
 const KIND: Record<ChangeableParam, QuantityKind> = { rpm: "spindleSpeed", feedMmMin: "feedRate", axialDepthMm: "length", radialDepthMm: "length", plungeFeedMmMin: "feedRate" };
 
@@ -15,7 +16,7 @@ export function OutcomeHistory({ outcomes, units, versionNumbers, photoHref }: {
         <li key={o.id} data-outcome={o.result} className="rounded border border-stone-200 bg-white p-3 text-sm">
           <div className="flex flex-wrap items-center gap-2">
             <OutcomeBadge result={o.result} symptom={o.symptom} />
-            <span className="num text-xs text-stone-600">v{versionNumbers[o.sheetVersionId] ?? "?"} · {new Date(o.createdAt).toISOString().slice(0, 16).replace("T", " ")} UTC</span>
+            <span className="num text-xs text-stone-600">v{versionNumbers[o.sheetVersionId] ?? "?"} · {formatDateTime(o.createdAt)}</span>
           </div>
           {Object.entries(o.changes).length ? (
             <ul className="mt-2 list-disc pl-5">

@@ -1,7 +1,7 @@
 "use client";
 
 import { TICKET_PRIORITIES, TICKET_STATUSES, ticketPriorityLabels, ticketStatusLabels } from "@/content-schema/ticket-status";
-import type { QueueFilters } from "@/lib/desk/queue-filters";
+import { QUEUE_SORTS, type QueueFilters, queueSortLabels } from "@/lib/desk/queue-filters";
 
 type Option = { id: string; name: string };
 type Props = { filters: QueueFilters; onChange: (f: QueueFilters) => void; assignees: Option[]; materials: Option[] };
@@ -12,6 +12,9 @@ export function QueueFilterBar({ filters, onChange, assignees, materials }: Prop
   const set = (patch: Partial<QueueFilters>) => onChange({ ...filters, ...patch });
   return (
     <div className="flex flex-wrap items-end gap-3 text-sm" role="group" aria-label="Filters">
+      <label className="flex flex-col">Search
+        <input type="search" className={`${sel} w-56`} value={filters.q ?? ""} onChange={(e) => set({ q: e.target.value || undefined })} placeholder="Ticket number or words" />
+      </label>
       <label className="flex flex-col">Status
         <select className={sel} value={filters.status?.[0] ?? ""} onChange={(e) => set({ status: e.target.value ? [e.target.value as (typeof TICKET_STATUSES)[number]] : undefined })}>
           <option value="">Open (not closed)</option>
@@ -40,6 +43,11 @@ export function QueueFilterBar({ filters, onChange, assignees, materials }: Prop
       </label>
       <label className="flex flex-col">Tag
         <input className={sel} value={filters.tag ?? ""} onChange={(e) => set({ tag: e.target.value.trim().toLowerCase() || undefined })} placeholder="e.g. melting" />
+      </label>
+      <label className="flex flex-col">Order
+        <select className={sel} value={filters.sort ?? "newest"} onChange={(e) => set({ sort: e.target.value === "newest" ? undefined : (e.target.value as QueueFilters["sort"]) })}>
+          {QUEUE_SORTS.map((s) => <option key={s} value={s}>{queueSortLabels[s]}</option>)}
+        </select>
       </label>
       <label className="flex min-h-9 items-center gap-2">
         <input type="checkbox" checked={Boolean(filters.overdue)} onChange={(e) => set({ overdue: e.target.checked || undefined })} /> Overdue only

@@ -4,7 +4,7 @@ import { flexRender, getCoreRowModel, getSortedRowModel, type RowSelectionState,
 import { useMemo, useState, useTransition } from "react";
 
 import { bulkAssignAction } from "@/app/[vendor]/(staff)/desk/actions";
-import type { QueueFilters } from "@/lib/desk/queue-filters";
+import { type QueueFilters, queueFiltersToSearch } from "@/lib/desk/queue-filters";
 import type { DeskView } from "@/lib/desk/saved-views";
 import { useDeskQueue, useDeskViews } from "@/lib/swr/use-desk-queue";
 import type { TicketSummary } from "@/lib/tickets/ticket-types";
@@ -14,17 +14,24 @@ import { QueueFilterBar } from "./queue-filter-bar";
 import { SaveViewForm } from "./save-view-form";
 
 type Option = { id: string; name: string };
-type Props = { vendor: string; initial: TicketSummary[]; views: DeskView[]; assignees: Option[]; materials: Option[] };
+type Props = { vendor: string; initial: TicketSummary[]; initialFilters?: QueueFilters; views: DeskView[]; assignees: Option[]; materials: Option[] };
 
-export function QueueTable({ vendor, initial, views: initialViews, assignees, materials }: Props) {
-  const [filters, setFilters] = useState<QueueFilters>({});
-  const [activeView, setActiveView] = useState("open");
+export function QueueTable({ vendor, initial, initialFilters = {}, views: initialViews, assignees, materials }: Props) {
+  const [filters, setFiltersState] = useState<QueueFilters>(initialFilters);
+  const [initialSearch] = useState(() => queueFiltersToSearch(initialFilters));
+  const [activeView, setActiveView] = useState(initialSearch ? "" : "open");
+  // The filters live in the address, so a reload, the back button and a shared link keep them.
+  const setFilters = (next: QueueFilters) => {
+    setFiltersState(next);
+    const search = queueFiltersToSearch(next);
+    window.history.replaceState(null, "", `${window.location.pathname}${search ? `?${search}` : ""}`);
+  };
   const [sorting, setSorting] = useState<SortingState>([]);
   const [selection, setSelection] = useState<RowSelectionState>({});
   const [assignTo, setAssignTo] = useState("");
   const [message, setMessage] = useState<string | null>(null);
   const [pending, startTransition] = useTransition();
-  const isInitial = activeView === "open" && Object.keys(filters).length === 0;
+  const isInitial = queueFiltersToSearch(filters) === initialSearch;
   const queue = useDeskQueue(vendor, filters, isInitial ? initial : undefined);
   const views = useDeskViews(vendor, initialViews);
   const data = useMemo(() => queue.data?.tickets ?? [], [queue.data]);

@@ -13,10 +13,13 @@ import { ticketReplySchema } from "@/content-schema/ticket-update";
 import { expandSnippet, type SnippetValues } from "@/lib/desk/expand-snippet";
 
 type Option = { id: string; name: string };
+type Version = Option & { state: string };
 type Props = {
   vendor: string;
   ticketId: string;
-  versions: Option[];
+  versions: Version[];
+  /** The ticket's linked sheet versions, listed first in the picker. */
+  linkedVersionIds?: string[];
   machines: Option[];
   defaultMachineId: string | null;
   defaultVersionId: string | null;
@@ -27,8 +30,16 @@ type Props = {
 const field = "min-h-9 rounded border border-stone-300 bg-white px-2 text-sm";
 
 /** Markdown reply or internal note, with an adapted-sheet picker and saved snippets. */
-export function ReplyEditor({ vendor, ticketId, versions, machines, defaultMachineId, defaultVersionId, snippets, placeholders }: Props) {
+export function ReplyEditor({ vendor, ticketId, versions, linkedVersionIds = [], machines, defaultMachineId, defaultVersionId, snippets, placeholders }: Props) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(staffReplyAction, ticketReplySchema);
+  const [visibility, setVisibility] = useState<"public" | "note">("public");
+  const note = visibility === "note";
+  const linked = versions.filter((v) => linkedVersionIds.includes(v.id));
+  const groups = [
+    { label: "Linked to this ticket", items: linked },
+    { label: "Current versions", items: versions.filter((v) => v.state === "published" && !linkedVersionIds.includes(v.id)) },
+    { label: "Older versions", items: versions.filter((v) => v.state !== "published" && !linkedVersionIds.includes(v.id)) },
+  ].filter((g) => g.items.length);
   const [body, setBody] = useState("");
   const [preview, setPreview] = useState(false);
   const [versionId, setVersionId] = useState("");
@@ -41,6 +52,7 @@ export function ReplyEditor({ vendor, ticketId, versions, machines, defaultMachi
     if (state.ok) {
       setBody("");
       setVersionId("");
+      setVisibility("public");
       setSent((n) => n + 1);
     }
   }
@@ -51,15 +63,23 @@ export function ReplyEditor({ vendor, ticketId, versions, machines, defaultMachi
   const values = { ...placeholders, "sheet.title": sheetTitle ?? placeholders["sheet.title"] };
 
   return (
-    <form ref={form} action={formAction} onSubmit={onSubmit} className="space-y-3 rounded-lg border border-stone-300 bg-white p-4" aria-label="Reply editor">
+    <form
+      ref={form}
+      action={formAction}
+      onSubmit={onSubmit}
+      data-mode={visibility}
+      className={`space-y-3 rounded-lg border p-4 ${note ? "border-amber-400 bg-amber-50" : "border-stone-300 bg-white"}`}
+      aria-label={note ? "Internal note editor" : "Reply editor"}
+    >
       <input type="hidden" name="vendor" value={vendor} />
       <input type="hidden" name="ticketId" value={ticketId} />
       <IdempotencyKeyField renewOn={state.ok ? state : null} />
       <fieldset className="flex flex-wrap gap-4 text-sm">
         <legend className="sr-only">Kind of message</legend>
-        <label className="flex items-center gap-2"><input type="radio" name="visibility" value="public" defaultChecked /> Reply to customer</label>
-        <label className="flex items-center gap-2"><input type="radio" name="visibility" value="note" /> Internal note (staff only)</label>
+        <label className="flex items-center gap-2"><input type="radio" name="visibility" value="public" checked={!note} onChange={() => setVisibility("public")} /> Reply to customer</label>
+        <label className="flex items-center gap-2"><input type="radio" name="visibility" value="note" checked={note} onChange={() => setVisibility("note")} /> Internal note (staff only)</label>
       </fieldset>
+      {note ? <p className="text-sm font-medium text-amber-900" id="note-mode-hint">Internal note: only staff see this; the customer is not told.</p> : null}
       <div className="flex flex-wrap items-center gap-2 text-sm">
         <button type="button" onClick={() => setPreview(false)} aria-pressed={!preview} className="rounded px-2 aria-pressed:bg-stone-200">Write</button>
         <button type="button" onClick={() => setPreview(true)} aria-pressed={preview} className="rounded px-2 aria-pressed:bg-stone-200">Preview</button>
@@ -74,7 +94,7 @@ export function ReplyEditor({ vendor, ticketId, versions, machines, defaultMachi
         ) : null}
       </div>
       <label htmlFor="f-staff-body" className="sr-only">Message</label>
-      <textarea id="f-staff-body" name="body" rows={7} value={body} onChange={(e) => setBody(e.target.value)} hidden={preview} className="w-full rounded border border-stone-300 px-3 py-2 font-mono text-sm" />
+      <textarea id="f-staff-body" name="body" rows={7} value={body} onChange={(e) => setBody(e.target.value)} hidden={preview} aria-describedby={note ? "note-mode-hint" : undefined} className={`w-full rounded border px-3 py-2 font-mono text-sm ${note ? "border-amber-400 bg-amber-100/60" : "border-stone-300 bg-white"}`} />
       {preview ? <div className="min-h-24 rounded border border-dashed border-stone-300 p-3"><SafeMarkdown source={body || "_Nothing to preview._"} /></div> : null}
       {errors.body ? <p className="text-sm text-red-800"><span aria-hidden>⚠ </span>{errors.body.join(" ")}</p> : null}
       <fieldset className="grid gap-2 text-sm sm:grid-cols-2">
@@ -82,7 +102,11 @@ export function ReplyEditor({ vendor, ticketId, versions, machines, defaultMachi
         <label className="flex flex-col">Sheet version
           <select name="cardSheetVersionId" className={field} value={versionId} onChange={(e) => setVersionId(e.target.value)}>
             <option value="">No sheet</option>
-            {versions.map((v) => <option key={v.id} value={v.id}>{v.name}</option>)}
+            {groups.map((g) => (
+              <optgroup key={g.label} label={g.label}>
+                {g.items.map((v) => <option key={v.id} value={v.id}>{v.name}</option>)}
+              </optgroup>
+            ))}
           </select>
         </label>
         <label className="flex flex-col">Customer&apos;s machine
@@ -98,7 +122,7 @@ export function ReplyEditor({ vendor, ticketId, versions, machines, defaultMachi
       </fieldset>
       <UploadField key={sent} vendor={vendor} label="Attach files" />
       <FormMessage state={state} success={state.message} />
-      <SubmitButton pendingText="Sending…">Send</SubmitButton>
+      <SubmitButton pendingText="Sending…">{note ? "Add internal note" : "Send reply"}</SubmitButton>
     </form>
   );
 }

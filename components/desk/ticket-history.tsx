@@ -1,4 +1,5 @@
 import { formatDateTime } from "@/components/support/ticket-badges";
+import { describeAuditAction } from "@/lib/audit/action-labels";
 import { ticketPriorityLabels, ticketStatusLabels, type TicketPriority, type TicketStatus } from "@/content-schema/ticket-status";
 import type { TicketHistoryEntry } from "@/lib/tickets/list-ticket-history";
 
@@ -14,7 +15,7 @@ function describe(e: TicketHistoryEntry, people: Record<string, string>): string
     case "ticket.tags": return `tags ${(to as string[] | undefined)?.join(", ") || "none"}`;
     case "ticket.rating": return `rated ${String(e.details.satisfaction)}/5`;
     case "ticket.handoff": return "handed a problem to engineering";
-    default: return e.action;
+    default: return describeAuditAction(e.action, e.details).toLowerCase();
   }
 }
 

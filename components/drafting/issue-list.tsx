@@ -11,7 +11,7 @@ export function IssueList({ issues, onJump }: { issues: SheetIssue[]; onJump: (l
         <li key={i}>
           <button type="button" onClick={() => onJump(issue.line)} data-line={issue.line} className={`w-full rounded px-2 py-1 text-left hover:bg-stone-100 ${issue.severity === "error" ? "text-red-800" : "text-amber-900"}`}>
             <span aria-hidden>{issue.severity === "error" ? "⚠" : "!"} </span>
-            <span className="font-mono font-semibold">Line {issue.line}{issue.column ? `:${issue.column}` : ""}</span>
+            <span className="font-semibold">Line {issue.line}{issue.column ? `, column ${issue.column}` : ""}</span>
             <span className="sr-only"> ({issue.severity})</span>: {issue.message}
           </button>
         </li>

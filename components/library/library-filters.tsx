@@ -3,13 +3,13 @@ import type { LibraryFilters as Filters } from "@/lib/sheets/list-published-shee
 
 type Props = { action: string; filters: Filters; cutters: Cutter[]; materials: Material[]; machineClasses: MachineClass[] };
 
-const select = "min-h-11 rounded border border-stone-300 bg-white px-3 py-2";
+const select = "min-h-11 w-full max-w-full rounded border border-stone-300 bg-white px-3 py-2 sm:w-auto";
 
 /** Browse by cutter, material and machine class: a plain GET form, so it works without JavaScript. */
 export function LibraryFilters({ action, filters, cutters, materials, machineClasses }: Props) {
   return (
     <form action={action} method="get" className="no-print mb-6 flex flex-wrap items-end gap-3" aria-label="Filter sheets">
-      <label className="flex flex-col gap-1 text-sm font-medium">
+      <label className="flex min-w-0 max-w-full flex-col gap-1 text-sm font-medium">
         Cutter
         <select name="cutter" defaultValue={filters.cutter ?? ""} className={select}>
           <option value="">All cutters</option>
@@ -18,7 +18,7 @@ export function LibraryFilters({ action, filters, cutters, materials, machineCla
           ))}
         </select>
       </label>
-      <label className="flex flex-col gap-1 text-sm font-medium">
+      <label className="flex min-w-0 max-w-full flex-col gap-1 text-sm font-medium">
         Material
         <select name="material" defaultValue={filters.material ?? ""} className={select}>
           <option value="">All materials</option>
@@ -27,7 +27,7 @@ export function LibraryFilters({ action, filters, cutters, materials, machineCla
           ))}
         </select>
       </label>
-      <label className="flex flex-col gap-1 text-sm font-medium">
+      <label className="flex min-w-0 max-w-full flex-col gap-1 text-sm font-medium">
         Machine class
         <select name="machineClass" defaultValue={filters.machineClass ?? ""} className={select}>
           <option value="">All machine classes</option>

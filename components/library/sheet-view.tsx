@@ -2,6 +2,7 @@ import { Suspense } from "react";
 
 import { AdaptPanelSlot, OperationTable } from "@/components/mdx";
 import type { SheetRenderContext } from "@/components/mdx/sheet-render-context";
+import { AskAboutSheet } from "@/components/support/ask-about-sheet";
 import { getCompiledSheet } from "@/lib/mdx/compile-cache";
 import type { UnitSystem } from "@/lib/machining";
 import type { LibrarySheet } from "@/lib/sheets/get-library-sheet";
@@ -24,7 +25,7 @@ async function Prose({ data, units, renderAdaptPanel }: { data: LibrarySheet; un
 }
 
 /** A readable sheet version laid out like a printed data sheet. */
-export function SheetView({ data, units, vendorSlug, renderAdaptPanel }: { data: LibrarySheet; units: UnitSystem; vendorSlug: string; renderAdaptPanel?: AdaptRenderer }) {
+export function SheetView({ data, units, vendorSlug, vendorName, renderAdaptPanel }: { data: LibrarySheet; units: UnitSystem; vendorSlug: string; vendorName?: string; renderAdaptPanel?: AdaptRenderer }) {
   const { version, frontMatter, current } = data;
   const href = (n: number) => `/${vendorSlug}/library/${data.sheet.slug}/v/${n}`;
   const context = { frontMatter, units, cutter: { flutes: data.cutter.flutes, diameterMm: data.cutter.diameterMm }, renderAdaptPanel };
@@ -40,7 +41,10 @@ export function SheetView({ data, units, vendorSlug, renderAdaptPanel }: { data:
           <h1 className="mt-1 text-2xl font-semibold tracking-tight">{version.title}</h1>
           <p className="mt-1 max-w-3xl text-stone-700">{frontMatter.summary}</p>
         </div>
-        <UnitsToggle units={units} />
+        <div className="flex flex-wrap items-end gap-3">
+          {vendorName ? <AskAboutSheet vendorSlug={vendorSlug} vendorName={vendorName} sheetVersionId={version.id} /> : null}
+          <UnitsToggle units={units} />
+        </div>
       </header>
       <div className="grid gap-4 md:grid-cols-3 print:grid-cols-3">
         <CutterCard cutter={data.cutter} units={units} vendorSlug={vendorSlug} />

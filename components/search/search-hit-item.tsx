@@ -1,34 +1,37 @@
 "use client";
 
+import Link from "next/link";
+import type { KeyboardEvent } from "react";
+
 import { operationKindLabels } from "@/content-schema/sheet-kinds";
 import type { SearchHit } from "@/search/run/search-response";
 
 import { HighlightedText } from "./highlighted-text";
 
-type Props = { hit: SearchHit; href: string; id: string; active: boolean; onHover: () => void; onOpen: () => void };
+type Props = { hit: SearchHit; href: string; titleSuffix?: string; onKeyDown: (event: KeyboardEvent<HTMLAnchorElement>) => void };
 
-// Ctrl/Cmd-click and a middle click still open the sheet in a new tab, as a link would.
-const inNewTab = (event: React.MouseEvent) => event.ctrlKey || event.metaKey || event.shiftKey;
-
-// An option of the combobox's listbox holds no link of its own (ARIA: no interactive content inside an
-// option): a click or Enter on the active option opens the sheet.
-export function SearchHitItem({ hit, href, id, active, onHover, onOpen }: Props) {
+// Each result is a plain link: Tab reaches it, Enter or a click opens it, and "copy link" and a
+// middle click work as on any link. Arrow keys move between results (handled by the list).
+export function SearchHitItem({ hit, href, titleSuffix, onKeyDown }: Props) {
   const cutterText = `${hit.cutter.sku} ${hit.cutter.name}`;
   return (
-    <li id={id} role="option" aria-selected={active} data-href={href} onMouseEnter={onHover} onClick={(e) => (inNewTab(e) ? window.open(href, "_blank", "noopener") : onOpen())} onAuxClick={(e) => { if (e.button === 1) window.open(href, "_blank", "noopener"); }} className={`cursor-pointer rounded-lg border bg-white p-4 shadow-sm ${active ? "border-stone-700 ring-2 ring-stone-300" : "border-stone-200"}`}>
-      <span className="font-medium text-stone-900 underline-offset-2 hover:underline">
-        <HighlightedText text={hit.title} ranges={hit.highlights.title} />
-      </span>
-      <p className="mt-1 text-sm text-stone-600">
-        <HighlightedText text={cutterText} ranges={hit.highlights.cutter} /> · Ø{" "}
-        <span className="num">{hit.cutter.diameterMm.toLocaleString("en", { maximumFractionDigits: 3 })} mm</span> · <span className="num">{hit.cutter.flutes}</span> {hit.cutter.flutes === 1 ? "flute" : "flutes"}
-      </p>
-      <p className="text-sm text-stone-600">
-        <HighlightedText text={hit.material.name ?? ""} ranges={hit.highlights.material} />
-        {hit.machineClass ? ` · ${hit.machineClass.name}` : null} · {hit.operations.map((op) => operationKindLabels[op]).join(", ")}
-      </p>
-      <p className="mt-1 line-clamp-2 text-sm text-stone-600"><HighlightedText text={hit.summary} ranges={hit.highlights.summary} /></p>
-      <p className="mt-1 text-xs text-stone-600">Version <span className="num">{hit.version}</span></p>
+    <li data-href={href}>
+      <Link href={href} onKeyDown={onKeyDown} data-search-hit className="block h-full rounded-lg border border-stone-200 bg-white p-4 shadow-sm hover:border-stone-500 focus-visible:border-stone-700">
+        <span className="font-medium text-stone-900 underline underline-offset-2">
+          <HighlightedText text={hit.title} ranges={hit.highlights.title} />
+          {titleSuffix ? <span className="font-normal"> · {titleSuffix}</span> : null}
+        </span>
+        <span className="mt-1 block text-sm text-stone-600">
+          <HighlightedText text={cutterText} ranges={hit.highlights.cutter} /> · Ø{" "}
+          <span className="num">{hit.cutter.diameterMm.toLocaleString("en", { maximumFractionDigits: 3 })} mm</span> · <span className="num">{hit.cutter.flutes}</span> {hit.cutter.flutes === 1 ? "flute" : "flutes"}
+        </span>
+        <span className="block text-sm text-stone-600">
+          <HighlightedText text={hit.material.name ?? ""} ranges={hit.highlights.material} />
+          {hit.machineClass ? ` · ${hit.machineClass.name}` : null} · {hit.operations.map((op) => operationKindLabels[op]).join(", ")}
+        </span>
+        <span className="mt-1 line-clamp-2 block text-sm text-stone-600"><HighlightedText text={hit.summary} ranges={hit.highlights.summary} /></span>
+        <span className="mt-1 block text-xs text-stone-600">Version <span className="num">{hit.version}</span></span>
+      </Link>
     </li>
   );
 }

@@ -1,9 +1,9 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { type KeyboardEvent, useEffect, useRef, useState } from "react";
 
 import { useSearch } from "@/lib/swr/use-search";
+import { distinctTitles } from "@/lib/ui/distinct-titles";
 import { removeChip } from "@/search/parse/remove-chip";
 
 import { FacetPanel } from "./facet-panel";
@@ -18,14 +18,12 @@ const DEBOUNCE_MS = 200;
 const FILTER_FACET = { material: "materialKey", operation: "operations", diameterMm: "diameterMm", flutes: "flutes" } as const;
 
 export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
-  const router = useRouter();
   const { state, query, write } = useSearchUrl();
   const urlQ = state.q ?? "";
   const [text, setText] = useState(urlQ);
   const written = useRef(urlQ);
-  // The highlighted result belongs to one answer; a new answer starts with none highlighted.
-  const [selection, setSelection] = useState({ answer: "", index: -1 });
   const { data, error, isValidating } = useSearch(vendorSlug, query);
+  const results = useRef<HTMLOListElement>(null);
 
   // The URL changed from outside the box (back button, a removed chip): show it.
   useEffect(() => {
@@ -44,15 +42,17 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
     return () => clearTimeout(timer);
   }, [text, write]);
 
-  const answer = `${data?.query ?? ""}|${data?.total ?? ""}`;
-  const active = selection.answer === answer ? selection.index : -1;
-  const setActive = (next: number | ((index: number) => number)) =>
-    setSelection((s) => {
-      const current = s.answer === answer ? s.index : -1;
-      return { answer, index: typeof next === "function" ? next(current) : next };
-    });
-
   const hits = data?.hits ?? [];
+  const distinct = distinctTitles(hits, (h) => h.title, (h) => h.machineClass?.name);
+  const titleSuffixes = hits.map((hit, i) => (distinct[i] === hit.title ? undefined : hit.machineClass?.name));
+  // Arrow keys move focus between the result links (and back up into the box); Tab works as usual.
+  const links = () => Array.from(results.current?.querySelectorAll<HTMLAnchorElement>("a[data-search-hit]") ?? []);
+  const moveFrom = (index: number, step: 1 | -1) => {
+    const all = links();
+    const next = index + step;
+    if (next < 0) document.getElementById("library-search")?.focus();
+    else all[Math.min(next, all.length - 1)]?.focus();
+  };
   const href = (slug: string) => `/${vendorSlug}/library/${slug}`;
   const pushQuery = (q: string) => {
     written.current = q;
@@ -70,21 +70,22 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
   function onKeyDown(event: KeyboardEvent<HTMLInputElement>) {
     if (event.key === "ArrowDown" && hits.length) {
       event.preventDefault();
-      setActive((i) => Math.min(i + 1, hits.length - 1));
-    } else if (event.key === "ArrowUp" && hits.length) {
-      event.preventDefault();
-      setActive((i) => Math.max(i - 1, -1));
+      moveFrom(-1, 1);
     } else if (event.key === "Enter") {
       event.preventDefault();
-      if (active >= 0 && hits[active]) router.push(href(hits[active].slug));
-      else if (text !== written.current) {
+      if (text !== written.current) {
         written.current = text;
         write({ q: text, page: undefined }, "replace");
       }
-    } else if (event.key === "Escape") {
-      setActive(-1);
     }
   }
+
+  const onResultKey = (index: number) => (event: KeyboardEvent<HTMLAnchorElement>) => {
+    if (event.key === "ArrowDown" || event.key === "ArrowUp") {
+      event.preventDefault();
+      moveFrom(index, event.key === "ArrowDown" ? 1 : -1);
+    }
+  };
 
   return (
     <div className="space-y-4">
@@ -93,11 +94,8 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
         <input
           id="library-search"
           type="search"
-          role="combobox"
-          aria-expanded={hits.length > 0}
           aria-controls="search-results"
-          aria-autocomplete="list"
-          aria-activedescendant={active >= 0 ? `search-hit-${active}` : undefined}
+          aria-describedby="search-keys-hint"
           autoComplete="off"
           spellCheck={false}
           value={text}
@@ -106,6 +104,7 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
           placeholder="e.g. 1/8 acrylic slot, 6 mm MDF, NB-SF-3175"
           className="min-h-12 w-full rounded-lg border border-stone-300 bg-white px-4 text-lg shadow-sm focus:border-stone-600 focus:outline-none"
         />
+        <p id="search-keys-hint" className="mt-1 text-xs text-stone-600">Results update as you type. Tab or ↓ moves into them.</p>
       </form>
       <QueryChips chips={chips} />
       <SearchNotices data={data} busy={isValidating} failed={Boolean(error)} vendorSlug={vendorSlug} />
@@ -113,11 +112,11 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
         <div>{data && data.total > 0 ? <FacetPanel facets={data.facets} selected={state} names={new Map(hits.flatMap((h) => (h.machineClass ? [[h.machineClass.slug, h.machineClass.name] as const] : [])))} onSelect={(param, value) => write({ [param]: state[param as keyof typeof state] === value ? undefined : value, page: undefined }, "push")} /> : null}</div>
         <div>
           {data && data.total === 0 ? <SearchEmpty description={data.description} suggestions={data.suggestions} onTry={pushQuery} /> : null}
-          <ul id="search-results" role="listbox" aria-label="Matching sheets" className="grid gap-3 lg:grid-cols-2">
+          <ol ref={results} id="search-results" aria-label="Matching sheets" className="grid gap-3 lg:grid-cols-2">
             {hits.map((hit, i) => (
-              <SearchHitItem key={hit.slug} hit={hit} href={href(hit.slug)} id={`search-hit-${i}`} active={i === active} onHover={() => setActive(i)} onOpen={() => router.push(href(hit.slug))} />
+              <SearchHitItem key={hit.slug} hit={hit} href={href(hit.slug)} titleSuffix={titleSuffixes[i]} onKeyDown={onResultKey(i)} />
             ))}
-          </ul>
+          </ol>
         </div>
       </div>
     </div>

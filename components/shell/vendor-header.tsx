@@ -8,7 +8,7 @@ import type { Vendor } from "@/lib/vendors/vendor-schema";
 
 import { ShellSearchBox } from "@/components/search/shell-search-box";
 
-import { SignOutButton } from "./sign-out-button";
+import { AccountArea } from "./account-area";
 
 type Props = { vendor: Vendor; role: Role | null; userName: string | null };
 
@@ -33,26 +33,12 @@ export function VendorHeader({ vendor, role, userName }: Props) {
           ))}
         </nav>
         <ShellSearchBox vendorSlug={vendor.slug} />
-        <div className="ml-auto flex items-center gap-3 text-sm">
-          {userName ? (
-            <>
-              <span>
-                {userName}
-                {role ? <span className="opacity-80"> · {ROLE_LABELS[role]}</span> : null}
-              </span>
-              <SignOutButton />
-            </>
-          ) : (
-            <>
-              <Link className="rounded px-3 py-2 hover:bg-black/10" href={`/sign-in?vendor=${vendor.slug}&callbackUrl=/${vendor.slug}/library`}>
-                Sign in
-              </Link>
-              <Link className="rounded border border-current px-3 py-2" href={`/${vendor.slug}/sign-up`}>
-                Create an account
-              </Link>
-            </>
-          )}
-        </div>
+        <AccountArea
+          userName={userName}
+          roleLabel={role ? ROLE_LABELS[role] : null}
+          signInHref={`/sign-in?vendor=${vendor.slug}&callbackUrl=/${vendor.slug}/library`}
+          signUpHref={`/${vendor.slug}/sign-up`}
+        />
       </div>
     </header>
   );

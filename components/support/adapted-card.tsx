@@ -1,5 +1,10 @@
 import type { TicketCard } from "@/content-schema/ticket-card";
 import { formatQuantity, type QuantityKind, QUANTITY_KINDS } from "@/lib/machining";
+import { formatDateTime } from "@/lib/ui/dates";
+
+// Cards saved before the sheet's fz, vc and plunge feed were stored say so instead of showing a dash.
+const sheetValue = (value: number | null | undefined, kind: QuantityKind, units: "metric" | "imperial") =>
+  value === undefined ? "not stored" : value === null ? "not on the sheet" : formatQuantity(value, kind, units);
 
 const kindOf = (q: string): QuantityKind => (QUANTITY_KINDS as string[]).includes(q) ? (q as QuantityKind) : "length";
 
@@ -25,11 +30,11 @@ export function AdaptedCard({ card, vendorSlug }: { card: TicketCard; vendorSlug
               <tbody className="num">
                 <tr><td className="pr-3">n</td><td className="pr-3">{formatQuantity(op.reference.rpm, "spindleSpeed", u)}</td><td data-field="rpm">{formatQuantity(op.adapted.rpm, "spindleSpeed", u)}</td></tr>
                 <tr><td className="pr-3">vf</td><td className="pr-3">{formatQuantity(op.reference.feedMmMin, "feedRate", u)}</td><td data-field="vf">{formatQuantity(op.adapted.feedMmMin, "feedRate", u)}</td></tr>
-                <tr><td className="pr-3">fz</td><td className="pr-3">—</td><td>{formatQuantity(op.adapted.chipLoadMm, "chipLoad", u)}</td></tr>
+                <tr><td className="pr-3">fz</td><td className="pr-3">{sheetValue(op.reference.chipLoadMm, "chipLoad", u)}</td><td>{formatQuantity(op.adapted.chipLoadMm, "chipLoad", u)}</td></tr>
                 <tr><td className="pr-3">ap</td><td className="pr-3">{formatQuantity(op.reference.axialDepthMm, "length", u)}</td><td>{formatQuantity(op.adapted.axialDepthMm, "length", u)}</td></tr>
                 <tr><td className="pr-3">ae</td><td className="pr-3">{formatQuantity(op.reference.radialDepthMm, "length", u)}</td><td>{formatQuantity(op.adapted.radialDepthMm, "length", u)}</td></tr>
-                <tr><td className="pr-3">vc</td><td className="pr-3">—</td><td>{formatQuantity(op.adapted.cuttingSpeedMpm, "cuttingSpeed", u)}</td></tr>
-                {op.adapted.plungeFeedMmMin != null ? <tr><td className="pr-3">Plunge</td><td className="pr-3">—</td><td>{formatQuantity(op.adapted.plungeFeedMmMin, "feedRate", u)}</td></tr> : null}
+                <tr><td className="pr-3">vc</td><td className="pr-3">{sheetValue(op.reference.cuttingSpeedMpm, "cuttingSpeed", u)}</td><td>{formatQuantity(op.adapted.cuttingSpeedMpm, "cuttingSpeed", u)}</td></tr>
+                {op.adapted.plungeFeedMmMin != null ? <tr><td className="pr-3">Plunge</td><td className="pr-3">{sheetValue(op.reference.plungeFeedMmMin, "feedRate", u)}</td><td>{formatQuantity(op.adapted.plungeFeedMmMin, "feedRate", u)}</td></tr> : null}
               </tbody>
             </table>
           ) : (
@@ -37,7 +42,7 @@ export function AdaptedCard({ card, vendorSlug }: { card: TicketCard; vendorSlug
           )}
           {op.steps.length ? (
             <details className="mt-2 text-sm">
-              <summary className="cursor-pointer text-stone-700">How these numbers were found ({op.steps.length} steps)</summary>
+              <summary className="cursor-pointer text-stone-700">How these numbers were found ({op.steps.length} {op.steps.length === 1 ? "step" : "steps"})</summary>
               <ol className="mt-1 list-decimal space-y-1 pl-6">
                 {op.steps.map((s, j) => (
                   <li key={j}>
@@ -61,7 +66,7 @@ export function AdaptedCard({ card, vendorSlug }: { card: TicketCard; vendorSlug
           {card.cautions.map((c, i) => <li key={i} className="rounded border-l-4 border-amber-600 bg-amber-50 px-2 py-1"><span aria-hidden>⚠ </span>{c.text}</li>)}
         </ul>
       ) : null}
-      <p className="mt-3 text-xs text-stone-600">Starting values computed {new Date(card.computedAt).toISOString().slice(0, 16).replace("T", " ")} UTC from the sheet and your machine; they are not a promise of safety.</p>
+      <p className="mt-3 text-xs text-stone-600">Starting values computed {formatDateTime(card.computedAt)} from the sheet and your machine; they are not a promise of safety.</p>
     </section>
   );
 }

@@ -1,4 +1,5 @@
 import { ticketPriorityLabels, ticketStatusLabels, type TicketPriority, type TicketStatus } from "@/content-schema/ticket-status";
+import { formatDateTime } from "@/lib/ui/dates";
 
 const STATUS_STYLE: Record<TicketStatus, { icon: string; className: string }> = {
   new: { icon: "●", className: "border-sky-700 text-sky-900 bg-sky-50" },
@@ -28,11 +29,7 @@ export function PriorityBadge({ priority }: { priority: TicketPriority }) {
   );
 }
 
-const dateTime = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
-
-export function formatDateTime(iso: string): string {
-  return `${dateTime.format(new Date(iso))} UTC`;
-}
+export { formatDateTime };
 
 /** The first-response target: when it is due, or that it is overdue (never colour alone). */
 export function DueBadge({ dueAt, respondedAt, overdue }: { dueAt: string; respondedAt: string | null; overdue: boolean }) {

@@ -2,7 +2,7 @@ import "server-only";
 
 import { db } from "@/lib/db/knex";
 
-export type AuditListItem = { id: string; action: string; objectType: string; createdAt: Date; actorEmail: string | null };
+export type AuditListItem = { id: string; action: string; details: Record<string, unknown>; objectType: string; createdAt: Date; actorEmail: string | null };
 
 export async function listRecentAudit({ vendorId, limit = 20 }: { vendorId: string; limit?: number }): Promise<AuditListItem[]> {
   const rows = await db("audit_log as a")
@@ -10,6 +10,6 @@ export async function listRecentAudit({ vendorId, limit = 20 }: { vendorId: stri
     .where("a.vendor_id", vendorId)
     .orderBy("a.created_at", "desc")
     .limit(limit)
-    .select("a.id", "a.action", "a.object_type", "a.created_at", "u.email");
-  return rows.map((r) => ({ id: String(r.id), action: r.action, objectType: r.object_type, createdAt: new Date(r.created_at), actorEmail: r.email }));
+    .select("a.id", "a.action", "a.details", "a.object_type", "a.created_at", "u.email");
+  return rows.map((r) => ({ id: String(r.id), action: r.action, details: r.details ?? {}, objectType: r.object_type, createdAt: new Date(r.created_at), actorEmail: r.email }));
 }

@@ -58,11 +58,15 @@ function SetupSheet({ data, qr, url, vendorName }: { data: SetupSheetData; qr: s
           <View key={r.symbol} style={s.row}>
             <Text style={s.c1}>{t(`${r.symbol} (${r.label.toLowerCase()})`)}</Text>
             <Text style={s.c2}>{t(r.sheetText)}</Text>
-            <Text style={s.c3}>{t(r.adaptedText)}</Text>
+            <Text style={s.c3}>{t(`${r.adaptedText}${r.changed ? " (changed)" : ""}`)}</Text>
           </View>
         ))}
+        <Text style={{ marginTop: 6 }}>{t(`Stick-out: ${data.stickout}`)}</Text>
+        <Text>{t(`Entry: ${data.entryMethod}`)}</Text>
+        <Text style={s.h2}>Your changes</Text>
+        {data.yourChanges.length ? data.yourChanges.map((line, i) => <Text key={i} style={s.li}>{t(`- ${line}`)}</Text>) : <Text>{t("None: the sheet's own depths and the machine's usual stick-out.")}</Text>}
         <Text style={s.h2}>How the numbers were adapted</Text>
-        {data.steps.length ? data.steps.map((step, i) => <Text key={i} style={s.li}>{t(`${i + 1}. ${step}`)}</Text>) : <Text>No rule changed a number: the sheet runs as written on this machine.</Text>}
+        {data.steps.length ? data.steps.map((step, i) => <Text key={i} style={s.li}>{t(`${i + 1}. ${step}`)}</Text>) : <Text>{t(data.noStepsNote)}</Text>}
         {data.warnings.length ? (
           <>
             <Text style={s.h2}>Warnings</Text>

@@ -16,14 +16,17 @@ export async function listMaterialOptions({ vendorId }: { vendorId: string }): P
   return db("materials").where({ vendor_id: vendorId }).orderBy("name").select<Option[]>("id", "name");
 }
 
-/** Sheet versions a reply may embed: what customers can read, the published ones first. */
-export async function listPickerVersions({ vendorId }: { vendorId: string }): Promise<(Option & { state: string })[]> {
+export type PickerVersion = Option & { state: string; machineClass: string };
+
+/** Sheet versions a reply may embed: what customers can read, the published ones first, each with its machine class. */
+export async function listPickerVersions({ vendorId }: { vendorId: string }): Promise<PickerVersion[]> {
   const rows = await db("sheet_versions as v")
     .join("sheets as s", "s.id", "v.sheet_id")
-    .where({ "v.vendor_id": vendorId, "s.vendor_id": vendorId })
+    .join("machine_classes as k", "k.id", "s.machine_class_id")
+    .where({ "v.vendor_id": vendorId, "s.vendor_id": vendorId, "k.vendor_id": vendorId })
     .whereIn("v.state", READABLE_STATES)
-    .orderByRaw("(v.state = 'published') desc, v.title, v.number desc")
+    .orderByRaw("(v.state = 'published') desc, v.title, k.name, v.number desc")
     .limit(500)
-    .select("v.id", "v.title", "v.number", "v.state");
-  return rows.map((r) => ({ id: r.id, name: `${r.title} (v${r.number})`, state: r.state }));
+    .select("v.id", "v.title", "v.number", "v.state", "k.name as machine_class");
+  return rows.map((r) => ({ id: r.id, name: `${r.title} · ${r.machine_class} (version ${r.number})`, state: r.state, machineClass: r.machine_class }));
 }

@@ -19,12 +19,27 @@ export function applyQueueFilters(q: Knex.QueryBuilder, f: QueueFilters, userId:
   if (f.tag) q.whereRaw("? = any(t.tags)", [f.tag]);
   if (f.materialId) q.where("t.material_id", f.materialId);
   if (f.overdue) q.whereNull("t.first_response_at").whereNot("t.status", "closed").where("t.first_response_due_at", "<", db.fn.now());
+  if (f.q) {
+    const number = /^#?(\d{1,9})$/.exec(f.q)?.[1];
+    const words = `%${f.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    q.where((w) => {
+      if (number) w.orWhere("t.number", Number(number));
+      w.orWhereILike("t.subject", words).orWhereILike("t.body", words);
+    });
+  }
   return q;
 }
 
-/** The Desk queue: tickets of one vendor by filters, most urgent target first. */
+const ORDER: Record<NonNullable<QueueFilters["sort"]>, [string, "asc" | "desc"]> = {
+  newest: ["t.created_at", "desc"],
+  oldest: ["t.created_at", "asc"],
+  target: ["t.first_response_due_at", "asc"],
+};
+
+/** The Desk queue: tickets of one vendor by filters, newest first unless another order is chosen. */
 export async function listQueue({ vendorId, userId, filters, limit = 500 }: { vendorId: string; userId: string; filters: QueueFilters; limit?: number }): Promise<TicketSummary[]> {
-  const q = applyQueueFilters(selectTickets(db, vendorId), filters, userId).orderBy("t.first_response_due_at").limit(limit);
+  const [column, direction] = ORDER[filters.sort ?? "newest"];
+  const q = applyQueueFilters(selectTickets(db, vendorId), filters, userId).orderBy(column, direction).orderBy("t.number", direction).limit(limit);
   const rows = await q;
   return rows.map((r: Record<string, unknown>) => {
     const { body: _body, machineName: _m, closedAt: _c, satisfaction: _s, satisfactionComment: _sc, ...summary } = toTicketDetail(r);

@@ -24,6 +24,13 @@ const trimmed = (value: number, decimals: number, keep = 0) => {
 const bySize = (value: number, small: number, large: number, threshold: number) =>
   fixed(value, Math.abs(value) < threshold ? small : large);
 
+/** Three significant figures, zeros kept (0.0500, 0.00200, 0.250): chip loads read alike in both systems. */
+const significant3 = (value: number) => {
+  if (value === 0) return "0.000";
+  const rounded = Number(value.toPrecision(3));
+  return fixed(rounded, Math.max(0, 2 - Math.floor(Math.log10(Math.abs(rounded)))));
+};
+
 /** Three decimals below 1, two below 10, one above (kW, hp, N·m, lbf·ft). */
 const tiered = (value: number) => fixed(value, Math.abs(value) < 1 ? 3 : Math.abs(value) < 10 ? 2 : 1);
 
@@ -35,7 +42,7 @@ export const ROUNDING: Record<QuantityKind, Record<UnitSystem, Rounder>> = {
   deflection: { metric: (v) => fixed(v, Math.abs(v) < 0.01 ? 4 : 3), imperial: (v) => fixed(v, Math.abs(v) < 0.001 ? 5 : 4) },
   cuttingSpeed: { metric: (v) => bySize(v, 1, 0, 100), imperial: (v) => fixed(v, 0) },
   feedRate: { metric: (v) => fixed(v, 0), imperial: (v) => fixed(v, 1) },
-  chipLoad: { metric: (v) => trimmed(v, 4, 3), imperial: (v) => fixed(v, Math.abs(v) < 0.001 ? 5 : 4) },
+  chipLoad: { metric: significant3, imperial: significant3 },
   feedPerRev: { metric: (v) => trimmed(v, 4, 3), imperial: (v) => fixed(v, Math.abs(v) < 0.001 ? 5 : 4) },
   spindleSpeed: { metric: roundRpm, imperial: roundRpm },
   power: { metric: tiered, imperial: tiered },

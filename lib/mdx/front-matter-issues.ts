@@ -4,6 +4,7 @@ import type { z } from "zod";
 import { sheetFrontMatterSchema, type SheetFrontMatter } from "@/content-schema/sheet-front-matter";
 
 import type { SheetIssue } from "./sheet-issue";
+import { yamlErrorSentence } from "./yaml-error-sentence";
 import { yamlPathOffset } from "./yaml-path-position";
 
 export type FrontMatterResult = { frontMatter?: SheetFrontMatter; issues: SheetIssue[] };
@@ -21,8 +22,6 @@ function zodMessage(issue: z.core.$ZodIssue, path: string, unknownKey?: string):
   return path ? `${path}: ${issue.message}` : issue.message;
 }
 
-// yaml's own "at line N, column M" counts from the front matter, not the file: drop it.
-const yamlMessage = (message: string) => `YAML: ${message.split("\n")[0].replace(/ at line \d+, column \d+:?$/, "")}`;
 
 /**
  * Parses and validates the YAML front matter. `firstLine` is the file line where the YAML
@@ -37,8 +36,9 @@ export function checkFrontMatter(yamlText: string, firstLine: number): FrontMatt
   };
 
   const yamlIssues: SheetIssue[] = [
-    ...doc.errors.map((e) => ({ ...at(e.pos[0]), message: yamlMessage(e.message), severity: "error" as const })),
-    ...doc.warnings.map((w) => ({ ...at(w.pos[0]), message: yamlMessage(w.message), severity: "warning" as const })),
+    // yaml's own "at line N, column M" counts from the front matter, not the file: the sentence leaves it out.
+    ...doc.errors.map((e) => ({ ...at(e.pos[0]), message: yamlErrorSentence(e.code, e.message), severity: "error" as const })),
+    ...doc.warnings.map((w) => ({ ...at(w.pos[0]), message: yamlErrorSentence(w.code, w.message), severity: "warning" as const })),
   ];
   if (doc.errors.length) return { issues: yamlIssues };
 

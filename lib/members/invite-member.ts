@@ -9,6 +9,7 @@ import { db } from "@/lib/db/knex";
 import { Conflict } from "@/lib/errors/domain-errors";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { appUrl } from "@/lib/http/app-url";
+import { roleWord } from "@/lib/audit/action-labels";
 
 export const INVITATION_DAYS = 7;
 
@@ -54,7 +55,7 @@ export async function inviteMember(opts: {
       {
         to: opts.email,
         subject: `You are invited to ${opts.vendorName} on Swarfbook`,
-        text: `You have been invited to join ${opts.vendorName} on Swarfbook as ${opts.role}.\n\nAccept the invitation (valid for ${INVITATION_DAYS} days, once):\n${link}\n`,
+        text: `You have been invited to join ${opts.vendorName} on Swarfbook as ${roleWord(opts.role)}.\n\nAccept the invitation (valid for ${INVITATION_DAYS} days, once):\n${link}\n`,
       },
       { key: `invitation:${row.id}` },
     );

@@ -29,7 +29,16 @@ export async function buildCard({ vendorId, sheetVersionId, machineId, customerI
 
   const operations = readOperations(version.front_matter).map((op): TicketCardOperation => {
     const d = cutter.diameter_mm;
-    const reference = { rpm: op.n.value, feedMmMin: op.vf.value, axialDepthMm: op.ap.value, radialDepthMm: op.ae.unit === "%D" ? (op.ae.value / 100) * d : op.ae.value };
+    const reference = {
+      rpm: op.n.value,
+      feedMmMin: op.vf.value,
+      axialDepthMm: op.ap.value,
+      radialDepthMm: op.ae.unit === "%D" ? (op.ae.value / 100) * d : op.ae.value,
+      // fz = vf / (z · n); vc = π · D · n / 1000 (ISO 3002-1).
+      chipLoadMm: op.vf.value / (cutter.flutes * op.n.value),
+      cuttingSpeedMpm: (Math.PI * d * op.n.value) / 1000,
+      plungeFeedMmMin: op.plungeFeed?.value ?? null,
+    };
     const base = { label: op.label ?? operationKindLabels[op.kind], kind: op.kind, reference };
     try {
       const result = adaptRecipe(toAdaptInput(op, cutter, material, machineClass, machine));

@@ -11,8 +11,24 @@ export type TicketPrefill = { sheetVersion: { id: string; title: string; number:
 const id = z.uuid();
 
 /**
+ * The machine a question about a sheet most likely concerns when none was named: the one of the
+ * customer's newest setup of that sheet, else their only machine.
+ */
+async function likelyMachine({ vendorId, customerId, sheetVersionId }: { vendorId: string; customerId: string; sheetVersionId: string }) {
+  const fromSetup = await db("setups as st")
+    .join("machines as m", "m.id", "st.machine_id")
+    .where({ "st.vendor_id": vendorId, "st.user_id": customerId, "st.sheet_version_id": sheetVersionId, "m.vendor_id": vendorId, "m.user_id": customerId })
+    .orderBy("st.updated_at", "desc")
+    .first<{ id: string; name: string } | undefined>("m.id", "m.name");
+  if (fromSetup) return fromSetup;
+  const machines = await db("machines").where({ vendor_id: vendorId, user_id: customerId }).limit(2).select<{ id: string; name: string }[]>("id", "name");
+  return machines.length === 1 ? machines[0] : undefined;
+}
+
+/**
  * Reads `?sheetVersion=&machine=` for a new ticket. Ids that are malformed, of another vendor or
- * (for machines) of another customer are ignored, as if they were not given.
+ * (for machines) of another customer are ignored, as if they were not given. A sheet without a
+ * machine gets the customer's likely machine.
  */
 export async function prefillLinks({ vendorId, customerId, sheetVersion, machine }: { vendorId: string; customerId: string; sheetVersion?: string; machine?: string }): Promise<TicketPrefill> {
   const svId = id.safeParse(sheetVersion).data;
@@ -27,8 +43,9 @@ export async function prefillLinks({ vendorId, customerId, sheetVersion, machine
       : null,
     mId ? db("machines").where({ id: mId, vendor_id: vendorId, user_id: customerId }).first("id", "name") : null,
   ]);
+  const chosen = m ?? (sv && !machine ? await likelyMachine({ vendorId, customerId, sheetVersionId: sv.id }) : undefined);
   return {
     sheetVersion: sv ? { id: sv.id, title: sv.title, number: sv.number, materialId: sv.material_id } : null,
-    machine: m ? { id: m.id, name: m.name } : null,
+    machine: chosen ? { id: chosen.id, name: chosen.name } : null,
   };
 }

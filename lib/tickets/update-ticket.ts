@@ -2,9 +2,9 @@ import "server-only";
 
 import type { Knex } from "knex";
 
-import type { TicketUpdateInput } from "@/content-schema/ticket-update";
+import { panelValuesOf, type TicketPanelValues, type TicketUpdateInput } from "@/content-schema/ticket-update";
 import { db } from "@/lib/db/knex";
-import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
+import { Conflict, InvalidInput, NotFound } from "@/lib/errors/domain-errors";
 import type { Vendor } from "@/lib/vendors/vendor-schema";
 
 import { auditTicketChange } from "./audit-change";
@@ -17,9 +17,23 @@ async function assertAssignable(trx: Knex, vendorId: string, userId: string) {
   if (!ok) throw new InvalidInput("Please correct the marked fields.", { assigneeId: ["Choose a member of the support team."] });
 }
 
-async function applyUpdate(trx: Knex.Transaction, vendor: Vendor, actorUserId: string, input: TicketUpdateInput): Promise<void> {
+const fieldWords: Record<keyof TicketPanelValues, string> = { status: "status", priority: "priority", assigneeId: "assignee", tags: "tags" };
+
+/** Refuses a change to a field someone else changed since the editor loaded it, so nobody's change is silently undone. */
+function assertUnchangedSince(row: Row, expected: TicketUpdateInput["expected"]) {
+  if (!expected) return;
+  const stored = panelValuesOf({ status: row.status, priority: row.priority, assigneeId: row.assignee_id, tags: row.tags });
+  const changed = (Object.keys(expected) as (keyof TicketPanelValues)[]).filter((key) => expected[key] !== undefined && expected[key] !== stored[key]);
+  if (changed.length) {
+    const names = changed.map((key) => fieldWords[key]).join(" and ");
+    throw new Conflict(`Someone else changed the ${names} while you were editing. The panel now shows their values; nothing was saved. Check and save again.`, { current: stored });
+  }
+}
+
+async function applyUpdate(trx: Knex.Transaction, vendor: Vendor, actorUserId: string, input: TicketUpdateInput): Promise<TicketPanelValues> {
   const row = await trx("tickets").where({ id: input.ticketId, vendor_id: vendor.id }).forUpdate().first<Row | undefined>();
   if (!row) throw new NotFound();
+  assertUnchangedSince(row, input.expected);
   const patch: Record<string, unknown> = {};
   const audit = (field: "status" | "priority" | "assignee" | "tags", from: unknown, to: unknown) =>
     auditTicketChange(trx, { vendorId: vendor.id, actorUserId, ticketId: input.ticketId, field, from, to });
@@ -48,11 +62,16 @@ async function applyUpdate(trx: Knex.Transaction, vendor: Vendor, actorUserId: s
     await audit("tags", row.tags, input.tags);
   }
   if (Object.keys(patch).length) await trx("tickets").where({ id: input.ticketId, vendor_id: vendor.id }).update({ ...patch, updated_at: trx.fn.now() });
+  const saved = { ...row, ...patch } as Row;
+  return panelValuesOf({ status: saved.status, priority: saved.priority, assigneeId: saved.assignee_id, tags: saved.tags });
 }
 
-/** A staff change to status, priority, assignee or tags; each changed field is audited. */
-export async function updateTicket({ vendor, actorUserId, input }: { vendor: Vendor; actorUserId: string; input: TicketUpdateInput }): Promise<void> {
-  await db.transaction((trx) => applyUpdate(trx, vendor, actorUserId, input));
+/**
+ * A staff change to status, priority, assignee or tags; each changed field is audited.
+ * Answers with the ticket's values as saved, for the panel to show.
+ */
+export async function updateTicket({ vendor, actorUserId, input }: { vendor: Vendor; actorUserId: string; input: TicketUpdateInput }): Promise<TicketPanelValues> {
+  return db.transaction((trx) => applyUpdate(trx, vendor, actorUserId, input));
 }
 
 /** Assigns many tickets at once (the queue's bulk action), audited per ticket. */

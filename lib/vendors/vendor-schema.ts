@@ -1,5 +1,7 @@
 import { z } from "zod";
 
+import { explainAccentColor } from "./explain-accent-color";
+
 export const vendorSettingsSchema = z.object({
   libraryPublic: z.boolean().default(true),
   requireSecondApproval: z.boolean().default(true),
@@ -10,7 +12,10 @@ export const vendorSettingsSchema = z.object({
 });
 export type VendorSettings = z.infer<typeof vendorSettingsSchema>;
 
-export const accentColorSchema = z.string().regex(/^#[0-9a-fA-F]{6}$/, "A colour like #2f5d8a.");
+export const accentColorSchema = z.string().trim().superRefine((value, ctx) => {
+  const why = explainAccentColor(value);
+  if (why) ctx.addIssue({ code: "custom", message: why });
+});
 
 export type Vendor = {
   id: string;

@@ -25,6 +25,8 @@ describe("admin invites an engineer", () => {
     await screenshot(admin.page, "admin-invited");
 
     const mail = await waitForMail(email, /invited/, { after: started - 1000 });
+    // The role reads as a word, not as its code.
+    expect(mail.text).toContain("as applications engineer.");
     const link = firstLink(mail.text, /\/northbeck\/join\//);
     const invitee = await openBrowser();
     sessions.push(invitee);

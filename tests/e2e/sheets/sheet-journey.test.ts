@@ -45,10 +45,18 @@ async function submitForReview(page: Page, note: string) {
 
 async function approveAndPublish(page: Page, sheetPath: string, number: number) {
   await page.goto(sheetPath);
+  // The reviewer sees what they approve: the version rendered with its operations table, and for later versions the diff.
+  await page.locator("[data-review] [data-preview] table").waitFor({ timeout: 45_000 });
+  await expect(page.locator("[data-review] [data-testid=parameter-diff]").count()).resolves.toBe(number > 1 ? 1 : 0);
   await page.getByRole("button", { name: "Approve" }).click();
   await page.getByText("approved by").waitFor({ timeout: 45_000 });
   await screenshot(page, `sheet-approved-v${number}`);
+  // Publishing asks first; cancelling leaves the version in review.
   await page.getByRole("button", { name: `Publish version ${number}` }).click();
+  await page.getByRole("button", { name: "Cancel" }).click();
+  await page.getByRole("button", { name: `Publish version ${number}` }).click();
+  await screenshot(page, `sheet-publish-confirm-v${number}`);
+  await page.getByRole("button", { name: `Yes, publish version ${number}` }).click();
   // Published when the sheet has no open draft any more.
   await page.getByRole("button", { name: "Start a new version" }).waitFor({ timeout: 60_000 });
   await screenshot(page, `sheet-published-v${number}`);
@@ -97,9 +105,9 @@ describe("recipe sheet journey", () => {
     await submitForReview(a.page, "First version, from test cuts on the reference router.");
     await screenshot(a.page, "sheet-in-review");
 
-    // The author may not approve; a second engineer approves and publishes.
-    await a.page.getByRole("button", { name: "Approve" }).click();
-    await a.page.getByRole("alert").filter({ hasText: "another engineer" }).or(a.page.getByText("other than the author")).first().waitFor({ timeout: 45_000 });
+    // The author is not offered Approve; a second engineer approves and publishes.
+    await a.page.getByText("another engineer reviews and approves it").waitFor({ timeout: 45_000 });
+    await expect(a.page.getByRole("button", { name: "Approve" }).count()).resolves.toBe(0);
     await screenshot(a.page, "author-cannot-approve");
     const r = await openBrowser();
     sessions.push(r);

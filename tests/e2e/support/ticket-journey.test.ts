@@ -92,14 +92,22 @@ describe("support journey", () => {
 
     // A public reply with the sheet adapted to the customer's machine, then an internal note.
     await s.page.goto(`/northbeck/desk/tickets/${ticketId}`);
+    // The picker lists the ticket's linked sheet first, with its machine class.
+    const firstGroup = s.page.locator('select[name="cardSheetVersionId"] optgroup').first();
+    await expect(firstGroup.getAttribute("label")).resolves.toBe("Linked to this ticket");
+    await expect(firstGroup.locator("option").first().getAttribute("value")).resolves.toBe(version.id);
+    await expect(firstGroup.locator("option").first().textContent()).resolves.toMatch(/ · .+ \(version \d+\)$/);
     await s.page.locator("#f-staff-body").fill("Your router tops out below the sheet's speed, so here is the sheet adapted to it.");
     await s.page.locator('select[name="cardSheetVersionId"]').selectOption(version.id);
     await s.page.locator('select[name="cardMachineId"]').selectOption(machine.id);
-    await s.page.getByRole("button", { name: "Send", exact: true }).click();
+    await s.page.getByRole("button", { name: "Send reply", exact: true }).click();
     await expect(s.page.getByRole("status").filter({ hasText: "Reply sent." }).textContent({ timeout: 60_000 })).resolves.toContain("Reply sent.");
     await s.page.locator('input[name="visibility"][value="note"]').check();
+    // In note mode the editor is tinted and the button says what it does.
+    await s.page.locator('form[data-mode="note"]').waitFor();
     await s.page.locator("#f-staff-body").fill("Internal: ask engineering whether vf is too low for light routers.");
-    await s.page.getByRole("button", { name: "Send", exact: true }).click();
+    await screenshot(s.page, "desk-note-mode");
+    await s.page.getByRole("button", { name: "Add internal note", exact: true }).click();
     await expect(s.page.getByRole("status").filter({ hasText: "Note added." }).textContent({ timeout: 60_000 })).resolves.toContain("Note added.");
     await s.page.reload({ timeout: 90_000 });
     await s.page.locator("[data-adapted-card]").waitFor({ timeout: 15_000 });

@@ -5,6 +5,7 @@ import { renderChangeAlert } from "@/lib/bench/change-alert-mail";
 import { diffAdapted } from "@/lib/bench/adapted-diff";
 import { setupCsv } from "@/lib/bench/setup-csv";
 import { setupSheetData } from "@/lib/bench/setup-sheet-data";
+import { formatQuantity } from "@/lib/machining";
 
 import { acrylicContext } from "../adapt/adapt-context-fixture";
 
@@ -15,16 +16,36 @@ describe("setup sheet data and CSV", () => {
     const result = adaptOperation(acrylicContext, 0, machine);
     const data = setupSheetData({ context: acrylicContext, operationIndex: 0, result, setupName: "=HYPERLINK(1)", machineName: "Desk router", units: "imperial" });
     const csv = setupCsv(data).trim().split("\r\n");
-    expect(csv[0]).toBe("setup,machine,sheet_version,operation,symbol,quantity,unit,sheet_value,adapted_value");
+    expect(csv[0]).toBe("setup,machine,sheet_version,operation,symbol,quantity,unit,sheet_value,adapted_value,changed");
     const vf = csv.find((l) => l.includes(",vf,Feed rate,"))!;
     // 1800 mm/min = 70.87 in/min; 1600 mm/min = 62.99 in/min (÷ 25.4).
-    const [sheetValue, adaptedValue] = vf.split(",").slice(-2).map(Number);
+    const [sheetValue, adaptedValue] = vf.split(",").slice(-3, -1).map(Number);
+    expect(vf.endsWith(",yes")).toBe(true);
     expect(sheetValue).toBeCloseTo(1800 / 25.4, 1);
     expect(adaptedValue).toBeCloseTo(1600 / 25.4, 1);
     // A cell that starts like a formula is defused for spreadsheets.
     expect(csv[1].startsWith(`"'=HYPERLINK(1)"`)).toBe(true);
     expect(data.steps.some((s) => s.startsWith("Spindle speed range"))).toBe(true);
     expect(data.cautions.at(-1)).toMatch(/Starting points only/);
+  });
+
+  it("says what the customer changed, the stick-out and the entry, and never claims nothing changed beside a changed number", () => {
+    // A machine that runs the sheet as written: the only change is the customer's own ap.
+    const strong = { minRpm: 6000, maxRpm: 30000, spindlePowerKw: 5, maxFeedMmMin: 20000, rigidity: 1 };
+    const apMm = acrylicContext.operations[0].axialDepthMm / 2;
+    const result = adaptOperation(acrylicContext, 0, strong, { axialDepthMm: apMm });
+    const data = setupSheetData({ context: acrylicContext, operationIndex: 0, result, setupName: "Slot", machineName: "Big router", units: "metric", overrides: { axialDepthMm: apMm }, machineStickoutMm: 18 });
+    expect(data.yourChanges).toEqual([`ap (axial depth): ${formatQuantity(apMm, "length", "metric")}`]);
+    expect(data.rows.find((r) => r.symbol === "ap")?.changed).toBe(true);
+    expect(data.stickout).toBe(`${formatQuantity(18, "length", "metric")} (the machine's usual)`);
+    expect(data.entryMethod).toMatch(/plunge|ramp|enter/i);
+    expect(data.steps).toEqual([]);
+    expect(data.noStepsNote).toBe("No rule changed a number. The numbers marked changed follow from your changes.");
+    expect(data.noStepsNote).not.toContain("runs as written");
+    const csv = setupCsv(data);
+    expect(csv).toContain(",L,Stick-out,,,");
+    expect(csv).toContain(",Entry method,,,");
+    expect(csv).toContain(`,Your change,,,ap (axial depth): ${formatQuantity(apMm, "length", "metric")},yes`);
   });
 
   it("renders a change alert with the re-adapted diff and the stop link", () => {

@@ -21,10 +21,14 @@ describe("formatQuantity", () => {
     [199.49, "cuttingSpeed", "metric", "199 m/min"],
     [45.67, "cuttingSpeed", "metric", "45.7 m/min"],
     [199.49, "cuttingSpeed", "imperial", "654 SFM"], // 199.49 / 0.3048 = 654.5
-    [0.05, "chipLoad", "metric", "0.050 mm/tooth"],
+    // Chip loads to three significant figures, zeros kept.
+    [0.05, "chipLoad", "metric", "0.0500 mm/tooth"],
     [0.0125, "chipLoad", "metric", "0.0125 mm/tooth"],
-    [0.0508, "chipLoad", "imperial", "0.0020 in/tooth"],
-    [0.0127, "chipLoad", "imperial", "0.00050 in/tooth"],
+    [0.06366, "chipLoad", "metric", "0.0637 mm/tooth"],
+    [0.25, "chipLoad", "metric", "0.250 mm/tooth"],
+    [0.09996, "chipLoad", "metric", "0.100 mm/tooth"],
+    [0.0508, "chipLoad", "imperial", "0.00200 in/tooth"],
+    [0.0127, "chipLoad", "imperial", "0.000500 in/tooth"],
     [1.5, "power", "metric", "1.50 kW"],
     [1.5, "power", "imperial", "2.01 hp"], // 1.5 / 0.7457
     [0.0313, "power", "metric", "0.031 kW"],
@@ -53,7 +57,7 @@ describe("formatQuantity", () => {
   it("has shorthand formatters", () => {
     expect(formatFeed(1800, "metric")).toBe(nb("1800 mm/min"));
     expect(formatCuttingSpeed(182.88, "imperial")).toBe(nb("600 SFM"));
-    expect(formatChipLoad(0.0508, "imperial")).toBe(nb("0.0020 in/tooth"));
+    expect(formatChipLoad(0.0508, "imperial")).toBe(nb("0.00200 in/tooth"));
     expect(formatSpindleSpeed(18000)).toBe(nb("18000 rpm"));
     expect(formatNumber(1778, "feedRate", "imperial")).toBe("70.0");
   });

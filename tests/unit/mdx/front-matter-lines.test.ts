@@ -63,7 +63,7 @@ describe("front-matter errors name their YAML line in the whole file", () => {
     const yaml = "title: Sheet\nsummary: ok\noperations:\n\t- kind: slotting";
     const source = buildSheetSource({ yaml });
     const [error] = errorsOf(source);
-    expect(error.message).toMatch(/^YAML: Tabs/);
+    expect(error.message).toBe("This line is indented with a tab; indent with spaces instead.");
     expect(error.message).not.toMatch(/at line/);
     expect(error.line).toBe(lineOf(source, "\t- kind"));
   });

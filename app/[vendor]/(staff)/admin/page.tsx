@@ -3,7 +3,9 @@ import Link from "next/link";
 import { BrandingForm } from "@/components/admin/branding-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
+import { describeAuditAction } from "@/lib/audit/action-labels";
 import { listRecentAudit } from "@/lib/audit/list-audit";
+import { formatDateTime } from "@/lib/ui/dates";
 
 export const metadata = { title: "Admin" };
 
@@ -27,9 +29,8 @@ export default async function AdminPage({ params }: { params: Promise<{ vendor: 
         {audit.length === 0 ? <li className="p-3 text-stone-600">Nothing yet.</li> : null}
         {audit.map((a) => (
           <li key={a.id} className="flex gap-3 p-3">
-            <time className="num text-stone-500" dateTime={a.createdAt.toISOString()}>{a.createdAt.toISOString().slice(0, 16).replace("T", " ")}</time>
-            <span className="num">{a.action}</span>
-            <span className="text-stone-600">{a.objectType}</span>
+            <time className="num text-stone-500" dateTime={a.createdAt.toISOString()}>{formatDateTime(a.createdAt)}</time>
+            <span data-action={a.action}>{describeAuditAction(a.action, a.details)}</span>
             <span className="ml-auto text-stone-600">{a.actorEmail ?? "system"}</span>
           </li>
         ))}

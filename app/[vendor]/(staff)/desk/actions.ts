@@ -9,7 +9,7 @@ import { db } from "@/lib/db/knex";
 import { queueFiltersSchema } from "@/lib/desk/queue-filters";
 import { saveDeskView } from "@/lib/desk/saved-views";
 import { saveSnippet } from "@/lib/desk/snippets";
-import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
+import { Conflict, InvalidInput, NotFound } from "@/lib/errors/domain-errors";
 import { addStaffMessage } from "@/lib/tickets/add-message";
 import { buildCard } from "@/lib/tickets/build-card";
 import { createProblemReport } from "@/lib/tickets/problem-reports";
@@ -17,23 +17,29 @@ import { bulkAssign, updateTicket } from "@/lib/tickets/update-ticket";
 
 const ticketPath = (vendor: string, id: string) => `/${vendor}/desk/tickets/${id}`;
 
-// The form sends every field plus what it showed (`was`); unchanged fields are dropped before the update.
+// The panel sends only the fields the agent touched, plus what it showed for them (`was`), so a save
+// never reverts a field it did not touch and refuses one that someone else changed meanwhile.
 const ticketFormSchema = z.preprocess((raw) => {
   if (!raw || typeof raw !== "object") return raw;
   const { was, ...values } = raw as Record<string, unknown>;
-  let shown: Record<string, unknown> = {};
+  let shown: unknown = undefined;
   try {
-    shown = typeof was === "string" ? (JSON.parse(was) as Record<string, unknown>) : {};
+    shown = typeof was === "string" && was ? JSON.parse(was) : undefined;
   } catch {
-    shown = {};
+    shown = undefined;
   }
-  return Object.fromEntries(Object.entries(values).filter(([key, value]) => !(key in shown) || shown[key] !== value));
+  return { ...values, expected: shown };
 }, ticketUpdateSchema);
 
 export const updateTicketAction = vendorAction({ permission: "desk.use", schema: ticketFormSchema }, async (input, { vendor, user }) => {
-  await updateTicket({ vendor, actorUserId: user.id, input });
-  revalidatePath(ticketPath(vendor.slug, input.ticketId));
-  return { ok: true, message: "Ticket updated." };
+  try {
+    const saved = await updateTicket({ vendor, actorUserId: user.id, input });
+    revalidatePath(ticketPath(vendor.slug, input.ticketId));
+    return { ok: true, message: "Ticket updated.", data: saved };
+  } catch (error) {
+    if (error instanceof Conflict) return { ok: false, message: error.message, data: error.details?.current };
+    throw error;
+  }
 });
 
 export const bulkAssignAction = vendorAction({ permission: "desk.use", schema: bulkAssignSchema }, async (input, { vendor, user }) => {

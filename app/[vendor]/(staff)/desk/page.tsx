@@ -5,15 +5,19 @@ import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { listAssignees, listMaterialOptions } from "@/lib/desk/desk-options";
 import { listQueue } from "@/lib/desk/list-queue";
+import { parseQueueFilters } from "@/lib/desk/queue-filters";
 import { listDeskViews } from "@/lib/desk/saved-views";
 
 export const metadata = { title: "Desk" };
 
-export default async function DeskPage({ params }: { params: Promise<{ vendor: string }> }) {
+type Props = { params: Promise<{ vendor: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+export default async function DeskPage({ params, searchParams }: Props) {
   const { vendor: slug } = await params;
   const { vendor, user } = await requirePageAccess(slug, "desk.use", `/${slug}/desk`);
+  const filters = parseQueueFilters(await searchParams);
   const [tickets, views, assignees, materials] = await Promise.all([
-    listQueue({ vendorId: vendor.id, userId: user!.id, filters: {} }),
+    listQueue({ vendorId: vendor.id, userId: user!.id, filters }),
     listDeskViews({ vendorId: vendor.id, userId: user!.id }),
     listAssignees({ vendorId: vendor.id }),
     listMaterialOptions({ vendorId: vendor.id }),
@@ -22,7 +26,7 @@ export default async function DeskPage({ params }: { params: Promise<{ vendor: s
   return (
     <>
       <PageHeader title="Desk" lead="The support queue: tickets by status, priority and response target. It refreshes on its own." actions={dashboard} />
-      <QueueTable vendor={vendor.slug} initial={tickets} views={views} assignees={assignees} materials={materials} />
+      <QueueTable vendor={vendor.slug} initial={tickets} initialFilters={filters} views={views} assignees={assignees} materials={materials} />
     </>
   );
 }

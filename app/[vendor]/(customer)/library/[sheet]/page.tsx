@@ -23,5 +23,5 @@ export default async function SheetPage({ params }: Props) {
   after(() => countSheetView(found.vendor.id, found.data.version.id));
   const units = await readUnits();
   const renderAdaptPanel = adaptPanelRenderer({ vendor: found.vendor, versionId: found.data.version.id, units, returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}` });
-  return <CachedSheetView vendorId={found.vendor.id} data={found.data} units={units} vendorSlug={found.vendor.slug} renderAdaptPanel={renderAdaptPanel} />;
+  return <CachedSheetView vendorId={found.vendor.id} data={found.data} units={units} vendorSlug={found.vendor.slug} vendorName={found.vendor.name} renderAdaptPanel={renderAdaptPanel} />;
 }

@@ -5,10 +5,10 @@ import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { listMembers, listPendingInvitations } from "@/lib/members/list-members";
+import { formatDate } from "@/lib/ui/dates";
 
 export const metadata = { title: "Members" };
 
-const dateFmt = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium" });
 
 export default async function MembersPage({ params }: { params: Promise<{ vendor: string }> }) {
   const { vendor: slug } = await params;
@@ -24,7 +24,7 @@ export default async function MembersPage({ params }: { params: Promise<{ vendor
           <ul className="mt-3 text-sm text-stone-700" aria-label="Pending invitations">
             {invitations.map((inv) => (
               <li key={inv.id}>
-                Pending: <span className="num">{inv.email}</span> as {ROLE_LABELS[inv.role]}, expires {dateFmt.format(inv.expiresAt)}
+                Pending: <span className="num">{inv.email}</span> as {ROLE_LABELS[inv.role]}, expires {formatDate(inv.expiresAt)}
               </li>
             ))}
           </ul>
@@ -46,7 +46,7 @@ export default async function MembersPage({ params }: { params: Promise<{ vendor
                     <td className="px-3 py-2">{m.name || "—"}{m.userId === user?.id ? " (you)" : ""}</td>
                     <td className="num px-3 py-2">{m.email}</td>
                     <td className="px-3 py-2">{ROLE_LABELS[m.role]}</td>
-                    <td className="px-3 py-2">{dateFmt.format(m.createdAt)}</td>
+                    <td className="px-3 py-2">{formatDate(m.createdAt)}</td>
                     <td className="px-3 py-2"><MemberRowActions vendor={vendor.slug} memberId={m.id} role={m.role} label={m.name || m.email} /></td>
                   </tr>
                 ))}

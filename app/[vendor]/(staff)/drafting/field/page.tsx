@@ -13,10 +13,10 @@ import { loadFieldSummary } from "@/lib/field/field-summary";
 import { listNeedsAttention } from "@/lib/field/needs-attention";
 import { lastFieldRefresh } from "@/lib/field/refresh-rollups";
 import { wilsonInterval } from "@/lib/field/wilson";
+import { formatDateTime } from "@/lib/ui/dates";
 
 export const metadata = { title: "Field results" };
 
-const TIME = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
 
 export default async function FieldResultsPage({ params }: { params: Promise<{ vendor: string }> }) {
   const { vendor: slug } = await params;
@@ -46,7 +46,7 @@ export default async function FieldResultsPage({ params }: { params: Promise<{ v
     <>
       <PageHeader
         title="Field results"
-        lead={<>How your published numbers fare in customers’ shops: outcome reports, setups and tickets, per sheet version. Aggregates only; no customer is named. Figures as of {refreshed ? `${TIME.format(refreshed)} UTC` : "the next refresh"}; they refresh every few minutes.</>}
+        lead={<>How your published numbers fare in customers’ shops: outcome reports, setups and tickets, per sheet version. Aggregates only; no customer is named. Figures as of {refreshed ? formatDateTime(refreshed) : "the next refresh"}; they refresh every few minutes.</>}
       />
       <DigestControls vendorSlug={slug} enabled={digestOn} />
       <dl className="mt-6 grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-6">

@@ -5,21 +5,26 @@ import { AdaptPanelMount } from "@/components/adapt/adapt-panel-mount";
 import { loadBenchVersion } from "@/components/bench/load-bench-version";
 import { readUnits } from "@/components/library/read-units";
 import { PageHeader } from "@/components/ui/page-header";
+import { readaptStart } from "@/lib/bench/readapt-start";
 
 export const metadata = { title: "Adapt a sheet" };
 
 // The adapt panel on its own page: reached from "re-adapt to the current version" on a setup.
-export default async function AdaptVersionPage({ params }: { params: Promise<{ vendor: string; versionId: string }> }) {
+type Props = { params: Promise<{ vendor: string; versionId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+export default async function AdaptVersionPage({ params, searchParams }: Props) {
   const { vendor: slug, versionId } = await params;
   const found = await loadBenchVersion(slug, versionId);
   if (!found) notFound();
-  const { vendor, context } = found;
+  const { vendor, user, context } = found;
+  const setupParam = (await searchParams).setup;
+  const start = await readaptStart({ vendorId: vendor.id, userId: user.id, setupId: typeof setupParam === "string" ? setupParam : undefined, versionId: context.versionId });
   const href = `/${vendor.slug}/library/${context.sheetSlug}/v/${context.versionNumber}`;
   return (
     <>
       <PageHeader title={`Adapt: ${context.title}`} lead={<>Version {context.versionNumber} · <Link className="underline" href={href}>read the sheet</Link></>} />
       <section id="adapt" aria-label="Adapt to your machine" className="rounded-md border border-stone-300 bg-white p-4">
-        <AdaptPanelMount vendor={vendor} versionId={context.versionId} operationIndex={0} units={await readUnits()} returnTo={`/${vendor.slug}/bench/adapt/${versionId}`} />
+        <AdaptPanelMount vendor={vendor} versionId={context.versionId} operationIndex={start?.operationIndex ?? 0} units={await readUnits()} returnTo={`/${vendor.slug}/bench/adapt/${versionId}`} start={start ?? undefined} />
       </section>
     </>
   );

@@ -58,6 +58,7 @@ export default async function DeskTicketPage({ params }: { params: Promise<{ ven
             vendor={vendor.slug}
             ticketId={ticket.id}
             versions={versions}
+            linkedVersionIds={links.map((l) => l.sheetVersionId)}
             machines={context.machines.map((m) => ({ id: m.id, name: m.name }))}
             defaultMachineId={ticket.machineId}
             defaultVersionId={links[0]?.sheetVersionId ?? null}

@@ -3,9 +3,11 @@ import { notFound } from "next/navigation";
 
 import { ActionForm } from "@/components/drafting/action-form";
 import { loadDraftingSheet } from "@/components/drafting/load-drafting-sheet";
+import { ReviewPreview } from "@/components/drafting/review-preview";
 import { StateBadge } from "@/components/drafting/state-badge";
 import { VersionTable } from "@/components/drafting/version-table";
 import { WithdrawForm } from "@/components/drafting/withdraw-form";
+import { readUnits } from "@/components/library/read-units";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
@@ -33,6 +35,9 @@ export default async function DraftingSheetPage({ params }: Props) {
   const isAuthor = draft && (draft.authorId === user?.id || draft.updatedBy === user?.id);
   const withdrawable = versions.filter((v) => v.state === "published" || v.state === "superseded").map((v) => v.number);
   const [latest, previous] = versions;
+  // The version a reviewer compares against: the newest one before the draft (drafts are numbered last).
+  const previousVersion = draft ? versions.find((v) => v.number < draft.number && v.state !== "draft" && v.state !== "in_review") ?? null : null;
+  const units = await readUnits();
   return (
     <>
       <PageHeader
@@ -56,12 +61,25 @@ export default async function DraftingSheetPage({ params }: Props) {
                 <>
                   <p className="text-sm">Change note: {draft.changeNote}</p>
                   {!draft.approvedBy && can(member?.role, "sheets.review") ? (
-                    <>
-                      {needsOther && isAuthor ? <p className="text-sm text-stone-600">Note: you wrote or last edited this version; another engineer must approve it.</p> : null}
+                    isAuthor ? (
+                      <p className="text-sm text-stone-600">You wrote or last edited this version, so another engineer reviews and approves it.</p>
+                    ) : (
                       <ActionForm action={approveDraftAction} hidden={hidden} submitLabel="Approve" />
-                    </>
+                    )
                   ) : null}
-                  {(draft.approvedBy || !needsOther) && can(member?.role, "sheets.publish") ? <ActionForm action={publishDraftAction} hidden={hidden} submitLabel={`Publish version ${draft.number}`} /> : null}
+                  {(draft.approvedBy || !needsOther) && can(member?.role, "sheets.publish") ? (
+                    <ActionForm
+                      action={publishDraftAction}
+                      hidden={hidden}
+                      submitLabel={`Publish version ${draft.number}`}
+                      confirm={{
+                        question: previousVersion
+                          ? `Publish version ${draft.number}? It replaces version ${previousVersion.number} in the Library for every customer.`
+                          : `Publish version ${draft.number}? Every customer who can see the Library can read it.`,
+                        yes: `Yes, publish version ${draft.number}`,
+                      }}
+                    />
+                  ) : null}
                   <ActionForm action={returnToDraftAction} hidden={hidden} submitLabel="Return to draft" variant="quiet" />
                 </>
               ) : null}
@@ -76,6 +94,11 @@ export default async function DraftingSheetPage({ params }: Props) {
           </section>
         ) : null}
       </div>
+      {draft?.state === "in_review" ? (
+        <div className="mb-8">
+          <ReviewPreview vendorId={vendor.id} draft={draft} previous={previousVersion} cutter={data.cutter} refs={sheet} units={units} />
+        </div>
+      ) : null}
       <h2 className="mb-2 text-lg font-semibold">Versions</h2>
       <VersionTable versions={versions} libraryHref={(n) => `/${vendor.slug}/library/${sheet.slug}/v/${n}`} />
     </>

@@ -4,6 +4,7 @@ import type { VendorAccess } from "@/lib/auth/access";
 import { requireMember } from "@/lib/auth/access";
 import { getSetup } from "@/lib/bench/list-setups";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
+import { getMachine } from "@/lib/bench/machines";
 import { setupSheetData } from "@/lib/bench/setup-sheet-data";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { appUrl } from "@/lib/http/app-url";
@@ -13,9 +14,21 @@ export async function loadSetupSheet(access: VendorAccess, setupId: string) {
   requireMember(access);
   const setup = await getSetup({ vendorId: access.vendor.id, userId: access.user.id, setupId });
   if (!setup) throw new NotFound();
-  const context = await loadAdaptContext({ vendorId: access.vendor.id, versionId: setup.sheetVersionId });
+  const [context, machine] = await Promise.all([
+    loadAdaptContext({ vendorId: access.vendor.id, versionId: setup.sheetVersionId }),
+    getMachine({ vendorId: access.vendor.id, userId: access.user.id, machineId: setup.machineId }),
+  ]);
   if (!context) throw new NotFound();
-  const data = setupSheetData({ context, operationIndex: setup.operationIndex, result: setup.result, setupName: setup.name, machineName: setup.machineName, units: setup.units });
+  const data = setupSheetData({
+    context,
+    operationIndex: setup.operationIndex,
+    result: setup.result,
+    setupName: setup.name,
+    machineName: setup.machineName,
+    units: setup.units,
+    overrides: setup.overrides,
+    machineStickoutMm: machine?.stickoutMm ?? null,
+  });
   const versionUrl = appUrl(`/${access.vendor.slug}/library/${context.sheetSlug}/v/${context.versionNumber}`);
   const fileName = `setup-${context.sheetSlug}-v${context.versionNumber}`.replace(/[^a-z0-9-]/gi, "-").slice(0, 80);
   return { data, versionUrl, fileName, vendorName: access.vendor.name };

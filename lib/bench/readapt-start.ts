@@ -1,0 +1,29 @@
+import "server-only";
+
+import type { OverrideDraft } from "./compute-adaptation";
+import { getSetup } from "./list-setups";
+import { loadAdaptContext } from "./load-adapt-context";
+
+export type AdaptStart = { machineId: string; operationIndex: number; overrides: OverrideDraft };
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const mm = (value: number | undefined) => (value === undefined ? "" : `${Number(value.toFixed(4))} mm`);
+
+/**
+ * Where "Adapt version N" starts from a saved setup: the same machine, the matching operation and the
+ * customer's own changes, so re-adapting never silently drops them. Another customer's setup is ignored.
+ */
+export async function readaptStart({ vendorId, userId, setupId, versionId }: { vendorId: string; userId: string; setupId: string | undefined; versionId: string }): Promise<AdaptStart | null> {
+  if (!setupId || !UUID.test(setupId)) return null;
+  const setup = await getSetup({ vendorId, userId, setupId });
+  if (!setup) return null;
+  const [oldContext, context] = await Promise.all([loadAdaptContext({ vendorId, versionId: setup.sheetVersionId }), loadAdaptContext({ vendorId, versionId })]);
+  if (!oldContext || !context) return null;
+  const old = oldContext.operations[setup.operationIndex];
+  const match = context.operations.find((op) => op.kind === old?.kind && op.label === old?.label) ?? context.operations[setup.operationIndex];
+  return {
+    machineId: setup.machineId,
+    operationIndex: match?.index ?? 0,
+    overrides: { ae: mm(setup.overrides.radialDepthMm), ap: mm(setup.overrides.axialDepthMm), stickout: mm(setup.overrides.stickoutMm) },
+  };
+}
