@@ -13,27 +13,28 @@ import { SheetView } from "./sheet-view";
 type Props = {
   vendorId: string;
   vendorSlug: string;
+  vendorName: string;
   data: LibrarySheet;
   units: UnitSystem;
   renderAdaptPanel?: (slot: { index: number; operation: LibrarySheet["frontMatter"]["operations"][number] }) => ReactNode;
 };
 
-type CachedProps = { vendorId: string; vendorSlug: string; slug: string; number: number; units: UnitSystem; adaptPanels: ReactNode[] };
+type CachedProps = { vendorId: string; vendorSlug: string; vendorName: string; slug: string; number: number; units: UnitSystem; adaptPanels: ReactNode[] };
 
 // Rendered once per version and unit system; the adapt panels (the reader's own machines) pass through
 // as holes, so the entry holds nothing personal.
-async function CachedSheet({ vendorId, vendorSlug, slug, number, units, adaptPanels }: CachedProps) {
+async function CachedSheet({ vendorId, vendorSlug, vendorName, slug, number, units, adaptPanels }: CachedProps) {
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
   const data = await getCachedLibrarySheet(vendorId, slug, number);
   if (!data) return null;
   cacheTag(librarySheetTag(data.sheet.id));
-  return <SheetView data={data} units={units} vendorSlug={vendorSlug} renderAdaptPanel={({ index }) => adaptPanels[index] ?? null} />;
+  return <SheetView data={data} units={units} vendorSlug={vendorSlug} vendorName={vendorName} renderAdaptPanel={({ index }) => adaptPanels[index] ?? null} />;
 }
 
 /** SheetView served from Next's cache: the page's access checks and personal parts stay per request. */
-export function CachedSheetView({ vendorId, vendorSlug, data, units, renderAdaptPanel }: Props) {
+export function CachedSheetView({ vendorId, vendorSlug, vendorName, data, units, renderAdaptPanel }: Props) {
   const adaptPanels = data.frontMatter.operations.map((operation, index) => renderAdaptPanel?.({ index, operation }) ?? null);
-  return <CachedSheet vendorId={vendorId} vendorSlug={vendorSlug} slug={data.sheet.slug} number={data.version.number} units={units} adaptPanels={adaptPanels} />;
+  return <CachedSheet vendorId={vendorId} vendorSlug={vendorSlug} vendorName={vendorName} slug={data.sheet.slug} number={data.version.number} units={units} adaptPanels={adaptPanels} />;
 }

@@ -26,9 +26,9 @@ export async function signUpCustomer(opts: { vendorId: string; vendorSlug?: stri
     }
     await trx("members").insert({ vendor_id: opts.vendorId, user_id: id, role: "customer" }).onConflict(["vendor_id", "user_id"]).ignore();
     await writeAudit({ vendorId: opts.vendorId, actorUserId: id, action: "member.sign-up", objectType: "user", objectId: id }, trx);
+    await sendVerificationMail(trx, { userId: id as string, email: opts.email, passwordHash, vendorSlug: opts.vendorSlug });
     return id as string;
   });
-  await sendVerificationMail({ userId, email: opts.email, passwordHash, vendorSlug: opts.vendorSlug });
   return { userId };
 }
 

@@ -11,7 +11,7 @@ import { acrylicContext } from "./adapt-context-fixture";
 vi.mock("next/dynamic", () => ({ default: () => () => null }));
 afterEach(cleanup);
 
-const base: Machine = { id: "m1", name: "Garage router", preset: null, rpmMin: 8000, rpmMax: 20000, powerKw: 1.5, maxFeedMmMin: 5000, rigidity: 0.55, zThrustN: null, stickoutMm: 20, units: "metric", updatedAt: "" };
+const base: Machine = { id: "m1", name: "Garage router", preset: null, rpmMin: 8000, rpmMax: 20000, powerKw: 1.5, maxFeedMmMin: 5000, rigidity: 0.55, zThrustN: null, spindleKind: "constant-torque", ratedRpm: null, stickoutMm: 20, units: "metric", updatedAt: "" };
 
 describe("adapting a newer version from a saved setup", () => {
   it("starts on the setup's machine with the customer's own changes, and the numbers use them", () => {
