@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { fillPattern, listAppRoutes, paramKeysOf } from "../support/app-routes";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
+import { BASE_URL } from "../support/env";
 import { signInWithPassword } from "../support/sign-in";
 
 // A member of vendor A (northbeck's admin, no role at quillon) probes every vendor route of the app with
@@ -101,7 +102,10 @@ describe("cross-vendor probe", () => {
     for (const route of routes.filter((r) => r.kind === "api" && !(r.pattern in PUBLIC_BY_DESIGN))) {
       const url = fillPattern(route.pattern, values);
       for (const method of route.methods) {
-        const response = await session.context.request.fetch(url, { method, data: method === "GET" ? undefined : {}, failOnStatusCode: false });
+        // With the app's own Origin, as the site's pages send it (and a script can): the probe tests tenant
+        // isolation, which the cross-site check in front of writes must not mask.
+        const headers = method === "GET" ? undefined : { origin: new URL(BASE_URL).origin };
+        const response = await session.context.request.fetch(url, { method, headers, data: method === "GET" ? undefined : {}, failOnStatusCode: false });
         if (response.status() !== 404) failures.push(`${method} ${url} → ${response.status()}`);
         const text = await response.text();
         if (/quillon/i.test(text.replace(url, ""))) failures.push(`${method} ${url} leaks data`);

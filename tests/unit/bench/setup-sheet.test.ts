@@ -30,7 +30,8 @@ describe("setup sheet data and CSV", () => {
   });
 
   it("says what the customer changed, the stick-out and the entry, and never claims nothing changed beside a changed number", () => {
-    // A machine that runs the sheet as written: the only change is the customer's own ap.
+    // A machine that runs the sheet as written: the only change is the customer's own ap. Were the trail empty,
+    // its note would say the changed numbers follow from the customer's changes.
     const strong = { minRpm: 6000, maxRpm: 30000, spindlePowerKw: 5, maxFeedMmMin: 20000, rigidity: 1 };
     const apMm = acrylicContext.operations[0].axialDepthMm / 2;
     const result = adaptOperation(acrylicContext, 0, strong, { axialDepthMm: apMm });
@@ -39,7 +40,9 @@ describe("setup sheet data and CSV", () => {
     expect(data.rows.find((r) => r.symbol === "ap")?.changed).toBe(true);
     expect(data.stickout).toBe(`${formatQuantity(18, "length", "metric")} (the machine's usual)`);
     expect(data.entryMethod).toMatch(/plunge|ramp|enter/i);
-    expect(data.steps).toEqual([]);
+    // The engine records the customer's ap as a step of its own (model 2), so the trail names the change.
+    expect(data.steps).toHaveLength(1);
+    expect(data.steps[0]).toMatch(/depth override.*You set this depth of cut/);
     expect(data.noStepsNote).toBe("No rule changed a number. The numbers marked changed follow from your changes.");
     expect(data.noStepsNote).not.toContain("runs as written");
     const csv = setupCsv(data);
