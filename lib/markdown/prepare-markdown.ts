@@ -1,21 +1,33 @@
 // Pure: bounds untrusted Markdown before the parser sees it. The Markdown parser and the renderers after it recurse
 // once per nesting level and slow down super-linearly on long runs of emphasis and bracket delimiters, so a few
-// thousand `>` or `- ` in a row overflow the stack and a few thousand `![` take seconds. Everything here is one
-// linear pass.
+// thousand `>` or `- ` in a row overflow the stack and a few thousand `![` take seconds. Block parsing also grows
+// faster than the text with the number of lines (setext underlines, lazy quote continuations, list items, headings:
+// 5,000 two-character lines took seconds), so the line count is capped as well. Everything here is one linear pass.
 
 export const MARKDOWN_LIMITS = {
   /** Longer text is shown as plain text: tickets and replies are at most 20,000 characters. */
   maxLength: 20_000,
   /** Block quotes and list items one line may open (indentation counts as one level per two columns). */
   maxLineDepth: 16,
-  /** Emphasis, strike-through, link and table delimiters in one text; more is shown as plain text. */
-  maxDelimiters: 500,
+  /** Lines in one text; more is shown as plain text (a long ticket is a few dozen lines). */
+  maxLines: 400,
+  /** Emphasis, strike-through, link, table and code-span delimiters in one text; more is shown as plain text. */
+  maxDelimiters: 200,
 } as const;
 
 export type PreparedMarkdown = { kind: "markdown"; text: string } | { kind: "plain"; text: string };
 
-const DELIMITERS = new Set(["*", "_", "~", "[", "]", "|"]);
+const DELIMITERS = new Set(["*", "_", "~", "[", "]", "|", "`"]);
 const BULLETS = new Set(["-", "*", "+"]);
+
+function countLines(text: string, stopAbove: number): number {
+  let count = 1;
+  for (let i = 0; i < text.length && count <= stopAbove; i++) {
+    const c = text[i];
+    if (c === "\n" || (c === "\r" && text[i + 1] !== "\n")) count++;
+  }
+  return count;
+}
 
 function countDelimiters(text: string, stopAbove: number): number {
   let count = 0;
@@ -93,11 +105,12 @@ function limitLineDepth(line: string, maxDepth: number): string {
 }
 
 /**
- * Makes untrusted Markdown safe to parse in bounded time: too long or too many delimiters → plain text;
+ * Makes untrusted Markdown safe to parse in bounded time: too long, too many lines or too many delimiters → plain text;
  * lines nested deeper than the limit → flattened.
  */
 export function prepareMarkdown(source: string, limits: typeof MARKDOWN_LIMITS = MARKDOWN_LIMITS): PreparedMarkdown {
   if (source.length > limits.maxLength) return { kind: "plain", text: source };
+  if (countLines(source, limits.maxLines) > limits.maxLines) return { kind: "plain", text: source };
   if (countDelimiters(source, limits.maxDelimiters) > limits.maxDelimiters) return { kind: "plain", text: source };
   const lines = source.split(/\r\n|\r|\n/);
   return { kind: "markdown", text: lines.map((line) => limitLineDepth(line, limits.maxLineDepth)).join("\n") };

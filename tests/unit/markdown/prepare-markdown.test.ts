@@ -36,6 +36,44 @@ describe("prepareMarkdown", () => {
     expect(prepareMarkdown("x".repeat(MARKDOWN_LIMITS.maxLength)).kind).toBe("markdown");
   });
 
+  it("falls back to plain text past the line limit, counting every kind of line break", () => {
+    for (const br of ["\n", "\r\n", "\r"]) {
+      expect(prepareMarkdown(Array(MARKDOWN_LIMITS.maxLines).fill("a").join(br)).kind).toBe("markdown");
+      expect(prepareMarkdown(Array(MARKDOWN_LIMITS.maxLines + 1).fill("a").join(br)).kind).toBe("plain");
+    }
+    expect(prepareMarkdown("a\n=\n".repeat(4_999)).kind).toBe("plain");
+    expect(prepareMarkdown(`> a\n${"b\n".repeat(9_996)}`).kind).toBe("plain");
+  });
+
+  it("counts code-span backticks as delimiters", () => {
+    expect(prepareMarkdown("`a ``b ".repeat(2_856)).kind).toBe("plain");
+  });
+
+  it("keeps an ordinary ticket formatted", () => {
+    const ticket = [
+      "# Chatter on the 6 mm end mill",
+      "",
+      "Setup **B2**, see [the sheet](https://example.com/sheet) and `fz = 0.04`.",
+      "",
+      "- slotting at ap = 6",
+      "- profiling at ae = 1.5",
+      "",
+      "1. first pass",
+      "2. second pass",
+      "",
+      "```",
+      "G1 X10 F800",
+      "```",
+      "",
+      "| n | vf |",
+      "|---|----|",
+      "| 18000 | 1440 |",
+      "",
+      "> quoted from the last reply",
+    ].join("\n");
+    expect(prepareMarkdown(ticket)).toEqual({ kind: "markdown", text: ticket });
+  });
+
   it("does not treat U+2028 or U+2029 as line breaks", () => {
     expect(prepareMarkdown("# a\u2028b")).toEqual({ kind: "markdown", text: "# a\u2028b" });
   });
