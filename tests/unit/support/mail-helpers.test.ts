@@ -2,7 +2,7 @@ import { createHmac } from "node:crypto";
 
 import { afterEach, describe, expect, it } from "vitest";
 
-import { failedAuthentication } from "@/lib/inbound-mail/authentication-results";
+import { failedAuthentication, senderAuthenticated } from "@/lib/inbound-mail/authentication-results";
 import { replyAddress, verifyReplyAddress } from "@/lib/inbound-mail/reply-address";
 import { stripQuotedText } from "@/lib/inbound-mail/strip-quoted";
 
@@ -66,5 +66,25 @@ describe("stripQuotedText", () => {
   });
   it("handles an attribution wrapped over two lines", () => {
     expect(stripQuotedText("Yes\n\nOn Tue, 1 Dec 2026, Support <s@x>\nwrote:\n> q")).toBe("Yes");
+  });
+});
+
+describe("senderAuthenticated", () => {
+  const from = "buyer@shop.example.test";
+  it("accepts a DKIM pass aligned with the From domain or a DMARC pass for it, from the receiving server only", () => {
+    expect(senderAuthenticated([" mx.test; dkim=pass header.d=shop.example.test"], from, "")).toBe(true);
+    expect(senderAuthenticated([" mx.test; dkim=pass (good) header.d=example.test header.s=s1"], from, "")).toBe(true);
+    expect(senderAuthenticated([" mx.test; dkim=pass header.i=@shop.example.test"], from, "")).toBe(true);
+    expect(senderAuthenticated([" mx.test; dmarc=pass header.from=shop.example.test"], from, "")).toBe(true);
+    expect(senderAuthenticated([" mx.test; dkim=pass header.d=other.test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" mx.test; dkim=pass header.d=test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" mx.test; spf=pass smtp.mailfrom=shop.example.test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" mx.test; dkim=fail header.d=shop.example.test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" mx.test; spf=pass (dkim=pass header.d=shop.example.test)"], from, "")).toBe(false);
+    expect(senderAuthenticated([], from, "")).toBe(false);
+    // Only the topmost header is the receiving server's, unless its authserv-id is configured.
+    expect(senderAuthenticated([" mx.test; dkim=none", " mx.test; dkim=pass header.d=shop.example.test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" forged.test; dkim=pass header.d=shop.example.test"], from, "mx.swarfbook.test")).toBe(false);
+    expect(senderAuthenticated([" other; dkim=none", " mx.swarfbook.test; dmarc=pass"], from, "mx.swarfbook.test")).toBe(true);
   });
 });
