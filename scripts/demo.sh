@@ -17,6 +17,8 @@ if [ -z "${NEXTAUTH_SECRET:-}" ]; then
   export NEXTAUTH_SECRET
 fi
 export SMTP_HOST=${SMTP_HOST:-127.0.0.1} SMTP_PORT=${SMTP_PORT:-1025}
+# Replies typed into the local mail catcher carry no Authentication-Results header.
+export INBOUND_MAIL_REQUIRE_AUTH=${INBOUND_MAIL_REQUIRE_AUTH:-off}
 
 pids=()
 trap 'for pid in "${pids[@]}"; do kill "$pid" 2>/dev/null || true; done; bash scripts/pg.sh stop' EXIT

@@ -18,6 +18,11 @@ export function newTokenSecret(): string {
 
 /** The user behind a personal access token, only if the token belongs to this vendor. */
 export async function userForApiToken(token: string, vendorId: string): Promise<SessionUser | null> {
+  return (await apiTokenOwner(token, vendorId))?.user ?? null;
+}
+
+/** The token's id (for its rate-limit bucket) and its user, only if the token is valid for this vendor. */
+export async function apiTokenOwner(token: string, vendorId: string): Promise<{ tokenId: string; user: SessionUser } | null> {
   if (!token.startsWith(TOKEN_PREFIX) || token.length > 100) return null;
   // The token works only during the membership it was made in: removing the member ends it, and rejoining
   // (a new membership row, created after the token) does not bring it back.
@@ -32,5 +37,5 @@ export async function userForApiToken(token: string, vendorId: string): Promise<
     );
   if (!row) return null;
   await db("api_tokens").where({ id: row.token_id }).update({ last_used_at: db.fn.now() });
-  return { id: row.id, email: row.email, name: row.name, isOperator: row.is_operator };
+  return { tokenId: row.token_id, user: { id: row.id, email: row.email, name: row.name, isOperator: row.is_operator } };
 }

@@ -14,6 +14,7 @@ import { refundRateLimit } from "@/lib/rate-limit/refund-rate-limit";
 
 import { credentialsSchema } from "./auth-schemas";
 import { knexAdapter } from "./knex-adapter";
+import { isKnownSignInAddress, rememberSignInAddress } from "./known-sign-in-addresses";
 import { verifyPassword } from "./passwords";
 
 const WINDOW = 15 * 60;
@@ -22,19 +23,22 @@ export const SIGN_IN_LIMITS = {
   perAccountAndIp: { limit: 8, windowSeconds: WINDOW },
   /** Attempts from one address over all accounts. */
   perIp: { limit: 40, windowSeconds: WINDOW },
-  /** Past this many attempts on one account from all addresses, password attempts on it are only slowed. */
+  /**
+   * Past this many attempts on one account from all addresses, password attempts on it are only slowed, except
+   * from an address that has signed in to the account before (so guesses from elsewhere cannot slow the owner).
+   */
   perAccountCeiling: { limit: 30, windowSeconds: WINDOW },
   slowed: { limit: 1, windowSeconds: 10 },
 };
 
-async function countAttempt(keys: { ip: string; accountIp: string; account: string; slow: string }) {
+async function countAttempt(keys: { ip: string; accountIp: string; account: string; slow: string }, known: () => Promise<boolean>) {
   try {
     // Counted before the password is checked, in one atomic statement each: a burst of parallel guesses cannot
     // all pass a check made before any of them was counted.
     await consumeRateLimit({ key: keys.ip, ...SIGN_IN_LIMITS.perIp });
     await consumeRateLimit({ key: keys.accountIp, ...SIGN_IN_LIMITS.perAccountAndIp });
     const accountHits = await consumeRateLimit({ key: keys.account, limit: Number.MAX_SAFE_INTEGER, windowSeconds: WINDOW });
-    if (accountHits > SIGN_IN_LIMITS.perAccountCeiling.limit) await consumeRateLimit({ key: keys.slow, ...SIGN_IN_LIMITS.slowed });
+    if (accountHits > SIGN_IN_LIMITS.perAccountCeiling.limit && !(await known())) await consumeRateLimit({ key: keys.slow, ...SIGN_IN_LIMITS.slowed });
   } catch (error) {
     if (error instanceof RateLimited) throw new Error("rate_limited");
     throw error;
@@ -47,7 +51,7 @@ export async function authorizePassword(raw: unknown, headers: Record<string, st
   const { email, password } = parsed.data;
   const ip = clientIp(headers);
   const keys = { ip: `sign-in:ip:${ip}`, accountIp: `sign-in:account-ip:${email}:${ip}`, account: `sign-in:account:${email}`, slow: `sign-in:slow:${email}` };
-  await countAttempt(keys);
+  await countAttempt(keys, () => isKnownSignInAddress(email, ip));
   const user = await db("users")
     .where({ email })
     .first<{ id: string; email: string; name: string; password_hash: string | null; email_verified: Date | null } | undefined>();
@@ -58,6 +62,7 @@ export async function authorizePassword(raw: unknown, headers: Record<string, st
   await Promise.all([refundRateLimit(keys.ip), refundRateLimit(keys.account), resetRateLimit(keys.accountIp)]);
   // Told only to someone who knows the password: the address must be proven before the password works.
   if (!user.email_verified) throw new Error("email_unverified");
+  await rememberSignInAddress(email, ip);
   return { id: user.id, email: user.email, name: user.name };
 }
 
@@ -92,16 +97,19 @@ export const authOptions: NextAuthOptions = {
       // Magic links only for existing accounts: new people sign up or accept an invitation.
       const email = (user.email ?? "").toLowerCase();
       // Count link requests (not the click that uses one). Per address and account, with a looser per-account
-      // ceiling against mail floods, so one stranger cannot use up the owner's links.
+      // ceiling against mail floods, so one stranger cannot use up the owner's links (the ceiling does not apply to
+      // an address the owner has signed in from before).
+      const ip = clientIp(await headers());
       if (emailInfo?.verificationRequest) {
-        const ip = clientIp(await headers());
         await consumeRateLimit({ key: `magic-link:${email}:${ip}`, limit: 5, windowSeconds: 15 * 60 })
-          .then(() => consumeRateLimit({ key: `magic-link:${email}`, limit: 20, windowSeconds: 60 * 60 }))
+          .then(async () => ((await isKnownSignInAddress(email, ip)) ? 0 : consumeRateLimit({ key: `magic-link:${email}`, limit: 20, windowSeconds: 60 * 60 })))
           .catch(() => {
             throw new Error("rate_limited");
           });
       }
-      return Boolean(await db("users").where({ email }).first("id"));
+      const exists = Boolean(await db("users").where({ email }).first("id"));
+      if (exists && !emailInfo?.verificationRequest) await rememberSignInAddress(email, ip);
+      return exists;
     },
     async jwt({ token, user }) {
       if (user) {

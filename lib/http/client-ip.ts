@@ -9,6 +9,20 @@ const normalise = (address: string) => {
   return a.toLowerCase().startsWith("::ffff:") && isIP(a.slice(7)) === 4 ? a.slice(7) : a;
 };
 
+/**
+ * One household or data-centre host gets a whole IPv6 /64, so a limit keyed by the full address would give it
+ * billions of fresh buckets: an IPv6 client is keyed by its /64 ("2001:db8:1:2::/64"), in canonical form.
+ */
+function rateLimitKeyOf(address: string): string {
+  if (isIP(address) !== 6) return address;
+  const [head, tail = ""] = address.toLowerCase().split("%")[0].split("::");
+  const groups = (part: string) => (part ? part.split(":").flatMap((g) => (g.includes(".") ? ["0", "0"] : [g])) : []);
+  const left = groups(head);
+  const right = address.includes("::") ? groups(tail) : [];
+  const full = [...left, ...Array(Math.max(0, 8 - left.length - right.length)).fill("0"), ...right];
+  return `${full.slice(0, 4).map((g) => g.replace(/^0+(?=.)/, "")).join(":")}::/64`;
+}
+
 let cached: { source: string; list: BlockList } | null = null;
 
 /** TRUSTED_PROXIES: comma-separated addresses or CIDR ranges of the proxies in front of the app (none by default). */
@@ -37,7 +51,8 @@ const isTrusted = (list: BlockList, address: string) => {
 /**
  * The client's address for rate limits. The hops are the X-Forwarded-For entries followed by the TCP peer;
  * counted from the right, an address is skipped only while it is a trusted proxy, so a client can prepend
- * whatever it likes without changing the answer. With no trusted proxies the TCP peer is the client.
+ * whatever it likes without changing the answer. With no trusted proxies the TCP peer is the client. IPv4 and
+ * IPv4-mapped IPv6 answer the IPv4 address; other IPv6 addresses answer their /64.
  */
 export function clientIp(headers: HeaderSource, trusted: BlockList = trustedProxies()): string {
   const get = (name: string): string | undefined => {
@@ -55,5 +70,5 @@ export function clientIp(headers: HeaderSource, trusted: BlockList = trustedProx
   const chain = hops.map(normalise).filter(Boolean);
   let client = chain.pop();
   while (client && isTrusted(trusted, client) && chain.length) client = chain.pop();
-  return (client ?? "local").slice(0, 64);
+  return rateLimitKeyOf(client ?? "local").slice(0, 64);
 }

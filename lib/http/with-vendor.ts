@@ -3,7 +3,7 @@ import "server-only";
 import type { NextRequest } from "next/server";
 
 import { resolveVendorAccess, type VendorAccess } from "@/lib/auth/access";
-import { userForApiToken } from "@/lib/auth/api-tokens";
+import { apiTokenOwner } from "@/lib/auth/api-tokens";
 import type { Permission } from "@/lib/auth/permissions";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { pinCookieHeader } from "@/lib/db/read-db";
@@ -42,17 +42,24 @@ export function withVendor<P extends Params & { vendor: string }>(handler: Vendo
     try {
       const params = await ctx.params;
       const bearer = request.headers.get("authorization")?.match(/^Bearer\s+(\S+)$/i)?.[1];
-      const who = bearer ? bearer.slice(0, 12) : clientIp(request.headers);
       // A route with its own limit counts in its own bucket; the rest share the general one.
       const scope = options.rateLimit ? request.nextUrl.pathname : "all";
-      await consumeRateLimit({ key: `api:${scope}:${who}`, ...scaled(options.rateLimit ?? DEFAULT_RATE) });
+      const rate = scaled(options.rateLimit ?? DEFAULT_RATE);
+      const byAddress = () => consumeRateLimit({ key: `api:${scope}:${clientIp(request.headers)}`, ...rate });
       let user = null;
       if (bearer) {
+        // The token is checked before it may choose a bucket: an unchecked one would give a caller a fresh
+        // bucket per made-up token. A token that does not verify is limited by the client's address.
         const vendor = await getVendorBySlug(params.vendor);
-        if (!vendor) throw new NotFound();
-        user = await userForApiToken(bearer, vendor.id);
-        if (!user) throw new NotFound();
+        const owner = vendor ? await apiTokenOwner(bearer, vendor.id) : null;
+        if (!owner) {
+          await byAddress();
+          throw new NotFound();
+        }
+        await consumeRateLimit({ key: `api:${scope}:token:${owner.tokenId}`, ...rate });
+        user = owner.user;
       } else {
+        await byAddress();
         user = await getSessionUser();
       }
       const access = await resolveVendorAccess(params.vendor, user, options.permission);

@@ -10,7 +10,7 @@ import { DomainError } from "@/lib/errors/domain-errors";
 import { addCustomerMessage, addStaffMessage } from "@/lib/tickets/add-message";
 import { saveAttachment } from "@/lib/tickets/attachments/save-attachment";
 
-import { failedAuthentication } from "./authentication-results";
+import { failedAuthentication, inboundAuthRequired, senderAuthenticated } from "./authentication-results";
 import { verifyReplyAddress } from "./reply-address";
 import { stripQuotedText } from "./strip-quoted";
 
@@ -79,13 +79,17 @@ const postedWithKey = async (ticketId: string, key: string) =>
 /**
  * A reply is attributed only to the person its signed address was mailed to. A From that is not that person's
  * address is refused (a forwarded notification does not let its new reader post as the recipient), as is mail
- * whose receiving server recorded a failed SPF, DKIM or DMARC check.
+ * whose receiving server recorded a failed SPF, DKIM or DMARC check, or (INBOUND_MAIL_REQUIRE_AUTH) did not
+ * record a pass that vouches for the From domain.
  */
 async function handleOne(to: string, mail: InboundMail): Promise<InboundOutcome> {
   const target = verifyReplyAddress(to);
   if (!target) return { outcome: "dropped", reason: "unsigned or forged reply address" };
   const failed = failedAuthentication(mail.authenticationResults ?? []);
   if (failed) return { outcome: "dropped", reason: `receiving server reports ${failed}`, ticketId: target.ticketId };
+  if (inboundAuthRequired() && !senderAuthenticated(mail.authenticationResults ?? [], mail.from)) {
+    return { outcome: "dropped", reason: "receiving server does not vouch for the From domain (no aligned DKIM or DMARC pass)", ticketId: target.ticketId };
+  }
   const recipient = await currentRecipient(target.ticketId, target.userId);
   if (typeof recipient === "string") return { outcome: "dropped", reason: recipient, ticketId: target.ticketId };
   const base = { vendorId: recipient.vendorId, ticketId: recipient.ticketId };

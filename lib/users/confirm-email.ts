@@ -2,10 +2,15 @@ import "server-only";
 
 import { peekVerificationUser, readVerificationToken } from "@/lib/auth/email-verification-token";
 import { db } from "@/lib/db/knex";
+import { verifyPassword } from "@/lib/auth/passwords";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 
-/** Marks the address of a signed confirmation link as proven; confirming twice is harmless. */
-export async function confirmEmail({ token }: { token: string }): Promise<{ userId: string; email: string }> {
+/**
+ * Marks the address of a signed confirmation link as proven; confirming twice is harmless. The person must also
+ * type the password chosen at sign-up: otherwise someone who signed up with another person's address could have
+ * that person confirm the squatter's password by clicking the mailed link.
+ */
+export async function confirmEmail({ token, password }: { token: string; password: string }): Promise<{ userId: string; email: string }> {
   const invalid = new InvalidInput("This confirmation link is not valid or has expired. Sign in to have a new one sent.");
   const candidate = peekVerificationUser(token);
   if (!candidate) throw invalid;
@@ -14,6 +19,10 @@ export async function confirmEmail({ token }: { token: string }): Promise<{ user
     .first<{ id: string; email: string; password_hash: string | null } | undefined>("id", "email", "password_hash");
   const userId = readVerificationToken(token, (id) => (user && user.id === id ? { email: user.email, passwordHash: user.password_hash } : undefined));
   if (!user || !userId) throw invalid;
+  if (!(await verifyPassword(user.password_hash, password))) {
+    const wrong = "That is not the password this account was created with. If you did not create it, do not confirm.";
+    throw new InvalidInput(wrong, { password: [wrong] });
+  }
   // The password must still be the one the link was mailed for (checked in the same statement).
   await db("users")
     .where({ id: userId })

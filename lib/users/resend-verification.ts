@@ -10,13 +10,18 @@ export const RESEND_LIMITS = {
   perIp: { limit: 10, windowSeconds: 60 * 60 },
 };
 
+/** Confirmation mails to one address, whether sent by sign-up or by "send it again", share this budget. */
+export function consumeAccountMailLimit(email: string): Promise<number> {
+  return consumeRateLimit({ key: `verify-resend:account:${email}`, ...RESEND_LIMITS.perAccount });
+}
+
 /**
  * Mails a new confirmation link to an unconfirmed password account. The caller answers the same whatever
  * happened, so this does not reveal which addresses have accounts. Throws RateLimited past the limits.
  */
 export async function resendVerification(opts: { email: string; ip: string; vendorSlug?: string }): Promise<void> {
   await consumeRateLimit({ key: `verify-resend:ip:${opts.ip}`, ...RESEND_LIMITS.perIp });
-  await consumeRateLimit({ key: `verify-resend:account:${opts.email}`, ...RESEND_LIMITS.perAccount });
+  await consumeAccountMailLimit(opts.email);
   const user = await db("users")
     .where({ email: opts.email })
     .whereNull("email_verified")

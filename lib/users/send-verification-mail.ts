@@ -17,8 +17,9 @@ export async function sendVerificationMail(trx: Knex | Knex.Transaction, opts: {
     to: opts.email,
     subject: "Confirm your e-mail for Swarfbook",
     text:
-      `Someone created a Swarfbook account with this address. If it was you, confirm it with this link ` +
-      `(valid for ${VERIFICATION_HOURS} hours):\n\n${link}\n\n` +
-      `If you did not create it, do not open the link: without it the account cannot be used.`,
+      `Someone created a Swarfbook account with this address. If it was you, open this link and confirm with ` +
+      `the password you chose (valid for ${VERIFICATION_HOURS} hours):\n\n${link}\n\n` +
+      `If you did not create it yourself, do not confirm, even if someone asks you to: without confirmation ` +
+      `the account cannot be used.`,
   });
 }

@@ -5,15 +5,19 @@ import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { Conflict } from "@/lib/errors/domain-errors";
 
+import { consumeAccountMailLimit } from "./resend-verification";
 import { sendVerificationMail } from "./send-verification-mail";
 
 /**
  * Customer self sign-up on a vendor's portal. The password signs in only after the e-mailed link proves the
  * address, so nobody can hold an account in someone else's name. A confirmed account (a customer of another
  * vendor) is not taken over: that person signs in first and joins from the vendor's page. An unconfirmed one
- * never proved its address, so signing up again replaces its pending password and mails a new link.
+ * never proved its address, so signing up again replaces its pending password and mails a new link. Every
+ * sign-up mails the address, so it counts against the same per-address limit as "send the link again"
+ * (otherwise repeated sign-ups from many client addresses would mail anyone without end).
  */
 export async function signUpCustomer(opts: { vendorId: string; vendorSlug?: string; name: string; email: string; password: string }) {
+  await consumeAccountMailLimit(opts.email);
   const passwordHash = await hashPassword(opts.password);
   const userId = await db.transaction(async (trx) => {
     const existing = await trx("users").where({ email: opts.email }).forUpdate().first<{ id: string; email_verified: Date | null } | undefined>("id", "email_verified");

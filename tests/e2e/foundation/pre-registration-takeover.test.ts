@@ -90,6 +90,7 @@ describe("an account registered in advance with an invitee's address", () => {
     await expect(person.page.getByRole("status").textContent({ timeout: 15_000 })).resolves.toContain("we sent a link");
     const confirm = await waitForMail(email, /Confirm your e-mail/, { after: started - 1000 });
     await person.page.goto(firstLink(confirm.text, /\/verify-email\?/));
+    await person.page.getByLabel("Password").fill("existing-person-pw");
     await person.page.getByRole("button", { name: "Confirm my e-mail" }).click();
     await expect(person.page.getByRole("status").textContent({ timeout: 15_000 })).resolves.toContain("confirmed");
 

@@ -50,6 +50,22 @@ describe("password sign-in", () => {
     await expect(authorizePassword({ email: user.email, password: FACTORY_PASSWORD }, headersFrom("10.5.250.1"))).resolves.toMatchObject({ id: user.id });
   });
 
+  it("guesses from many addresses do not slow the owner at an address they have signed in from before", async () => {
+    const user = await createUser();
+    const home = "10.3.77.1";
+    await expect(authorizePassword({ email: user.email, password: FACTORY_PASSWORD }, headersFrom(home))).resolves.toMatchObject({ id: user.id });
+    const { limit } = SIGN_IN_LIMITS.perAccountCeiling;
+    for (let i = 0; i < limit + 3; i++) await outcome(authorizePassword({ email: user.email, password: "nope-nope" }, headersFrom(`10.3.${i}.9`)));
+    // The attacker keeps the slow window busy; the owner's known address is not held by it…
+    await outcome(authorizePassword({ email: user.email, password: "nope-nope" }, headersFrom("10.3.200.9")));
+    for (let i = 0; i < 3; i++) {
+      await expect(authorizePassword({ email: user.email, password: FACTORY_PASSWORD }, headersFrom(home))).resolves.toMatchObject({ id: user.id });
+    }
+    // …while a new address still is.
+    const fresh = await Promise.all(Array.from({ length: 3 }, (_, i) => outcome(authorizePassword({ email: user.email, password: "nope-nope" }, headersFrom(`10.3.201.${i}`)))));
+    expect(fresh.filter((o) => o === "rate_limited").length).toBeGreaterThanOrEqual(2);
+  });
+
   it("rate-limits attempts per address across accounts", async () => {
     const ip = "10.7.0.1";
     for (let i = 0; i < SIGN_IN_LIMITS.perIp.limit; i++) {

@@ -35,7 +35,7 @@ describe("e-mail confirmation for password accounts", () => {
     await expect(authorizePassword({ email, password: "a-long-password" }, ip(1))).rejects.toThrow("email_unverified");
     // A wrong password says nothing about confirmation.
     await expect(authorizePassword({ email, password: "wrong-password" }, ip(1))).resolves.toBeNull();
-    await confirmEmail({ token: await linkMailedTo(email) });
+    await confirmEmail({ token: await linkMailedTo(email), password: "a-long-password" });
     await expect(authorizePassword({ email, password: "a-long-password" }, ip(1))).resolves.toMatchObject({ email });
   });
 
@@ -44,13 +44,13 @@ describe("e-mail confirmation for password accounts", () => {
     const email = `${uniq("cust")}@example.test`;
     const { userId } = await signUpCustomer({ vendorId: v.vendor.id, name: "A", email, password: "first-password-1" });
     const first = await linkMailedTo(email);
-    await expect(confirmEmail({ token: first.slice(0, -2) + "xx" })).rejects.toThrow("not valid");
+    await expect(confirmEmail({ token: first.slice(0, -2) + "xx", password: "first-password-1" })).rejects.toThrow("not valid");
     const user = await db("users").where({ id: userId }).first("password_hash");
     const expired = createVerificationToken({ userId, email, passwordHash: user.password_hash, now: Date.now() - 49 * 3_600_000 });
-    await expect(confirmEmail({ token: expired })).rejects.toThrow("not valid");
+    await expect(confirmEmail({ token: expired, password: "first-password-1" })).rejects.toThrow("not valid");
     // Someone signs up again with the address: the first link no longer confirms (it was for another password).
     await signUpCustomer({ vendorId: v.vendor.id, name: "B", email, password: "second-password-1" });
-    await expect(confirmEmail({ token: first })).rejects.toThrow("not valid");
+    await expect(confirmEmail({ token: first, password: "first-password-1" })).rejects.toThrow("not valid");
     expect((await db("users").where({ id: userId }).first("email_verified")).email_verified).toBeNull();
   });
 
@@ -59,12 +59,23 @@ describe("e-mail confirmation for password accounts", () => {
     const email = `${uniq("cust")}@example.test`;
     await signUpCustomer({ vendorId: v.vendor.id, name: "A", email, password: "a-long-password" });
     const count = async () => Number((await db("pgboss.job").where({ name: "mail.send" }).whereRaw("data->>'to' = ?", [email]).count("* as n"))[0].n);
-    for (let i = 1; i < RESEND_LIMITS.perAccount.limit + 1; i++) await resendVerification({ email, ip: "10.45.0.1" });
-    expect(await count()).toBe(RESEND_LIMITS.perAccount.limit + 1);
+    // The sign-up's own mail counts against the same per-address budget.
+    for (let i = 1; i < RESEND_LIMITS.perAccount.limit; i++) await resendVerification({ email, ip: "10.45.0.1" });
+    expect(await count()).toBe(RESEND_LIMITS.perAccount.limit);
     await expect(resendVerification({ email, ip: "10.45.0.2" })).rejects.toThrow("Too many");
     const confirmed = await createUser();
     await resendVerification({ email: confirmed.email, ip: "10.45.0.3" });
     expect(await db("pgboss.job").where({ name: "mail.send" }).whereRaw("data->>'to' = ?", [confirmed.email]).first()).toBeUndefined();
+  });
+
+  it("signing up again and again with an unconfirmed address does not mail it without end", async () => {
+    const v = await createVendorWithStaff();
+    const email = `victim-${uniq("x")}@example.test`;
+    for (let i = 0; i < RESEND_LIMITS.perAccount.limit; i++) await signUpCustomer({ vendorId: v.vendor.id, name: "Spam", email, password: `spam-password-${i}` });
+    await expect(signUpCustomer({ vendorId: v.vendor.id, name: "Spam", email, password: "spam-password-x" })).rejects.toThrow("Too many");
+    await expect(resendVerification({ email, ip: "10.45.0.9" })).rejects.toThrow("Too many");
+    const mails = await db("pgboss.job").where({ name: "mail.send" }).whereRaw("data->>'to' = ?", [email]).count("* as n");
+    expect(Number(mails[0].n)).toBe(RESEND_LIMITS.perAccount.limit);
   });
 
   it("a magic link proves the address but drops a password that was never confirmed", async () => {
@@ -99,7 +110,24 @@ describe("pre-registration takeover of an invited account", () => {
     // 6. The attacker's password never works.
     await expect(authorizePassword({ email, password: ATTACKER_PASSWORD }, ip(5))).resolves.toBeNull();
     // …and the link the attacker could have had mailed does not confirm anything any more.
-    await expect(confirmEmail({ token: await linkMailedTo(email) })).rejects.toThrow("not valid");
+    await expect(confirmEmail({ token: await linkMailedTo(email), password: ATTACKER_PASSWORD })).rejects.toThrow("not valid");
+  });
+
+  it("the invitee clicking the squatter's confirmation link does not confirm the squatter's password", async () => {
+    const v = await createVendorWithStaff();
+    const email = `newhire-${uniq("x")}@example.test`;
+    await signUpCustomer({ vendorId: v.vendor.id, name: "Not the new hire", email, password: ATTACKER_PASSWORD });
+    // The invitee receives "Confirm your e-mail" and tries to confirm; they do not know the squatter's password.
+    const link = await linkMailedTo(email);
+    await expect(confirmEmail({ token: link, password: "the-real-password" })).rejects.toThrow("not the password");
+    await expect(confirmEmail({ token: link, password: "" })).rejects.toThrow("not the password");
+    expect((await db("users").where({ email }).first("email_verified")).email_verified).toBeNull();
+    // The invitee accepts the admin invitation; the squatter's password still does not sign in.
+    const { token } = await inviteMember({ vendorId: v.vendor.id, vendorSlug: v.vendor.slug, vendorName: v.vendor.name, actorUserId: v.admin.user.id, email, role: "admin" });
+    await acceptInvitation({ vendorId: v.vendor.id, token, name: "Real New Hire", password: "the-real-password", sessionUserId: null });
+    expect(await roleOf(v.vendor.id, email)).toBe("admin");
+    await expect(authorizePassword({ email, password: ATTACKER_PASSWORD }, ip(9))).resolves.toBeNull();
+    await expect(authorizePassword({ email, password: "the-real-password" }, ip(9))).resolves.toMatchObject({ email });
   });
 
   it("the operator's first-admin invitation is protected the same way", async () => {

@@ -18,10 +18,13 @@ const port = 2600 + Math.floor(Math.random() * 300);
 let server: SMTPServer;
 
 beforeAll(async () => {
+  // These mails carry no Authentication-Results header; the requirement itself is tested at the end.
+  process.env.INBOUND_MAIL_REQUIRE_AUTH = "off";
   process.env.STORAGE_DIR = await mkdtemp(path.join(os.tmpdir(), "sbk-inbound-"));
   server = await startInboundSmtp({ port });
 });
 afterAll(async () => {
+  delete process.env.INBOUND_MAIL_REQUIRE_AUTH;
   await new Promise<void>((resolve) => server.close(() => resolve()));
 });
 
@@ -177,5 +180,33 @@ describe("reply by e-mail: the address is bound to its recipient", () => {
       await db.raw("drop trigger refuse_message on ticket_messages");
     }
     expect((await thread(vendor.id, ticket.id)).messages.map((m) => m.body)).toEqual(["Stored despite the log"]);
+  });
+});
+
+describe("reply by e-mail with INBOUND_MAIL_REQUIRE_AUTH on", () => {
+  it("a forged From is refused unless the receiving server vouches for the From domain", async () => {
+    const { vendor, customer } = await createVendorWithStaff();
+    const ticket = await openTicket(vendor.id, customer.user.id);
+    const to = replyAddress({ ticketId: ticket.id, userId: customer.user.id });
+    const domain = customer.user.email.split("@")[1];
+    process.env.INBOUND_MAIL_REQUIRE_AUTH = "on";
+    try {
+      // No header, no verdict, or a pass for another domain: the From header alone is anyone's to write.
+      const refused = [[], [" mx.test; spf=pass; dkim=none"], [` mx.test; dkim=pass header.d=attacker.test`], [` mx.test; dmarc=pass header.from=attacker.test`]];
+      for (const authenticationResults of refused) {
+        const [result] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Forged", authenticationResults });
+        expect(result).toMatchObject({ outcome: "dropped" });
+      }
+      // A sender's own pass written below the receiving server's header is not believed.
+      const [below] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Forged", authenticationResults: [" mx.test; dkim=none", ` mx.test; dkim=pass header.d=${domain}`] });
+      expect(below).toMatchObject({ outcome: "dropped" });
+      const [dkim] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Signed", messageId: "<a@signed>", authenticationResults: [` mx.test; spf=pass; dkim=pass header.d=${domain}`] });
+      expect(dkim).toMatchObject({ outcome: "accepted" });
+      const [dmarc] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Aligned", messageId: "<b@signed>", authenticationResults: [` mx.test; dmarc=pass header.from=${domain}`] });
+      expect(dmarc).toMatchObject({ outcome: "accepted" });
+      expect((await thread(vendor.id, ticket.id)).messages.map((m) => m.body)).not.toContain("Forged");
+    } finally {
+      process.env.INBOUND_MAIL_REQUIRE_AUTH = "off";
+    }
   });
 });

@@ -46,6 +46,18 @@ describe("clientIp", () => {
     }
   });
 
+  it("keys an IPv6 client by its /64, so one host cannot rotate through its addresses", () => {
+    const none = trustedProxies("");
+    expect(clientIp(stamped("2001:db8:1:2::1"), none)).toBe("2001:db8:1:2::/64");
+    expect(clientIp(stamped("2001:0DB8:0001:0002:ffff:1:2:3"), none)).toBe("2001:db8:1:2::/64");
+    expect(clientIp(stamped("2001:db8:1:2:abcd::9"), none)).toBe("2001:db8:1:2::/64");
+    expect(clientIp(stamped("2001:db8::1"), none)).toBe("2001:db8:0:0::/64");
+    expect(clientIp(stamped("::1"), none)).toBe("0:0:0:0::/64");
+    expect(clientIp(stamped("2001:db8:1:3::1"), none)).not.toBe(clientIp(stamped("2001:db8:1:2::1"), none));
+    expect(clientIp(stamped("::ffff:198.51.100.4"), none)).toBe("198.51.100.4");
+    expect(clientIp(stamped("198.51.100.4"), none)).toBe("198.51.100.4");
+  });
+
   it("refuses a malformed TRUSTED_PROXIES entry with a clear message", () => {
     expect(() => trustedProxies("127.0.0.1, proxy.internal")).toThrow('TRUSTED_PROXIES: "proxy.internal" is not an IP address or CIDR range.');
     expect(() => trustedProxies("10.0.0.0/8/1")).toThrow("TRUSTED_PROXIES");

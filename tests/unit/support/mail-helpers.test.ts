@@ -2,7 +2,7 @@ import { createHmac } from "node:crypto";
 
 import { afterEach, describe, expect, it } from "vitest";
 
-import { failedAuthentication } from "@/lib/inbound-mail/authentication-results";
+import { failedAuthentication, senderAuthenticated } from "@/lib/inbound-mail/authentication-results";
 import { replyAddress, verifyReplyAddress } from "@/lib/inbound-mail/reply-address";
 import { stripQuotedText } from "@/lib/inbound-mail/strip-quoted";
 
@@ -11,18 +11,34 @@ const ID = "0b8a4b52-3c1f-4c7e-9d51-6a1e2f3b4c5d";
 afterEach(() => {
   delete process.env.REPLY_SECRET;
   delete process.env.INBOUND_MAIL_DOMAIN;
+  delete process.env.REPLY_ADDRESS_DAYS;
 });
 
 const USER = "7f1c2d3e-4b5a-4c6d-8e9f-0a1b2c3d4e5f";
 const hex = (uuid: string) => uuid.replace(/-/g, "");
 
 describe("signed reply addresses", () => {
-  it("is reply+<ticket>.<recipient>.<HMAC-SHA256 prefix>@domain and verifies back to both", () => {
+  it("is reply+<ticket>.<recipient>.<expiry day>.<HMAC-SHA256 prefix>@domain and verifies back to both", () => {
     process.env.REPLY_SECRET = "test-secret";
-    const mac = createHmac("sha256", "test-secret").update(`ticket-reply:${hex(ID)}:${hex(USER)}`).digest("hex").slice(0, 32);
-    expect(replyAddress({ ticketId: ID, userId: USER })).toBe(`reply+${hex(ID)}.${hex(USER)}.${mac}@swarfbook.localhost`);
+    const now = Date.UTC(2026, 11, 2);
+    const day = (Date.UTC(2026, 11, 2) / 86_400_000 + 180).toString(16);
+    const mac = createHmac("sha256", "test-secret").update(`ticket-reply:${hex(ID)}:${hex(USER)}:until:${day}`).digest("hex").slice(0, 32);
+    expect(replyAddress({ ticketId: ID, userId: USER, now })).toBe(`reply+${hex(ID)}.${hex(USER)}.${day}.${mac}@swarfbook.localhost`);
     const upper = replyAddress({ ticketId: ID, userId: USER }).toUpperCase().replace("SWARFBOOK.LOCALHOST", "swarfbook.localhost");
     expect(verifyReplyAddress(upper)).toEqual({ ticketId: ID, userId: USER });
+  });
+
+  it("expires after REPLY_ADDRESS_DAYS; the expiry cannot be pushed out; addresses mailed without one still verify", () => {
+    process.env.REPLY_SECRET = "test-secret";
+    process.env.REPLY_ADDRESS_DAYS = "30";
+    const now = Date.UTC(2026, 11, 2);
+    const address = replyAddress({ ticketId: ID, userId: USER, now });
+    expect(verifyReplyAddress(address, now + 30 * 86_400_000)).toEqual({ ticketId: ID, userId: USER });
+    expect(verifyReplyAddress(address, now + 31 * 86_400_000)).toBeNull();
+    const day = (now / 86_400_000 + 30).toString(16);
+    expect(verifyReplyAddress(address.replace(`.${day}.`, `.${(now / 86_400_000 + 999).toString(16)}.`), now + 31 * 86_400_000)).toBeNull();
+    const legacyMac = createHmac("sha256", "test-secret").update(`ticket-reply:${hex(ID)}:${hex(USER)}`).digest("hex").slice(0, 32);
+    expect(verifyReplyAddress(`reply+${hex(ID)}.${hex(USER)}.${legacyMac}@swarfbook.localhost`)).toEqual({ ticketId: ID, userId: USER });
   });
 
   it("rejects another secret, another ticket or recipient, another domain and unsigned forms", () => {
@@ -66,5 +82,25 @@ describe("stripQuotedText", () => {
   });
   it("handles an attribution wrapped over two lines", () => {
     expect(stripQuotedText("Yes\n\nOn Tue, 1 Dec 2026, Support <s@x>\nwrote:\n> q")).toBe("Yes");
+  });
+});
+
+describe("senderAuthenticated", () => {
+  const from = "buyer@shop.example.test";
+  it("accepts a DKIM pass aligned with the From domain or a DMARC pass for it, from the receiving server only", () => {
+    expect(senderAuthenticated([" mx.test; dkim=pass header.d=shop.example.test"], from, "")).toBe(true);
+    expect(senderAuthenticated([" mx.test; dkim=pass (good) header.d=example.test header.s=s1"], from, "")).toBe(true);
+    expect(senderAuthenticated([" mx.test; dkim=pass header.i=@shop.example.test"], from, "")).toBe(true);
+    expect(senderAuthenticated([" mx.test; dmarc=pass header.from=shop.example.test"], from, "")).toBe(true);
+    expect(senderAuthenticated([" mx.test; dkim=pass header.d=other.test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" mx.test; dkim=pass header.d=test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" mx.test; spf=pass smtp.mailfrom=shop.example.test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" mx.test; dkim=fail header.d=shop.example.test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" mx.test; spf=pass (dkim=pass header.d=shop.example.test)"], from, "")).toBe(false);
+    expect(senderAuthenticated([], from, "")).toBe(false);
+    // Only the topmost header is the receiving server's, unless its authserv-id is configured.
+    expect(senderAuthenticated([" mx.test; dkim=none", " mx.test; dkim=pass header.d=shop.example.test"], from, "")).toBe(false);
+    expect(senderAuthenticated([" forged.test; dkim=pass header.d=shop.example.test"], from, "mx.swarfbook.test")).toBe(false);
+    expect(senderAuthenticated([" other; dkim=none", " mx.swarfbook.test; dmarc=pass"], from, "mx.swarfbook.test")).toBe(true);
   });
 });
