@@ -18,26 +18,31 @@ function peakForce(s: AdaptState, aeMm: number, chipLoadMm: number, hexPerFz: nu
   return (kcAt(s, hex) ?? 0) * s.axialDepthMm * hex * ze * radialTerm;
 }
 
+/**
+ * δ at radial depth ae, with hex held (rule 2) and the feed cap applied (rule 5); `deShare` is De/D at
+ * the state's ap. A module function, not a closure in the search: one closure per call cost more than
+ * the search itself.
+ */
+function deflectionAt(s: AdaptState, aeMm: number, deShare: number, stickoutCubed: number, stiffness: number, radialTerm: number): number {
+  const { diameterMm: d, flutes } = s.input.operation;
+  const hexPerFz = radialFactor(aeMm, d) * deShare;
+  const fz = s.targetHexMm / hexPerFz;
+  const vf = Math.min(fz * flutes * s.rpm, s.input.machine.maxFeedMmMin);
+  return (peakForce(s, aeMm, vf / (flutes * s.rpm), hexPerFz, radialTerm) * stickoutCubed) / stiffness;
+}
+
 /** Largest ae ≥ 5 % of D whose deflection meets the limit (δ rises with ae), or null. */
 function suggestRadialDepth(s: AdaptState, stickoutCubed: number, stiffness: number, radialTerm: number): number | null {
   const limit = s.input.deflectionLimitMm;
-  const { diameterMm: d, flutes } = s.input.operation;
-  const maxFeed = s.input.machine.maxFeedMmMin;
+  const d = s.input.operation.diameterMm;
   // De/D at the state's ap: the same for every ae tried.
   const deShare = effectiveDiameter(s, s.axialDepthMm) / d;
-  // δ at radial depth ae, with hex held (rule 2) and the feed cap applied (rule 5).
-  const deflectionAt = (aeMm: number) => {
-    const hexPerFz = radialFactor(aeMm, d) * deShare;
-    const fz = s.targetHexMm / hexPerFz;
-    const vf = Math.min(fz * flutes * s.rpm, maxFeed);
-    return (peakForce(s, aeMm, vf / (flutes * s.rpm), hexPerFz, radialTerm) * stickoutCubed) / stiffness;
-  };
   let lo = MIN_RADIAL_ENGAGEMENT * d;
   let hi = s.radialDepthMm;
-  if (lo >= hi || deflectionAt(lo) > limit) return null;
+  if (lo >= hi || deflectionAt(s, lo, deShare, stickoutCubed, stiffness, radialTerm) > limit) return null;
   for (let i = 0; i < 24; i++) {
     const mid = (lo + hi) / 2;
-    if (deflectionAt(mid) <= limit) lo = mid;
+    if (deflectionAt(s, mid, deShare, stickoutCubed, stiffness, radialTerm) <= limit) lo = mid;
     else hi = mid;
   }
   return lo;
