@@ -2,6 +2,7 @@ import { connection } from "next/server";
 
 import { databaseState } from "@/lib/db/database-state";
 import { replicaState } from "@/lib/db/replica";
+import { publicHealth } from "@/lib/http/public-health";
 import { queueState } from "@/lib/jobs/boss";
 
 // GET /api/health: liveness for a load balancer (always 200 while the process runs), with the database's, the
@@ -10,5 +11,5 @@ import { queueState } from "@/lib/jobs/boss";
 export async function GET() {
   await connection();
   const [database, replica] = await Promise.all([databaseState(), replicaState()]);
-  return Response.json({ ok: true, database, queue: queueState(), replica }, { headers: { "Cache-Control": "no-store" } });
+  return Response.json(publicHealth({ database, queue: queueState(), replica }), { headers: { "Cache-Control": "no-store" } });
 }
