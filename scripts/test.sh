@@ -83,4 +83,12 @@ bash scripts/lib/check-loopback.sh "${pids[@]}" "$(pg_pid)" || status=1
 if [ $status -ne 0 ]; then
   echo "--- last lines of the app log"; tail -40 .tmp/test-app.log || true
 fi
+# The whole run ends with the scaled-out shape on the same build, once this run's services have let go of their ports.
+if [ $status -eq 0 ] && [ $# -eq 0 ]; then
+  cleanup
+  pids=()
+  for _ in $(seq 1 40); do ss -ltn 2>/dev/null | grep -qE "127.0.0.1:($SMTP_PORT|$MAILDEV_WEB_PORT) " || break; sleep 0.25; done
+  echo "== scale: two app processes behind HAProxy, PgBouncer and a streaming replica (npm run test:scale)"
+  TEST_SMTP_PORT=$SMTP_PORT TEST_MAILDEV_PORT=$MAILDEV_WEB_PORT TEST_INBOUND_SMTP_PORT=$INBOUND_PORT bash scripts/test-scale.sh || status=1
+fi
 exit $status
