@@ -137,7 +137,8 @@ describe("two app processes behind HAProxy", () => {
     const subject = `Scale ${RUN}: chatter on the 6 mm cutter`;
     const created = await fetch(`${APP1}/api/v1/vendors/${VENDOR}/tickets`, {
       method: "POST",
-      headers: { cookie: customer, "content-type": "application/json" },
+      // As the site's own page sends it: a change made with the session cookie must carry the app's Origin.
+      headers: { cookie: customer, "content-type": "application/json", origin: APP1 },
       body: JSON.stringify({ subject, body: "It chatters at full depth.", idempotencyKey: `scale-desk-${RUN}` }),
     });
     expect(created.status).toBe(201);
