@@ -7,6 +7,7 @@ import type { UnitSystem } from "../quantities";
 import type { AdaptInput, EntryCapability, MachineInput, OperationInput, OverridesInput, RigidityClass, SpindleKind } from "../types";
 import { bounded, fraction, nonNegative } from "../validate";
 import { checkInput, MAX } from "./check-input";
+import { passesInputChecks } from "./check-input-fast";
 import { ADAPT_DEFAULTS, BALL_NOSE_TOLERANCE, YOUNGS_MODULUS_GPA } from "./defaults";
 
 /** kc(h) = kc11·h^(−mc); a constant kc is kc11 with mc = 0. */
@@ -57,7 +58,7 @@ function forceModel(material: AdaptInput["material"]): ResolvedForce | null {
 export function resolveInput(input: AdaptInput): ResolvedInput {
   const { operation: op, material, referenceMachine, machine, overrides = {}, options = {} } = input;
   const units: UnitSystem = options.messageUnits === "imperial" ? "imperial" : "metric";
-  checkInput(input, units);
+  if (!passesInputChecks(input)) checkInput(input, units);
   const toolMaterial = options.toolMaterial ?? ADAPT_DEFAULTS.toolMaterial;
   if (!Object.hasOwn(YOUNGS_MODULUS_GPA, toolMaterial)) throw new MachiningInputError("options.toolMaterial", "options.toolMaterial must be carbide or hss.");
   const kind = toOperationKind(op.kind);
