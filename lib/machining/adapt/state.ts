@@ -34,8 +34,33 @@ export function record(s: AdaptState, rule: RuleId, field: keyof AdaptNumbers, q
 
 /** Sets a number and records the step when it actually changes. */
 export function change(s: AdaptState, rule: RuleId, field: NumericField, quantity: QuantityKind, after: number, why: string): void {
-  const before = s[field];
-  s[field] = after;
+  // The fields the rules change, by name: a keyed s[field] from many call sites is a slow generic access.
+  let before: number;
+  switch (field) {
+    case "rpm":
+      before = s.rpm;
+      s.rpm = after;
+      break;
+    case "feedMmMin":
+      before = s.feedMmMin;
+      s.feedMmMin = after;
+      break;
+    case "chipLoadMm":
+      before = s.chipLoadMm;
+      s.chipLoadMm = after;
+      break;
+    case "axialDepthMm":
+      before = s.axialDepthMm;
+      s.axialDepthMm = after;
+      break;
+    case "maxChipThicknessMm":
+      before = s.maxChipThicknessMm;
+      s.maxChipThicknessMm = after;
+      break;
+    default:
+      before = s[field];
+      s[field] = after;
+  }
   record(s, rule, field, quantity, before, after, why);
 }
 
