@@ -1,4 +1,4 @@
-import { QUANTITIES, type QuantityKind, type UnitSystem } from "../quantities";
+import { QUANTITIES, QUANTITY_KINDS, type QuantityKind, type UnitSystem } from "../quantities";
 
 // Messages are built on every adaptation and most are never read, so this rounds to about three
 // significant figures and joins whole numbers (cheap to print) instead of printing a fraction; the
@@ -23,8 +23,13 @@ function short(v: number): string {
   return `${sign}${whole}.${frac}`;
 }
 
+// The metric suffix of each quantity, joined once: most callers read metric, and a Map lookup is cheaper
+// than a keyed load on QUANTITIES with a different kind from each call site.
+const METRIC_SUFFIX: ReadonlyMap<QuantityKind, string> = new Map(QUANTITY_KINDS.map((k) => [k, `\u00a0${QUANTITIES[k].metric}`]));
+
 /** A number with its unit, in the caller's unit system, for a warning or error message. */
 export function say(units: UnitSystem, value: number, kind: QuantityKind): string {
+  if (units === "metric") return short(value) + (METRIC_SUFFIX.get(kind) ?? "");
   const q = QUANTITIES[kind];
   return `${short(units === "imperial" ? q.toImperial(value) : value)}\u00a0${q[units]}`;
 }

@@ -15,6 +15,9 @@ export interface AdaptState extends AdaptNumbers {
   toolPowerKw: number | null;
   warnings: AdaptWarning[];
   steps: AdaptStep[];
+  /** The ae of the last engagement angle worked out (NaN before any), and that angle: most rules ask at the same ae. */
+  phiAeMm: number;
+  phi: number;
 }
 
 type NumericField = { [K in keyof AdaptNumbers]: AdaptNumbers[K] extends number ? K : never }[keyof AdaptNumbers];
@@ -31,8 +34,33 @@ export function record(s: AdaptState, rule: RuleId, field: keyof AdaptNumbers, q
 
 /** Sets a number and records the step when it actually changes. */
 export function change(s: AdaptState, rule: RuleId, field: NumericField, quantity: QuantityKind, after: number, why: string): void {
-  const before = s[field];
-  s[field] = after;
+  // The fields the rules change, by name: a keyed s[field] from many call sites is a slow generic access.
+  let before: number;
+  switch (field) {
+    case "rpm":
+      before = s.rpm;
+      s.rpm = after;
+      break;
+    case "feedMmMin":
+      before = s.feedMmMin;
+      s.feedMmMin = after;
+      break;
+    case "chipLoadMm":
+      before = s.chipLoadMm;
+      s.chipLoadMm = after;
+      break;
+    case "axialDepthMm":
+      before = s.axialDepthMm;
+      s.axialDepthMm = after;
+      break;
+    case "maxChipThicknessMm":
+      before = s.maxChipThicknessMm;
+      s.maxChipThicknessMm = after;
+      break;
+    default:
+      before = s[field];
+      s[field] = after;
+  }
   record(s, rule, field, quantity, before, after, why);
 }
 
@@ -70,11 +98,20 @@ export const hexFactor = (s: AdaptState, aeMm: number, apMm: number) => {
   return radialFactor(aeMm, d) * (effectiveDiameter(s, apMm) / d);
 };
 
+/** φs = arccos(1 − 2·ae/D), π from ae = D on; the last one is kept, since most calls repeat the state's ae. */
+export const engagementAngleAt = (s: AdaptState, aeMm: number) => {
+  if (aeMm === s.phiAeMm) return s.phi;
+  const phi = Math.acos(1 - 2 * Math.min(1, aeMm / s.input.operation.diameterMm));
+  s.phiAeMm = aeMm;
+  s.phi = phi;
+  return phi;
+};
+
 /** hm/fz = (1 − cos φs)/φs = 2·(ae/D)/φs, times De/D for a ball nose at a shallow cut. */
 export const meanFactor = (s: AdaptState, aeMm: number, apMm: number) => {
   const d = s.input.operation.diameterMm;
   const r = Math.min(1, aeMm / d);
-  return ((2 * r) / Math.acos(1 - 2 * r)) * (effectiveDiameter(s, apMm) / d);
+  return ((2 * r) / engagementAngleAt(s, aeMm)) * (effectiveDiameter(s, apMm) / d);
 };
 
 /** kc(h) = kc1.1·h^(−mc) (Kienzle 1952); the constant kc when mc = 0. */
@@ -113,5 +150,7 @@ export function createState(input: ResolvedInput): AdaptState {
     plungeFeedPerRevMm: null,
     warnings: [],
     steps: [],
+    phiAeMm: Number.NaN,
+    phi: 0,
   };
 }

@@ -1,6 +1,6 @@
 import { MIN_RADIAL_ENGAGEMENT } from "../defaults";
 import { say } from "../message-units";
-import { effectiveDiameter, hexFactor, kcAt, radialFactor, warn, type AdaptState } from "../state";
+import { effectiveDiameter, engagementAngleAt, hexFactor, kcAt, radialFactor, warn, type AdaptState } from "../state";
 
 // δ = F·L³/(3·E·I), I = π·(0.8·D)⁴/64 (Gere & Goodno; 0.8·D a rule of thumb). L³ and 3·E·I are worked out
 // once per call: the search below evaluates δ some 25 times.
@@ -11,9 +11,9 @@ const beamStiffness = (s: AdaptState) => {
 
 /** F_peak = kc(hex)·ap·hex · ze · √(1 + Kr²), ze = max(1, z·φs/2π) (Altintas ch. 2); `hexPerFz` is hexFactor at ae. */
 function peakForce(s: AdaptState, aeMm: number, chipLoadMm: number, hexPerFz: number, radialTerm: number): number {
-  const { diameterMm, flutes } = s.input.operation;
+  const flutes = s.input.operation.flutes;
   const hex = chipLoadMm * hexPerFz;
-  const phi = Math.acos(1 - 2 * Math.min(1, aeMm / diameterMm));
+  const phi = engagementAngleAt(s, aeMm);
   const ze = Math.max(1, (flutes * phi) / (2 * Math.PI));
   return (kcAt(s, hex) ?? 0) * s.axialDepthMm * hex * ze * radialTerm;
 }
