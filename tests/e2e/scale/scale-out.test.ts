@@ -137,8 +137,9 @@ describe("two app processes behind HAProxy", () => {
     const subject = `Scale ${RUN}: chatter on the 6 mm cutter`;
     const created = await fetch(`${APP1}/api/v1/vendors/${VENDOR}/tickets`, {
       method: "POST",
-      // As the site's own page sends it: a change made with the session cookie must carry the app's Origin.
-      headers: { cookie: customer, "content-type": "application/json", origin: APP1 },
+      // As the site's own page sends it (people browse through HAProxy): a change made with the session cookie
+      // must carry the app's public origin.
+      headers: { cookie: customer, "content-type": "application/json", origin: new URL(BASE).origin },
       body: JSON.stringify({ subject, body: "It chatters at full depth.", idempotencyKey: `scale-desk-${RUN}` }),
     });
     expect(created.status).toBe(201);
