@@ -89,6 +89,8 @@ if [ $status -eq 0 ] && [ $# -eq 0 ]; then
   pids=()
   for _ in $(seq 1 40); do ss -ltn 2>/dev/null | grep -qE "127.0.0.1:($SMTP_PORT|$MAILDEV_WEB_PORT) " || break; sleep 0.25; done
   echo "== scale: two app processes behind HAProxy, PgBouncer and a streaming replica (npm run test:scale)"
-  TEST_SMTP_PORT=$SMTP_PORT TEST_MAILDEV_PORT=$MAILDEV_WEB_PORT TEST_INBOUND_SMTP_PORT=$INBOUND_PORT bash scripts/test-scale.sh || status=1
+  # A clean environment: this run's database, storage and URL settings must not leak into the scaled-out shape.
+  env -i PATH="$PATH" HOME="${HOME:-/root}" ${CI:+CI="$CI"} TEST_SMTP_PORT="$SMTP_PORT" TEST_MAILDEV_PORT="$MAILDEV_WEB_PORT" \
+    TEST_INBOUND_SMTP_PORT="$INBOUND_PORT" bash scripts/test-scale.sh || status=1
 fi
 exit $status
