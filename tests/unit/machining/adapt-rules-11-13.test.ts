@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
 
-import { adaptRecipe, MachiningInputError, type AdaptInput } from "@/lib/machining";
+import { adaptRecipe } from "@/lib/machining";
 
 import { baseInput, withPatch } from "./fixtures";
-import { codes, stepsOf } from "./helpers";
+import { codes, fieldOf, stepsOf } from "./helpers";
 
 describe("rule 11: plunge feed and Z thrust", () => {
   it("fires: holds fn when the spindle slows", () => {
@@ -66,15 +66,6 @@ describe("rule 11: plunge feed and Z thrust", () => {
 });
 
 describe("rule 12: sanity limits", () => {
-  const fieldOf = (input: AdaptInput) => {
-    try {
-      adaptRecipe(input);
-    } catch (error) {
-      expect(error).toBeInstanceOf(MachiningInputError);
-      return (error as MachiningInputError).field;
-    }
-    return "no error";
-  };
 
   it("fires: refuses ap above the flute length, stick-out above 20·D and cutters outside 0.1–100 mm, naming the field", () => {
     expect(fieldOf(withPatch({ operation: { fluteLengthMm: 2 } }))).toBe("operation.axialDepthMm");

@@ -1,18 +1,7 @@
 import { describe, expect, it } from "vitest";
 
-import { adaptRecipe, MachiningInputError, type AdaptInput } from "@/lib/machining";
-
 import { baseInput, withPatch } from "./fixtures";
-
-const fieldOf = (input: AdaptInput) => {
-  try {
-    adaptRecipe(input);
-  } catch (error) {
-    expect(error).toBeInstanceOf(MachiningInputError);
-    return (error as MachiningInputError).field;
-  }
-  return "no error";
-};
+import { fieldOf } from "./helpers";
 
 describe("adaptRecipe refuses impossible input, naming the field", () => {
   it.each([
