@@ -31,13 +31,15 @@ export const changeableParamLabels: Record<ChangeableParam, string> = {
 
 const blank = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
 const changeSchema = z.object({ from: z.number().finite().positive(), to: z.number().finite().positive() });
+/** What a customer changed, by parameter; also how a stored outcome's `changes` column is read back. */
+export const outcomeChangesSchema = z.partialRecord(z.enum(CHANGEABLE_PARAMS), changeSchema);
 
 /** An outcome report. `changes` is keyed by parameter, metric machining units (rpm, mm/min, mm). */
 export const outcomeFieldsSchema = z
   .object({
     result: z.enum(OUTCOME_RESULTS, { error: "Say how the cut went." }),
     symptom: z.preprocess(blank, z.enum(OUTCOME_SYMPTOMS, { error: "Pick what went wrong." }).optional()),
-    changes: z.partialRecord(z.enum(CHANGEABLE_PARAMS), changeSchema).default({}),
+    changes: outcomeChangesSchema.default({}),
     notes: z.string().trim().max(2000, "At most 2000 characters.").default(""),
   })
   .superRefine((o, ctx) => {

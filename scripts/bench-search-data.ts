@@ -36,8 +36,8 @@ export async function createBenchVendor(knex: Knex, index: number, sheets: numbe
   }
   const materials: { id: string; slug: string; name: string }[] = [];
   for (const [mslug, name, group, synonyms] of MATERIALS) {
-    const [row] = await knex("materials").insert({ vendor_id: vendorId, slug: mslug, name, material_group: group, vc_min_mpm: 100, vc_max_mpm: 300, min_chip_load_mm: 0.02, kc_nmm2: 100, synonyms }).returning("id");
-    materials.push({ id: row.id as string, slug: mslug, name });
+    const [row] = await knex("materials").insert({ vendor_id: vendorId, slug: mslug, name, material_group: group, vc_min_mpm: 100, vc_max_mpm: 300, min_chip_load_mm: 0.02, kc_nmm2: 100, synonyms: [...synonyms] }).returning("id");
+    materials.push({ id: row.id, slug: mslug, name });
   }
   const classes: { id: string; slug: string; name: string }[] = [];
   for (const [kslug, name] of CLASSES) {

@@ -2,6 +2,7 @@
 // across versions (so the Field-results rollup has something to show). Numbers come from adaptRecipe.
 import type { Knex } from "knex";
 
+import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { adaptOperation } from "@/lib/bench/adapt-context";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 
@@ -23,7 +24,7 @@ const MACHINES: Record<string, MachineSeed[]> = {
   "cabinets@example.test": [RIGID],
 };
 
-type Outcome = { result: "worked_as_written" | "worked_after_changes" | "failed"; symptom?: string; notes: string; changes?: Record<string, { from: number; to: number }> };
+type Outcome = { result: OutcomeResult; symptom?: OutcomeSymptom; notes: string; changes?: Record<string, { from: number; to: number }> };
 
 // A plastics sheet whose v1 ran too slow a chip load: it melted on v1 and cut cleanly on v2.
 const MELTED: Outcome = { result: "failed", symptom: "melting_welding", notes: "Chips welded to the cutter half way along the slot." };

@@ -8,6 +8,7 @@ import { randomUUID } from "node:crypto";
 
 import type { Knex } from "knex";
 
+import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { adaptOperation, type AdaptContext } from "@/lib/bench/adapt-context";
 import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 
@@ -25,7 +26,7 @@ const ARCHETYPES: Archetype[] = [
   { name: "Panel router, 9 kW", rpm_min: 6000, rpm_max: 24000, power_kw: 9, max_feed_mm_min: 30000, rigidity: 1, z_thrust_n: 2000, stickout_mm: 25, count: 6 },
 ];
 
-type Report = { result: "worked_as_written" | "worked_after_changes" | "failed"; symptom?: string; changes?: Record<string, number>; notes: string };
+type Report = { result: OutcomeResult; symptom?: OutcomeSymptom; changes?: Record<string, number>; notes: string };
 const times = (n: number, report: Report): Report[] => Array.from({ length: n }, () => report);
 
 // Relative changes (factor on the adapted number) for "worked after changes" reports.
@@ -128,7 +129,7 @@ async function seedActivity(knex: Knex, vendorId: string, versions: Version[]) {
 }
 
 async function ticketWithHandoff(knex: Knex, vendorId: string, version: Version, machine: Machine, supportId: string | undefined) {
-  const number = (((await knex("tickets").where({ vendor_id: vendorId }).max("number as n").first())?.n as number | null) ?? 0) + 1;
+  const number = ((await knex("tickets").where({ vendor_id: vendorId }).max({ n: "number" }).first())?.n ?? 0) + 1;
   const created = daysAgo(6);
   const [ticket] = await knex("tickets")
     .insert({

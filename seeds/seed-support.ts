@@ -4,6 +4,7 @@ import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
 
 import type { SeededIds } from "./seed-foundation";
+import type { MachineRow, TicketRow } from "@/lib/db/tables";
 
 const SNIPPETS = [
   { title: "Greeting", body: "Hello {{customer.name}},\n\nthank you for ticket #{{ticket.number}}." },
@@ -13,13 +14,13 @@ const SNIPPETS = [
 ];
 
 // A light router, deliberately weaker than the reference classes (invented demo data).
-const DEMO_MACHINE = { name: "Belt-drive desk router", preset: "light-router", rpm_min: 8000, rpm_max: 16000, power_kw: 0.8, max_feed_mm_min: 3000, rigidity: 0.4, z_thrust_n: 250, stickout_mm: 18, units: "metric" };
+const DEMO_MACHINE = { name: "Belt-drive desk router", preset: "light-router", rpm_min: 8000, rpm_max: 16000, power_kw: 0.8, max_feed_mm_min: 3000, rigidity: 0.4, z_thrust_n: 250, stickout_mm: 18, units: "metric" } satisfies Partial<MachineRow>;
 
 const TICKETS = [
   { vendor: "northbeck", customer: "maker@example.test", subject: "Chips weld in the slot in cast acrylic", body: "At full-width slotting the chips melt back into the slot.\n\n- spindle at the sheet's speed\n- feed lowered because it sounded loud", status: "new", priority: "high", tags: ["melting"], sheet: "Cast acrylic%" },
   { vendor: "northbeck", customer: "hobby@example.test", subject: "Which entry move for a 6 mm pocket?", body: "Plunge or ramp for a pocket in birch ply?", status: "answered", priority: "normal", tags: ["entry"], sheet: "Birch plywood%" },
   { vendor: "quillon", customer: "cabinets@example.test", subject: "Poor finish on MDF edges", body: "Fuzzy edges on a profile pass in MDF.", status: "in_progress", priority: "normal", tags: ["finish"], sheet: "MDF%" },
-];
+] satisfies (Pick<TicketRow, "subject" | "body" | "status" | "priority" | "tags"> & Record<string, unknown>)[];
 
 export async function seedSupport(knex: Knex, ids: SeededIds): Promise<void> {
   for (const vendorId of Object.values(ids.vendors)) {
@@ -32,7 +33,7 @@ export async function seedSupport(knex: Knex, ids: SeededIds): Promise<void> {
       if (!has) await knex("machines").insert({ vendor_id: vendorId, user_id: userId, ...DEMO_MACHINE });
     }
     const support = ids.users[`support1@${slug}.test`];
-    let number = ((await knex("tickets").where({ vendor_id: vendorId }).max("number as n").first())?.n as number | null) ?? 0;
+    let number = (await knex("tickets").where({ vendor_id: vendorId }).max({ n: "number" }).first())?.n ?? 0;
     for (const t of TICKETS.filter((x) => x.vendor === slug)) {
       const customerId = ids.users[t.customer];
       if (!customerId) continue;

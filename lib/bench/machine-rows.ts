@@ -1,26 +1,8 @@
 import type { SpindleKindKey } from "@/content-schema/spindle-kind";
+import type { MachineRow } from "@/lib/db/tables";
 
 import type { BenchMachineInput } from "./adapt-context";
 
-export type MachineRow = {
-  id: string;
-  vendor_id: string;
-  user_id: string;
-  name: string;
-  preset: string | null;
-  rpm_min: number;
-  rpm_max: number;
-  power_kw: number;
-  max_feed_mm_min: number;
-  rigidity: number;
-  z_thrust_n: number | null;
-  spindle_kind: SpindleKindKey;
-  rated_rpm: number | null;
-  stickout_mm: number | null;
-  units: "metric" | "imperial";
-  created_at: Date;
-  updated_at: Date;
-};
 
 /** A customer's machine in metric machining units. */
 export type Machine = {
@@ -41,9 +23,9 @@ export type Machine = {
   updatedAt: string;
 };
 
-export const MACHINE_COLUMNS = ["id", "name", "preset", "rpm_min", "rpm_max", "power_kw", "max_feed_mm_min", "rigidity", "z_thrust_n", "spindle_kind", "rated_rpm", "stickout_mm", "units", "updated_at"];
+export const MACHINE_COLUMNS = ["id", "name", "preset", "rpm_min", "rpm_max", "power_kw", "max_feed_mm_min", "rigidity", "z_thrust_n", "spindle_kind", "rated_rpm", "stickout_mm", "units", "updated_at"] as const satisfies readonly (keyof MachineRow)[];
 
-export function rowToMachine(row: Pick<MachineRow, "id" | "name" | "preset" | "rpm_min" | "rpm_max" | "power_kw" | "max_feed_mm_min" | "rigidity" | "z_thrust_n" | "spindle_kind" | "rated_rpm" | "stickout_mm" | "units" | "updated_at">): Machine {
+export function rowToMachine(row: Pick<MachineRow, (typeof MACHINE_COLUMNS)[number]>): Machine {
   return {
     id: row.id,
     name: row.name,

@@ -15,11 +15,11 @@ type Owner = { vendorId: string; userId: string };
 const owned = ({ vendorId, userId }: Owner) => db("machines").where({ vendor_id: vendorId, user_id: userId });
 
 export async function listMachines(owner: Owner): Promise<Machine[]> {
-  return (await owned(owner).orderBy("name").select(MACHINE_COLUMNS)).map(rowToMachine);
+  return (await owned(owner).orderBy("name").select(...MACHINE_COLUMNS)).map(rowToMachine);
 }
 
 export async function getMachine(owner: Owner & { machineId: string }): Promise<Machine | null> {
-  const row = await owned(owner).andWhere({ id: owner.machineId }).first(MACHINE_COLUMNS);
+  const row = await owned(owner).andWhere({ id: owner.machineId }).first(...MACHINE_COLUMNS);
   return row ? rowToMachine(row) : null;
 }
 
@@ -39,7 +39,7 @@ const toRow = (f: MachineFields) => ({
 });
 
 export async function createMachine({ vendorId, userId, fields }: Owner & { fields: MachineFields }): Promise<Machine> {
-  const [row] = await db("machines").insert({ vendor_id: vendorId, user_id: userId, ...toRow(fields) }).returning(MACHINE_COLUMNS);
+  const [row] = await db("machines").insert({ vendor_id: vendorId, user_id: userId, ...toRow(fields) }).returning([...MACHINE_COLUMNS]);
   await writeAudit({ vendorId, actorUserId: userId, action: "machine.create", objectType: "machine", objectId: row.id, details: { name: fields.name } });
   return rowToMachine(row);
 }
@@ -48,7 +48,7 @@ export async function updateMachine({ vendorId, userId, machineId, fields }: Own
   const [row] = await owned({ vendorId, userId })
     .andWhere({ id: machineId })
     .update({ ...toRow(fields), updated_at: db.fn.now() })
-    .returning(MACHINE_COLUMNS);
+    .returning([...MACHINE_COLUMNS]);
   if (!row) throw new NotFound("That machine was not found.");
   await writeAudit({ vendorId, actorUserId: userId, action: "machine.update", objectType: "machine", objectId: machineId, details: { name: fields.name } });
   return rowToMachine(row);

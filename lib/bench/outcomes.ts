@@ -1,6 +1,6 @@
 import "server-only";
 
-import type { OutcomeFields, OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
+import { type OutcomeFields, type OutcomeResult, type OutcomeSymptom, outcomeChangesSchema } from "@/content-schema/outcome-fields";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { lockIdempotencyKey } from "@/lib/db/idempotent";
 import { db } from "@/lib/db/knex";
@@ -73,7 +73,8 @@ export async function listOutcomes({ vendorId, userId, setupId }: Options): Prom
     id: r.id,
     result: r.result,
     symptom: r.symptom,
-    changes: r.changes ?? {},
+    // Written through the same schema; a row that no longer reads (a renamed parameter) shows no changes.
+    changes: outcomeChangesSchema.catch({}).parse(r.changes ?? {}),
     notes: r.notes,
     hasPhoto: r.photo_key !== null,
     sheetVersionId: r.sheet_version_id,
@@ -84,7 +85,7 @@ export async function listOutcomes({ vendorId, userId, setupId }: Options): Prom
 /** The stored photo of one of the customer's outcomes. */
 export async function getOutcomePhoto({ vendorId, userId, outcomeId }: { vendorId: string; userId: string; outcomeId: string }) {
   const row = await db("outcomes").where({ vendor_id: vendorId, user_id: userId, id: outcomeId }).whereNotNull("photo_key").first("photo_key");
-  if (!row) return null;
+  if (!row?.photo_key) return null;
   const bytes = await getStorage().get(row.photo_key);
   if (!bytes) return null;
   const sniffed = await sniffUpload(bytes, "photo");

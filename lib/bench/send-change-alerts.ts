@@ -5,46 +5,35 @@ import { db } from "@/lib/db/knex";
 import type { SheetEvent } from "@/lib/events/sheet-events";
 import { appUrl } from "@/lib/http/app-url";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
-import { type EntryCapability, isMachiningInputError, type UnitSystem } from "@/lib/machining";
+import type { EntryCapability, UnitSystem } from "@/lib/machining";
+import { NotFound } from "@/lib/errors/domain-errors";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
+import { hasFrontMatter } from "@/lib/sheets/version-rows";
 
-import { adaptOperation, type AdaptContext } from "./adapt-context";
-import { diffAdapted } from "./adapted-diff";
+import type { AdaptContext } from "./adapt-context";
 import { createAlertStopToken } from "./alert-token";
 import { type AlertSetup, renderChangeAlert } from "./change-alert-mail";
 import { loadAdaptContext } from "./load-adapt-context";
 import { machineToInput, rowToMachine } from "./machine-rows";
+import { readaptOperation } from "./readapt-operation";
 import { readStoredOperations } from "./read-front-matter";
 
 type SetupRow = { id: string; user_id: string; email: string; name: string; operation_index: number; overrides: Record<string, number>; units: UnitSystem; entry_capability: EntryCapability } & Parameters<typeof rowToMachine>[0] & { machine_name: string };
 
-/** The new version's operation for an old one: same kind and label, else the same position. */
-function matchOperation(oldCtx: AdaptContext, newCtx: AdaptContext, index: number): number | null {
-  const old = oldCtx.operations[index];
-  if (!old) return null;
-  const same = newCtx.operations.find((op) => op.kind === old.kind && op.label === old.label);
-  return same?.index ?? (newCtx.operations[index]?.kind === old.kind ? index : null);
-}
-
-function reAdapt(oldCtx: AdaptContext, newCtx: AdaptContext, row: SetupRow, setupUrl: string): AlertSetup {
-  const base = { setupName: row.name, machineName: row.machine_name, operationLabel: oldCtx.operations[row.operation_index]?.label ?? "operation", setupUrl };
-  const index = matchOperation(oldCtx, newCtx, row.operation_index);
-  if (index === null) return { ...base, changes: [], error: "this operation is no longer on the sheet." };
-  try {
-    const machine = machineToInput(rowToMachine({ ...row, id: row.id, name: row.machine_name }));
-    const next = adaptOperation(newCtx, index, machine, row.overrides, { entryCapability: row.entry_capability, units: row.units });
-    // Both versions on the machine as it is now, so the diff shows the sheet's change and nothing else.
-    const before = adaptOperation(oldCtx, row.operation_index, machine, row.overrides, { entryCapability: row.entry_capability, units: row.units });
-    return { ...base, changes: diffAdapted(before, next), error: null };
-  } catch (error) {
-    if (!isMachiningInputError(error)) throw error;
-    return { ...base, changes: [], error: error.message };
-  }
+function reAdapt(oldContext: AdaptContext, newContext: AdaptContext, row: SetupRow, setupUrl: string): AlertSetup {
+  const base = { setupName: row.name, machineName: row.machine_name, operationLabel: oldContext.operations[row.operation_index]?.label ?? "operation", setupUrl };
+  const machine = machineToInput(rowToMachine({ ...row, id: row.id, name: row.machine_name }));
+  const setup = { overrides: row.overrides, entryCapability: row.entry_capability, units: row.units };
+  const readapted = readaptOperation({ oldContext, newContext, operationIndex: row.operation_index, machine, setup });
+  if (!readapted) return { ...base, changes: [], error: "this operation is no longer on the sheet." };
+  return { ...base, changes: readapted.changes, error: readapted.error };
 }
 
 const frontMatterOf = async (vendorId: string, versionId: string) => {
   const row = await db("sheet_versions").where({ vendor_id: vendorId, id: versionId }).first("front_matter", "change_note");
-  return { frontMatter: { ...row.front_matter, operations: readStoredOperations(row.front_matter) } as SheetFrontMatter, changeNote: String(row.change_note ?? "") };
+  if (!row || !hasFrontMatter(row.front_matter)) throw new NotFound("That sheet version has no front matter.");
+  const frontMatter: SheetFrontMatter = { ...row.front_matter, operations: readStoredOperations(row.front_matter) };
+  return { frontMatter, changeNote: row.change_note };
 };
 
 /**

@@ -2,10 +2,13 @@ import type { CutterFields } from "@/content-schema/catalogue-cutter";
 import type { MachineClassFields } from "@/content-schema/catalogue-machine-class";
 import type { MaterialFields } from "@/content-schema/catalogue-material";
 
+import type { CutterRow, MachineClassRow, MaterialRow } from "@/lib/db/tables";
+
 import type { Cutter, MachineClass, Material } from "./catalogue-types";
 
-type Row = Record<string, unknown>;
-const opt = (v: unknown) => (v === null || v === undefined ? undefined : (v as never));
+const opt = <T>(v: T | null): T | undefined => v ?? undefined;
+// Written through the material schema as a JSON array; anything else reads as no cautions.
+const cautionsOf = (v: unknown): Material["cautions"] => (Array.isArray(v) ? v : []);
 
 export const cutterToRow = (c: CutterFields) => ({
   sku: c.sku,
@@ -24,25 +27,25 @@ export const cutterToRow = (c: CutterFields) => ({
   notes: c.notes,
 });
 
-export const rowToCutter = (r: Row): Cutter => ({
-  id: r.id as string,
-  sku: r.sku as string,
-  name: r.name as string,
-  diameterMm: r.diameter_mm as number,
-  flutes: r.flutes as number,
-  fluteLengthMm: r.flute_length_mm as number,
-  overallLengthMm: r.overall_length_mm as number,
-  shankMm: r.shank_mm as number,
-  cornerForm: r.corner_form as Cutter["cornerForm"],
+export const rowToCutter = (r: CutterRow): Cutter => ({
+  id: r.id,
+  sku: r.sku,
+  name: r.name,
+  diameterMm: r.diameter_mm,
+  flutes: r.flutes,
+  fluteLengthMm: r.flute_length_mm,
+  overallLengthMm: r.overall_length_mm,
+  shankMm: r.shank_mm,
+  cornerForm: r.corner_form,
   cornerRadiusMm: opt(r.corner_radius_mm),
   helixDeg: opt(r.helix_deg),
-  toolMaterial: r.tool_material as Cutter["toolMaterial"],
+  toolMaterial: r.tool_material,
   coating: opt(r.coating),
-  geometry: r.geometry as Cutter["geometry"],
-  notes: r.notes as string,
-  shortCode: r.short_code as string,
-  imageKey: (r.image_key as string | null) ?? null,
-  updatedAt: r.updated_at as Date,
+  geometry: r.geometry,
+  notes: r.notes,
+  shortCode: r.short_code,
+  imageKey: r.image_key,
+  updatedAt: r.updated_at,
 });
 
 export const materialToRow = (m: MaterialFields) => ({
@@ -62,23 +65,23 @@ export const materialToRow = (m: MaterialFields) => ({
   notes: m.notes,
 });
 
-export const rowToMaterial = (r: Row): Material => ({
-  id: r.id as string,
-  slug: r.slug as string,
-  name: r.name as string,
-  materialGroup: r.material_group as Material["materialGroup"],
-  vcMinMpm: r.vc_min_mpm as number,
-  vcMaxMpm: r.vc_max_mpm as number,
-  minChipLoadMm: r.min_chip_load_mm as number,
-  kcNmm2: r.kc_nmm2 as number,
-  chipLoadMinPctD: r.chip_load_min_pct_d as number,
-  chipLoadMaxPctD: r.chip_load_max_pct_d as number,
+export const rowToMaterial = (r: MaterialRow): Material => ({
+  id: r.id,
+  slug: r.slug,
+  name: r.name,
+  materialGroup: r.material_group,
+  vcMinMpm: r.vc_min_mpm,
+  vcMaxMpm: r.vc_max_mpm,
+  minChipLoadMm: r.min_chip_load_mm,
+  kcNmm2: r.kc_nmm2,
+  chipLoadMinPctD: r.chip_load_min_pct_d,
+  chipLoadMaxPctD: r.chip_load_max_pct_d,
   kc11Nmm2: opt(r.kc11_nmm2),
   mc: opt(r.mc),
-  synonyms: (r.synonyms as string[]) ?? [],
-  cautions: (r.cautions as Material["cautions"]) ?? [],
-  notes: r.notes as string,
-  updatedAt: r.updated_at as Date,
+  synonyms: r.synonyms ?? [],
+  cautions: cautionsOf(r.cautions),
+  notes: r.notes,
+  updatedAt: r.updated_at,
 });
 
 export const machineClassToRow = (k: MachineClassFields) => ({
@@ -95,18 +98,18 @@ export const machineClassToRow = (k: MachineClassFields) => ({
   rated_rpm: k.ratedRpm ?? null,
 });
 
-export const rowToMachineClass = (r: Row): MachineClass => ({
-  id: r.id as string,
-  slug: r.slug as string,
-  name: r.name as string,
-  description: r.description as string,
-  rpmMin: r.rpm_min as number,
-  rpmMax: r.rpm_max as number,
-  powerKw: r.power_kw as number,
-  maxFeedMmMin: r.max_feed_mm_min as number,
-  rigidity: r.rigidity as number,
+export const rowToMachineClass = (r: MachineClassRow): MachineClass => ({
+  id: r.id,
+  slug: r.slug,
+  name: r.name,
+  description: r.description,
+  rpmMin: r.rpm_min,
+  rpmMax: r.rpm_max,
+  powerKw: r.power_kw,
+  maxFeedMmMin: r.max_feed_mm_min,
+  rigidity: r.rigidity,
   zThrustN: opt(r.z_thrust_n),
-  spindleKind: r.spindle_kind as MachineClass["spindleKind"],
+  spindleKind: r.spindle_kind,
   ratedRpm: opt(r.rated_rpm),
-  updatedAt: r.updated_at as Date,
+  updatedAt: r.updated_at,
 });

@@ -3,13 +3,14 @@ import "server-only";
 import { readDb } from "@/lib/db/read-db";
 
 export type FieldSummary = { versionsWithReports: number; outcomes: number; failed: number; workedAfterChanges: number; setups: number; views: number; adaptations: number; tickets: number; openHandoffs: number };
+type SummaryRow = Record<"versions_with_reports" | "outcomes" | "failed" | "worked_after_changes" | "setups" | "views" | "adaptations" | "tickets" | "open_handoffs", number>;
 
 /** The vendor's totals, from the rollup (one row per version), never from raw outcomes. */
 export async function loadFieldSummary({ vendorId }: { vendorId: string }): Promise<FieldSummary> {
   const db = await readDb();
   const row = await db("field_version_rollups")
     .where({ vendor_id: vendorId })
-    .first(
+    .first<SummaryRow | undefined>(
       db.raw("count(*) filter (where outcomes > 0)::int as versions_with_reports"),
       db.raw("coalesce(sum(outcomes), 0)::int as outcomes"),
       db.raw("coalesce(sum(failed), 0)::int as failed"),
@@ -20,6 +21,8 @@ export async function loadFieldSummary({ vendorId }: { vendorId: string }): Prom
       db.raw("coalesce(sum(tickets), 0)::int as tickets"),
       db.raw("coalesce(sum(open_handoffs), 0)::int as open_handoffs"),
     );
+  // An aggregate without GROUP BY always answers one row.
+  if (!row) throw new Error("The field summary query returned no row.");
   return {
     versionsWithReports: row.versions_with_reports,
     outcomes: row.outcomes,

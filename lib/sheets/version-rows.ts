@@ -4,46 +4,48 @@ import type { Knex } from "knex";
 
 import type { SheetFrontMatter } from "@/content-schema/sheet-front-matter";
 import { db } from "@/lib/db/knex";
+import type { SheetRow, SheetVersionRow } from "@/lib/db/tables";
 
 import type { SheetRecord, SheetVersion } from "./sheet-types";
 
-type Row = Record<string, unknown>;
+/** A sheet_versions row with the names of the people on it (see `versionQuery`). */
+export type VersionWithNamesRow = SheetVersionRow & { author_name: string | null; updated_by_name: string | null; approved_by_name: string | null };
 
-export const rowToSheet = (r: Row): SheetRecord => ({
-  id: r.id as string,
-  slug: r.slug as string,
-  cutterId: r.cutter_id as string,
-  materialId: r.material_id as string,
-  machineClassId: r.machine_class_id as string,
-  createdBy: (r.created_by as string | null) ?? null,
+export const rowToSheet = (r: SheetRow): SheetRecord => ({
+  id: r.id,
+  slug: r.slug,
+  cutterId: r.cutter_id,
+  materialId: r.material_id,
+  machineClassId: r.machine_class_id,
+  createdBy: r.created_by,
 });
 
-const hasFrontMatter = (fm: unknown): fm is SheetFrontMatter => typeof fm === "object" && fm !== null && "operations" in fm;
+export const hasFrontMatter = (fm: unknown): fm is SheetFrontMatter => typeof fm === "object" && fm !== null && "operations" in fm;
 
-export const rowToVersion = (r: Row): SheetVersion => ({
-  id: r.id as string,
-  sheetId: r.sheet_id as string,
-  number: r.number as number,
-  state: r.state as SheetVersion["state"],
-  title: r.title as string,
-  source: r.source as string,
+export const rowToVersion = (r: VersionWithNamesRow): SheetVersion => ({
+  id: r.id,
+  sheetId: r.sheet_id,
+  number: r.number,
+  state: r.state,
+  title: r.title,
+  source: r.source,
   frontMatter: hasFrontMatter(r.front_matter) ? r.front_matter : null,
-  changeNote: r.change_note as string,
-  revision: r.revision as number,
-  authorId: (r.author_id as string | null) ?? null,
-  authorName: (r.author_name as string | null) ?? null,
-  updatedBy: (r.updated_by as string | null) ?? null,
-  updatedByName: (r.updated_by_name as string | null) ?? null,
-  submittedAt: (r.submitted_at as Date | null) ?? null,
-  approvedBy: (r.approved_by as string | null) ?? null,
-  approvedByName: (r.approved_by_name as string | null) ?? null,
-  approvedAt: (r.approved_at as Date | null) ?? null,
-  publishedAt: (r.published_at as Date | null) ?? null,
-  supersededAt: (r.superseded_at as Date | null) ?? null,
-  withdrawnAt: (r.withdrawn_at as Date | null) ?? null,
-  withdrawnReason: (r.withdrawn_reason as string | null) ?? null,
-  createdAt: r.created_at as Date,
-  updatedAt: r.updated_at as Date,
+  changeNote: r.change_note,
+  revision: r.revision,
+  authorId: r.author_id,
+  authorName: r.author_name,
+  updatedBy: r.updated_by,
+  updatedByName: r.updated_by_name,
+  submittedAt: r.submitted_at,
+  approvedBy: r.approved_by,
+  approvedByName: r.approved_by_name,
+  approvedAt: r.approved_at,
+  publishedAt: r.published_at,
+  supersededAt: r.superseded_at,
+  withdrawnAt: r.withdrawn_at,
+  withdrawnReason: r.withdrawn_reason,
+  createdAt: r.created_at,
+  updatedAt: r.updated_at,
 });
 
 /** sheet_versions with the names of the people on it; always filtered by vendor. */
@@ -53,5 +55,5 @@ export function versionQuery(vendorId: string, trx: Knex = db) {
     .leftJoin("users as uu", "uu.id", "v.updated_by")
     .leftJoin("users as pu", "pu.id", "v.approved_by")
     .where("v.vendor_id", vendorId)
-    .select("v.*", "au.name as author_name", "uu.name as updated_by_name", "pu.name as approved_by_name");
+    .select<VersionWithNamesRow[]>("v.*", "au.name as author_name", "uu.name as updated_by_name", "pu.name as approved_by_name");
 }

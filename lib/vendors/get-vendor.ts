@@ -1,5 +1,6 @@
 import "server-only";
 
+import type { Knex } from "knex";
 import { cache } from "react";
 
 import { db } from "@/lib/db/knex";
@@ -21,20 +22,19 @@ export function toVendor(row: VendorRow): Vendor {
   };
 }
 
+/** The vendor columns `toVendor` reads; the caller adds the WHERE clause. */
+export const vendorQuery = (trx: Knex = db) =>
+  trx("vendors").select<VendorRow[]>("id", "slug", "name", "accent_color", "settings", trx.raw("logo is not null as has_logo"));
+
 /** The vendor named by a route segment, or null (reserved or malformed slugs never reach the database). */
 export const getVendorBySlug = cache(async (slug: string): Promise<Vendor | null> => {
   const parsed = vendorSlugSchema.safeParse(safeDecode(slug));
   if (!parsed.success) return null;
-  const row = await db("vendors")
-    .select("id", "slug", "name", "accent_color", "settings", db.raw("logo is not null as has_logo"))
-    .where({ slug: parsed.data })
-    .first<VendorRow | undefined>();
+  const row = await vendorQuery().where({ slug: parsed.data }).first();
   return row ? toVendor(row) : null;
 });
 
 export async function listVendors(): Promise<Vendor[]> {
-  const rows = await db("vendors")
-    .select("id", "slug", "name", "accent_color", "settings", db.raw("logo is not null as has_logo"))
-    .orderBy("name");
+  const rows = await vendorQuery().orderBy("name");
   return rows.map(toVendor);
 }

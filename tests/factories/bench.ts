@@ -3,6 +3,7 @@ import { db } from "@/lib/db/knex";
 
 import { insertSheetCatalogue } from "./sheet-catalogue";
 import { buildSheetSource, frontMatterInput, operationInput } from "./sheet-source";
+import { mustExist } from "@/tests/support/must-exist";
 
 // Invented demo data on the catalogue of ./sheet-catalogue.ts. Slot op: n 18 000 rpm, vf 1800 mm/min (fz = 0.1 mm), ap 1.5 mm, ae 100 %.
 
@@ -23,7 +24,7 @@ async function insertVersion(vendorId: string, sheetId: string, number: number, 
 
 /** Supersedes the published version with a new one whose slot runs at another feed; returns the event to deliver. */
 export async function supersede(vendorId: string, sheetId: string, slot: Record<string, unknown> = { vf: "1440 mm/min" }) {
-  const old = await db("sheet_versions").where({ vendor_id: vendorId, sheet_id: sheetId, state: "published" }).first("id", "number");
+  const old = mustExist(await db("sheet_versions").where({ vendor_id: vendorId, sheet_id: sheetId, state: "published" }).first("id", "number"), "old");
   await db("sheet_versions").where({ id: old.id }).update({ state: "superseded", superseded_at: db.fn.now() });
   const versionId = await insertVersion(vendorId, sheetId, old.number + 1, slot, "Slot feed lowered after chatter reports.");
   return { type: "version.published" as const, vendorId, sheetId, versionId, supersededVersionId: old.id as string };

@@ -1,4 +1,4 @@
-import type { OutcomeSymptom } from "@/content-schema/outcome-fields";
+import { OUTCOME_SYMPTOMS, type OutcomeResult, type OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { db } from "@/lib/db/knex";
 
 import { createMember } from "./foundation";
@@ -20,10 +20,10 @@ export async function createFieldCustomer(vendorId: string, machine: Record<stri
  */
 export async function reportOutcomes(vendorId: string, versionId: string, counts: Counts, changes: Change[] = [{ feedMmMin: { from: 1000, to: 800 } }]) {
   const customer = await createFieldCustomer(vendorId);
-  const kinds: { result: string; symptom: string | null }[] = [
-    ...Array.from({ length: counts.asWritten ?? 0 }, () => ({ result: "worked_as_written", symptom: null })),
-    ...Array.from({ length: counts.afterChanges ?? 0 }, () => ({ result: "worked_after_changes", symptom: null })),
-    ...Object.entries(counts.failed ?? {}).flatMap(([symptom, n]) => Array.from({ length: n ?? 0 }, () => ({ result: "failed", symptom }))),
+  const kinds: { result: OutcomeResult; symptom: OutcomeSymptom | null }[] = [
+    ...Array.from({ length: counts.asWritten ?? 0 }, () => ({ result: "worked_as_written" as const, symptom: null })),
+    ...Array.from({ length: counts.afterChanges ?? 0 }, () => ({ result: "worked_after_changes" as const, symptom: null })),
+    ...OUTCOME_SYMPTOMS.flatMap((symptom) => Array.from({ length: counts.failed?.[symptom] ?? 0 }, () => ({ result: "failed" as const, symptom }))),
   ];
   if (!kinds.length) return customer;
   const setups = await db("setups")

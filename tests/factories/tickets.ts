@@ -3,14 +3,15 @@ import { randomUUID } from "node:crypto";
 import { sheetFrontMatterSchema } from "@/content-schema/sheet-front-matter";
 import { db } from "@/lib/db/knex";
 import { createTicket } from "@/lib/tickets/create-ticket";
-import { toVendor } from "@/lib/vendors/get-vendor";
+import { toVendor, vendorQuery } from "@/lib/vendors/get-vendor";
 import type { Vendor } from "@/lib/vendors/vendor-schema";
 
 import { insertSheetCatalogue } from "./sheet-catalogue";
 import { buildSheetSource, frontMatterInput } from "./sheet-source";
 
 export async function loadVendor(vendorId: string): Promise<Vendor> {
-  const row = await db("vendors").where({ id: vendorId }).first("id", "slug", "name", "accent_color", "settings", db.raw("logo is not null as has_logo"));
+  const row = await vendorQuery().where({ id: vendorId }).first();
+  if (!row) throw new Error(`No vendor ${vendorId}`);
   return toVendor(row);
 }
 

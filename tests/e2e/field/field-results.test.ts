@@ -6,6 +6,7 @@ import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { waitForMail } from "../support/maildev";
 import { signInWithPassword } from "../support/sign-in";
+import { mustExist } from "@/tests/support/must-exist";
 
 const ENGINEER = "eng1@northbeck.test";
 const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
@@ -15,7 +16,7 @@ const VENDOR = "northbeck";
 // and the plastics sheet whose v1 melted and whose v2 fixed it.
 async function demoStories() {
   const db = e2eDb();
-  const vendor = await db("vendors").where({ slug: VENDOR }).first("id");
+  const vendor = mustExist(await db("vendors").where({ slug: VENDOR }).first("id"), "vendor");
   const flagged = await db("problem_reports as p")
     .join("sheet_versions as v", "v.id", "p.sheet_version_id")
     .join("sheets as s", "s.id", "v.sheet_id")

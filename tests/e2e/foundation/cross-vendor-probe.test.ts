@@ -8,6 +8,7 @@ import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { BASE_URL } from "../support/env";
 import { signInWithPassword } from "../support/sign-in";
+import { mustExist } from "@/tests/support/must-exist";
 
 // A member of vendor A (northbeck's admin, no role at quillon) probes every vendor route of the app with
 // vendor B's slug and B's real object ids: every answer must be a 404, never data and never a 403.
@@ -57,7 +58,7 @@ describe("cross-vendor probe", () => {
 
   beforeAll(async () => {
     const db = e2eDb();
-    const vendor = await db("vendors").where({ slug: TARGET }).first("id");
+    const vendor = mustExist(await db("vendors").where({ slug: TARGET }).first("id"), "vendor");
     values = {};
     for (const key of new Set(routes.flatMap((r) => paramKeysOf(r.pattern)))) {
       const source = VALUE_SOURCES[key];
@@ -116,7 +117,7 @@ describe("cross-vendor probe", () => {
 
   it("a token of a removed member gets 404 from every API route of its former vendor, also after rejoining", async () => {
     const db = e2eDb();
-    const vendor = await db("vendors").where({ slug: TARGET }).first("id");
+    const vendor = mustExist(await db("vendors").where({ slug: TARGET }).first("id"), "vendor");
     const secret = `sbk_${randomBytes(24).toString("base64url")}`;
     const [user] = await db("users").insert({ email: `removed-${randomBytes(4).toString("hex")}@example.test`, name: "Removed probe", email_verified: db.fn.now() }).returning("id");
     const [member] = await db("members").insert({ vendor_id: vendor.id, user_id: user.id, role: "admin", created_at: new Date(Date.now() - 60_000) }).returning("id");

@@ -3,6 +3,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { signInWithPassword } from "../support/sign-in";
+import { mustExist } from "@/tests/support/must-exist";
 
 describe("desk search", () => {
   const sessions: Session[] = [];
@@ -13,8 +14,8 @@ describe("desk search", () => {
 
   it("finds a ticket by number, keeps the filters in the address across a reload, newest first by default", async () => {
     const db = e2eDb();
-    const vendor = await db("vendors").where({ slug: "northbeck" }).first("id");
-    const ticket = await db("tickets").where({ vendor_id: vendor.id }).whereNot("status", "closed").orderBy("created_at", "asc").first("id", "number");
+    const vendor = mustExist(await db("vendors").where({ slug: "northbeck" }).first("id"), "vendor");
+    const ticket = mustExist(await db("tickets").where({ vendor_id: vendor.id }).whereNot("status", "closed").orderBy("created_at", "asc").first("id", "number"), "ticket");
     const s = await openBrowser();
     sessions.push(s);
     s.page.setDefaultNavigationTimeout(90_000);
@@ -23,7 +24,7 @@ describe("desk search", () => {
     const rows = s.page.locator("tr[data-ticket-id]");
     await rows.first().waitFor({ timeout: 30_000 });
     // Newest first: the first row is the newest open ticket.
-    const newest = await db("tickets").where({ vendor_id: vendor.id }).whereNot("status", "closed").orderBy("created_at", "desc").first("id");
+    const newest = mustExist(await db("tickets").where({ vendor_id: vendor.id }).whereNot("status", "closed").orderBy("created_at", "desc").first("id"), "newest");
     await expect(rows.first().getAttribute("data-ticket-id")).resolves.toBe(newest.id);
 
     await s.page.getByPlaceholder("Ticket number or words").fill(`#${ticket.number}`);

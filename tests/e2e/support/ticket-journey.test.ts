@@ -8,6 +8,7 @@ import { openBrowser, screenshot, type Session } from "./browser";
 import { closeE2eDb, e2eDb } from "./db";
 import { DEMO_PASSWORD, MAILDEV_URL } from "./env";
 import { waitForMail } from "./maildev";
+import { mustExist } from "@/tests/support/must-exist";
 
 // A 1×1 PNG (ISO/IEC 15948 signature + IHDR/IDAT/IEND), standing in for a photo of the chips.
 const PHOTO = Buffer.from(
@@ -52,11 +53,11 @@ describe("support journey", () => {
 
   it("ticket from a sheet with a photo → assigned → adapted reply and a note → e-mail both ways → closed and rated", { timeout: 480_000 }, async () => {
     const db = e2eDb();
-    const vendor = await db("vendors").where({ slug: "northbeck" }).first("id");
-    const customer = await db("users").where({ email: CUSTOMER }).first("id");
-    const agent = await db("users").where({ email: AGENT }).first("id", "name");
-    const version = await db("sheet_versions").where({ vendor_id: vendor.id, state: "published" }).whereILike("title", "Cast acrylic%").first("id", "title");
-    const machine = await db("machines").where({ vendor_id: vendor.id, user_id: customer.id }).first("id", "name");
+    const vendor = mustExist(await db("vendors").where({ slug: "northbeck" }).first("id"), "vendor");
+    const customer = mustExist(await db("users").where({ email: CUSTOMER }).first("id"), "customer");
+    const agent = mustExist(await db("users").where({ email: AGENT }).first("id", "name"), "agent");
+    const version = mustExist(await db("sheet_versions").where({ vendor_id: vendor.id, state: "published" }).whereILike("title", "Cast acrylic%").first("id", "title"), "version");
+    const machine = mustExist(await db("machines").where({ vendor_id: vendor.id, user_id: customer.id }).first("id", "name"), "machine");
     expect(version && machine, "demo data: a published acrylic sheet and a machine for the customer").toBeTruthy();
     const subject = `Chips weld in the slot ${randomBytes(3).toString("hex")}`;
 

@@ -5,6 +5,7 @@ import { GET as listMachinesRoute } from "@/app/api/v1/vendors/[vendor]/machines
 import { db } from "@/lib/db/knex";
 import { createPersonalToken } from "@/lib/sheets/personal-access-tokens";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
+import { mustExist } from "@/tests/support/must-exist";
 
 const call = (slug: string, bearer: string, ip: string) =>
   listMachinesRoute(new NextRequest(`http://localhost/api/v1/vendors/${slug}/machines`, { headers: { authorization: `Bearer ${bearer}`, "x-swarfbook-peer": ip } }), {
@@ -28,7 +29,7 @@ describe("API rate-limit buckets of bearer tokens", () => {
     const { secret } = await createPersonalToken({ vendorId: v.vendor.id, userId: v.customer.user.id, name: "script" });
     expect((await call(v.vendor.slug, secret, "10.63.0.1")).status).toBe(200);
     expect((await call(v.vendor.slug, secret, "10.63.0.2")).status).toBe(200);
-    const token = await db("api_tokens").where({ user_id: v.customer.user.id, vendor_id: v.vendor.id }).orderBy("created_at", "desc").first("id");
+    const token = mustExist(await db("api_tokens").where({ user_id: v.customer.user.id, vendor_id: v.vendor.id }).orderBy("created_at", "desc").first("id"), "token");
     expect(await hits(`api:all:token:${token.id}`)).toBeGreaterThanOrEqual(2);
     expect(await db("rate_limit_buckets").whereIn("key", ["api:all:10.63.0.1", "api:all:10.63.0.2"]).first()).toBeUndefined();
   });

@@ -12,6 +12,7 @@ import { resendVerification, RESEND_LIMITS } from "@/lib/users/resend-verificati
 import { signUpCustomer } from "@/lib/users/sign-up-customer";
 import { createVendor as createVendorWorkspace } from "@/lib/vendors/create-vendor";
 import { createUser, createVendorWithStaff, FACTORY_PASSWORD, uniq } from "@/tests/factories/foundation";
+import { mustExist } from "@/tests/support/must-exist";
 
 const ATTACKER_PASSWORD = "attacker-password-1";
 const ip = (n: number) => ({ "x-forwarded-for": `10.44.0.${n}` });
@@ -45,13 +46,13 @@ describe("e-mail confirmation for password accounts", () => {
     const { userId } = await signUpCustomer({ vendorId: v.vendor.id, name: "A", email, password: "first-password-1" });
     const first = await linkMailedTo(email);
     await expect(confirmEmail({ token: first.slice(0, -2) + "xx", password: "first-password-1" })).rejects.toThrow("not valid");
-    const user = await db("users").where({ id: userId }).first("password_hash");
+    const user = mustExist(await db("users").where({ id: userId }).first("password_hash"), "user");
     const expired = createVerificationToken({ userId, email, passwordHash: user.password_hash, now: Date.now() - 49 * 3_600_000 });
     await expect(confirmEmail({ token: expired, password: "first-password-1" })).rejects.toThrow("not valid");
     // Someone signs up again with the address: the first link no longer confirms (it was for another password).
     await signUpCustomer({ vendorId: v.vendor.id, name: "B", email, password: "second-password-1" });
     await expect(confirmEmail({ token: first, password: "first-password-1" })).rejects.toThrow("not valid");
-    expect((await db("users").where({ id: userId }).first("email_verified")).email_verified).toBeNull();
+    expect((await db("users").where({ id: userId }).first("email_verified"))?.email_verified).toBeNull();
   });
 
   it("sends the link again, rate-limited, and only for unconfirmed accounts", async () => {
@@ -81,7 +82,7 @@ describe("e-mail confirmation for password accounts", () => {
   it("a magic link proves the address but drops a password that was never confirmed", async () => {
     const user = await createUser({ verified: false });
     await knexAdapter.updateUser!({ id: user.id, emailVerified: new Date() });
-    const row = await db("users").where({ id: user.id }).first("email_verified", "password_hash");
+    const row = mustExist(await db("users").where({ id: user.id }).first("email_verified", "password_hash"), "row");
     expect(row.email_verified).not.toBeNull();
     expect(row.password_hash).toBeNull();
     const confirmed = await createUser();
@@ -121,7 +122,7 @@ describe("pre-registration takeover of an invited account", () => {
     const link = await linkMailedTo(email);
     await expect(confirmEmail({ token: link, password: "the-real-password" })).rejects.toThrow("not the password");
     await expect(confirmEmail({ token: link, password: "" })).rejects.toThrow("not the password");
-    expect((await db("users").where({ email }).first("email_verified")).email_verified).toBeNull();
+    expect((await db("users").where({ email }).first("email_verified"))?.email_verified).toBeNull();
     // The invitee accepts the admin invitation; the squatter's password still does not sign in.
     const { token } = await inviteMember({ vendorId: v.vendor.id, vendorSlug: v.vendor.slug, vendorName: v.vendor.name, actorUserId: v.admin.user.id, email, role: "admin" });
     await acceptInvitation({ vendorId: v.vendor.id, token, name: "Real New Hire", password: "the-real-password", sessionUserId: null });

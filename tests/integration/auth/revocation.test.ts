@@ -11,7 +11,7 @@ import { changePassword } from "@/lib/users/change-password";
 import { joinAsCustomer } from "@/lib/users/sign-up-customer";
 import { createVendorWithStaff, FACTORY_PASSWORD } from "@/tests/factories/foundation";
 
-const epochOf = async (userId: string) => (await db("users").where({ id: userId }).first("session_epoch")).session_epoch as number;
+const epochOf = async (userId: string) => (await db("users").where({ id: userId }).first("session_epoch"))?.session_epoch as number;
 const callWith = (slug: string, bearer: string) =>
   listMachinesRoute(new NextRequest(`http://localhost/api/v1/vendors/${slug}/machines`, { headers: { authorization: `Bearer ${bearer}`, "x-swarfbook-peer": "10.61.0.1" } }), {
     params: Promise.resolve({ vendor: slug }),

@@ -5,9 +5,9 @@ import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { createSetup } from "@/lib/bench/create-setup";
 import { getSetup, listSetups } from "@/lib/bench/list-setups";
 import { createMachine } from "@/lib/bench/machines";
-import { db } from "@/lib/db/knex";
 import { createBenchSheet, supersede, weakMachineFields } from "@/tests/factories/bench";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
+import { mustExist } from "@/tests/support/must-exist";
 
 async function fixture() {
   const staff = await createVendorWithStaff();
@@ -22,8 +22,8 @@ describe("saving a setup", () => {
     // A client that sends its own result: the schema drops it, the server recomputes.
     const input = setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id, operationIndex: "0", ae: "", rpm: 99999, result: { rpm: 99999 } });
     const { id } = await createSetup({ vendorId: vendor.id, userId: customer.user.id, input });
-    const row = await db("setups").where({ id }).first();
-    expect(row.sheet_version_id).toBe(sheet.versionId);
+    const row = mustExist(await getSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }), "setup");
+    expect(row.sheetVersionId).toBe(sheet.versionId);
     // Sheet slot n 18 000 rpm, machine max 16 000 → clamped (rule 4).
     expect(row.result.rpm).toBe(16000);
     // fz = vf/(z·n) = 1800/(1·18000) = 0.1 mm; vf = fz·z·n = 0.1·1·16000 = 1600 mm/min (ISO 3002-1).

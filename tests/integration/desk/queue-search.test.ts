@@ -14,7 +14,7 @@ describe("desk queue search and order", () => {
     const fresh = await openTicket(vendor.id, customer.user.id, { subject: "Broken cutter", body: "Snapped on the first plunge; 100% depth." });
     await db("tickets").where({ id: old.id }).update({ created_at: new Date(Date.now() - 3 * 3_600_000) });
     await db("tickets").where({ id: mid.id }).update({ created_at: new Date(Date.now() - 2 * 3_600_000) });
-    const number = (await db("tickets").where({ id: mid.id }).first("number")).number as number;
+    const number = (await db("tickets").where({ id: mid.id }).first("number"))?.number as number;
     const ids = async (query: Record<string, string>) =>
       (await listQueue({ vendorId: vendor.id, userId: support.user.id, filters: parseQueueFilters(query) })).map((t) => t.id);
 

@@ -29,6 +29,6 @@ describe("ticket panel saves", () => {
       message: expect.stringContaining("Someone else changed the priority"),
       details: { current: expect.objectContaining({ priority: "urgent" }) },
     });
-    expect((await db("tickets").where({ id: ticket.id }).first("priority")).priority).toBe("urgent");
+    expect((await db("tickets").where({ id: ticket.id }).first("priority"))?.priority).toBe("urgent");
   });
 });

@@ -18,6 +18,7 @@ import { createBenchSheet, supersede, weakMachineFields } from "@/tests/factorie
 import { reportOutcomes } from "@/tests/factories/field";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
 import { openTicket } from "@/tests/factories/tickets";
+import { mustExist } from "@/tests/support/must-exist";
 
 const Z95 = 1.959964;
 
@@ -76,7 +77,7 @@ describe("Field-results rollups", () => {
     const sheetB = await createBenchSheet(b.vendor.id);
     await recordSheetActivity({ vendorId: a.vendor.id, versionId: sheetB.versionId, kind: "views" });
     await db("sheet_versions").insert({ vendor_id: b.vendor.id, sheet_id: sheetB.sheetId, number: 2, state: "draft", title: "Draft", source: "x", front_matter: "{}" });
-    const draft = await db("sheet_versions").where({ sheet_id: sheetB.sheetId, number: 2 }).first("id");
+    const draft = mustExist(await db("sheet_versions").where({ sheet_id: sheetB.sheetId, number: 2 }).first("id"), "draft");
     await recordSheetActivity({ vendorId: b.vendor.id, versionId: draft.id, kind: "views" });
     expect(await db("sheet_version_activity").whereIn("sheet_version_id", [sheetB.versionId, draft.id])).toEqual([]);
   });

@@ -6,6 +6,7 @@ import { acceptInvitation } from "@/lib/members/accept-invitation";
 import { changeMemberRole, removeMember } from "@/lib/members/change-member";
 import { inviteMember } from "@/lib/members/invite-member";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
+import { mustExist } from "@/tests/support/must-exist";
 
 async function invite(v: Awaited<ReturnType<typeof createVendorWithStaff>>, email = `${uniq("new")}@example.test`) {
   const { token } = await inviteMember({ vendorId: v.vendor.id, vendorSlug: v.vendor.slug, vendorName: v.vendor.name, actorUserId: v.admin.user.id, email, role: "engineer" });
@@ -18,7 +19,7 @@ describe("staff invitations", () => {
     const { token, email } = await invite(v);
     const result = await acceptInvitation({ vendorId: v.vendor.id, token, name: "New Engineer", password: "a-long-password", sessionUserId: null });
     expect(result).toMatchObject({ email, role: "engineer" });
-    const member = await db("members").where({ vendor_id: v.vendor.id, user_id: result.userId }).first();
+    const member = mustExist(await db("members").where({ vendor_id: v.vendor.id, user_id: result.userId }).first(), "member");
     expect(member.role).toBe("engineer");
     await expect(acceptInvitation({ vendorId: v.vendor.id, token, name: "Again", password: "a-long-password", sessionUserId: null })).rejects.toBeInstanceOf(NotFound);
     const audit = await db("audit_log").where({ vendor_id: v.vendor.id }).pluck("action");
@@ -52,8 +53,8 @@ describe("member roles", () => {
   it("changes a role with an audit entry and keeps at least one admin", async () => {
     const v = await createVendorWithStaff();
     await changeMemberRole({ vendorId: v.vendor.id, actorUserId: v.admin.user.id, memberId: v.support.memberId, role: "engineer" });
-    expect((await db("members").where({ id: v.support.memberId }).first()).role).toBe("engineer");
-    const entry = await db("audit_log").where({ vendor_id: v.vendor.id, action: "member.role", object_id: v.support.memberId }).first();
+    expect((await db("members").where({ id: v.support.memberId }).first())?.role).toBe("engineer");
+    const entry = mustExist(await db("audit_log").where({ vendor_id: v.vendor.id, action: "member.role", object_id: v.support.memberId }).first(), "entry");
     expect(entry.details).toEqual({ from: "support", to: "engineer" });
     await expect(changeMemberRole({ vendorId: v.vendor.id, actorUserId: v.admin.user.id, memberId: v.admin.memberId, role: "customer" })).rejects.toBeInstanceOf(Conflict);
     await expect(removeMember({ vendorId: v.vendor.id, actorUserId: v.admin.user.id, memberId: v.admin.memberId })).rejects.toBeInstanceOf(Conflict);

@@ -10,6 +10,7 @@ import type { SearchEngine } from "@/search/engines/engine-types";
 import { reindexSheets, reindexVendor } from "@/search/indexing/reindex";
 import { runSearch } from "@/search/run/run-search";
 import { runSeeds } from "@/seeds/run-seeds";
+import { mustExist } from "@/tests/support/must-exist";
 
 const engine = getSearchEngine();
 let ids: Awaited<ReturnType<typeof runSeeds>>;
@@ -32,8 +33,8 @@ async function deliverQueuedEvents() {
 
 async function insertReviewedDraft(vendor: string, slug: string, title: string) {
   const vendorId = ids.vendors[vendor];
-  const template: Record<string, unknown> = await db("sheets").where({ vendor_id: vendorId }).first();
-  const source: { source: string; front_matter: unknown } = await db("sheet_versions").where({ vendor_id: vendorId, sheet_id: template.id, state: "published" }).first("source", "front_matter");
+  const template = mustExist(await db("sheets").where({ vendor_id: vendorId }).first(), "template sheet");
+  const source = mustExist(await db("sheet_versions").where({ vendor_id: vendorId, sheet_id: template.id, state: "published" }).first("source", "front_matter"), "published version");
   const [{ id: sheetId }] = await db("sheets").insert({ vendor_id: vendorId, slug, cutter_id: template.cutter_id, material_id: template.material_id, machine_class_id: template.machine_class_id }).returning("id");
   await db("sheet_versions").insert({
     vendor_id: vendorId, sheet_id: sheetId, number: 1, state: "in_review", title, source: source.source, front_matter: JSON.stringify(source.front_matter),

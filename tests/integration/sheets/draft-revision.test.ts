@@ -33,7 +33,7 @@ describe("PUT draft without a revision", () => {
     const body = await response.json();
     expect(body).toMatchObject({ error: "revision_required", current: { revision: expect.any(Number) } });
     expect(body.message).toMatch(/PUT \{ source, revision \}/);
-    const draft = await db("sheet_versions").join("sheets", "sheets.id", "sheet_versions.sheet_id").where({ "sheets.slug": slug }).first("sheet_versions.source");
-    expect(draft.source).toContain("1800 mm/min");
+    const draft = await db("sheet_versions as v").join("sheets as s", "s.id", "v.sheet_id").where({ "s.slug": slug }).first("v.source");
+    expect(draft?.source).toContain("1800 mm/min");
   });
 });

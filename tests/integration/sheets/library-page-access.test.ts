@@ -7,6 +7,7 @@ import type { SessionUser } from "@/lib/auth/session-user";
 import { db } from "@/lib/db/knex";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
 import { createPublishedSheet } from "@/tests/factories/tickets";
+import { mustExist } from "@/tests/support/must-exist";
 
 // A request can render a page segment without its layout, so each Library page checks access itself.
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
@@ -29,7 +30,7 @@ const digestOf = async (render: () => Promise<unknown>) => {
 async function customersOnlyLibrary() {
   const staff = await createVendorWithStaff({ settings: { libraryPublic: false } });
   const sheet = await createPublishedSheet(staff.vendor.id, staff.engineer.user.id);
-  const cutter = await db("cutters").where({ id: sheet.cutterId }).first("sku");
+  const cutter = mustExist(await db("cutters").where({ id: sheet.cutterId }).first("sku"), "cutter");
   const pages = (slug: string) => [
     () => SheetPage({ params: Promise.resolve({ vendor: slug, sheet: sheet.sheetSlug }) }),
     () => SheetVersionPage({ params: Promise.resolve({ vendor: slug, sheet: sheet.sheetSlug, n: "1" }) }),

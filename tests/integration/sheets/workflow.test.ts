@@ -11,6 +11,7 @@ import { startNewVersion } from "@/lib/sheets/start-new-version";
 import { submitDraft } from "@/lib/sheets/submit-draft";
 import { withdrawVersion } from "@/lib/sheets/withdraw-version";
 import { createDraftingScenario, publishOpenDraft, sourceWithFeed } from "@/tests/factories/sheets";
+import { mustExist } from "@/tests/support/must-exist";
 
 const states = async (vendorId: string, slug: string) =>
   db("sheet_versions as v").join("sheets as s", "s.id", "v.sheet_id").where({ "s.slug": slug, "v.vendor_id": vendorId }).orderBy("v.number").pluck("v.state");
@@ -65,7 +66,7 @@ describe("sheet version workflow", () => {
     await submitDraft({ ...s.as(s.engineer.user.id), changeNote: "First." });
     await approveDraft(s.as(s.engineer2.user.id));
     await returnToDraft(s.as(s.engineer.user.id));
-    const row = await db("sheet_versions").where({ vendor_id: s.vendor.id }).first();
+    const row = mustExist(await db("sheet_versions").where({ vendor_id: s.vendor.id }).first(), "row");
     expect([row.state, row.approved_by]).toEqual(["draft", null]);
   });
 

@@ -20,6 +20,7 @@ import { saveAttachment } from "@/lib/tickets/attachments/save-attachment";
 import { createBenchSheet, weakMachineFields } from "@/tests/factories/bench";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { openTicket } from "@/tests/factories/tickets";
+import { mustExist } from "@/tests/support/must-exist";
 
 const PNG = Buffer.from("89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da63f8ffff3f0005fe02fea7d6a4c80000000049454e44ae426082", "hex");
 const gcode = (kb: number) => Buffer.from(`G21\n${"G1 X10 Y10 F1600\n".repeat(Math.ceil((kb * 1024) / 17))}`.slice(0, kb * 1024));
@@ -59,7 +60,7 @@ describe("upload cleanup", () => {
     const machine = await createMachine({ ...owner, fields: machineFieldsSchema.parse(weakMachineFields) });
     const setup = await createSetup({ ...owner, input: setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id }) });
     await recordOutcome({ ...owner, setupId: setup.id, fields: outcomeFieldsSchema.parse({ result: "failed", symptom: "chatter" }), photo: PNG });
-    const { photo_key: key } = await db("outcomes").where({ setup_id: setup.id }).first("photo_key");
+    const key = mustExist((await db("outcomes").where({ setup_id: setup.id }).first("photo_key"))?.photo_key, "photo key");
     expect(await getStorage().get(key)).not.toBeNull();
     await deleteMachine({ ...owner, machineId: machine.id });
     expect(await getStorage().get(key)).toBeNull();

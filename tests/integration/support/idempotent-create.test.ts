@@ -6,6 +6,7 @@ import { db } from "@/lib/db/knex";
 import { createTicket } from "@/lib/tickets/create-ticket";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { createMachine, createPublishedSheet, loadVendor } from "@/tests/factories/tickets";
+import { mustExist } from "@/tests/support/must-exist";
 
 const input = (key: string) => ({ subject: "Melting in acrylic", body: "Chips weld.", idempotencyKey: key, attachmentIds: [] });
 
@@ -37,7 +38,7 @@ describe("ticket creation", () => {
     const { vendor: v, customer } = await createVendorWithStaff({ settings: { firstResponseHours: { low: 48, normal: 10, high: 4, urgent: 1 } } });
     const vendor = await loadVendor(v.id);
     const t = await createTicket({ vendor, customerId: customer.user.id, input: input(randomUUID()) });
-    const row = await db("tickets").where({ id: t.id }).first();
+    const row = mustExist(await db("tickets").where({ id: t.id }).first(), "row");
     const hours = (new Date(row.first_response_due_at).getTime() - new Date(row.created_at).getTime()) / 3_600_000;
     expect(hours).toBeCloseTo(10, 6);
   });
@@ -51,7 +52,7 @@ describe("ticket creation", () => {
     const t = await createTicket({ vendor, customerId: customer.user.id, input: { ...input(randomUUID()), sheetVersionId: sheet.versionId, machineId: machine.id } });
     const link = await db("ticket_sheet_links").where({ ticket_id: t.id }).first();
     expect(link).toMatchObject({ sheet_version_id: sheet.versionId, machine_id: machine.id });
-    const row = await db("tickets").where({ id: t.id }).first();
+    const row = mustExist(await db("tickets").where({ id: t.id }).first(), "row");
     expect(row.material_id).toBe(sheet.materialId);
     await expect(
       createTicket({ vendor, customerId: customer.user.id, input: { ...input(randomUUID()), machineId: foreign.id } }),

@@ -7,6 +7,7 @@ import { rateTicket } from "@/lib/tickets/rate-ticket";
 import { updateTicket } from "@/lib/tickets/update-ticket";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
 import { loadVendor, openTicket } from "@/tests/factories/tickets";
+import { mustExist } from "@/tests/support/must-exist";
 
 describe("replies", () => {
   it("two agents replying at the same moment both land", async () => {
@@ -55,8 +56,8 @@ describe("audit trail", () => {
     const vendor = await loadVendor(v.id);
     const ticket = await openTicket(v.id, customer.user.id);
     await updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: ticket.id, priority: "urgent" } });
-    const row = await db("tickets").where({ id: ticket.id }).first();
-    expect((row.first_response_due_at - row.created_at) / 3_600_000).toBeCloseTo(2, 6);
+    const row = mustExist(await db("tickets").where({ id: ticket.id }).first(), "row");
+    expect((row.first_response_due_at.getTime() - row.created_at.getTime()) / 3_600_000).toBeCloseTo(2, 6);
   });
 
   it("refuses to assign a ticket to a customer", async () => {
@@ -75,7 +76,7 @@ describe("satisfaction", () => {
     await expect(rateTicket({ vendorId: v.id, customerId: customer.user.id, input: { ticketId: ticket.id, satisfaction: 5, comment: "" } })).rejects.toMatchObject({ code: "conflict" });
     await updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: ticket.id, status: "closed" } });
     await rateTicket({ vendorId: v.id, customerId: customer.user.id, input: { ticketId: ticket.id, satisfaction: 4, comment: "Quick and right" } });
-    const row = await db("tickets").where({ id: ticket.id }).first();
+    const row = mustExist(await db("tickets").where({ id: ticket.id }).first(), "row");
     expect([row.satisfaction, row.satisfaction_comment, row.closed_at instanceof Date]).toEqual([4, "Quick and right", true]);
   });
 });
