@@ -2,6 +2,8 @@ import "server-only";
 
 import { createHmac, timingSafeEqual } from "node:crypto";
 
+import { isUuid } from "@/lib/ids/is-uuid";
+
 // A confirmation link carries its own proof: an HMAC over the user, the address it was mailed to, the pending
 // password and the expiry. Binding the password means that if someone else signs up again with the same address
 // (replacing the unproven password), the links mailed before stop working: a click confirms only the password that
@@ -14,7 +16,6 @@ function secret(): string {
   return value;
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 type Bound = { email: string; passwordHash: string | null };
 const sign = (payload: string, { email, passwordHash }: Bound) =>
   createHmac("sha256", secret()).update(`verify-email:${payload}:${email.toLowerCase()}:${passwordHash ?? ""}`).digest("base64url");
@@ -29,7 +30,7 @@ export function readVerificationToken(token: string, accountOf: (userId: string)
   const [payload, signature, extra] = token.split(".");
   if (!payload || !signature || extra !== undefined) return null;
   const [userId, expires] = Buffer.from(payload, "base64url").toString("utf8").split(".");
-  if (!userId || !UUID.test(userId) || !/^\d+$/.test(expires ?? "") || Number(expires) < now) return null;
+  if (!userId || !isUuid(userId) || !/^\d+$/.test(expires ?? "") || Number(expires) < now) return null;
   const account = accountOf(userId);
   if (!account) return null;
   const expected = Buffer.from(sign(payload, account));
@@ -40,5 +41,5 @@ export function readVerificationToken(token: string, accountOf: (userId: string)
 /** The user id inside a token, before its signature is checked (to look up the address it must match). */
 export function peekVerificationUser(token: string): string | null {
   const userId = Buffer.from(token.split(".")[0] ?? "", "base64url").toString("utf8").split(".")[0];
-  return userId && UUID.test(userId) ? userId : null;
+  return userId && isUuid(userId) ? userId : null;
 }

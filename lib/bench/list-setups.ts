@@ -2,6 +2,7 @@ import "server-only";
 
 import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { db } from "@/lib/db/knex";
+import { isUuid } from "@/lib/ids/is-uuid";
 
 import { rowToSetup, SETUP_COLUMNS, type Setup } from "./setup-rows";
 
@@ -50,9 +51,7 @@ export async function listSetups({ vendorId, userId, setupId }: { vendorId: stri
   }));
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 export async function getSetup(options: { vendorId: string; userId: string; setupId: string }): Promise<SetupSummary | null> {
-  if (!UUID.test(options.setupId)) return null;
+  if (!isUuid(options.setupId)) return null;
   return (await listSetups(options))[0] ?? null;
 }

@@ -4,9 +4,10 @@ import type { OverrideDraft } from "./compute-adaptation";
 import { getSetup } from "./list-setups";
 import { loadAdaptContext } from "./load-adapt-context";
 
+import { isUuid } from "@/lib/ids/is-uuid";
+
 export type AdaptStart = { machineId: string; operationIndex: number; overrides: OverrideDraft };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const mm = (value: number | undefined) => (value === undefined ? "" : `${Number(value.toFixed(4))} mm`);
 
 /**
@@ -14,7 +15,7 @@ const mm = (value: number | undefined) => (value === undefined ? "" : `${Number(
  * customer's own changes, so re-adapting never silently drops them. Another customer's setup is ignored.
  */
 export async function readaptStart({ vendorId, userId, setupId, versionId }: { vendorId: string; userId: string; setupId: string | undefined; versionId: string }): Promise<AdaptStart | null> {
-  if (!setupId || !UUID.test(setupId)) return null;
+  if (!setupId || !isUuid(setupId)) return null;
   const setup = await getSetup({ vendorId, userId, setupId });
   if (!setup) return null;
   const [oldContext, context] = await Promise.all([loadAdaptContext({ vendorId, versionId: setup.sheetVersionId }), loadAdaptContext({ vendorId, versionId })]);

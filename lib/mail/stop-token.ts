@@ -2,6 +2,8 @@ import "server-only";
 
 import { createHmac, timingSafeEqual } from "node:crypto";
 
+import { isUuid } from "@/lib/ids/is-uuid";
+
 // A stop link works without signing in, so it carries its own proof: an HMAC over purpose, vendor and user.
 // The purpose is part of the signature: a change-alert link cannot stop the weekly digest, or the reverse.
 export type StopPurpose = "change-alerts" | "weekly-digest";
@@ -13,7 +15,6 @@ function secret(): string {
 }
 
 const sign = (purpose: StopPurpose, payload: string) => createHmac("sha256", secret()).update(`${purpose}:${payload}`).digest("base64url");
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export function createStopToken(purpose: StopPurpose, { vendorId, userId }: { vendorId: string; userId: string }): string {
   const payload = Buffer.from(`${vendorId}.${userId}`).toString("base64url");
@@ -28,5 +29,5 @@ export function readStopToken(purpose: StopPurpose, token: string): { vendorId: 
   const given = Buffer.from(signature);
   if (expected.length !== given.length || !timingSafeEqual(expected, given)) return null;
   const [vendorId, userId] = Buffer.from(payload, "base64url").toString("utf8").split(".");
-  return vendorId && userId && UUID.test(vendorId) && UUID.test(userId) ? { vendorId, userId } : null;
+  return vendorId && userId && isUuid(vendorId) && isUuid(userId) ? { vendorId, userId } : null;
 }

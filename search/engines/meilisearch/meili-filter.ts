@@ -1,8 +1,7 @@
+import { isUuid } from "@/lib/ids/is-uuid";
 import { searchSettings } from "@/search/settings";
 
 import type { QueryParts } from "../engine-types";
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** A filter string value: double-quoted, backslashes and quotes escaped, so no value can end the expression. */
 export const quote = (value: string) => `"${value.replace(/\\/g, "\\\\").replace(/"/g, '\\"')}"`;
@@ -15,7 +14,7 @@ const num = (n: number) => {
 
 /** Every search starts with this: one shared index, and the vendor filter is always applied. */
 export function vendorFilter(vendorId: string): string {
-  if (!UUID.test(vendorId)) throw new Error("vendorId must be a UUID.");
+  if (!isUuid(vendorId)) throw new Error("vendorId must be a UUID.");
   return `vendorId = ${quote(vendorId)}`;
 }
 

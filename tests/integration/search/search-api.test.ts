@@ -2,11 +2,11 @@ import { NextRequest } from "next/server";
 import { beforeAll, describe, expect, it } from "vitest";
 
 import { GET } from "@/app/api/v1/vendors/[vendor]/search/route";
-import { hashToken, newTokenSecret } from "@/lib/auth/api-tokens";
 import { db } from "@/lib/db/knex";
 import { getSearchEngine } from "@/search/engines/choose-engine";
 import { reindexVendor } from "@/search/indexing/reindex";
 import type { SearchResponse } from "@/search/run/search-response";
+import { createApiToken } from "@/tests/factories/api-tokens";
 import { createMember, createVendor } from "@/tests/factories/foundation";
 import { sheetDoc } from "@/tests/unit/search/document/document-fixture";
 
@@ -17,9 +17,7 @@ let openToken: string;
 
 async function tokenFor(vendorId: string) {
   const member = await createMember(vendorId, "customer");
-  const secret = newTokenSecret();
-  await db("api_tokens").insert({ vendor_id: vendorId, user_id: member.user.id, name: "search test", prefix: secret.slice(0, 8), token_hash: hashToken(secret) });
-  return secret;
+  return createApiToken(vendorId, member.user.id, "search test");
 }
 
 // Bearer tokens only: a cookie session needs a request scope that a direct handler call does not have.

@@ -5,18 +5,12 @@ import { describe, expect, it } from "vitest";
 
 import { GET as getOne } from "@/app/api/v1/vendors/[vendor]/tickets/[ticket]/route";
 import { GET as list, POST as create } from "@/app/api/v1/vendors/[vendor]/tickets/route";
-import { hashToken, newTokenSecret } from "@/lib/auth/api-tokens";
 import { db } from "@/lib/db/knex";
 import { addStaffMessage } from "@/lib/tickets/add-message";
 import { updateTicket } from "@/lib/tickets/update-ticket";
+import { createApiToken } from "@/tests/factories/api-tokens";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { loadVendor } from "@/tests/factories/tickets";
-
-async function tokenFor(vendorId: string, userId: string) {
-  const token = newTokenSecret();
-  await db("api_tokens").insert({ vendor_id: vendorId, user_id: userId, name: "test", prefix: token.slice(0, 8), token_hash: hashToken(token) });
-  return token;
-}
 
 const post = (slug: string, token: string, body: unknown) =>
   create(
@@ -32,7 +26,7 @@ describe("tickets API", () => {
   it("gives a customer the customer's view only: no tags, priority, assignee or staff e-mail", async () => {
     const { vendor, customer, support } = await createVendorWithStaff();
     await db("users").where({ id: support.user.id }).update({ name: "" });
-    const token = await tokenFor(vendor.id, customer.user.id);
+    const token = await createApiToken(vendor.id, customer.user.id);
     const { ticket } = await (await post(vendor.slug, token, { subject: "Burn marks", body: "On every pass.", idempotencyKey: randomUUID() })).json();
     const staffVendor = await loadVendor(vendor.id);
     await updateTicket({ vendor: staffVendor, actorUserId: support.user.id, input: { ticketId: ticket.id, assigneeId: support.user.id, priority: "high", tags: ["difficult-customer"] } });
@@ -53,7 +47,7 @@ describe("tickets API", () => {
 
   it("creates once per idempotency key (201 then 200) and reads the customer's view without notes", async () => {
     const { vendor, customer, support } = await createVendorWithStaff();
-    const token = await tokenFor(vendor.id, customer.user.id);
+    const token = await createApiToken(vendor.id, customer.user.id);
     const body = { subject: "Broken cutter on plunge", body: "Snapped at the first plunge.", idempotencyKey: randomUUID() };
     const first = await post(vendor.slug, token, body);
     const again = await post(vendor.slug, token, body);
@@ -71,7 +65,7 @@ describe("tickets API", () => {
 
   it("answers 400 with field errors for a bad body", async () => {
     const { vendor, customer } = await createVendorWithStaff();
-    const res = await post(vendor.slug, await tokenFor(vendor.id, customer.user.id), { subject: "", body: "" });
+    const res = await post(vendor.slug, await createApiToken(vendor.id, customer.user.id), { subject: "", body: "" });
     expect(res.status).toBe(400);
     expect(Object.keys((await res.json()).fieldErrors)).toEqual(expect.arrayContaining(["subject", "body", "idempotencyKey"]));
   });
@@ -79,13 +73,13 @@ describe("tickets API", () => {
   it("answers 404 for another vendor's ticket and for another customer's ticket", async () => {
     const a = await createVendorWithStaff();
     const b = await createVendorWithStaff();
-    const tokenA = await tokenFor(a.vendor.id, a.customer.user.id);
+    const tokenA = await createApiToken(a.vendor.id, a.customer.user.id);
     const { ticket } = await (await post(a.vendor.slug, tokenA, { subject: "Chatter", body: "Loud", idempotencyKey: randomUUID() })).json();
-    const tokenB = await tokenFor(b.vendor.id, b.customer.user.id);
+    const tokenB = await createApiToken(b.vendor.id, b.customer.user.id);
     expect((await get(b.vendor.slug, tokenB, ticket.id)).status).toBe(404);
     // A token of vendor A used on vendor B's path is not valid there.
     expect((await get(b.vendor.slug, tokenA, ticket.id)).status).toBe(404);
-    const staffA = await tokenFor(a.vendor.id, a.engineer.user.id);
+    const staffA = await createApiToken(a.vendor.id, a.engineer.user.id);
     expect((await post(a.vendor.slug, staffA, { subject: "x y z", body: "b", idempotencyKey: randomUUID() })).status).toBe(404);
   });
 });

@@ -5,10 +5,10 @@ import { NotFound } from "@/lib/errors/domain-errors";
 import { parseInput } from "@/lib/errors/zod-field-errors";
 import { readJson } from "@/lib/http/read-json";
 import { withVendor } from "@/lib/http/with-vendor";
+import { isUuid } from "@/lib/ids/is-uuid";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const machineId = (id: string) => {
-  if (!UUID.test(id)) throw new NotFound();
+  if (!isUuid(id)) throw new NotFound();
   return id;
 };
 

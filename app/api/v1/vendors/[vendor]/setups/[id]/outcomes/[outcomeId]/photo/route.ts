@@ -2,13 +2,12 @@ import { requireMember } from "@/lib/auth/access";
 import { getOutcomePhoto } from "@/lib/bench/outcomes";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isUuid } from "@/lib/ids/is-uuid";
 
 // GET /api/v1/vendors/{vendor}/setups/{id}/outcomes/{outcomeId}/photo: the owner's outcome photo, re-sniffed.
 export const GET = withVendor<{ vendor: string; id: string; outcomeId: string }>(async (_request, { access, params }) => {
   requireMember(access);
-  if (!UUID.test(params.outcomeId)) throw new NotFound();
+  if (!isUuid(params.outcomeId)) throw new NotFound();
   const photo = await getOutcomePhoto({ vendorId: access.vendor.id, userId: access.user.id, outcomeId: params.outcomeId });
   if (!photo) throw new NotFound();
   return new Response(new Uint8Array(photo.bytes), {
