@@ -15,6 +15,8 @@ import { lastFieldRefresh } from "@/lib/field/refresh-rollups";
 import { wilsonInterval } from "@/lib/field/wilson";
 import { formatDateTime } from "@/lib/ui/dates";
 
+import { sendDigestNowAction, setWeeklyDigestAction } from "./actions";
+
 export const metadata = { title: "Field results" };
 
 
@@ -48,7 +50,7 @@ export default async function FieldResultsPage({ params }: { params: Promise<{ v
         title="Field results"
         lead={<>How your published numbers fare in customers’ shops: outcome reports, setups and tickets, per sheet version. Aggregates only; no customer is named. Figures as of {refreshed ? formatDateTime(refreshed) : "the next refresh"}; they refresh every few minutes.</>}
       />
-      <DigestControls vendorSlug={slug} enabled={digestOn} />
+      <DigestControls sendDigestNowAction={sendDigestNowAction} setWeeklyDigestAction={setWeeklyDigestAction} vendorSlug={slug} enabled={digestOn} />
       <dl className="mt-6 grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-6">
         {tiles.map(([name, value]) => (
           <div key={name} className="rounded-lg border border-stone-200 bg-white p-4">

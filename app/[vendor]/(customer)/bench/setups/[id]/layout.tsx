@@ -1,11 +1,11 @@
 import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
 
-import { loadBenchSetup } from "@/components/bench/load-bench";
+import { findBenchSetup } from "@/lib/bench/page-data";
 
 // Looked up above the loading boundary, so another customer's setup is a real 404.
 export default async function SetupLayout({ children, params }: { children: ReactNode; params: Promise<{ vendor: string; id: string }> }) {
   const { vendor, id } = await params;
-  if (!(await loadBenchSetup(vendor, id))) notFound();
+  if (!(await findBenchSetup(vendor, id))) notFound();
   return children;
 }

@@ -6,7 +6,7 @@ import { resultRows, ResultTable } from "@/components/adapt/result-table";
 import { StepsTrail } from "@/components/adapt/steps-trail";
 import { WarningList } from "@/components/adapt/warning-list";
 import { FeedSpeedChart } from "@/components/bench/feed-speed-chart";
-import { loadBenchSetup } from "@/components/bench/load-bench";
+import { findAdaptContext, findBenchSetup } from "@/lib/bench/page-data";
 import { OutcomeForm } from "@/components/bench/outcome-form";
 import { OutcomeHistory } from "@/components/bench/outcome-history";
 import { ReadaptCompare } from "@/components/bench/readapt-compare";
@@ -14,7 +14,6 @@ import { AskAboutSheet } from "@/components/support/ask-about-sheet";
 import { PageHeader } from "@/components/ui/page-header";
 import { entryCapabilityLabels } from "@/content-schema/setup-fields";
 import { feedSpeedCurve } from "@/lib/bench/feed-speed-curve";
-import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 import { machineToInput } from "@/lib/bench/machine-rows";
 import { getMachine } from "@/lib/bench/machines";
 import { listOutcomes } from "@/lib/bench/outcomes";
@@ -27,12 +26,12 @@ export const metadata = { title: "Setup" };
 
 export default async function SetupPage({ params }: { params: Promise<{ vendor: string; id: string }> }) {
   const { vendor: slug, id } = await params;
-  const found = await loadBenchSetup(slug, id);
+  const found = await findBenchSetup(slug, id);
   if (!found) notFound();
   const { vendor, user, setup } = found;
   const owner = { vendorId: vendor.id, userId: user.id };
   const [context, machine, outcomes] = await Promise.all([
-    loadAdaptContext({ vendorId: vendor.id, versionId: setup.sheetVersionId }),
+    findAdaptContext(vendor.id, setup.sheetVersionId),
     getMachine({ ...owner, machineId: setup.machineId }),
     listOutcomes({ ...owner, setupId: setup.id }),
   ]);

@@ -3,7 +3,7 @@ import { notFound } from "next/navigation";
 
 import { CutterForm } from "@/components/catalogue/catalogue-forms";
 import { ImageUpload } from "@/components/catalogue/image-upload";
-import { loadCutter } from "@/components/catalogue/load-drafting-item";
+import { findDraftingCutter } from "@/lib/catalogue/page-data";
 import { CutterCard } from "@/components/library/cutter-card";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
@@ -15,13 +15,13 @@ type Props = { params: Promise<{ vendor: string; sku: string }> };
 
 export async function generateMetadata({ params }: Props) {
   const { vendor, sku } = await params;
-  return { title: (await loadCutter(vendor, sku))?.sku ?? "Cutter" };
+  return { title: (await findDraftingCutter(vendor, sku))?.sku ?? "Cutter" };
 }
 
 export default async function CutterDetailPage({ params }: Props) {
   const { vendor: slug, sku } = await params;
   const { vendor, member } = await requirePageAccess(slug, "sheets.author", `/${slug}/drafting/cutters/${sku}`);
-  const cutter = await loadCutter(slug, sku);
+  const cutter = await findDraftingCutter(slug, sku);
   if (!cutter) notFound();
   const { id, shortCode, imageKey: _imageKey, updatedAt: _updatedAt, ...fields } = cutter;
   const editable = can(member?.role, "catalogue.edit");

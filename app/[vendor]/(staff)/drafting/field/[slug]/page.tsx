@@ -6,7 +6,7 @@ import { CustomerChangesList } from "@/components/field/customer-changes-list";
 import { FieldCharts } from "@/components/field/field-charts";
 import { FieldSection } from "@/components/field/field-section";
 import { LinkedTicketList } from "@/components/field/linked-ticket-list";
-import { loadFieldSheet } from "@/components/field/load-field-sheet";
+import { findFieldSheetPage } from "@/lib/field/page-data";
 import { VersionRollupTable } from "@/components/field/version-rollup-table";
 import { formatDate } from "@/components/library/format-date";
 import { PageHeader } from "@/components/ui/page-header";
@@ -19,7 +19,7 @@ export const metadata = { title: "Field results for a sheet" };
 
 export default async function FieldSheetPage({ params }: { params: Promise<{ vendor: string; slug: string }> }) {
   const { vendor: slug, slug: sheetSlug } = await params;
-  const found = await loadFieldSheet(slug, sheetSlug);
+  const found = await findFieldSheetPage(slug, sheetSlug);
   if (!found) notFound();
   const { access, sheet } = found;
   const { z, label } = confidenceOf(access.vendor.settings);

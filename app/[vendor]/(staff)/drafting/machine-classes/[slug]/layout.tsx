@@ -1,10 +1,10 @@
 import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
 
-import { loadMachineClass } from "@/components/catalogue/load-drafting-item";
+import { findDraftingMachineClass } from "@/lib/catalogue/page-data";
 
 export default async function ItemLayout({ children, params }: { children: ReactNode; params: Promise<{ vendor: string; slug: string }> }) {
   const { vendor, slug } = await params;
-  if (!(await loadMachineClass(vendor, slug))) notFound();
+  if (!(await findDraftingMachineClass(vendor, slug))) notFound();
   return children;
 }

@@ -2,7 +2,7 @@ import { notFound } from "next/navigation";
 
 import { CatalogueItemView } from "@/components/catalogue/catalogue-item-view";
 import { MachineClassForm } from "@/components/catalogue/catalogue-forms";
-import { loadMachineClass } from "@/components/catalogue/load-drafting-item";
+import { findDraftingMachineClass } from "@/lib/catalogue/page-data";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
 
@@ -13,13 +13,13 @@ type Props = { params: Promise<{ vendor: string; slug: string }> };
 
 export async function generateMetadata({ params }: Props) {
   const { vendor, slug } = await params;
-  return { title: (await loadMachineClass(vendor, slug))?.name ?? "Not found" };
+  return { title: (await findDraftingMachineClass(vendor, slug))?.name ?? "Not found" };
 }
 
 export default async function DetailPage({ params }: Props) {
   const { vendor: vendorSlug, slug } = await params;
   const { member } = await requirePageAccess(vendorSlug, "sheets.author", `/${vendorSlug}/drafting/machine-classes/${slug}`);
-  const item = await loadMachineClass(vendorSlug, slug);
+  const item = await findDraftingMachineClass(vendorSlug, slug);
   if (!item) notFound();
   const { id, updatedAt: _updatedAt, ...fields } = item;
   const editForm = can(member?.role, "catalogue.edit") ? <MachineClassForm vendorSlug={vendorSlug} action={saveMachineClassAction} id={id} defaultValues={{ ...fields, zThrustN: fields.zThrustN ?? "", ratedRpm: fields.ratedRpm ?? "" }} /> : null;

@@ -2,7 +2,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 
 import { ActionForm } from "@/components/drafting/action-form";
-import { loadDraftingSheet } from "@/components/drafting/load-drafting-sheet";
+import { findDraftingSheetPage } from "@/lib/sheets/page-data";
 import { ReviewPreview } from "@/components/drafting/review-preview";
 import { StateBadge } from "@/components/drafting/state-badge";
 import { VersionTable } from "@/components/drafting/version-table";
@@ -18,7 +18,7 @@ type Props = { params: Promise<{ vendor: string; slug: string }> };
 
 export async function generateMetadata({ params }: Props) {
   const { vendor, slug } = await params;
-  return { title: (await loadDraftingSheet(vendor, slug))?.versions[0]?.title ?? "Sheet" };
+  return { title: (await findDraftingSheetPage(vendor, slug))?.versions[0]?.title ?? "Sheet" };
 }
 
 const box = "rounded-md border border-stone-300 bg-white p-4";
@@ -26,7 +26,7 @@ const box = "rounded-md border border-stone-300 bg-white p-4";
 export default async function DraftingSheetPage({ params }: Props) {
   const { vendor: vendorSlug, slug } = await params;
   const { vendor, user, member } = await requirePageAccess(vendorSlug, "sheets.author", `/${vendorSlug}/drafting/sheets/${slug}`);
-  const data = await loadDraftingSheet(vendorSlug, slug);
+  const data = await findDraftingSheetPage(vendorSlug, slug);
   if (!data) notFound();
   const { sheet, openDraft: draft, versions } = data;
   const hidden = { vendor: vendor.slug, slug: sheet.slug };

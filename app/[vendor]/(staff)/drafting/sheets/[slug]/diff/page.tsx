@@ -1,6 +1,6 @@
 import { notFound } from "next/navigation";
 
-import { loadDraftingSheet } from "@/components/drafting/load-drafting-sheet";
+import { findDraftingSheetPage } from "@/lib/sheets/page-data";
 import { ParameterDiffTable } from "@/components/drafting/parameter-diff-table";
 import { ProseDiffView } from "@/components/drafting/prose-diff-view";
 import { readUnits } from "@/components/library/read-units";
@@ -25,7 +25,7 @@ const body = (source: string) => {
 export default async function DiffPage({ params, searchParams }: Props) {
   const { vendor: vendorSlug, slug } = await params;
   await requirePageAccess(vendorSlug, "sheets.author", `/${vendorSlug}/drafting/sheets/${slug}/diff`);
-  const data = await loadDraftingSheet(vendorSlug, slug);
+  const data = await findDraftingSheetPage(vendorSlug, slug);
   if (!data) notFound();
   const q = await searchParams;
   const byNumber = new Map(data.versions.map((v) => [v.number, v]));

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 
-import { loadDraftingSheet } from "@/components/drafting/load-drafting-sheet";
+import { findDraftingSheetPage } from "@/lib/sheets/page-data";
 import { SheetEditor } from "@/components/drafting/sheet-editor";
 import { StateBadge } from "@/components/drafting/state-badge";
 import { PageHeader } from "@/components/ui/page-header";
@@ -16,7 +16,7 @@ export const metadata = { title: "Edit draft" };
 export default async function EditDraftPage({ params }: Props) {
   const { vendor: vendorSlug, slug } = await params;
   await requirePageAccess(vendorSlug, "sheets.author", `/${vendorSlug}/drafting/sheets/${slug}/edit`);
-  const data = await loadDraftingSheet(vendorSlug, slug);
+  const data = await findDraftingSheetPage(vendorSlug, slug);
   if (!data) notFound();
   const back = `/${vendorSlug}/drafting/sheets/${data.sheet.slug}`;
   const draft = data.openDraft;

@@ -7,7 +7,7 @@ import { findFieldSheet } from "@/lib/field/sheet-field-results";
 import { safeDecode } from "@/lib/http/safe-decode";
 
 /** The sheet a Field-results drill-in is about, under the engineer's own vendor; null answers 404. */
-export const loadFieldSheet = cache(async (vendorSlug: string, sheetSlug: string) => {
+export const findFieldSheetPage = cache(async (vendorSlug: string, sheetSlug: string) => {
   const access = await requirePageAccess(vendorSlug, "field.read", `/${vendorSlug}/drafting/field/${sheetSlug}`);
   const slug = safeDecode(sheetSlug);
   const sheet = slug === null ? null : await findFieldSheet({ vendorId: access.vendor.id, slug });

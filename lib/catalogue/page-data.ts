@@ -7,19 +7,19 @@ import { safeDecode } from "@/lib/http/safe-decode";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
 // One lookup per request, shared by a segment's layout (the 404) and its page.
-export const loadCutter = cache(async (vendorSlug: string, sku: string) => {
+export const findDraftingCutter = cache(async (vendorSlug: string, sku: string) => {
   const vendor = await getVendorBySlug(vendorSlug);
   const decoded = safeDecode(sku);
   return vendor && decoded !== null ? getCutterBySku({ vendorId: vendor.id, sku: decoded }) : null;
 });
 
-export const loadMaterial = cache(async (vendorSlug: string, slug: string) => {
+export const findDraftingMaterial = cache(async (vendorSlug: string, slug: string) => {
   const vendor = await getVendorBySlug(vendorSlug);
   const decoded = safeDecode(slug);
   return vendor && decoded !== null ? getMaterialBySlug({ vendorId: vendor.id, slug: decoded }) : null;
 });
 
-export const loadMachineClass = cache(async (vendorSlug: string, slug: string) => {
+export const findDraftingMachineClass = cache(async (vendorSlug: string, slug: string) => {
   const vendor = await getVendorBySlug(vendorSlug);
   const decoded = safeDecode(slug);
   return vendor && decoded !== null ? getMachineClassBySlug({ vendorId: vendor.id, slug: decoded }) : null;

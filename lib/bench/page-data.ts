@@ -1,0 +1,40 @@
+import "server-only";
+
+import { cache } from "react";
+
+import { requirePageAccess } from "@/lib/auth/page-access";
+import { isUuid } from "@/lib/ids/is-uuid";
+
+import { getSetup } from "./list-setups";
+import { loadAdaptContext } from "./load-adapt-context";
+import { getMachine } from "./machines";
+
+// The Bench's page data: each lookup runs once per request, shared by a segment's layout (the 404) and its page.
+// `find…` answers null for "not found here", which the layout turns into a 404.
+
+/** A sheet version's adapt context, read once per request however many panels and sections ask for it. */
+export const findAdaptContext = cache((vendorId: string, versionId: string) => loadAdaptContext({ vendorId, versionId }));
+
+/** The customer's machine; vendor and owner in the WHERE. */
+export const findBenchMachine = cache(async (vendorSlug: string, id: string) => {
+  const { vendor, user } = await requirePageAccess(vendorSlug, "bench.use", `/${vendorSlug}/bench/machines/${id}`);
+  if (!user || !isUuid(id)) return null;
+  const machine = await getMachine({ vendorId: vendor.id, userId: user.id, machineId: id });
+  return machine ? { vendor, user, machine } : null;
+});
+
+/** The customer's setup; vendor and owner in the WHERE. */
+export const findBenchSetup = cache(async (vendorSlug: string, id: string) => {
+  const { vendor, user } = await requirePageAccess(vendorSlug, "bench.use", `/${vendorSlug}/bench/setups/${id}`);
+  if (!user) return null;
+  const setup = await getSetup({ vendorId: vendor.id, userId: user.id, setupId: id });
+  return setup ? { vendor, user, setup } : null;
+});
+
+/** A readable, not withdrawn sheet version of the vendor, for the Bench adapt page. */
+export const findBenchVersion = cache(async (vendorSlug: string, versionId: string) => {
+  const { vendor, user } = await requirePageAccess(vendorSlug, "bench.use", `/${vendorSlug}/bench/adapt/${versionId}`);
+  if (!user || !isUuid(versionId)) return null;
+  const context = await findAdaptContext(vendor.id, versionId);
+  return context && context.versionState !== "withdrawn" ? { vendor, user, context } : null;
+});
