@@ -6,6 +6,9 @@ import { listDeadLetters, summariseDeadLetters } from "@/lib/mail/dead-letters";
 import { formatDate } from "@/lib/ui/dates";
 import { listVendorsForOperator } from "@/lib/vendors/list-vendors-for-operator";
 
+import { createVendorAction } from "./actions";
+import { discardDeadLettersAction, retryDeadLettersAction } from "./dead-letter-actions";
+
 export const metadata = { title: "Operator" };
 
 export default async function OperatorPage() {
@@ -15,7 +18,7 @@ export default async function OperatorPage() {
     <div>
       <PageHeader title="Operator" lead="Create vendor workspaces. Vendors' private data (sheets in draft, tickets, customers) is not shown here." />
       <h2 className="mb-3 text-lg font-semibold">New workspace</h2>
-      <CreateVendorForm />
+      <CreateVendorForm createVendorAction={createVendorAction} />
       <h2 className="mt-10 mb-3 text-lg font-semibold">Workspaces</h2>
       <table className="w-full rounded-lg border border-stone-200 bg-white text-left text-sm">
         <thead className="bg-stone-100"><tr><th className="px-3 py-2">Name</th><th className="px-3 py-2">Slug</th><th className="px-3 py-2">Members</th><th className="px-3 py-2">Created</th></tr></thead>
@@ -28,7 +31,7 @@ export default async function OperatorPage() {
         </tbody>
       </table>
       <h2 className="mt-10 mb-3 text-lg font-semibold">Undelivered e-mail</h2>
-      <DeadLetterList summary={deadLetterSummary} letters={deadLetters} />
+      <DeadLetterList summary={deadLetterSummary} letters={deadLetters} actions={{ retryDeadLettersAction, discardDeadLettersAction }} />
     </div>
   );
 }

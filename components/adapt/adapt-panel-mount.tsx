@@ -1,16 +1,16 @@
 import "server-only";
 
-import { saveSetupAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { findMembership } from "@/lib/auth/membership";
 import { can } from "@/lib/auth/permissions";
 import { getSessionUser } from "@/lib/auth/session-user";
-import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
 import { listMachines } from "@/lib/bench/machines";
+import { findAdaptContext } from "@/lib/bench/page-data";
 import type { UnitSystem } from "@/lib/machining";
 import type { AdaptStart } from "@/lib/bench/readapt-start";
 
 import { AdaptPanel } from "./adapt-panel";
 import { LazyAdaptPanel } from "./lazy-adapt-panel";
+import type { SaveSetupAction } from "./save-setup-form";
 
 type Props = {
   vendor: { id: string; slug: string };
@@ -21,11 +21,13 @@ type Props = {
   /** Load the panel's code when it scrolls into view (Library pages) instead of with the page. */
   lazy?: boolean;
   start?: AdaptStart;
+  /** The Bench's save action, from the page; offered to a signed-in customer on a readable version. */
+  saveSetupAction: SaveSetupAction;
 };
 
 /** Server side of the adapt panel: the sheet-derived inputs and, for a signed-in customer, their machines. */
-export async function AdaptPanelMount({ vendor, versionId, operationIndex, units, returnTo, lazy = false, start }: Props) {
-  const [context, user] = await Promise.all([loadAdaptContext({ vendorId: vendor.id, versionId }), getSessionUser()]);
+export async function AdaptPanelMount({ vendor, versionId, operationIndex, units, returnTo, lazy = false, start, saveSetupAction }: Props) {
+  const [context, user] = await Promise.all([findAdaptContext(vendor.id, versionId), getSessionUser()]);
   if (!context || !context.operations.length) return <p className="mt-1 text-sm text-stone-600">This version cannot be adapted.</p>;
   const member = user ? await findMembership(vendor.id, user.id) : null;
   const benchUser = user && member && can(member.role, "bench.use") ? user : null;

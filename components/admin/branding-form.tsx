@@ -2,17 +2,17 @@
 
 import { useState } from "react";
 
-import { updateBrandingAction } from "@/app/[vendor]/(staff)/admin/actions";
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
+import type { FormAction } from "@/lib/actions/action-state";
 import { brandingSchema, WILSON_CONFIDENCE_CHOICES } from "@/lib/vendors/branding-schema";
 import { contrastRatio, inkFor } from "@/lib/ui/contrast";
 import { explainAccentColor } from "@/lib/vendors/explain-accent-color";
 import type { Vendor } from "@/lib/vendors/vendor-schema";
 
-export function BrandingForm({ vendor }: { vendor: Vendor }) {
+export function BrandingForm({ vendor, updateBrandingAction }: { vendor: Vendor; updateBrandingAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(updateBrandingAction, brandingSchema.passthrough());
   const [accent, setAccent] = useState(vendor.accentColor);
   const why = explainAccentColor(accent);

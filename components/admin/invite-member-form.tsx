@@ -1,14 +1,14 @@
 "use client";
 
-import { inviteMemberAction } from "@/app/[vendor]/(staff)/admin/members/actions";
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
+import type { FormAction } from "@/lib/actions/action-state";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { inviteMemberSchema, STAFF_INVITE_ROLES } from "@/lib/members/member-schemas";
 
-export function InviteMemberForm({ vendor }: { vendor: string }) {
+export function InviteMemberForm({ vendor, inviteMemberAction }: { vendor: string; inviteMemberAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(inviteMemberAction, inviteMemberSchema);
   return (
     <form action={formAction} onSubmit={onSubmit} noValidate className="flex flex-wrap items-end gap-3 rounded-lg border border-stone-200 bg-white p-4">

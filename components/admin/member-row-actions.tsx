@@ -2,12 +2,11 @@
 
 import { useActionState } from "react";
 
-import { changeRoleAction, removeMemberAction } from "@/app/[vendor]/(staff)/admin/members/actions";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/roles";
 
-export function MemberRowActions({ vendor, memberId, role, label }: { vendor: string; memberId: string; role: Role; label: string }) {
+export function MemberRowActions({ vendor, memberId, role, label, changeRoleAction, removeMemberAction }: { vendor: string; memberId: string; role: Role; label: string; changeRoleAction: FormAction; removeMemberAction: FormAction }) {
   const [roleState, roleAction] = useActionState(changeRoleAction, initialActionState);
   const [removeState, removeAction] = useActionState(removeMemberAction, initialActionState);
   const message = [roleState, removeState].find((s) => !s.ok && s.message)?.message;

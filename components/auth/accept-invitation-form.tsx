@@ -4,19 +4,19 @@ import Link from "next/link";
 import { signIn } from "next-auth/react";
 import { type FormEvent, useEffect, useRef, useState } from "react";
 
-import { acceptInvitationAction } from "@/app/[vendor]/(public)/join/[token]/actions";
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import type { ActionState } from "@/lib/actions/action-state";
+import type { FormAction } from "@/lib/actions/action-state";
 import { acceptInvitationSchema } from "@/lib/members/member-schemas";
 
 /**
  * `newAccount`: the invitation creates the account (name and password asked), then signs the person in with
  * the password just chosen. Otherwise the person is already signed in as the invited account.
  */
-export function AcceptInvitationForm({ vendor, token, newAccount }: { vendor: string; token: string; newAccount: boolean }) {
+export function AcceptInvitationForm({ vendor, token, newAccount, acceptInvitationAction }: { vendor: string; token: string; newAccount: boolean; acceptInvitationAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(acceptInvitationAction, acceptInvitationSchema);
   const accepted = state as ActionState<{ email: string; created: boolean }>;
   const password = useRef("");

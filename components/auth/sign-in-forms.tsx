@@ -4,12 +4,14 @@ import Link from "next/link";
 import { signIn } from "next-auth/react";
 import { type FormEvent, useState } from "react";
 
-import { resendVerificationAction } from "@/app/(site)/sign-in/actions";
 import { Field } from "@/components/forms/field";
+import type { ActionState } from "@/lib/actions/action-state";
 import { credentialsSchema, emailSchema } from "@/lib/auth/auth-schemas";
 import type { FieldErrors } from "@/lib/errors/domain-errors";
 
-export function SignInForms({ callbackUrl, vendor }: { callbackUrl: string; vendor?: string }) {
+type ResendVerification = (input: { email: string; vendor?: string }) => Promise<ActionState>;
+
+export function SignInForms({ callbackUrl, vendor, resendVerificationAction }: { callbackUrl: string; vendor?: string; resendVerificationAction: ResendVerification }) {
   const [errors, setErrors] = useState<FieldErrors>({});
   const [linkErrors, setLinkErrors] = useState<string[] | undefined>();
   const [busy, setBusy] = useState(false);

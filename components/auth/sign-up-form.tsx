@@ -2,14 +2,14 @@
 
 import Link from "next/link";
 
-import { signUpAction } from "@/app/[vendor]/(public)/sign-up/actions";
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
+import type { FormAction } from "@/lib/actions/action-state";
 import { signUpSchema } from "@/lib/auth/auth-schemas";
 
-export function SignUpForm({ vendor }: { vendor: string }) {
+export function SignUpForm({ vendor, signUpAction }: { vendor: string; signUpAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(signUpAction, signUpSchema);
   if (state.ok) {
     return (

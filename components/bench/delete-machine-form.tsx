@@ -2,12 +2,11 @@
 
 import { useActionState } from "react";
 
-import { deleteMachineAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 
-export function DeleteMachineForm({ vendorSlug, id, name }: { vendorSlug: string; id: string; name: string }) {
+export function DeleteMachineForm({ vendorSlug, id, name, deleteMachineAction }: { vendorSlug: string; id: string; name: string; deleteMachineAction: FormAction }) {
   const [state, action] = useActionState(deleteMachineAction, initialActionState);
   return (
     <form action={action} className="mt-8 border-t border-stone-200 pt-4">

@@ -2,14 +2,13 @@
 
 import { useActionState } from "react";
 
-import { handoffAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { FormMessage } from "@/components/forms/form-message";
 import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 
 /** Hand a recipe problem to engineering: stored against the sheet version, shown in Drafting. */
-export function HandoffForm({ vendor, ticketId, versions }: { vendor: string; ticketId: string; versions: { id: string; name: string }[] }) {
+export function HandoffForm({ vendor, ticketId, versions, handoffAction }: { vendor: string; ticketId: string; versions: { id: string; name: string }[]; handoffAction: FormAction }) {
   const [state, action] = useActionState(handoffAction, initialActionState);
   if (!versions.length) return <p className="text-sm text-stone-600">Link or embed a sheet version to hand a problem to engineering.</p>;
   return (

@@ -3,7 +3,7 @@
 import { flexRender, getCoreRowModel, getSortedRowModel, type RowSelectionState, type SortingState, useReactTable } from "@tanstack/react-table";
 import { useMemo, useState, useTransition } from "react";
 
-import { bulkAssignAction } from "@/app/[vendor]/(staff)/desk/actions";
+import type { FormAction } from "@/lib/actions/action-state";
 import { type QueueFilters, queueFiltersToSearch } from "@/lib/desk/queue-filters";
 import type { DeskView } from "@/lib/desk/saved-views";
 import { useDeskQueue, useDeskViews } from "@/lib/swr/use-desk-queue";
@@ -14,9 +14,9 @@ import { QueueFilterBar } from "./queue-filter-bar";
 import { SaveViewForm } from "./save-view-form";
 
 type Option = { id: string; name: string };
-type Props = { vendor: string; initial: TicketSummary[]; initialFilters?: QueueFilters; views: DeskView[]; assignees: Option[]; materials: Option[] };
+type Props = { vendor: string; initial: TicketSummary[]; initialFilters?: QueueFilters; views: DeskView[]; assignees: Option[]; materials: Option[]; bulkAssignAction: FormAction; saveViewAction: FormAction };
 
-export function QueueTable({ vendor, initial, initialFilters = {}, views: initialViews, assignees, materials }: Props) {
+export function QueueTable({ vendor, initial, initialFilters = {}, views: initialViews, assignees, materials, bulkAssignAction, saveViewAction }: Props) {
   const [filters, setFiltersState] = useState<QueueFilters>(initialFilters);
   const [initialSearch] = useState(() => queueFiltersToSearch(initialFilters));
   const [activeView, setActiveView] = useState(initialSearch ? "" : "open");
@@ -77,7 +77,7 @@ export function QueueTable({ vendor, initial, initialFilters = {}, views: initia
         ))}
       </nav>
       <QueueFilterBar filters={filters} onChange={(f) => { setFilters(f); setActiveView(""); }} assignees={assignees} materials={materials} />
-      <SaveViewForm vendor={vendor} filters={filters} onSaved={() => void views.mutate()} />
+      <SaveViewForm saveViewAction={saveViewAction} vendor={vendor} filters={filters} onSaved={() => void views.mutate()} />
       <div className="flex flex-wrap items-center gap-2 text-sm" role="group" aria-label="Bulk actions">
         <span className="num">{selectedIds.length} selected</span>
         <select aria-label="Assign selected to" className="min-h-9 rounded border border-stone-300 bg-white px-2" value={assignTo} onChange={(e) => setAssignTo(e.target.value)}>

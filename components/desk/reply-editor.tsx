@@ -2,7 +2,6 @@
 
 import { useEffect, useRef, useState } from "react";
 
-import { staffReplyAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { FormMessage } from "@/components/forms/form-message";
 import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
 import { SubmitButton } from "@/components/forms/submit-button";
@@ -10,11 +9,13 @@ import { useValidatedAction } from "@/components/forms/use-validated-action";
 import { SafeMarkdown } from "@/components/support/safe-markdown";
 import { UploadField } from "@/components/support/upload-field";
 import { ticketReplySchema } from "@/content-schema/ticket-update";
+import type { FormAction } from "@/lib/actions/action-state";
 import { expandSnippet, type SnippetValues } from "@/lib/desk/expand-snippet";
 
 type Option = { id: string; name: string };
 type Version = Option & { state: string };
 type Props = {
+  staffReplyAction: FormAction;
   vendor: string;
   ticketId: string;
   versions: Version[];
@@ -30,7 +31,7 @@ type Props = {
 const field = "min-h-9 rounded border border-stone-300 bg-white px-2 text-sm";
 
 /** Markdown reply or internal note, with an adapted-sheet picker and saved snippets. */
-export function ReplyEditor({ vendor, ticketId, versions, linkedVersionIds = [], machines, defaultMachineId, defaultVersionId, snippets, placeholders }: Props) {
+export function ReplyEditor({ staffReplyAction, vendor, ticketId, versions, linkedVersionIds = [], machines, defaultMachineId, defaultVersionId, snippets, placeholders }: Props) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(staffReplyAction, ticketReplySchema);
   const [visibility, setVisibility] = useState<"public" | "note">("public");
   const note = visibility === "note";

@@ -2,11 +2,11 @@
 
 import { useState, useTransition } from "react";
 
-import { saveViewAction } from "@/app/[vendor]/(staff)/desk/actions";
+import type { FormAction } from "@/lib/actions/action-state";
 import type { QueueFilters } from "@/lib/desk/queue-filters";
 
 /** Saves the current filters as one of this agent's views. */
-export function SaveViewForm({ vendor, filters, onSaved }: { vendor: string; filters: QueueFilters; onSaved: () => void }) {
+export function SaveViewForm({ vendor, filters, onSaved, saveViewAction }: { vendor: string; filters: QueueFilters; onSaved: () => void; saveViewAction: FormAction }) {
   const [name, setName] = useState("");
   const [message, setMessage] = useState<string | null>(null);
   const [pending, startTransition] = useTransition();

@@ -2,14 +2,13 @@
 
 import { useActionState } from "react";
 
-import { saveSnippetAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 import { SNIPPET_PLACEHOLDERS } from "@/lib/desk/expand-snippet";
 
 /** Adds or replaces (by title) a saved reply snippet for the whole support team. */
-export function SnippetForm({ vendor }: { vendor: string }) {
+export function SnippetForm({ vendor, saveSnippetAction }: { vendor: string; saveSnippetAction: FormAction }) {
   const [state, action] = useActionState(saveSnippetAction, initialActionState);
   return (
     <form action={action} className="max-w-2xl space-y-2 text-sm" aria-label="Save a snippet">

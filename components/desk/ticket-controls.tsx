@@ -2,11 +2,10 @@
 
 import { type FormEvent, startTransition, useActionState, useState } from "react";
 
-import { updateTicketAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { FormMessage } from "@/components/forms/form-message";
 import { TICKET_PRIORITIES, TICKET_STATUSES, ticketPriorityLabels, ticketStatusLabels } from "@/content-schema/ticket-status";
 import { panelValuesOf, type TicketPanelValues } from "@/content-schema/ticket-update";
-import { initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 import type { TicketDetail } from "@/lib/tickets/ticket-types";
 
 const field = "min-h-9 w-full rounded border border-stone-300 bg-white px-2";
@@ -20,7 +19,7 @@ const isPanelValues = (data: unknown): data is TicketPanelValues =>
  * what the agent is editing, sends only the touched fields with their shown values, and takes the saved
  * ticket back after a save, a conflict, or a refresh of the page (a reply changes the status).
  */
-export function TicketControls({ vendor, ticket, assignees }: { vendor: string; ticket: TicketDetail; assignees: { id: string; name: string }[] }) {
+export function TicketControls({ vendor, ticket, assignees, updateTicketAction }: { vendor: string; ticket: TicketDetail; assignees: { id: string; name: string }[]; updateTicketAction: FormAction }) {
   const [state, action, pending] = useActionState(updateTicketAction, initialActionState);
   const fromServer = panelValuesOf(ticket);
   const [shown, setShown] = useState(fromServer);

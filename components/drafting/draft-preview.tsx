@@ -5,7 +5,7 @@ import type { ReactNode } from "react";
 import { OperationTable } from "@/components/mdx";
 import { SheetCautions } from "@/components/library/sheet-cautions";
 import type { Cutter } from "@/lib/catalogue/catalogue-types";
-import { compileSheet } from "@/lib/mdx/compile-sheet";
+import { compileSheet } from "@/components/mdx/render-sheet";
 import type { UnitSystem } from "@/lib/machining";
 import type { DraftCheck } from "@/lib/sheets/check-draft-source";
 

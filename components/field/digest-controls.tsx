@@ -2,8 +2,7 @@
 
 import { useActionState } from "react";
 
-import { sendDigestNowAction, setWeeklyDigestAction } from "@/app/[vendor]/(staff)/drafting/field/actions";
-import { initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 
 // Always mounted, so screen readers announce the message when it appears.
 function Status({ state }: { state: { ok: boolean; message?: string } }) {
@@ -11,7 +10,7 @@ function Status({ state }: { state: { ok: boolean; message?: string } }) {
 }
 
 /** The weekly digest for the signed-in engineer: on or off, and "send it to me now". */
-export function DigestControls({ vendorSlug, enabled }: { vendorSlug: string; enabled: boolean }) {
+export function DigestControls({ vendorSlug, enabled, sendDigestNowAction, setWeeklyDigestAction }: { vendorSlug: string; enabled: boolean; sendDigestNowAction: FormAction; setWeeklyDigestAction: FormAction }) {
   const [sendState, send, sending] = useActionState(sendDigestNowAction, initialActionState);
   const [toggleState, toggle, toggling] = useActionState(setWeeklyDigestAction, initialActionState);
   return (

@@ -3,13 +3,11 @@
 import { type FormEvent, useActionState, useState } from "react";
 import type { z } from "zod";
 
-import { type ActionState, initialActionState } from "@/lib/actions/action-state";
+import { type FormAction, initialActionState } from "@/lib/actions/action-state";
 import type { FieldErrors } from "@/lib/errors/domain-errors";
 
-type Action = (state: ActionState, form: FormData) => Promise<ActionState>;
-
 /** Server action state plus the same zod schema checked in the browser before submitting. */
-export function useValidatedAction(action: Action, schema: z.ZodType) {
+export function useValidatedAction(action: FormAction, schema: z.ZodType) {
   const [state, formAction, pending] = useActionState(action, initialActionState);
   const [clientErrors, setClientErrors] = useState<FieldErrors | null>(null);
   function onSubmit(event: FormEvent<HTMLFormElement>) {

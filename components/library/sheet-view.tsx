@@ -2,8 +2,8 @@ import { Suspense } from "react";
 
 import { AdaptPanelSlot, OperationTable } from "@/components/mdx";
 import type { SheetRenderContext } from "@/components/mdx/sheet-render-context";
+import { getCompiledSheet } from "@/components/mdx/render-sheet";
 import { AskAboutSheet } from "@/components/support/ask-about-sheet";
-import { getCompiledSheet } from "@/lib/mdx/compile-cache";
 import type { UnitSystem } from "@/lib/machining";
 import type { LibrarySheet } from "@/lib/sheets/get-library-sheet";
 

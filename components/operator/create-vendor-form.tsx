@@ -1,13 +1,13 @@
 "use client";
 
-import { createVendorAction } from "@/app/operator/actions";
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
+import type { FormAction } from "@/lib/actions/action-state";
 import { createVendorSchema } from "@/lib/vendors/create-vendor-schema";
 
-export function CreateVendorForm() {
+export function CreateVendorForm({ createVendorAction }: { createVendorAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(createVendorAction, createVendorSchema);
   const v = state.ok ? {} : (state.values ?? {});
   return (

@@ -3,17 +3,17 @@
 import { useEffect, useRef, useState } from "react";
 import { z } from "zod";
 
-import { customerReplyAction } from "@/app/[vendor]/(customer)/support/actions";
 import { FormMessage } from "@/components/forms/form-message";
 import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
+import type { FormAction } from "@/lib/actions/action-state";
 
 import { UploadField } from "./upload-field";
 
 const schema = z.object({ body: z.string().trim().min(1, "Write a reply.") });
 
-export function CustomerReplyForm({ vendor, ticketId }: { vendor: string; ticketId: string }) {
+export function CustomerReplyForm({ vendor, ticketId, customerReplyAction }: { vendor: string; ticketId: string; customerReplyAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(customerReplyAction, schema);
   const form = useRef<HTMLFormElement>(null);
   const [seen, setSeen] = useState(state);

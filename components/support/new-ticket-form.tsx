@@ -1,17 +1,18 @@
 "use client";
 
-import { createTicketAction } from "@/app/[vendor]/(customer)/support/actions";
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import { createTicketSchema } from "@/content-schema/ticket-create";
+import type { FormAction } from "@/lib/actions/action-state";
 
 import { SelectField } from "./select-field";
 import { UploadField } from "./upload-field";
 
 type Option = { id: string; name: string };
 type Props = {
+  createTicketAction: FormAction;
   vendor: string;
   idempotencyKey: string;
   materials: Option[];
@@ -20,7 +21,7 @@ type Props = {
   machineId?: string;
 };
 
-export function NewTicketForm({ vendor, idempotencyKey, materials, machines, sheetVersion, machineId }: Props) {
+export function NewTicketForm({ createTicketAction, vendor, idempotencyKey, materials, machines, sheetVersion, machineId }: Props) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(createTicketAction, createTicketSchema);
   return (
     <form action={formAction} onSubmit={onSubmit} className="max-w-2xl space-y-4" aria-label="New ticket">

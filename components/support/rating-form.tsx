@@ -1,14 +1,14 @@
 "use client";
 
-import { rateTicketAction } from "@/app/[vendor]/(customer)/support/actions";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import { ticketRatingSchema } from "@/content-schema/ticket-update";
+import type { FormAction } from "@/lib/actions/action-state";
 
 const LABELS = ["", "1 – poor", "2", "3", "4", "5 – excellent"];
 
-export function RatingForm({ vendor, ticketId, current }: { vendor: string; ticketId: string; current: number | null }) {
+export function RatingForm({ vendor, ticketId, current, rateTicketAction }: { vendor: string; ticketId: string; current: number | null; rateTicketAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(rateTicketAction, ticketRatingSchema);
   return (
     <form action={formAction} onSubmit={onSubmit} className="space-y-3 rounded-lg border border-stone-300 bg-white p-4" aria-label="Rate this ticket">

@@ -10,3 +10,6 @@ export type ActionState<T = unknown> = {
 };
 
 export const initialActionState: ActionState = { ok: false };
+
+/** A server action a form posts to (`useActionState`); pages pass it to components as a prop. */
+export type FormAction = (state: ActionState, form: FormData) => Promise<ActionState>;

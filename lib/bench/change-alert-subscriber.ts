@@ -1,6 +1,6 @@
 import "server-only";
 
-import type { SheetEventSubscriber } from "@/lib/events/subscribers";
+import type { SheetEventSubscriber } from "@/lib/events/sheet-events";
 
 import { sendChangeAlerts } from "./send-change-alerts";
 

@@ -9,3 +9,6 @@ export const sheetEventSchema = z.discriminatedUnion("type", [
 export type SheetEvent = z.infer<typeof sheetEventSchema>;
 
 export const SHEET_EVENTS_QUEUE = "sheet.events";
+
+/** A feature's reaction to sheet events; the list of them is in `subscribers.ts`. */
+export type SheetEventSubscriber = { name: string; handle: (event: SheetEvent) => Promise<void> };

@@ -4,9 +4,7 @@ import { changeAlertSubscriber } from "@/lib/bench/change-alert-subscriber";
 import { fieldRefreshSubscriber } from "@/lib/field/field-refresh-subscriber";
 import { searchIndexSubscriber } from "@/search/indexing/search-index-jobs";
 
-import type { SheetEvent } from "./sheet-events";
-
-export type SheetEventSubscriber = { name: string; handle: (event: SheetEvent) => Promise<void> };
+import type { SheetEventSubscriber } from "./sheet-events";
 
 // Each feature that reacts to sheet events adds one entry here.
 export const SHEET_EVENT_SUBSCRIBERS: SheetEventSubscriber[] = [searchIndexSubscriber, changeAlertSubscriber, fieldRefreshSubscriber];

@@ -2,11 +2,7 @@ import "server-only";
 
 import { createHash } from "node:crypto";
 
-import type { ReactElement } from "react";
-
-import type { SheetFrontMatter } from "@/content-schema/sheet-front-matter";
-
-import { compileSheetContent, renderCompiledSheet, type CompiledSheet, type SheetRenderOptions } from "./compile-sheet";
+import { compileSheetContent, type CompiledSheet } from "./compile-sheet";
 import { LruCache } from "./lru-cache";
 
 export const sourceHash = (source: string) => createHash("sha256").update(source, "utf8").digest("hex");
@@ -39,13 +35,7 @@ export function createCompiledSheetCache({ maxEntries = 200, compile = compileSh
 
 const defaultCache = createCompiledSheetCache();
 
-/** A published version's rendered content, compiled once per server process. */
-export async function getCompiledSheet(
-  options: SheetRenderOptions & { versionId: string; source: string },
-): Promise<{ content: ReactElement; frontMatter: SheetFrontMatter }> {
-  const { versionId, source, ...render } = options;
-  const compiled = await defaultCache.getCompiled(versionId, source);
-  return { content: renderCompiledSheet(compiled, render), frontMatter: compiled.frontMatter };
-}
+/** A published version compiled once per server process (rendered by `components/mdx/render-sheet.tsx`). */
+export const getCachedCompiledSheet = (versionId: string, source: string): Promise<CompiledSheet> => defaultCache.getCompiled(versionId, source);
 
 export const clearCompiledSheetCache = () => defaultCache.clear();

@@ -3,8 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { z } from "zod";
 
-import type { SheetEvent } from "@/lib/events/sheet-events";
-import type { SheetEventSubscriber } from "@/lib/events/subscribers";
+import type { SheetEvent, SheetEventSubscriber } from "@/lib/events/sheet-events";
 import { enqueue } from "@/lib/jobs/enqueue";
 import { getSearchEngine } from "@/search/engines/choose-engine";
 

@@ -2,6 +2,8 @@ import { SignInForms } from "@/components/auth/sign-in-forms";
 import { appUrl } from "@/lib/http/app-url";
 import { safeCallbackPath, safeVendorParam } from "@/lib/http/safe-callback";
 
+import { resendVerificationAction } from "./actions";
+
 export const metadata = { title: "Sign in" };
 
 type Search = Promise<{ callbackUrl?: string; error?: string; vendor?: string }>;
@@ -16,7 +18,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
           ⚠ {error === "CredentialsSignin" ? "E-mail or password is not right." : error === "AccessDenied" ? "There is no account for that e-mail, or too many links were asked for. Try again later." : "Sign-in failed. Try again."}
         </p>
       ) : null}
-      <SignInForms callbackUrl={safeCallbackPath(callbackUrl, appUrl("/"))} vendor={safeVendorParam(vendor)} />
+      <SignInForms resendVerificationAction={resendVerificationAction} callbackUrl={safeCallbackPath(callbackUrl, appUrl("/"))} vendor={safeVendorParam(vendor)} />
     </div>
   );
 }

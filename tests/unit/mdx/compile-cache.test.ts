@@ -1,7 +1,8 @@
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it, vi } from "vitest";
 
-import { createCompiledSheetCache, getCompiledSheet, sourceHash } from "@/lib/mdx/compile-cache";
+import { getCompiledSheet } from "@/components/mdx/render-sheet";
+import { createCompiledSheetCache, sourceHash } from "@/lib/mdx/compile-cache";
 import { compileSheetContent } from "@/lib/mdx/compile-sheet";
 import { buildSheetSource } from "@/tests/factories/sheet-source";
 

@@ -4,7 +4,7 @@ import { createElement } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 
-import { compileSheet } from "@/lib/mdx/compile-sheet";
+import { compileSheet } from "@/components/mdx/render-sheet";
 import { remarkSheetGuard } from "@/lib/mdx/remark-sheet-guard";
 import { SheetSourceError } from "@/lib/mdx/sheet-issue";
 import { buildSheetSource, lineOf } from "@/tests/factories/sheet-source";

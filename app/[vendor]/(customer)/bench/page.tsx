@@ -10,6 +10,8 @@ import { listSetups } from "@/lib/bench/list-setups";
 import { listMachines } from "@/lib/bench/machines";
 import { wantsChangeAlerts } from "@/lib/bench/mail-preferences";
 
+import { setChangeAlertsAction } from "./actions";
+
 export const metadata = { title: "Bench" };
 
 export default async function BenchPage({ params }: { params: Promise<{ vendor: string }> }) {
@@ -44,7 +46,7 @@ export default async function BenchPage({ params }: { params: Promise<{ vendor: 
         )}
       </section>
       <section aria-label="E-mail" className="border-t border-stone-200 pt-4">
-        <AlertsToggle vendorSlug={vendor.slug} enabled={alerts} />
+        <AlertsToggle setChangeAlertsAction={setChangeAlertsAction} vendorSlug={vendor.slug} enabled={alerts} />
       </section>
     </>
   );

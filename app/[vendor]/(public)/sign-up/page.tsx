@@ -6,6 +6,7 @@ import { getSessionUser } from "@/lib/auth/session-user";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { joinAsCustomerAction } from "./actions";
+import { signUpAction } from "./actions";
 
 export const metadata = { title: "Create an account" };
 
@@ -28,7 +29,7 @@ export default async function SignUpPage({ params }: { params: Promise<{ vendor:
             <button type="submit" className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">Join {vendor.name} as a customer</button>
           </form>
         ) : (
-          <SignUpForm vendor={vendor.slug} />
+          <SignUpForm signUpAction={signUpAction} vendor={vendor.slug} />
         )}
       </div>
     </div>

@@ -7,6 +7,8 @@ import { describeAuditAction } from "@/lib/audit/action-labels";
 import { listRecentAudit } from "@/lib/audit/list-audit";
 import { formatDateTime } from "@/lib/ui/dates";
 
+import { updateBrandingAction } from "./actions";
+
 export const metadata = { title: "Admin" };
 
 export default async function AdminPage({ params }: { params: Promise<{ vendor: string }> }) {
@@ -23,7 +25,7 @@ export default async function AdminPage({ params }: { params: Promise<{ vendor: 
         </li>
       </ul>
       <h2 className="mb-3 text-lg font-semibold">Branding and settings</h2>
-      <div className="mb-8"><BrandingForm vendor={vendor} /></div>
+      <div className="mb-8"><BrandingForm updateBrandingAction={updateBrandingAction} vendor={vendor} /></div>
       <h2 className="mb-3 text-lg font-semibold">Recent activity</h2>
       <ol className="divide-y divide-stone-100 rounded-lg border border-stone-200 bg-white text-sm">
         {audit.length === 0 ? <li className="p-3 text-stone-600">Nothing yet.</li> : null}

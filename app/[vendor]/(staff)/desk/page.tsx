@@ -8,6 +8,8 @@ import { listQueue } from "@/lib/desk/list-queue";
 import { parseQueueFilters } from "@/lib/desk/queue-filters";
 import { listDeskViews } from "@/lib/desk/saved-views";
 
+import { bulkAssignAction, saveViewAction } from "./actions";
+
 export const metadata = { title: "Desk" };
 
 type Props = { params: Promise<{ vendor: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -26,7 +28,7 @@ export default async function DeskPage({ params, searchParams }: Props) {
   return (
     <>
       <PageHeader title="Desk" lead="The support queue: tickets by status, priority and response target. It refreshes on its own." actions={dashboard} />
-      <QueueTable vendor={vendor.slug} initial={tickets} initialFilters={filters} views={views} assignees={assignees} materials={materials} />
+      <QueueTable bulkAssignAction={bulkAssignAction} saveViewAction={saveViewAction} vendor={vendor.slug} initial={tickets} initialFilters={filters} views={views} assignees={assignees} materials={materials} />
     </>
   );
 }

@@ -1,5 +1,6 @@
 import { randomUUID } from "node:crypto";
 
+import { createTicketAction } from "@/app/[vendor]/(customer)/support/actions";
 import { NewTicketForm } from "@/components/support/new-ticket-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
@@ -24,6 +25,7 @@ export default async function NewTicketPage({ params, searchParams }: Props) {
     <>
       <PageHeader title="New ticket" lead="Ask the support team. Say which cutter, material and machine, and add photos of the chips and the finish." />
       <NewTicketForm
+        createTicketAction={createTicketAction}
         vendor={vendor.slug}
         idempotencyKey={randomUUID()}
         materials={options.materials}

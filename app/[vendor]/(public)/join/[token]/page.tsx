@@ -9,6 +9,8 @@ import { findOpenInvitation } from "@/lib/members/accept-invitation";
 import { findConfirmedAccount } from "@/lib/users/find-confirmed-account";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
+import { acceptInvitationAction } from "./actions";
+
 export const metadata = { title: "Accept invitation" };
 
 export default async function JoinPage({ params }: { params: Promise<{ vendor: string; token: string }> }) {
@@ -48,7 +50,7 @@ export default async function JoinPage({ params }: { params: Promise<{ vendor: s
             <Link href={signInHref} className="inline-block min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">Sign in to accept</Link>
           </div>
         ) : (
-          <AcceptInvitationForm vendor={vendor.slug} token={token} newAccount={accountId === null} />
+          <AcceptInvitationForm acceptInvitationAction={acceptInvitationAction} vendor={vendor.slug} token={token} newAccount={accountId === null} />
         )}
       </div>
     </div>

@@ -7,6 +7,8 @@ import { ROLE_LABELS } from "@/lib/auth/roles";
 import { listMembers, listPendingInvitations } from "@/lib/members/list-members";
 import { formatDate } from "@/lib/ui/dates";
 
+import { changeRoleAction, inviteMemberAction, removeMemberAction } from "./actions";
+
 export const metadata = { title: "Members" };
 
 
@@ -19,7 +21,7 @@ export default async function MembersPage({ params }: { params: Promise<{ vendor
       <PageHeader title="Members" lead="Staff and customers of this workspace. Staff join by invitation; customers sign up on your portal." />
       <section aria-labelledby="invite" className="mb-8">
         <h2 id="invite" className="mb-3 text-lg font-semibold">Invite staff</h2>
-        <InviteMemberForm vendor={vendor.slug} />
+        <InviteMemberForm inviteMemberAction={inviteMemberAction} vendor={vendor.slug} />
         {invitations.length > 0 ? (
           <ul className="mt-3 text-sm text-stone-700" aria-label="Pending invitations">
             {invitations.map((inv) => (
@@ -47,7 +49,7 @@ export default async function MembersPage({ params }: { params: Promise<{ vendor
                     <td className="num px-3 py-2">{m.email}</td>
                     <td className="px-3 py-2">{ROLE_LABELS[m.role]}</td>
                     <td className="px-3 py-2">{formatDate(m.createdAt)}</td>
-                    <td className="px-3 py-2"><MemberRowActions vendor={vendor.slug} memberId={m.id} role={m.role} label={m.name || m.email} /></td>
+                    <td className="px-3 py-2"><MemberRowActions changeRoleAction={changeRoleAction} removeMemberAction={removeMemberAction} vendor={vendor.slug} memberId={m.id} role={m.role} label={m.name || m.email} /></td>
                   </tr>
                 ))}
               </tbody>

@@ -1,5 +1,6 @@
 import Link from "next/link";
 
+import { saveSnippetAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { SnippetForm } from "@/components/desk/snippet-form";
 import { TicketsPerVersionChart } from "@/components/desk/tickets-per-version-chart";
 import { PageHeader } from "@/components/ui/page-header";
@@ -43,7 +44,7 @@ export default async function DeskDashboardPage({ params }: { params: Promise<{ 
         <ul className="mb-4 list-disc pl-6 text-sm">
           {snippets.map((s) => <li key={s.id}><strong>{s.title}</strong>: <span className="text-stone-600">{s.body.slice(0, 120)}{s.body.length > 120 ? "…" : ""}</span></li>)}
         </ul>
-        <SnippetForm vendor={vendor.slug} />
+        <SnippetForm saveSnippetAction={saveSnippetAction} vendor={vendor.slug} />
       </section>
     </>
   );

@@ -1,8 +1,9 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 
+import { saveSetupAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { AdaptPanelMount } from "@/components/adapt/adapt-panel-mount";
-import { loadBenchVersion } from "@/components/bench/load-bench-version";
+import { findBenchVersion } from "@/lib/bench/page-data";
 import { readUnits } from "@/components/library/read-units";
 import { PageHeader } from "@/components/ui/page-header";
 import { readaptStart } from "@/lib/bench/readapt-start";
@@ -14,7 +15,7 @@ type Props = { params: Promise<{ vendor: string; versionId: string }>; searchPar
 
 export default async function AdaptVersionPage({ params, searchParams }: Props) {
   const { vendor: slug, versionId } = await params;
-  const found = await loadBenchVersion(slug, versionId);
+  const found = await findBenchVersion(slug, versionId);
   if (!found) notFound();
   const { vendor, user, context } = found;
   const setupParam = (await searchParams).setup;
@@ -24,7 +25,7 @@ export default async function AdaptVersionPage({ params, searchParams }: Props) 
     <>
       <PageHeader title={`Adapt: ${context.title}`} lead={<>Version {context.versionNumber} · <Link className="underline" href={href}>read the sheet</Link></>} />
       <section id="adapt" aria-label="Adapt to your machine" className="rounded-md border border-stone-300 bg-white p-4">
-        <AdaptPanelMount vendor={vendor} versionId={context.versionId} operationIndex={start?.operationIndex ?? 0} units={await readUnits()} returnTo={`/${vendor.slug}/bench/adapt/${versionId}`} start={start ?? undefined} />
+        <AdaptPanelMount saveSetupAction={saveSetupAction} vendor={vendor} versionId={context.versionId} operationIndex={start?.operationIndex ?? 0} units={await readUnits()} returnTo={`/${vendor.slug}/bench/adapt/${versionId}`} start={start ?? undefined} />
       </section>
     </>
   );

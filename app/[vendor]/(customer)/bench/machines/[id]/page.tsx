@@ -1,7 +1,8 @@
 import { notFound } from "next/navigation";
 
+import { deleteMachineAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { DeleteMachineForm } from "@/components/bench/delete-machine-form";
-import { loadBenchMachine } from "@/components/bench/load-bench";
+import { findBenchMachine } from "@/lib/bench/page-data";
 import { MachineForm } from "@/components/bench/machine-form";
 import { machineToValues } from "@/components/bench/machine-values";
 import { PageHeader } from "@/components/ui/page-header";
@@ -12,14 +13,14 @@ export const metadata = { title: "Edit machine" };
 
 export default async function EditMachinePage({ params }: { params: Promise<{ vendor: string; id: string }> }) {
   const { vendor: slug, id } = await params;
-  const found = await loadBenchMachine(slug, id);
+  const found = await findBenchMachine(slug, id);
   if (!found) notFound();
   const { vendor, machine } = found;
   return (
     <>
       <PageHeader title={`Edit ${machine.name}`} lead="Setups already saved keep the numbers they were computed with." />
       <MachineForm vendorSlug={vendor.slug} id={machine.id} initial={machineToValues(machine)} action={saveMachineAction} />
-      <DeleteMachineForm vendorSlug={vendor.slug} id={machine.id} name={machine.name} />
+      <DeleteMachineForm deleteMachineAction={deleteMachineAction} vendorSlug={vendor.slug} id={machine.id} name={machine.name} />
     </>
   );
 }

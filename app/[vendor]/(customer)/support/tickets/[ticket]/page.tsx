@@ -1,5 +1,6 @@
 import Link from "next/link";
 
+import { customerReplyAction, rateTicketAction } from "@/app/[vendor]/(customer)/support/actions";
 import { CustomerReplyForm } from "@/components/support/customer-reply-form";
 import { RatingForm } from "@/components/support/rating-form";
 import { SafeMarkdown } from "@/components/support/safe-markdown";
@@ -27,11 +28,11 @@ export default async function CustomerTicketPage({ params }: { params: Promise<{
           </article>
           <TicketThreadView vendorSlug={vendor.slug} messages={messages} attachments={attachments} />
           {ticket.status === "closed" ? (
-            <RatingForm vendor={vendor.slug} ticketId={ticket.id} current={ticket.satisfaction} />
+            <RatingForm rateTicketAction={rateTicketAction} vendor={vendor.slug} ticketId={ticket.id} current={ticket.satisfaction} />
           ) : null}
           <section aria-labelledby="reply-heading">
             <h2 id="reply-heading" className="mb-2 text-lg font-semibold">{ticket.status === "closed" ? "Reopen with a reply" : "Reply"}</h2>
-            <CustomerReplyForm vendor={vendor.slug} ticketId={ticket.id} />
+            <CustomerReplyForm customerReplyAction={customerReplyAction} vendor={vendor.slug} ticketId={ticket.id} />
           </section>
         </div>
         <aside className="space-y-4 text-sm">

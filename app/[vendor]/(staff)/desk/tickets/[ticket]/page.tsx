@@ -1,3 +1,4 @@
+import { handoffAction, staffReplyAction, updateTicketAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { CustomerPanel } from "@/components/desk/customer-panel";
 import { DeskThread } from "@/components/desk/desk-thread";
 import { HandoffForm } from "@/components/desk/handoff-form";
@@ -55,6 +56,7 @@ export default async function DeskTicketPage({ params }: { params: Promise<{ ven
           </article>
           <DeskThread vendor={vendor.slug} initial={thread} />
           <ReplyEditor
+            staffReplyAction={staffReplyAction}
             vendor={vendor.slug}
             ticketId={ticket.id}
             versions={versions}
@@ -67,9 +69,9 @@ export default async function DeskTicketPage({ params }: { params: Promise<{ ven
           />
         </div>
         <aside className="space-y-6">
-          <section aria-labelledby="settings-h"><h2 id="settings-h" className="mb-2 font-semibold">Ticket</h2><TicketControls vendor={vendor.slug} ticket={ticket} assignees={assignees} /></section>
+          <section aria-labelledby="settings-h"><h2 id="settings-h" className="mb-2 font-semibold">Ticket</h2><TicketControls updateTicketAction={updateTicketAction} vendor={vendor.slug} ticket={ticket} assignees={assignees} /></section>
           <CustomerPanel vendorSlug={vendor.slug} context={context} links={links} ticket={ticket} />
-          <section aria-labelledby="handoff-h"><h2 id="handoff-h" className="mb-2 font-semibold">Engineering</h2><HandoffForm vendor={vendor.slug} ticketId={ticket.id} versions={linkedVersions} /></section>
+          <section aria-labelledby="handoff-h"><h2 id="handoff-h" className="mb-2 font-semibold">Engineering</h2><HandoffForm handoffAction={handoffAction} vendor={vendor.slug} ticketId={ticket.id} versions={linkedVersions} /></section>
           <TicketHistory entries={history} people={people} />
         </aside>
       </div>

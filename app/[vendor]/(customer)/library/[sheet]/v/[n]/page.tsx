@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { after } from "next/server";
 
+import { saveSetupAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { loadLibrarySheet, parseVersionNumber } from "@/components/library/load-library-sheet";
 import { readUnits } from "@/components/library/read-units";
 import { CachedSheetView } from "@/components/library/cached-sheet-view";
@@ -24,6 +25,6 @@ export default async function SheetVersionPage({ params }: Props) {
   // Counted after the response is sent, so a slow write never delays the page.
   after(() => countSheetView(found.vendor.id, found.data.version.id));
   const units = await readUnits();
-  const renderAdaptPanel = adaptPanelRenderer({ vendor: found.vendor, versionId: found.data.version.id, units, returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}` });
+  const renderAdaptPanel = adaptPanelRenderer({ saveSetupAction, vendor: found.vendor, versionId: found.data.version.id, units, returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}` });
   return <CachedSheetView vendorId={found.vendor.id} data={found.data} units={units} vendorSlug={found.vendor.slug} vendorName={found.vendor.name} renderAdaptPanel={renderAdaptPanel} />;
 }
