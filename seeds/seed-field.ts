@@ -9,8 +9,8 @@ import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
 
 import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
-import { adaptOperation, type AdaptContext } from "@/lib/bench/adapt-context";
-import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
+import { adaptOperation, type AdaptContext } from "@/lib/adapt/adapt-context";
+import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 
 import type { SeededIds } from "./seed-foundation";
 import { meltingStorySlug } from "./sheets/demo-sheet-plan";

@@ -4,9 +4,9 @@ import { findMembership } from "@/lib/auth/membership";
 import { can } from "@/lib/auth/permissions";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { listMachines } from "@/lib/bench/machines";
-import { findAdaptContext } from "@/lib/bench/page-data";
+import { findAdaptContext } from "@/lib/adapt/page-data";
 import type { UnitSystem } from "@/lib/machining";
-import type { AdaptStart } from "@/lib/bench/readapt-start";
+import type { AdaptStart } from "@/lib/adapt/readapt-start";
 
 import { AdaptPanel } from "./adapt-panel";
 import { LazyAdaptPanel } from "./lazy-adapt-panel";

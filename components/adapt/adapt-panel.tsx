@@ -4,8 +4,8 @@ import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
 
 import type { EntryCapabilityKey } from "@/content-schema/setup-fields";
-import type { AdaptContext } from "@/lib/bench/adapt-context";
-import { type AdhocMachineDraft, computeAdaptation, type OverrideDraft, readAdhocMachine } from "@/lib/bench/compute-adaptation";
+import type { AdaptContext } from "@/lib/adapt/adapt-context";
+import { type AdhocMachineDraft, computeAdaptation, type OverrideDraft, readAdhocMachine } from "@/lib/adapt/compute-adaptation";
 import { feedSpeedCurve } from "@/lib/bench/feed-speed-curve";
 import { machineToInput, type Machine } from "@/lib/bench/machine-rows";
 import { noStepsNote, numbersDiffer } from "@/lib/bench/setup-sheet-data";

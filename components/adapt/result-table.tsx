@@ -1,4 +1,4 @@
-import type { ContextOperation } from "@/lib/bench/adapt-context";
+import type { ContextOperation } from "@/lib/adapt/adapt-context";
 import { numbersDiffer } from "@/lib/bench/setup-sheet-data";
 import { type AdaptNumbers, ballNoseEffectiveDiameter, formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/machining";
 

@@ -1,7 +1,7 @@
 import Link from "next/link";
 
-import { ADAPTED_FIELDS } from "@/lib/bench/adapted-diff";
-import type { Readaptation } from "@/lib/bench/readapt-setup";
+import { ADAPTED_FIELDS } from "@/lib/adapt/adapted-diff";
+import type { Readaptation } from "@/lib/adapt/readapt-setup";
 import { type AdaptResult, formatQuantity, type UnitSystem } from "@/lib/machining";
 
 import { StepsTrail } from "@/components/adapt/steps-trail";

@@ -2,7 +2,7 @@ import type { UnitSystem } from "@/lib/machining";
 import type { OperationDiff } from "@/lib/sheets/parameter-diff";
 import { formatParameterChange } from "@/lib/sheets/parameter-diff";
 
-import { type AdaptedChange, formatAdaptedChange } from "./adapted-diff";
+import { type AdaptedChange, formatAdaptedChange } from "@/lib/adapt/adapted-diff";
 
 // Pure: the text and HTML of one change-alert e-mail.
 

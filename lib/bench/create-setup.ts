@@ -6,8 +6,8 @@ import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 import { isMachiningInputError } from "@/lib/machining";
 
-import { adaptOperation } from "./adapt-context";
-import { loadAdaptContext } from "./load-adapt-context";
+import { adaptOperation } from "@/lib/adapt/adapt-context";
+import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { machineToInput } from "./machine-rows";
 import { getMachine } from "./machines";
 

@@ -1,7 +1,7 @@
 import type { SpindleKindKey } from "@/content-schema/spindle-kind";
 import type { MachineRow } from "@/lib/db/tables";
 
-import type { BenchMachineInput } from "./adapt-context";
+import type { BenchMachineInput } from "@/lib/adapt/adapt-context";
 
 
 /** A customer's machine in metric machining units. */

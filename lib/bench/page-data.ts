@@ -2,18 +2,15 @@ import "server-only";
 
 import { cache } from "react";
 
+import { findAdaptContext } from "@/lib/adapt/page-data";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { isUuid } from "@/lib/ids/is-uuid";
 
 import { getSetup } from "./list-setups";
-import { loadAdaptContext } from "./load-adapt-context";
 import { getMachine } from "./machines";
 
 // The Bench's page data: each lookup runs once per request, shared by a segment's layout (the 404) and its page.
 // `find…` answers null for "not found here", which the layout turns into a 404.
-
-/** A sheet version's adapt context, read once per request however many panels and sections ask for it. */
-export const findAdaptContext = cache((vendorId: string, versionId: string) => loadAdaptContext({ vendorId, versionId }));
 
 /** The customer's machine; vendor and owner in the WHERE. */
 export const findBenchMachine = cache(async (vendorSlug: string, id: string) => {

@@ -10,13 +10,13 @@ import { NotFound } from "@/lib/errors/domain-errors";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 import { hasFrontMatter } from "@/lib/sheets/version-rows";
 
-import type { AdaptContext } from "./adapt-context";
+import type { AdaptContext } from "@/lib/adapt/adapt-context";
 import { createAlertStopToken } from "./alert-token";
 import { type AlertSetup, renderChangeAlert } from "./change-alert-mail";
-import { loadAdaptContext } from "./load-adapt-context";
+import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { machineToInput, rowToMachine } from "./machine-rows";
-import { readaptOperation } from "./readapt-operation";
-import { readStoredOperations } from "./read-front-matter";
+import { readaptOperation } from "@/lib/adapt/readapt-operation";
+import { readStoredOperations } from "@/lib/adapt/read-front-matter";
 
 type SetupRow = { id: string; user_id: string; email: string; name: string; operation_index: number; overrides: Record<string, number>; units: UnitSystem; entry_capability: EntryCapability } & Parameters<typeof rowToMachine>[0] & { machine_name: string };
 

@@ -2,7 +2,7 @@ import { type AdaptResult, formatNumber, formatQuantity, QUANTITIES, RULES, type
 
 import type { SetupOverrides } from "@/content-schema/setup-fields";
 
-import type { AdaptContext } from "./adapt-context";
+import type { AdaptContext } from "@/lib/adapt/adapt-context";
 
 // Pure: the numbers of one setup laid out for its PDF sheet and its CSV export, in the chosen units.
 

@@ -17,7 +17,7 @@ export type MachineRow = { rpm_min: number; rpm_max: number; power_kw: number; m
 export type MachineClassRow = { rigidity: number; rpm_max: number; max_feed_mm_min: number; z_thrust_n: number | null };
 
 // One reader of stored front matter for the whole app (Bench owns it).
-export { readStoredOperations as readOperations } from "@/lib/bench/read-front-matter";
+export { readStoredOperations as readOperations } from "@/lib/adapt/read-front-matter";
 
 const ENGINE_ENTRY: Partial<Record<SheetOperation["entry"], EntryKind>> = { plunge: "plunge", ramp: "ramp", helical: "helix" };
 const num = (v: number | null | undefined) => (v === null || v === undefined ? undefined : Number(v));

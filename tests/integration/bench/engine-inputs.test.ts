@@ -4,10 +4,10 @@ import { machineClassFieldsSchema } from "@/content-schema/catalogue-machine-cla
 import { materialFieldsSchema } from "@/content-schema/catalogue-material";
 import { machineFieldsSchema } from "@/content-schema/machine-fields";
 import { setupCreateSchema } from "@/content-schema/setup-fields";
-import { adaptOperation, buildAdaptInput } from "@/lib/bench/adapt-context";
+import { adaptOperation, buildAdaptInput } from "@/lib/adapt/adapt-context";
 import { createSetup } from "@/lib/bench/create-setup";
 import { getSetup } from "@/lib/bench/list-setups";
-import { loadAdaptContext } from "@/lib/bench/load-adapt-context";
+import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { machineToInput } from "@/lib/bench/machine-rows";
 import { createMachine, getMachine } from "@/lib/bench/machines";
 import { getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";

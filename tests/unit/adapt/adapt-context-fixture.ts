@@ -1,4 +1,4 @@
-import type { AdaptContext } from "@/lib/bench/adapt-context";
+import type { AdaptContext } from "@/lib/adapt/adapt-context";
 
 // Invented demo data: a 3.175 mm single-flute cutter in cast acrylic (vc 150–300 m/min, min fz 0.05 mm,
 // kc 100 N/mm², a chip-load band of 1.2–3.5 % of D so the slot's 0.1 mm sits inside it) on a reference class of

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 
-import { adaptOperation } from "@/lib/bench/adapt-context";
+import { adaptOperation } from "@/lib/adapt/adapt-context";
 import { renderChangeAlert } from "@/lib/bench/change-alert-mail";
-import { diffAdapted } from "@/lib/bench/adapted-diff";
+import { diffAdapted } from "@/lib/adapt/adapted-diff";
 import { setupCsv } from "@/lib/bench/setup-csv";
 import { setupSheetData } from "@/lib/bench/setup-sheet-data";
 import { formatQuantity } from "@/lib/machining";

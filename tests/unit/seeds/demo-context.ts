@@ -2,8 +2,8 @@ import { machineClassFieldsSchema, type MachineClassFieldsInput } from "@/conten
 import { materialFieldsSchema, type MaterialFieldsInput } from "@/content-schema/catalogue-material";
 import type { CutterFieldsInput } from "@/content-schema/catalogue-cutter";
 import type { SheetFrontMatter } from "@/content-schema/sheet-front-matter";
-import type { AdaptContext, BenchMachineInput } from "@/lib/bench/adapt-context";
-import { toContextOperation } from "@/lib/bench/read-front-matter";
+import type { AdaptContext, BenchMachineInput } from "@/lib/adapt/adapt-context";
+import { toContextOperation } from "@/lib/adapt/read-front-matter";
 import { validateSheetSource } from "@/lib/mdx/validate-sheet-source";
 import { DEMO_CUTTERS, DEMO_MACHINE_CLASSES, DEMO_MATERIALS } from "@/seeds/sheets/demo-catalogue";
 import { DEMO_SHEET_PLAN, demoSheetSlug, type PlannedSheet, type PlannedVersion, seededVersions } from "@/seeds/sheets/demo-sheet-plan";

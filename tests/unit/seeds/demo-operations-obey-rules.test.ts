@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 
 import { materialFieldsSchema } from "@/content-schema/catalogue-material";
 import { machineClassFieldsSchema } from "@/content-schema/catalogue-machine-class";
-import { adaptOperation } from "@/lib/bench/adapt-context";
+import { adaptOperation } from "@/lib/adapt/adapt-context";
 import {
   ballNoseEffectiveDiameter,
   chipLoadBand,

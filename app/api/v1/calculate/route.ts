@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 
-import { runCalculation } from "@/lib/calculate/run-calculation";
+import { runCalculation } from "@/lib/adapt/calculate/run-calculation";
 import { withPublic } from "@/lib/http/with-vendor";
 import { readJson } from "@/lib/http/read-json";
 

@@ -6,7 +6,7 @@ import { AdaptPanelMount } from "@/components/adapt/adapt-panel-mount";
 import { findBenchVersion } from "@/lib/bench/page-data";
 import { readUnits } from "@/components/library/read-units";
 import { PageHeader } from "@/components/ui/page-header";
-import { readaptStart } from "@/lib/bench/readapt-start";
+import { readaptStart } from "@/lib/adapt/readapt-start";
 
 export const metadata = { title: "Adapt a sheet" };
 

@@ -5,10 +5,10 @@ import type { AdaptResult } from "@/lib/machining";
 
 import type { AdaptContext } from "./adapt-context";
 import type { AdaptedChange } from "./adapted-diff";
-import type { SetupSummary } from "./list-setups";
+import type { SetupSummary } from "@/lib/bench/list-setups";
 import { loadAdaptContext } from "./load-adapt-context";
-import { machineToInput } from "./machine-rows";
-import { getMachine } from "./machines";
+import { machineToInput } from "@/lib/bench/machine-rows";
+import { getMachine } from "@/lib/bench/machines";
 import { readaptOperation } from "./readapt-operation";
 
 export type Readaptation = {

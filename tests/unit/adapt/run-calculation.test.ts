@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 
-import { runCalculation } from "@/lib/calculate/run-calculation";
+import { runCalculation } from "@/lib/adapt/calculate/run-calculation";
 
 // 1/4 in two-flute cutter, 18000 rpm, 70 in/min: fz = 70 / (2 × 18000) = 0.001944 in.
 const imperialBody = () => ({

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 
-import { computeAdaptation, readAdhocMachine } from "@/lib/bench/compute-adaptation";
+import { computeAdaptation, readAdhocMachine } from "@/lib/adapt/compute-adaptation";
 
-import { acrylicContext } from "../adapt/adapt-context-fixture";
+import { acrylicContext } from "./adapt-context-fixture";
 
 const weak = { rpmMin: "10000", rpmMax: "16000", power: "0.8", maxFeed: "3000", rigidity: "light" as const, zThrust: "", stickout: "", spindleKind: "constant-torque" as const, ratedRpm: "" };
 const none = { ae: "", ap: "", stickout: "" };

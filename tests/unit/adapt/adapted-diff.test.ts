@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
 
-import { adaptOperation } from "@/lib/bench/adapt-context";
-import { diffAdapted, formatAdaptedChange } from "@/lib/bench/adapted-diff";
+import { adaptOperation } from "@/lib/adapt/adapt-context";
+import { diffAdapted, formatAdaptedChange } from "@/lib/adapt/adapted-diff";
 
-import { acrylicContext } from "../adapt/adapt-context-fixture";
+import { acrylicContext } from "./adapt-context-fixture";
 
 const machine = { minRpm: 10000, maxRpm: 16000, spindlePowerKw: 0.8, maxFeedMmMin: 3000, rigidity: 0.35 };
 

@@ -1,7 +1,7 @@
 import "server-only";
 
 import type { OverrideDraft } from "./compute-adaptation";
-import { getSetup } from "./list-setups";
+import { getSetup } from "@/lib/bench/list-setups";
 import { loadAdaptContext } from "./load-adapt-context";
 
 import { isUuid } from "@/lib/ids/is-uuid";

@@ -1,0 +1,8 @@
+import "server-only";
+
+import { cache } from "react";
+
+import { loadAdaptContext } from "./load-adapt-context";
+
+/** A sheet version's adapt context, read once per request however many panels and sections ask for it. */
+export const findAdaptContext = cache((vendorId: string, versionId: string) => loadAdaptContext({ vendorId, versionId }));
