@@ -7,7 +7,7 @@ import { getSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
 import { createVendor } from "@/lib/vendors/create-vendor";
-import { createVendorSchema } from "@/lib/vendors/create-vendor-schema";
+import { createVendorSchema } from "@/content-schema/vendor-create";
 
 export async function createVendorAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const user = await getSessionUser();

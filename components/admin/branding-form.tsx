@@ -7,10 +7,10 @@ import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import type { FormAction } from "@/lib/actions/action-state";
-import { brandingSchema, WILSON_CONFIDENCE_CHOICES } from "@/lib/vendors/branding-schema";
+import { brandingSchema, WILSON_CONFIDENCE_CHOICES } from "@/content-schema/vendor-branding";
 import { contrastRatio, inkFor } from "@/lib/ui/contrast";
 import { explainAccentColor } from "@/lib/vendors/explain-accent-color";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 export function BrandingForm({ vendor, updateBrandingAction }: { vendor: Vendor; updateBrandingAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(updateBrandingAction, brandingSchema.passthrough());

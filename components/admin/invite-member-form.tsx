@@ -6,7 +6,7 @@ import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import type { FormAction } from "@/lib/actions/action-state";
 import { ROLE_LABELS } from "@/lib/auth/roles";
-import { inviteMemberSchema, STAFF_INVITE_ROLES } from "@/lib/members/member-schemas";
+import { inviteMemberSchema, STAFF_INVITE_ROLES } from "@/content-schema/members";
 
 export function InviteMemberForm({ vendor, inviteMemberAction }: { vendor: string; inviteMemberAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(inviteMemberAction, inviteMemberSchema);

@@ -10,7 +10,7 @@ import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import type { ActionState } from "@/lib/actions/action-state";
 import type { FormAction } from "@/lib/actions/action-state";
-import { acceptInvitationSchema } from "@/lib/members/member-schemas";
+import { acceptInvitationSchema } from "@/content-schema/members";
 
 /**
  * `newAccount`: the invitation creates the account (name and password asked), then signs the person in with

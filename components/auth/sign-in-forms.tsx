@@ -6,7 +6,7 @@ import { type FormEvent, useState } from "react";
 
 import { Field } from "@/components/forms/field";
 import type { ActionState } from "@/lib/actions/action-state";
-import { credentialsSchema, emailSchema } from "@/lib/auth/auth-schemas";
+import { credentialsSchema, emailSchema } from "@/content-schema/auth";
 import type { FieldErrors } from "@/lib/errors/domain-errors";
 
 type ResendVerification = (input: { email: string; vendor?: string }) => Promise<ActionState>;

@@ -7,7 +7,7 @@ import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import type { FormAction } from "@/lib/actions/action-state";
-import { signUpSchema } from "@/lib/auth/auth-schemas";
+import { signUpSchema } from "@/content-schema/auth";
 
 export function SignUpForm({ vendor, signUpAction }: { vendor: string; signUpAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(signUpAction, signUpSchema);

@@ -5,7 +5,7 @@ import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import type { FormAction } from "@/lib/actions/action-state";
-import { createVendorSchema } from "@/lib/vendors/create-vendor-schema";
+import { createVendorSchema } from "@/content-schema/vendor-create";
 
 export function CreateVendorForm({ createVendorAction }: { createVendorAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(createVendorAction, createVendorSchema);

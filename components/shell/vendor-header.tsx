@@ -4,7 +4,7 @@ import { AREAS, can } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/auth/roles";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { inkFor } from "@/lib/ui/contrast";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 import { ShellSearchBox } from "@/components/search/shell-search-box";
 

@@ -2,7 +2,7 @@ import "server-only";
 
 import { NotFound, Unauthenticated } from "@/lib/errors/domain-errors";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 import { findMembership, type Member } from "./membership";
 import { can, type Permission } from "./permissions";

@@ -12,7 +12,7 @@ import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { consumeRateLimit, resetRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 import { refundRateLimit } from "@/lib/rate-limit/refund-rate-limit";
 
-import { credentialsSchema } from "./auth-schemas";
+import { credentialsSchema } from "@/content-schema/auth";
 import { knexAdapter } from "./knex-adapter";
 import { isKnownSignInAddress, rememberSignInAddress } from "./known-sign-in-addresses";
 import { verifyPassword } from "./passwords";

@@ -10,7 +10,7 @@ import { enqueue } from "@/lib/jobs/enqueue";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { createStopToken } from "@/lib/mail/stop-token";
 import { listVendors } from "@/lib/vendors/get-vendor";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 import { confidenceOf, percent } from "./confidence";
 import { loadCoverageGaps } from "./coverage";

@@ -3,7 +3,7 @@ import "server-only";
 import { db } from "@/lib/db/knex";
 
 import { enqueueMail, MAIL_DEAD_LETTER_QUEUE } from "./enqueue-mail";
-import { mailMessageSchema } from "./mail-schema";
+import { mailMessageSchema } from "@/content-schema/mail";
 
 export type DeadLetter = { id: string; to: string; subject: string; failedAt: Date; error: string | null };
 export type DeadLetterSummary = { count: number; oldest: Date | null; lastError: string | null };

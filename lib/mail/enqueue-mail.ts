@@ -5,7 +5,7 @@ import type { Knex } from "knex";
 import { retriesToCover } from "@/lib/jobs/backoff";
 import { enqueue, ensureQueue } from "@/lib/jobs/enqueue";
 
-import { type MailMessage, mailMessageSchema } from "./mail-schema";
+import { type MailMessage, mailMessageSchema } from "@/content-schema/mail";
 
 export const MAIL_QUEUE = "mail.send";
 /** Mail that failed for the whole retry window waits here for the operator (/operator). */

@@ -3,7 +3,7 @@ import "server-only";
 import type { CreateTicketInput } from "@/content-schema/ticket-create";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 import { firstResponseDueAt } from "./first-response-due";
 import { notifyNewTicket } from "./notify/notify-new-ticket";

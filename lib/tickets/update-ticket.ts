@@ -5,7 +5,7 @@ import type { Knex } from "knex";
 import { panelValuesOf, type TicketPanelValues, type TicketUpdateInput } from "@/content-schema/ticket-update";
 import { db } from "@/lib/db/knex";
 import { Conflict, InvalidInput, NotFound } from "@/lib/errors/domain-errors";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 import { auditTicketChange } from "./audit-change";
 import { firstResponseDueAt } from "./first-response-due";

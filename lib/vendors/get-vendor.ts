@@ -7,7 +7,7 @@ import { db } from "@/lib/db/knex";
 import { safeDecode } from "@/lib/http/safe-decode";
 
 import { vendorSlugSchema } from "./reserved-slugs";
-import { type Vendor, vendorSettingsSchema } from "./vendor-schema";
+import { type Vendor, vendorSettingsSchema } from "@/content-schema/vendor";
 
 type VendorRow = { id: string; slug: string; name: string; accent_color: string; has_logo: boolean; settings: unknown };
 

@@ -7,7 +7,7 @@ import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 import { invalidateLibrary } from "@/lib/library/library-cache";
 
-import { type BrandingInput, LOGO_MAX_BYTES, LOGO_TYPES } from "./branding-schema";
+import { type BrandingInput, LOGO_MAX_BYTES, LOGO_TYPES } from "@/content-schema/vendor-branding";
 
 /** Decide a logo's type by its bytes, never by its name or the browser's word. */
 export async function checkLogo(bytes: Buffer): Promise<{ bytes: Buffer; type: string }> {

@@ -4,7 +4,7 @@ import { sheetFrontMatterSchema } from "@/content-schema/sheet-front-matter";
 import { db } from "@/lib/db/knex";
 import { createTicket } from "@/lib/tickets/create-ticket";
 import { toVendor, vendorQuery } from "@/lib/vendors/get-vendor";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 import { insertSheetCatalogue } from "./sheet-catalogue";
 import { buildSheetSource, frontMatterInput } from "./sheet-source";

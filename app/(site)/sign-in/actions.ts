@@ -4,7 +4,7 @@ import { headers } from "next/headers";
 import { z } from "zod";
 
 import type { ActionState } from "@/lib/actions/action-state";
-import { emailSchema } from "@/lib/auth/auth-schemas";
+import { emailSchema } from "@/content-schema/auth";
 import { RateLimited } from "@/lib/errors/domain-errors";
 import { clientIp } from "@/lib/http/client-ip";
 import { resendVerification } from "@/lib/users/resend-verification";

@@ -5,7 +5,7 @@ import type { Knex } from "knex";
 import { appUrl } from "@/lib/http/app-url";
 import { replyAddress } from "@/lib/inbound-mail/reply-address";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 import { loadTicketMailContext, supportTeam } from "./ticket-mail-context";
 

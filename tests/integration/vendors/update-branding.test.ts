@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
-import { brandingSchema } from "@/lib/vendors/branding-schema";
+import { brandingSchema } from "@/content-schema/vendor-branding";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 import { updateBranding } from "@/lib/vendors/update-branding";
 import { createVendorWithStaff } from "@/tests/factories/foundation";

@@ -5,7 +5,7 @@ import { redirect } from "next/navigation";
 import { z } from "zod";
 
 import type { ActionState } from "@/lib/actions/action-state";
-import { signUpSchema } from "@/lib/auth/auth-schemas";
+import { signUpSchema } from "@/content-schema/auth";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";

@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 
 import { vendorAction } from "@/lib/actions/vendor-action";
-import { brandingSchema } from "@/lib/vendors/branding-schema";
+import { brandingSchema } from "@/content-schema/vendor-branding";
 import { updateBranding } from "@/lib/vendors/update-branding";
 
 export const updateBrandingAction = vendorAction({ permission: "vendor.settings", schema: brandingSchema.passthrough() }, async (input, { vendor, user }) => {

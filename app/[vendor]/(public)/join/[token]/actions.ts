@@ -5,7 +5,7 @@ import { getSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
 import { acceptInvitation } from "@/lib/members/accept-invitation";
-import { acceptInvitationSchema } from "@/lib/members/member-schemas";
+import { acceptInvitationSchema } from "@/content-schema/members";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
 export type AcceptedInvitation = { email: string; created: boolean };

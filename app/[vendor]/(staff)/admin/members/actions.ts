@@ -5,7 +5,7 @@ import { revalidatePath } from "next/cache";
 import { vendorAction } from "@/lib/actions/vendor-action";
 import { changeMemberRole, removeMember } from "@/lib/members/change-member";
 import { inviteMember } from "@/lib/members/invite-member";
-import { changeRoleSchema, inviteMemberSchema, removeMemberSchema } from "@/lib/members/member-schemas";
+import { changeRoleSchema, inviteMemberSchema, removeMemberSchema } from "@/content-schema/members";
 
 export const inviteMemberAction = vendorAction({ permission: "members.manage", schema: inviteMemberSchema }, async (input, { vendor, user }) => {
   await inviteMember({ vendorId: vendor.id, vendorSlug: vendor.slug, vendorName: vendor.name, actorUserId: user.id, email: input.email, role: input.role });

@@ -7,7 +7,7 @@ import { coverageGapsCsv, customerChangesCsv, needsAttentionCsv, sheetVersionsCs
 import { listNeedsAttention } from "@/lib/field/needs-attention";
 import { findFieldSheet, loadSheetFieldResults } from "@/lib/field/sheet-field-results";
 import { withVendor } from "@/lib/http/with-vendor";
-import type { Vendor } from "@/lib/vendors/vendor-schema";
+import type { Vendor } from "@/content-schema/vendor";
 
 const EXPORT_LIMIT = 5000;
 

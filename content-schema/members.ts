@@ -1,6 +1,6 @@
 import { z } from "zod";
 
-import { emailSchema } from "@/lib/auth/auth-schemas";
+import { emailSchema } from "@/content-schema/auth";
 import { roleSchema } from "@/lib/auth/roles";
 
 export const STAFF_INVITE_ROLES = ["admin", "engineer", "support"] as const;

@@ -1,6 +1,6 @@
 import { z } from "zod";
 
-import { explainAccentColor } from "./explain-accent-color";
+import { explainAccentColor } from "@/lib/vendors/explain-accent-color";
 
 export const vendorSettingsSchema = z.object({
   libraryPublic: z.boolean().default(true),

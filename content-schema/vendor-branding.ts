@@ -1,6 +1,6 @@
 import { z } from "zod";
 
-import { accentColorSchema } from "./vendor-schema";
+import { accentColorSchema } from "./vendor";
 
 const checkbox = z.union([z.literal("on"), z.literal("true"), z.literal("")]).optional().transform((v) => v === "on" || v === "true");
 

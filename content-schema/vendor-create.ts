@@ -1,9 +1,9 @@
 import { z } from "zod";
 
-import { emailSchema } from "@/lib/auth/auth-schemas";
+import { emailSchema } from "@/content-schema/auth";
 
-import { vendorSlugSchema } from "./reserved-slugs";
-import { accentColorSchema } from "./vendor-schema";
+import { vendorSlugSchema } from "@/lib/vendors/reserved-slugs";
+import { accentColorSchema } from "./vendor";
 
 export const createVendorSchema = z.object({
   slug: vendorSlugSchema,
