@@ -3,7 +3,7 @@
 import { parseArgs } from "node:util";
 
 import { db } from "../lib/db/knex";
-import { createPersonalToken } from "../lib/sheets/personal-access-tokens";
+import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
 
 const { positionals, values } = parseArgs({
   allowPositionals: true,

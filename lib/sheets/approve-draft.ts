@@ -3,7 +3,7 @@ import "server-only";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { Conflict, Forbidden } from "@/lib/errors/domain-errors";
-import { getVendorSettings } from "./vendor-settings";
+import { getVendorSettings } from "@/lib/vendors/vendor-settings";
 
 import { lockOpenDraft } from "./find-sheet";
 

@@ -6,7 +6,7 @@ import { emitSheetEvent } from "@/lib/events/emit-sheet-event";
 import { Conflict } from "@/lib/errors/domain-errors";
 
 import { lockOpenDraft } from "./find-sheet";
-import { getVendorSettings } from "./vendor-settings";
+import { getVendorSettings } from "@/lib/vendors/vendor-settings";
 
 /** in_review → published; the previously published version becomes superseded in the same transaction. */
 export async function publishDraft({ vendorId, userId, slug }: { vendorId: string; userId: string; slug: string }) {

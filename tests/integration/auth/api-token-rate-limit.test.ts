@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 
 import { GET as listMachinesRoute } from "@/app/api/v1/vendors/[vendor]/machines/route";
 import { db } from "@/lib/db/knex";
-import { createPersonalToken } from "@/lib/sheets/personal-access-tokens";
+import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
 import { mustExist } from "@/tests/support/must-exist";
 

@@ -6,7 +6,7 @@ import { userForApiToken } from "@/lib/auth/api-tokens";
 import { sessionUserFor } from "@/lib/auth/session-user";
 import { db } from "@/lib/db/knex";
 import { removeMember } from "@/lib/members/change-member";
-import { createPersonalToken } from "@/lib/sheets/personal-access-tokens";
+import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
 import { changePassword } from "@/lib/users/change-password";
 import { joinAsCustomer } from "@/lib/users/sign-up-customer";
 import { createVendorWithStaff, FACTORY_PASSWORD } from "@/tests/factories/foundation";

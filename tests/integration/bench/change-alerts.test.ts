@@ -5,7 +5,7 @@ import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { createAlertStopToken, readAlertStopToken } from "@/lib/bench/alert-token";
 import { createSetup } from "@/lib/bench/create-setup";
 import { createMachine } from "@/lib/bench/machines";
-import { setChangeAlerts } from "@/lib/bench/mail-preferences";
+import { setChangeAlerts } from "@/lib/mail/mail-preferences";
 import { sendChangeAlerts } from "@/lib/bench/send-change-alerts";
 import { db } from "@/lib/db/knex";
 import { getBoss } from "@/lib/jobs/boss";

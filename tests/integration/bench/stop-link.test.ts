@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 
 import { GET, POST } from "@/app/api/v1/vendors/[vendor]/setups/alerts/stop/route";
 import { createAlertStopToken } from "@/lib/bench/alert-token";
-import { wantsChangeAlerts } from "@/lib/bench/mail-preferences";
+import { wantsChangeAlerts } from "@/lib/mail/mail-preferences";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
 const url = (vendorSlug: string, token: string) => `http://127.0.0.1:3000/api/v1/vendors/${vendorSlug}/setups/alerts/stop?token=${encodeURIComponent(token)}`;

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 
 import { GET as readImage } from "@/app/[vendor]/(customer)/library/cutters/[sku]/image/route";
 import { POST as upload } from "@/app/[vendor]/(staff)/drafting/cutters/[sku]/image/route";
-import { createPersonalToken } from "@/lib/sheets/personal-access-tokens";
+import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
 import { createCatalogue } from "@/tests/factories/catalogue";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 

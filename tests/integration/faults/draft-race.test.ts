@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 
 import { PUT as putDraft } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draft/route";
 import { db } from "@/lib/db/knex";
-import { createPersonalToken } from "@/lib/sheets/personal-access-tokens";
+import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
 import { DraftConflict, saveDraft } from "@/lib/sheets/save-draft";
 import { createDraftingScenario, sourceWithFeed } from "@/tests/factories/sheets";
 

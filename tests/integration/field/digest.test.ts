@@ -2,7 +2,7 @@ import { NextRequest } from "next/server";
 import { afterAll, describe, expect, it } from "vitest";
 
 import { createAlertStopToken } from "@/lib/bench/alert-token";
-import { setWeeklyDigest, wantsWeeklyDigest } from "@/lib/bench/mail-preferences";
+import { setWeeklyDigest, wantsWeeklyDigest } from "@/lib/mail/mail-preferences";
 import { db } from "@/lib/db/knex";
 import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { sendDigestOnRequest, sendVendorDigests, weekStartOf } from "@/lib/field/send-digest";

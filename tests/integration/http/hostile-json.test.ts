@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 
 import { POST } from "@/app/api/v1/vendors/[vendor]/machines/route";
 import { db } from "@/lib/db/knex";
-import { createPersonalToken } from "@/lib/sheets/personal-access-tokens";
+import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { hostileCorpusBytes } from "@/tests/support/hostile-corpus";
 

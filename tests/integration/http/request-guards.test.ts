@@ -3,7 +3,7 @@ import { beforeEach, describe, expect, it, vi } from "vitest";
 
 import { GET, POST } from "@/app/api/v1/vendors/[vendor]/machines/route";
 import type { SessionUser } from "@/lib/auth/session-user";
-import { createPersonalToken } from "@/lib/sheets/personal-access-tokens";
+import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
 // The session cookie is what a browser sends on its own; stand in for it with the user it would resolve to.

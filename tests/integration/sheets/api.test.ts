@@ -9,7 +9,7 @@ import { POST as submit } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draf
 import { GET as getVersion } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/versions/[n]/route";
 import { POST as withdraw } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/withdraw/route";
 import { POST as createSheet } from "@/app/api/v1/vendors/[vendor]/sheets/route";
-import { createPersonalToken } from "@/lib/sheets/personal-access-tokens";
+import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
 import { createCatalogue } from "@/tests/factories/catalogue";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
 import { sourceWithFeed } from "@/tests/factories/sheets";

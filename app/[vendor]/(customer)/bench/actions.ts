@@ -9,7 +9,7 @@ import { setupActionSchema } from "@/content-schema/setup-fields";
 import { vendorAction } from "@/lib/actions/vendor-action";
 import { createSetup } from "@/lib/bench/create-setup";
 import { createMachine, deleteMachine, updateMachine } from "@/lib/bench/machines";
-import { setChangeAlerts } from "@/lib/bench/mail-preferences";
+import { setChangeAlerts } from "@/lib/mail/mail-preferences";
 
 export const saveMachineAction = vendorAction({ permission: "bench.use", schema: machineFormSchema }, async (input, { vendor, user }) => {
   const { vendor: _slug, id, ...fields } = input;

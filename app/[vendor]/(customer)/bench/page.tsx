@@ -8,7 +8,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { listSetups } from "@/lib/bench/list-setups";
 import { listMachines } from "@/lib/bench/machines";
-import { wantsChangeAlerts } from "@/lib/bench/mail-preferences";
+import { wantsChangeAlerts } from "@/lib/mail/mail-preferences";
 
 import { setChangeAlertsAction } from "./actions";
 

@@ -4,7 +4,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 
 import { vendorAction } from "@/lib/actions/vendor-action";
-import { createPersonalToken, revokePersonalToken } from "@/lib/sheets/personal-access-tokens";
+import { createPersonalToken, revokePersonalToken } from "@/lib/auth/personal-access-tokens";
 
 export const createTokenAction = vendorAction(
   { permission: "tokens.manage", schema: z.object({ vendor: z.string(), name: z.string().trim().min(2, "Name the token, e.g. “lab script”.").max(80) }) },

@@ -4,7 +4,7 @@ import { formatDate } from "@/components/library/format-date";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { ROLE_LABELS } from "@/lib/auth/roles";
-import { listPersonalTokens } from "@/lib/sheets/personal-access-tokens";
+import { listPersonalTokens } from "@/lib/auth/personal-access-tokens";
 
 import { createTokenAction, revokeTokenAction } from "./actions";
 

@@ -4,7 +4,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 
 import { vendorAction } from "@/lib/actions/vendor-action";
-import { setWeeklyDigest } from "@/lib/bench/mail-preferences";
+import { setWeeklyDigest } from "@/lib/mail/mail-preferences";
 import { requestDigest } from "@/lib/field/send-digest";
 import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 

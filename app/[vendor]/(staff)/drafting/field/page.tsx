@@ -5,7 +5,7 @@ import { FieldSection } from "@/components/field/field-section";
 import { NeedsAttentionTable } from "@/components/field/needs-attention-table";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
-import { wantsWeeklyDigest } from "@/lib/bench/mail-preferences";
+import { wantsWeeklyDigest } from "@/lib/mail/mail-preferences";
 import { confidenceOf, percent } from "@/lib/field/confidence";
 import { loadCoverageGaps } from "@/lib/field/coverage";
 import { listCustomerChanges } from "@/lib/field/customer-changes";

@@ -1,4 +1,4 @@
-import { setWeeklyDigest } from "@/lib/bench/mail-preferences";
+import { setWeeklyDigest } from "@/lib/mail/mail-preferences";
 import { stopLinkRoute } from "@/lib/http/stop-link-route";
 
 // GET|POST /api/v1/vendors/{vendor}/field/digest/stop?token=…: the signed stop link of the weekly digest.

@@ -1,4 +1,4 @@
-import { setChangeAlerts } from "@/lib/bench/mail-preferences";
+import { setChangeAlerts } from "@/lib/mail/mail-preferences";
 import { stopLinkRoute } from "@/lib/http/stop-link-route";
 
 // GET|POST /api/v1/vendors/{vendor}/setups/alerts/stop?token=…: the signed stop link of change alerts.
