@@ -14,7 +14,7 @@ export async function findSheet({ vendorId, slug, trx = db, lock = false }: { ve
   return row ? rowToSheet(row) : null;
 }
 
-export async function requireSheet(options: { vendorId: string; slug: string; trx?: Knex; lock?: boolean }): Promise<SheetRecord> {
+export async function getSheet(options: { vendorId: string; slug: string; trx?: Knex; lock?: boolean }): Promise<SheetRecord> {
   const sheet = await findSheet(options);
   if (!sheet) throw new NotFound("No such sheet.");
   return sheet;
@@ -27,7 +27,7 @@ export async function findOpenDraft({ vendorId, sheetId, trx = db }: { vendorId:
 
 /** Locks the sheet row (serialising state changes of one sheet) and returns it with its open draft. */
 export async function lockOpenDraft({ vendorId, slug, trx }: { vendorId: string; slug: string; trx: Knex.Transaction }) {
-  const sheet = await requireSheet({ vendorId, slug, trx, lock: true });
+  const sheet = await getSheet({ vendorId, slug, trx, lock: true });
   const draft = await findOpenDraft({ vendorId, sheetId: sheet.id, trx });
   if (!draft) throw new Conflict("This sheet has no open draft. Start a new version first.");
   return { sheet, draft };

@@ -4,7 +4,7 @@ import { db } from "@/lib/db/knex";
 import { Conflict, NotFound } from "@/lib/errors/domain-errors";
 
 import { checkDraftSource } from "./check-draft-source";
-import { findOpenDraft, requireSheet } from "./find-sheet";
+import { findOpenDraft, getSheet } from "./find-sheet";
 
 /** The newer text that a stale save ran into; the caller keeps both. */
 export class DraftConflict extends Conflict {
@@ -17,7 +17,7 @@ type Options = { vendorId: string; userId: string; slug: string; source: string;
 
 /** Saves a draft's source if nobody saved since `revision` (optimistic concurrency); invalid drafts are kept too. */
 export async function saveDraft({ vendorId, userId, slug, source, revision }: Options) {
-  const sheet = await requireSheet({ vendorId, slug });
+  const sheet = await getSheet({ vendorId, slug });
   const draft = await findOpenDraft({ vendorId, sheetId: sheet.id });
   if (!draft) throw new NotFound("This sheet has no open draft.");
   if (draft.state !== "draft") throw new Conflict("This version is in review. Return it to draft to edit it.");

@@ -5,12 +5,12 @@ import { db } from "@/lib/db/knex";
 import { Conflict } from "@/lib/errors/domain-errors";
 
 import { checkDraftSource } from "./check-draft-source";
-import { findOpenDraft, requireSheet } from "./find-sheet";
+import { findOpenDraft, getSheet } from "./find-sheet";
 
 /** A new draft copied from the latest version (or from `source`, the API's PUT without an open draft). */
 export async function startNewVersion({ vendorId, userId, slug, source }: { vendorId: string; userId: string; slug: string; source?: string }) {
   return db.transaction(async (trx) => {
-    const sheet = await requireSheet({ vendorId, slug, trx, lock: true });
+    const sheet = await getSheet({ vendorId, slug, trx, lock: true });
     if (await findOpenDraft({ vendorId, sheetId: sheet.id, trx })) throw new Conflict("This sheet already has an open draft.");
     const latest = await trx("sheet_versions").where({ vendor_id: vendorId, sheet_id: sheet.id }).orderBy("number", "desc").first<{ number: number; source: string; title: string } | undefined>("number", "source", "title");
     const text = source ?? latest?.source ?? "";

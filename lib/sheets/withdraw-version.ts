@@ -5,7 +5,7 @@ import { db } from "@/lib/db/knex";
 import { emitSheetEvent } from "@/lib/events/emit-sheet-event";
 import { Conflict, InvalidInput, NotFound } from "@/lib/errors/domain-errors";
 
-import { requireSheet } from "./find-sheet";
+import { getSheet } from "./find-sheet";
 
 type Options = { vendorId: string; userId: string; slug: string; reason: string; number?: number };
 
@@ -14,7 +14,7 @@ export async function withdrawVersion({ vendorId, userId, slug, reason, number }
   const text = reason.trim();
   if (text.length < 5) throw new InvalidInput("Withdrawing needs a reason readers will see.", { reason: ["Give readers a reason (at least 5 characters)."] });
   const result = await db.transaction(async (trx) => {
-    const sheet = await requireSheet({ vendorId, slug, trx, lock: true });
+    const sheet = await getSheet({ vendorId, slug, trx, lock: true });
     const query = trx("sheet_versions").where({ vendor_id: vendorId, sheet_id: sheet.id });
     const target = await (number ? query.where({ number }) : query.where({ state: "published" })).first<{ id: string; number: number; state: string } | undefined>("id", "number", "state");
     if (!target) throw new NotFound(number ? `No version ${number}.` : "This sheet has no published version.");

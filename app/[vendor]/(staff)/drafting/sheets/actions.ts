@@ -13,7 +13,7 @@ import { renderDraftPreview } from "@/components/drafting/draft-preview";
 import { approveDraft } from "@/lib/sheets/approve-draft";
 import { checkDraftSource } from "@/lib/sheets/check-draft-source";
 import { createSheet } from "@/lib/sheets/create-sheet";
-import { requireSheet } from "@/lib/sheets/find-sheet";
+import { getSheet } from "@/lib/sheets/find-sheet";
 import { newSheetSource } from "@/lib/sheets/new-sheet-source";
 import { publishDraft } from "@/lib/sheets/publish-draft";
 import { returnToDraft } from "@/lib/sheets/return-to-draft";
@@ -94,7 +94,7 @@ export const newVersionAction = vendorAction({ permission: "sheets.author", sche
 export const previewDraftAction = vendorAction(
   { permission: "sheets.author", schema: onSheet.extend({ source: sourceSchema, units: z.enum(["metric", "imperial"]).default("metric") }) },
   async (input, { vendor }) => {
-    const sheet = await requireSheet({ vendorId: vendor.id, slug: input.slug });
+    const sheet = await getSheet({ vendorId: vendor.id, slug: input.slug });
     const cutter = await getCutterById({ vendorId: vendor.id, id: sheet.cutterId });
     if (!cutter) throw new NotFound();
     const check = await checkDraftSource({ vendorId: vendor.id, source: input.source, expected: sheet });

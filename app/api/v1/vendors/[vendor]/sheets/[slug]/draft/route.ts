@@ -7,7 +7,7 @@ import { errorResponse } from "@/lib/http/error-response";
 import { readJson } from "@/lib/http/read-json";
 import { withVendor } from "@/lib/http/with-vendor";
 import { apiActor } from "@/lib/sheets/api-actor";
-import { findOpenDraft, requireSheet } from "@/lib/sheets/find-sheet";
+import { findOpenDraft, getSheet } from "@/lib/sheets/find-sheet";
 import { DraftConflict, saveDraft } from "@/lib/sheets/save-draft";
 import { startNewVersion } from "@/lib/sheets/start-new-version";
 
@@ -16,7 +16,7 @@ type P = { vendor: string; slug: string };
 // GET /api/v1/vendors/{vendor}/sheets/{slug}/draft: the open draft's source, state and revision.
 export const GET = withVendor<P>(
   async (_request, { access, params }) => {
-    const sheet = await requireSheet({ vendorId: access.vendor.id, slug: params.slug });
+    const sheet = await getSheet({ vendorId: access.vendor.id, slug: params.slug });
     const draft = await findOpenDraft({ vendorId: access.vendor.id, sheetId: sheet.id });
     if (!draft) throw new NotFound("This sheet has no open draft.");
     return NextResponse.json({ number: draft.number, state: draft.state, revision: draft.revision, source: draft.source, approved: Boolean(draft.approvedBy) });
@@ -31,7 +31,7 @@ export const PUT = withVendor<P>(
   async (request, { access, params }) => {
     const body = parseInput(saveDraftSchema, await readJson(request, 256 * 1024));
     const actor = apiActor(access);
-    const sheet = await requireSheet({ vendorId: actor.vendorId, slug: params.slug });
+    const sheet = await getSheet({ vendorId: actor.vendorId, slug: params.slug });
     const draft = await findOpenDraft({ vendorId: actor.vendorId, sheetId: sheet.id });
     if (!draft && body.revision === undefined) {
       const created = await startNewVersion({ ...actor, slug: params.slug, source: body.source });
