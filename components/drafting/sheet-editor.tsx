@@ -1,107 +1,28 @@
 "use client";
 
-import { type ReactNode, useCallback, useEffect, useMemo, useRef, useState, useTransition } from "react";
+import { useMemo, useRef, useState, useTransition } from "react";
 
-import type { ActionState } from "@/lib/actions/action-state";
 import { initialActionState } from "@/lib/actions/action-state";
-import type { SheetIssue } from "@/lib/mdx/sheet-issue";
 
 import { ConflictPanel } from "./conflict-panel";
 import { IssueList } from "./issue-list";
 import { LINE_HEIGHT_PX, LineNumberedSource } from "./line-numbered-source";
+import { type DraftAction, type SaveStatus, useDraftAutosave } from "./use-draft-autosave";
+import { useDraftPreview } from "./use-draft-preview";
 
-type Conflict = { source: string; revision: number; updatedByName: string | null };
-type SaveData = { revision?: number; valid?: boolean; conflict?: Conflict };
-type PreviewData = { issues: SheetIssue[]; valid: boolean; preview: ReactNode; renderError: string | null };
-type Action = (s: ActionState, input: Record<string, unknown>) => Promise<ActionState>;
-type SaveAction = Action;
-type PreviewAction = Action;
-type SubmitAction = (s: ActionState, input: Record<string, unknown>) => Promise<ActionState>;
-type Props = { vendorSlug: string; slug: string; initialSource: string; initialRevision: number; saveAction: SaveAction; previewAction: PreviewAction; submitAction: SubmitAction };
+type Props = { vendorSlug: string; slug: string; initialSource: string; initialRevision: number; saveAction: DraftAction; previewAction: DraftAction; submitAction: DraftAction };
 
-type SaveStatus = "saved" | "unsaved" | "saving" | "conflict" | "error";
 const STATUS_TEXT: Record<SaveStatus, string> = { saved: "✓ All changes saved", unsaved: "● Unsaved changes", saving: "Saving…", conflict: "⚠ Not saved: conflict", error: "⚠ Not saved" };
-
-const PREVIEW_DELAY_MS = 400;
-const AUTOSAVE_DELAY_MS = 1500;
 
 /** Source with line numbers beside a live preview; autosaves with the revision it was loaded at. */
 export function SheetEditor({ vendorSlug, slug, initialSource, initialRevision, saveAction, previewAction, submitAction }: Props) {
-  const [source, setSource] = useState(initialSource);
-  const [revision, setRevision] = useState(initialRevision);
-  const [saved, setSaved] = useState(initialSource);
-  const [status, setStatus] = useState<SaveStatus>("saved");
-  const [message, setMessage] = useState<string | null>(null);
-  const [conflict, setConflict] = useState<Conflict | null>(null);
-  const [issues, setIssues] = useState<SheetIssue[]>([]);
-  const [preview, setPreview] = useState<ReactNode>(null);
-  const [renderError, setRenderError] = useState<string | null>(null);
-  const [, startPreview] = useTransition();
+  const base = useMemo(() => ({ vendor: vendorSlug, slug }), [vendorSlug, slug]);
+  const { source, setSource, revision, saved, status, shown, message, conflict, save, takeTheirs } = useDraftAutosave({ base, initialSource, initialRevision, saveAction });
+  const { issues, preview, renderError } = useDraftPreview({ base, source, previewAction });
   const [submitting, startSubmit] = useTransition();
   const [changeNote, setChangeNote] = useState("");
   const [submitError, setSubmitError] = useState<string | null>(null);
   const area = useRef<HTMLTextAreaElement>(null);
-  const base = useMemo(() => ({ vendor: vendorSlug, slug }), [vendorSlug, slug]);
-  // The latest action props, so a re-render of the page (or a hot reload) does not restart the timers.
-  const actions = useRef({ saveAction, previewAction });
-  useEffect(() => {
-    actions.current = { saveAction, previewAction };
-  });
-  const saving = useRef(false);
-
-  const save = useCallback(
-    async (text: string, atRevision: number) => {
-      if (saving.current) return false;
-      saving.current = true;
-      setStatus("saving");
-      let result: ActionState<SaveData>;
-      try {
-        result = (await actions.current.saveAction(initialActionState, { ...base, source: text, revision: atRevision })) as ActionState<SaveData>;
-      } catch {
-        result = { ok: false, message: "The server did not answer. Your text is still here; try again." };
-      } finally {
-        saving.current = false;
-      }
-      if (result.ok && result.data?.revision !== undefined) {
-        setRevision(result.data.revision);
-        setSaved(text);
-        setConflict(null);
-        setMessage(null);
-        setStatus("saved");
-        return true;
-      } else if (result.data?.conflict) {
-        setConflict(result.data.conflict);
-        setStatus("conflict");
-      } else {
-        setMessage(result.message ?? "Not saved.");
-        setStatus("error");
-      }
-      return false;
-    },
-    [base],
-  );
-
-  // Live preview, debounced.
-  useEffect(() => {
-    const timer = setTimeout(() => {
-      startPreview(async () => {
-        const result = (await actions.current.previewAction(initialActionState, { ...base, source }).catch(() => null)) as ActionState<PreviewData> | null;
-        if (result?.ok && result.data) {
-          setIssues(result.data.issues);
-          setPreview(result.data.preview);
-          setRenderError(result.data.renderError);
-        }
-      });
-    }, PREVIEW_DELAY_MS);
-    return () => clearTimeout(timer);
-  }, [source, base]);
-
-  // Autosave, debounced; paused while a conflict waits for a decision.
-  useEffect(() => {
-    if (source === saved || conflict) return;
-    const timer = setTimeout(() => void save(source, revision), AUTOSAVE_DELAY_MS);
-    return () => clearTimeout(timer);
-  }, [source, saved, conflict, revision, save]);
 
   const jumpTo = (line: number) => {
     const el = area.current;
@@ -113,7 +34,6 @@ export function SheetEditor({ vendorSlug, slug, initialSource, initialRevision, 
     el.scrollTop = Math.max(0, (line - 4) * LINE_HEIGHT_PX);
   };
 
-  const shown: SaveStatus = status === "saved" && source !== saved ? "unsaved" : status;
   const invalidLines = useMemo(() => new Set(issues.filter((i) => i.severity === "error").map((i) => i.line)), [issues]);
   const errorCount = invalidLines.size;
 
@@ -126,13 +46,7 @@ export function SheetEditor({ vendorSlug, slug, initialSource, initialRevision, 
           theirRevision={conflict.revision}
           by={conflict.updatedByName}
           onKeepMine={() => void save(source, conflict.revision)}
-          onTakeTheirs={() => {
-            setSource(conflict.source);
-            setSaved(conflict.source);
-            setRevision(conflict.revision);
-            setConflict(null);
-            setStatus("saved");
-          }}
+          onTakeTheirs={() => takeTheirs(conflict)}
         />
       ) : null}
       <div className="mb-2 flex flex-wrap items-center gap-3 text-sm">
