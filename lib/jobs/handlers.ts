@@ -1,6 +1,6 @@
 import "server-only";
 
-import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/field/send-digest";
+import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/field/digest-job";
 import { FIELD_REFRESH_QUEUE, refreshFieldRollupsJob } from "@/lib/field/refresh-rollups";
 import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
 import { SHEET_EVENTS_QUEUE } from "@/lib/events/sheet-events";

@@ -1,12 +1,12 @@
 import { describe, expect, it, vi } from "vitest";
 
-// send-digest.ts imports server-side DB and job modules. Constructing the knex instance opens no
+// digest-content.ts imports server-side DB modules (through the digest queries). Constructing the knex instance opens no
 // connection, but to be certain no database client is created at all, those modules are replaced here:
 // weekStartOf itself is pure.
 vi.mock("@/lib/db/knex", () => ({ db: {} }));
 vi.mock("@/lib/jobs/boss", () => ({ getBoss: () => Promise.reject(new Error("no job queue in unit tests")) }));
 
-const { weekStartOf } = await import("@/lib/field/send-digest");
+const { weekStartOf } = await import("@/lib/field/digest-content");
 
 describe("weekStartOf", () => {
   it.each([

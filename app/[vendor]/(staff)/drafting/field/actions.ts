@@ -5,7 +5,7 @@ import { z } from "zod";
 
 import { vendorAction } from "@/lib/actions/vendor-action";
 import { setWeeklyDigest } from "@/lib/mail/mail-preferences";
-import { requestDigest } from "@/lib/field/send-digest";
+import { requestDigest } from "@/lib/field/digest-job";
 import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 
 const vendorOnly = z.object({ vendor: z.string().min(1) });
