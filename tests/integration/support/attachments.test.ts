@@ -7,7 +7,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 
 import { GET as download } from "@/app/api/v1/vendors/[vendor]/attachments/[attachment]/route";
 import { POST as upload } from "@/app/api/v1/vendors/[vendor]/attachments/route";
-import { hashToken, newTokenSecret } from "@/lib/auth/api-tokens";
+import { hashToken } from "@/lib/auth/api-tokens";
 import { db } from "@/lib/db/knex";
 import { createTicket } from "@/lib/tickets/create-ticket";
 import { createApiToken } from "@/tests/factories/api-tokens";

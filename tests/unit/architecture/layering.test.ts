@@ -60,7 +60,11 @@ describe("layering", () => {
         const file = queue.shift()!;
         if (SERVER_FILES.test(file)) offending.push(`${start} reaches ${file}`);
         for (const spec of bareImports(file)) if (SERVER_PACKAGES.test(spec)) offending.push(`${start} reaches "${spec}" in ${file}`);
-        for (const dep of graph[file] ?? []) if (!seen.has(dep)) seen.add(dep), queue.push(dep);
+        for (const dep of graph[file] ?? []) {
+          if (seen.has(dep)) continue;
+          seen.add(dep);
+          queue.push(dep);
+        }
       }
     }
     expect([...new Set(offending)]).toEqual([]);
