@@ -9,7 +9,7 @@ import type { TicketSummary } from "@/lib/tickets/ticket-types";
 import type { QueueFilters } from "./queue-filters";
 
 /** Applies queue filters to a `tickets as t` query; without a status filter, closed tickets are left out. */
-export function applyQueueFilters(q: Knex.QueryBuilder, f: QueueFilters, userId: string): Knex.QueryBuilder {
+export function applyQueueFilters<Q extends Knex.QueryBuilder>(q: Q, f: QueueFilters, userId: string): Q {
   if (f.status?.length) q.whereIn("t.status", f.status);
   else q.whereNot("t.status", "closed");
   if (f.priority?.length) q.whereIn("t.priority", f.priority);
@@ -41,7 +41,7 @@ export async function listQueue({ vendorId, userId, filters, limit = 500 }: { ve
   const [column, direction] = ORDER[filters.sort ?? "newest"];
   const q = applyQueueFilters(selectTickets(db, vendorId), filters, userId).orderBy(column, direction).orderBy("t.number", direction).limit(limit);
   const rows = await q;
-  return rows.map((r: Record<string, unknown>) => {
+  return rows.map((r) => {
     const { body: _body, machineName: _m, closedAt: _c, satisfaction: _s, satisfactionComment: _sc, ...summary } = toTicketDetail(r);
     return summary;
   });

@@ -8,5 +8,5 @@ import { type CustomerTicket, toCustomerTicket } from "./customer-view";
 /** A customer's own tickets in one vendor, newest activity first, in the customer's view. */
 export async function listCustomerTickets({ vendorId, customerId, limit = 200 }: { vendorId: string; customerId: string; limit?: number }): Promise<CustomerTicket[]> {
   const rows = await selectTickets(db, vendorId).where("t.customer_id", customerId).orderBy("t.last_activity_at", "desc").limit(limit);
-  return rows.map((row: Record<string, unknown>) => toCustomerTicket(toTicketDetail(row)));
+  return rows.map((row) => toCustomerTicket(toTicketDetail(row)));
 }

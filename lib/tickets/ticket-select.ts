@@ -2,12 +2,23 @@ import "server-only";
 
 import type { Knex } from "knex";
 
+import type { TicketRow } from "@/lib/db/tables";
+
 import type { TicketDetail } from "./ticket-types";
 
-type Row = Record<string, unknown>;
+/** A tickets row with the names `selectTickets` joins in. */
+export type TicketWithNamesRow = TicketRow & {
+  customer_name: string;
+  customer_email: string;
+  assignee_name: string | null;
+  assignee_email: string | null;
+  material_name: string | null;
+  machine_name: string | null;
+  overdue: boolean;
+};
 
 /** The ticket columns every list and page reads, with customer, assignee and material names. */
-export function selectTickets(trx: Knex, vendorId: string): Knex.QueryBuilder {
+export function selectTickets(trx: Knex, vendorId: string) {
   return trx("tickets as t")
     .join("users as c", "c.id", "t.customer_id")
     .leftJoin("users as a", "a.id", "t.assignee_id")
@@ -18,7 +29,7 @@ export function selectTickets(trx: Knex, vendorId: string): Knex.QueryBuilder {
       this.on("mach.id", "t.machine_id").andOn("mach.vendor_id", "t.vendor_id");
     })
     .where("t.vendor_id", vendorId)
-    .select(
+    .select<TicketWithNamesRow[]>(
       "t.*",
       "c.name as customer_name",
       "c.email as customer_email",
@@ -30,33 +41,34 @@ export function selectTickets(trx: Knex, vendorId: string): Knex.QueryBuilder {
     );
 }
 
-const iso = (v: unknown) => (v instanceof Date ? v.toISOString() : v == null ? null : String(v));
+const iso = (v: Date) => v.toISOString();
+const isoOrNull = (v: Date | null) => (v ? v.toISOString() : null);
 
-export function toTicketDetail(r: Row): TicketDetail {
+export function toTicketDetail(r: TicketWithNamesRow): TicketDetail {
   return {
-    id: String(r.id),
-    number: Number(r.number),
-    subject: String(r.subject),
-    body: String(r.body),
-    status: r.status as TicketDetail["status"],
-    priority: r.priority as TicketDetail["priority"],
-    customerId: String(r.customer_id),
-    customerName: String(r.customer_name || r.customer_email),
-    customerEmail: String(r.customer_email),
-    assigneeId: (r.assignee_id as string | null) ?? null,
-    assigneeName: r.assignee_id ? String(r.assignee_name || r.assignee_email) : null,
-    materialId: (r.material_id as string | null) ?? null,
-    materialName: (r.material_name as string | null) ?? null,
-    machineId: (r.machine_id as string | null) ?? null,
-    machineName: (r.machine_name as string | null) ?? null,
-    tags: (r.tags as string[]) ?? [],
-    firstResponseDueAt: iso(r.first_response_due_at)!,
-    firstResponseAt: iso(r.first_response_at),
+    id: r.id,
+    number: r.number,
+    subject: r.subject,
+    body: r.body,
+    status: r.status,
+    priority: r.priority,
+    customerId: r.customer_id,
+    customerName: r.customer_name || r.customer_email,
+    customerEmail: r.customer_email,
+    assigneeId: r.assignee_id,
+    assigneeName: r.assignee_id ? r.assignee_name || r.assignee_email : null,
+    materialId: r.material_id,
+    materialName: r.material_name,
+    machineId: r.machine_id,
+    machineName: r.machine_name,
+    tags: r.tags ?? [],
+    firstResponseDueAt: iso(r.first_response_due_at),
+    firstResponseAt: isoOrNull(r.first_response_at),
     overdue: Boolean(r.overdue),
-    createdAt: iso(r.created_at)!,
-    lastActivityAt: iso(r.last_activity_at)!,
-    closedAt: iso(r.closed_at),
-    satisfaction: (r.satisfaction as number | null) ?? null,
-    satisfactionComment: (r.satisfaction_comment as string | null) ?? null,
+    createdAt: iso(r.created_at),
+    lastActivityAt: iso(r.last_activity_at),
+    closedAt: isoOrNull(r.closed_at),
+    satisfaction: r.satisfaction,
+    satisfactionComment: r.satisfaction_comment,
   };
 }
