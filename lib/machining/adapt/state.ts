@@ -20,6 +20,9 @@ export interface AdaptState extends AdaptNumbers {
   /** The ae of the last engagement angle worked out (NaN before any), and that angle: most rules ask at the same ae. */
   phiAeMm: number;
   phi: number;
+  /** The chip thickness of the last kc(h) worked out (NaN before any), and that kc: rule 9 asks twice at the same h. */
+  kcHMm: number;
+  kc: number;
 }
 
 type NumericField = { [K in keyof AdaptNumbers]: AdaptNumbers[K] extends number ? K : never }[keyof AdaptNumbers];
@@ -126,7 +129,12 @@ export const meanFactor = (s: AdaptState, aeMm: number, apMm: number) => {
 export const kcAt = (s: AdaptState, hMm: number) => {
   const f = s.input.force;
   if (f === null) return null;
-  return f.mc === 0 ? f.kc11Nmm2 : f.kc11Nmm2 * hMm ** -f.mc;
+  if (f.mc === 0) return f.kc11Nmm2;
+  if (hMm === s.kcHMm) return s.kc;
+  const kc = f.kc11Nmm2 * hMm ** -f.mc;
+  s.kcHMm = hMm;
+  s.kc = kc;
+  return kc;
 };
 
 /** The state before rule 1: the sheet's numbers, nothing computed yet. */
@@ -161,5 +169,7 @@ export function createState(input: ResolvedInput): AdaptState {
     steps: [],
     phiAeMm: Number.NaN,
     phi: 0,
+    kcHMm: Number.NaN,
+    kc: 0,
   };
 }
