@@ -28,6 +28,6 @@ export const isOperationKind = (kind: string): kind is OperationKind => KINDS.ha
 
 /** The current key for a current or old key; undefined for anything else. */
 export function toOperationKind(kind: string): OperationKind | undefined {
-  const key = normalizeOperationKind(kind);
-  return isOperationKind(key) ? key : undefined;
+  // A current key first (one lookup on every adaptation); an old key maps to a current one.
+  return isOperationKind(kind) ? kind : LEGACY.get(kind);
 }

@@ -73,7 +73,9 @@ export function resolveInput(input: AdaptInput): ResolvedInput {
   const units: UnitSystem = options.messageUnits === "imperial" ? "imperial" : "metric";
   if (!passesInputChecks(input)) checkInput(input, units);
   const toolMaterial = options.toolMaterial ?? ADAPT_DEFAULTS.toolMaterial;
-  if (!Object.hasOwn(YOUNGS_MODULUS_GPA, toolMaterial)) throw new MachiningInputError("options.toolMaterial", "options.toolMaterial must be carbide or hss.");
+  if (options.toolMaterial !== undefined && !Object.hasOwn(YOUNGS_MODULUS_GPA, toolMaterial)) {
+    throw new MachiningInputError("options.toolMaterial", "options.toolMaterial must be carbide or hss.");
+  }
   const kind = toOperationKind(op.kind);
   if (kind === undefined) throw new MachiningInputError("operation.kind", `operation.kind must be one of ${OPERATION_KINDS.join(", ")}.`);
   const radialForceRatio = options.radialForceRatio === undefined ? ADAPT_DEFAULTS.radialForceRatio : nonNegative(options.radialForceRatio, "options.radialForceRatio");

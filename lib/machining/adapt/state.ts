@@ -2,7 +2,7 @@ import type { QuantityKind } from "../quantities";
 import type { AdaptNumbers, AdaptStep, AdaptWarning, WarningValue } from "../types";
 import type { ResolvedInput } from "./resolve-input";
 import { ruleSource, type RuleId } from "./rules-meta";
-import type { WarningCode } from "./warning-codes";
+import { WARNING_CODE_LIST, type WarningCode } from "./warning-codes";
 
 /** Working values while the rules run; rules read and change it in order. */
 export interface AdaptState extends AdaptNumbers {
@@ -14,10 +14,15 @@ export interface AdaptState extends AdaptNumbers {
   /** Cutting power at the tool, before spindle efficiency, in kW. */
   toolPowerKw: number | null;
   warnings: AdaptWarning[];
+  /** One bit per warning code given so far (WARNING_BIT), so a repeat is found without a scan. */
+  warned: number;
   steps: AdaptStep[];
   /** The ae of the last engagement angle worked out (NaN before any), and that angle: most rules ask at the same ae. */
   phiAeMm: number;
   phi: number;
+  /** The chip thickness of the last kc(h) worked out (NaN before any), and that kc: rule 9 asks twice at the same h. */
+  kcHMm: number;
+  kc: number;
 }
 
 type NumericField = { [K in keyof AdaptNumbers]: AdaptNumbers[K] extends number ? K : never }[keyof AdaptNumbers];
@@ -64,9 +69,16 @@ export function change(s: AdaptState, rule: RuleId, field: NumericField, quantit
   record(s, rule, field, quantity, before, after, why);
 }
 
+// One bit per code: bitwise operators work on 32 bits, so at most 32 codes (a test holds the count there).
+const WARNING_BIT: ReadonlyMap<string, number> = new Map(WARNING_CODE_LIST.map((code, i) => [code, 2 ** i]));
+
+const bitOf = (code: WarningCode): number => WARNING_BIT.get(code) ?? 0;
+
 /** Adds a warning once per code (the first one stands: later rules only repeat it). */
 export function warn(s: AdaptState, code: WarningCode, message: string, values?: WarningValue[], field?: string): void {
-  for (const w of s.warnings) if (w.code === code) return;
+  const bit = bitOf(code);
+  if ((s.warned & bit) !== 0) return;
+  s.warned |= bit;
   const warning: AdaptWarning = { code, message };
   if (values) warning.values = values;
   if (field) warning.field = field;
@@ -74,8 +86,7 @@ export function warn(s: AdaptState, code: WarningCode, message: string, values?:
 }
 
 export function hasWarning(s: AdaptState, code: WarningCode): boolean {
-  for (const w of s.warnings) if (w.code === code) return true;
-  return false;
+  return (s.warned & bitOf(code)) !== 0;
 }
 
 // Chip geometry at the state's current numbers (Altintas ch. 2; ball nose: Machinery's Handbook).
@@ -118,7 +129,12 @@ export const meanFactor = (s: AdaptState, aeMm: number, apMm: number) => {
 export const kcAt = (s: AdaptState, hMm: number) => {
   const f = s.input.force;
   if (f === null) return null;
-  return f.mc === 0 ? f.kc11Nmm2 : f.kc11Nmm2 * hMm ** -f.mc;
+  if (f.mc === 0) return f.kc11Nmm2;
+  if (hMm === s.kcHMm) return s.kc;
+  const kc = f.kc11Nmm2 * hMm ** -f.mc;
+  s.kcHMm = hMm;
+  s.kc = kc;
+  return kc;
 };
 
 /** The state before rule 1: the sheet's numbers, nothing computed yet. */
@@ -149,8 +165,11 @@ export function createState(input: ResolvedInput): AdaptState {
     plungeThrustN: null,
     plungeFeedPerRevMm: null,
     warnings: [],
+    warned: 0,
     steps: [],
     phiAeMm: Number.NaN,
     phi: 0,
+    kcHMm: Number.NaN,
+    kc: 0,
   };
 }

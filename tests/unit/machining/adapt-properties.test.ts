@@ -1,7 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 
-import { adaptRecipe, chipLoadBand, OPERATION_KINDS, spindlePowerAt, RULES, WARNING_CODE_LIST, type AdaptInput, type AdaptResult } from "@/lib/machining";
+import { adaptRecipe, chipLoadBand, OPERATION_KINDS, RULE_PIPELINE, spindlePowerAt, RULES, WARNING_CODE_LIST, type AdaptInput, type AdaptResult } from "@/lib/machining";
+import { resolveInput } from "@/lib/machining/adapt/resolve-input";
+import { createState } from "@/lib/machining/adapt/state";
 
 const num = (min: number, max: number) => fc.double({ min, max, noNaN: true });
 const opt = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined });
@@ -88,6 +90,25 @@ const TOL = 1 + 1e-12;
 const RUNS = { numRuns: 500 };
 
 describe("adaptRecipe properties (fast-check)", () => {
+  it("has at most 32 warning codes (the state keeps one bit per code given)", () => {
+    expect(WARNING_CODE_LIST.length).toBeLessThanOrEqual(32);
+  });
+
+  it("runs the rules of RULE_PIPELINE, in its order (adaptRecipe calls them by name)", () => {
+    expect(RULE_PIPELINE.map((rule) => rule.name)).toHaveLength(RULES.length);
+    fc.assert(
+      fc.property(validInput, (input) => {
+        const s = createState(resolveInput(input));
+        for (const rule of RULE_PIPELINE) rule(s);
+        const r = adaptRecipe(input);
+        expect(r.steps).toEqual(s.steps);
+        expect(r.warnings).toEqual(s.warnings);
+        expect([r.rpm, r.feedMmMin, r.axialDepthMm, r.plungeFeedMmMin, r.deflectionMm]).toEqual([s.rpm, s.feedMmMin, s.axialDepthMm, s.plungeFeedMmMin, s.deflectionMm]);
+      }),
+      RUNS,
+    );
+  });
+
   it("never returns NaN or Infinity", () => {
     fc.assert(
       fc.property(validInput, (input) => {

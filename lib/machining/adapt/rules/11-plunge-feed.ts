@@ -56,10 +56,11 @@ export function plungeFeed(s: AdaptState): void {
     const fnMax = ((zThrustN - centre) / (PLUNGE_THRUST_A * kc * d)) ** (1 / PLUNGE_FEED_EXPONENT);
     if (fn > fnMax) {
       fn = fnMax;
-      record(s, "plunge-feed", "plungeFeedMmMin", "feedRate", feed, fn * s.rpm, `Pushing the cutter straight down at this feed would take more force than your Z axis gives (${zText(s)}); a light Z axis stalls or loses steps, so the feed per revolution is lowered until the thrust fits.`);
+      const z = zText(s);
+      record(s, "plunge-feed", "plungeFeedMmMin", "feedRate", feed, fn * s.rpm, `Pushing the cutter straight down at this feed would take more force than your Z axis gives (${z}); a light Z axis stalls or loses steps, so the feed per revolution is lowered until the thrust fits.`);
       feed = fn * s.rpm;
       const held = feed;
-      warn(s, "plunge-thrust-limited", `The plunge feed is held to ${say(units, held, "feedRate")} by your Z axis thrust, ${zText(s)}.`, [
+      warn(s, "plunge-thrust-limited", `The plunge feed is held to ${say(units, held, "feedRate")} by your Z axis thrust, ${z}.`, [
         { name: "plungeFeedMmMin", quantity: "feedRate", value: feed },
         { name: "zThrustN", quantity: "force", value: zThrustN },
       ], "machine.zThrustN");
