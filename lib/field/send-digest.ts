@@ -15,6 +15,7 @@ import type { Vendor } from "@/lib/vendors/vendor-schema";
 import { confidenceOf, percent } from "./confidence";
 import { loadCoverageGaps } from "./coverage";
 import { listCustomerChanges } from "./customer-changes";
+import { weekStartOf } from "./week-series";
 import { describeChange } from "./describe-change";
 import { type DigestMail, renderDigest } from "./digest-mail";
 import { countNeedsAttention, listNeedsAttention } from "./needs-attention";
@@ -28,12 +29,7 @@ const TOP = 5;
 const digestJobSchema = z.object({ vendorId: z.uuid().optional(), userId: z.uuid().optional() }).default({});
 type DigestJob = z.infer<typeof digestJobSchema>;
 
-/** The Monday (UTC) of the week `at` falls in, as YYYY-MM-DD. */
-export function weekStartOf(at: Date): string {
-  const day = new Date(Date.UTC(at.getUTCFullYear(), at.getUTCMonth(), at.getUTCDate()));
-  day.setUTCDate(day.getUTCDate() - ((day.getUTCDay() + 6) % 7));
-  return day.toISOString().slice(0, 10);
-}
+export { weekStartOf };
 
 export const digestStopUrl = (vendor: Pick<Vendor, "id" | "slug">, userId: string) =>
   appUrl(`/api/v1/vendors/${vendor.slug}/field/digest/stop?token=${createStopToken("weekly-digest", { vendorId: vendor.id, userId })}`);
@@ -57,7 +53,7 @@ export async function buildDigestContent(vendor: Vendor, weekOf: string): Promis
       return { title: `${a.title} (${a.machineClass})`, number: a.number, failed: a.failed, outcomes: a.outcomes, lowerPct: percent(a.failure.lower), upperPct: percent(a.failure.upper), symptom: symptom && outcomeSymptomLabels[symptom], url: appUrl(`/${vendor.slug}/drafting/field/${a.sheetSlug}`) };
     }),
     attentionTotal,
-    changes: changes.map((c) => ({ title: `${c.title} (${c.machineClass})`, number: c.number, sentence: describeChange(c) })),
+    changes: changes.map((c) => ({ title: `${c.title} (${c.machineClass})`, number: c.number, sentence: `${c.operationLabel}: ${describeChange(c)}` })),
     gaps: coverage.clusters.slice(0, TOP).map((c) => c.summary),
     moreGaps: Math.max(0, coverage.clusters.length - TOP),
     machines: coverage.machines,
