@@ -7,7 +7,8 @@ import { IntervalBar } from "./interval-bar";
 /** The trend as a table: the same numbers as the chart, readable without it. */
 export function TrendTable({ weeks, confidenceLabel }: { weeks: TrendWeek[]; confidenceLabel: string }) {
   return (
-    <div className="max-h-96 overflow-auto rounded-md border border-stone-300 bg-white">
+    // A scrolling region a keyboard can reach and a screen reader can name.
+    <div role="region" aria-label="Weekly trend table" tabIndex={0} className="max-h-96 overflow-auto rounded-md border border-stone-300 bg-white">
       <table className="w-full text-left text-sm" data-testid="trend-table">
         <caption className="sr-only">Outcome reports and failure share per week, with the versions published that week</caption>
         <thead className="sticky top-0 bg-stone-100 text-stone-700">

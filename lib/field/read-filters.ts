@@ -1,4 +1,4 @@
-import { type AttentionFilter, attentionFilterSchema, type TrendRange, trendRangeSchema } from "@/content-schema/field-filters";
+import { type AttentionFilter, attentionFilterSchema, MAX_RANGE_DAYS, type TrendRange, trendRangeSchema } from "@/content-schema/field-filters";
 
 import { defaultTrendRange } from "./week-series";
 
@@ -19,5 +19,6 @@ export function readTrendRange(raw: Raw, today: Date): { range: Required<TrendRa
   if (!parsed.success) return { range: fallback, chosen: {}, error: `${parsed.error.issues.map((i) => i.message).join(" ")} Showing the last 26 weeks.` };
   const to = parsed.data.to ?? (parsed.data.from && parsed.data.from > fallback.to ? parsed.data.from : fallback.to);
   const from = parsed.data.from ?? (to < fallback.from ? to : fallback.from);
+  if ((Date.parse(to) - Date.parse(from)) / 86_400_000 > MAX_RANGE_DAYS) return { range: fallback, chosen: {}, error: "Choose a range of at most three years. Showing the last 26 weeks." };
   return { range: { from, to }, chosen: parsed.data, error: null };
 }

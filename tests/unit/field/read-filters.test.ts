@@ -19,6 +19,7 @@ describe("Field-results search params", () => {
     const today = new Date("2026-12-02T10:00:00Z");
     expect(readTrendRange({}, today).range).toEqual({ from: "2026-06-08", to: "2026-12-02" });
     expect(readTrendRange({ from: "2026-11-01" }, today).range).toEqual({ from: "2026-11-01", to: "2026-12-02" });
+    expect(readTrendRange({ from: "2001-01-01" }, today)).toMatchObject({ range: { from: "2026-06-08" }, error: expect.stringMatching(/three years/) });
     expect(readTrendRange({ from: "2026-13-01" }, today)).toMatchObject({ range: { to: "2026-12-02" }, error: expect.stringMatching(/Showing the last 26 weeks/) });
   });
 });
