@@ -93,5 +93,15 @@ describe("The field loop, closed", () => {
     await page.goto(`/${VENDOR}/drafting/field?from=${first}&to=${last}&class=light-router`);
     await page.getByRole("form", { name: "Filter Needs attention" }).waitFor();
     await expect(page.getByLabel("Machine class").inputValue()).resolves.toBe("light-router");
+    // The list and its CSV hold only that class's versions.
+    await page.getByTestId("needs-attention").or(page.getByText("Nothing needs attention")).first().waitFor();
+    const classes = await page.getByTestId("needs-attention").locator("tbody tr .text-xs").allTextContents();
+    expect(classes.every((c) => c === "Light belt-drive router")).toBe(true);
+    const href = await page.locator("#needs-attention-heading").locator("..").getByRole("link", { name: "Export CSV" }).getAttribute("href");
+    expect(href).toContain("class=light-router");
+    const lines = (await (await page.request.get(href ?? "")).text()).split("\r\n").filter(Boolean);
+    expect(lines[0]).toMatch(/^rank,sheet,title,machine_class,/);
+    expect(lines.slice(1).every((line) => line.includes(",Light belt-drive router,"))).toBe(true);
+    expect(lines.length - 1).toBeGreaterThanOrEqual(classes.length);
   });
 });

@@ -22,6 +22,12 @@ import { startDraftFromChangeAction } from "./actions";
 
 export const metadata = { title: "Field results" };
 
+// The list's filters, carried to its CSV export so the file holds what the page shows.
+const attentionQuery = (f: { from?: string; to?: string; class?: string }) => {
+  const query = new URLSearchParams(Object.entries(f).filter((e): e is [string, string] => typeof e[1] === "string" && e[1] !== "")).toString();
+  return query ? `?${query}` : "";
+};
+
 type Props = { params: Promise<{ vendor: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
 export default async function FieldResultsPage({ params, searchParams }: Props) {
@@ -50,7 +56,7 @@ export default async function FieldResultsPage({ params, searchParams }: Props) 
       <FieldSection
         id="needs-attention"
         title="Needs attention"
-        csvHref={csv("needs-attention")}
+        csvHref={`${csv("needs-attention")}${attentionQuery(shown)}`}
         lead={<>Published versions ranked by the <strong>lower end</strong> of the {label} Wilson score interval of their failure share, which weighs how many reports there are: at {label}, 1 failure in 1 report has a lower end of {percent(oneInOne)} and 30 failures in 100 of {percent(thirtyInHundred)}. The bar shows the interval and the dot the observed share. The confidence level is a vendor setting (Admin). A date range counts the reports of the whole weeks (Monday to Sunday, UTC) it touches; tickets and hand-offs are always counted in full.</>}
       >
         <DateRangeForm action={`/${slug}/drafting/field`} label="Filter Needs attention" from={shown.from} to={shown.to} error={error ?? unknownClass}>
