@@ -2,7 +2,7 @@ import "server-only";
 
 import type { Knex } from "knex";
 
-import { operationKindLabels, type OperationKind } from "@/content-schema/sheet-kinds";
+import { operationKindLabels } from "@/content-schema/sheet-kinds";
 import { readDb } from "@/lib/db/read-db";
 
 import type { ChangeRollup } from "./describe-change";
@@ -19,8 +19,9 @@ export type ChangeItem = ChangeRollup & {
   operationLabel: string;
 };
 
+const KIND_LABELS: Record<string, string> = operationKindLabels;
 const labelOf = (label: unknown, kind: unknown, index: number) =>
-  typeof label === "string" && label ? label : (operationKindLabels[kind as OperationKind] ?? `Operation ${index + 1}`);
+  typeof label === "string" && label ? label : ((typeof kind === "string" ? KIND_LABELS[kind] : undefined) ?? `Operation ${index + 1}`);
 
 const read = (r: Record<string, unknown>): ChangeItem => ({
   versionId: String(r.sheet_version_id),
