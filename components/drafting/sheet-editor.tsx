@@ -10,17 +10,27 @@ import { LINE_HEIGHT_PX, LineNumberedSource } from "./line-numbered-source";
 import { type DraftAction, type SaveStatus, useDraftAutosave } from "./use-draft-autosave";
 import { useDraftPreview } from "./use-draft-preview";
 
-type Props = { vendorSlug: string; slug: string; initialSource: string; initialRevision: number; saveAction: DraftAction; previewAction: DraftAction; submitAction: DraftAction };
+type Props = {
+  vendorSlug: string;
+  slug: string;
+  initialSource: string;
+  initialRevision: number;
+  /** A change note the draft started with (a draft started from Field results cites its reports). */
+  initialChangeNote?: string;
+  saveAction: DraftAction;
+  previewAction: DraftAction;
+  submitAction: DraftAction;
+};
 
 const STATUS_TEXT: Record<SaveStatus, string> = { saved: "✓ All changes saved", unsaved: "● Unsaved changes", saving: "Saving…", conflict: "⚠ Not saved: conflict", error: "⚠ Not saved" };
 
 /** Source with line numbers beside a live preview; autosaves with the revision it was loaded at. */
-export function SheetEditor({ vendorSlug, slug, initialSource, initialRevision, saveAction, previewAction, submitAction }: Props) {
+export function SheetEditor({ vendorSlug, slug, initialSource, initialRevision, initialChangeNote = "", saveAction, previewAction, submitAction }: Props) {
   const base = useMemo(() => ({ vendor: vendorSlug, slug }), [vendorSlug, slug]);
   const { source, setSource, revision, saved, status, shown, message, conflict, save, takeTheirs } = useDraftAutosave({ base, initialSource, initialRevision, saveAction });
   const { issues, preview, renderError } = useDraftPreview({ base, source, previewAction });
   const [submitting, startSubmit] = useTransition();
-  const [changeNote, setChangeNote] = useState("");
+  const [changeNote, setChangeNote] = useState(initialChangeNote);
   const [submitError, setSubmitError] = useState<string | null>(null);
   const area = useRef<HTMLTextAreaElement>(null);
 
@@ -71,7 +81,7 @@ export function SheetEditor({ vendorSlug, slug, initialSource, initialRevision, 
           <section aria-labelledby="submit-heading" className="mt-3 rounded-md border border-stone-300 bg-white p-3">
             <h2 id="submit-heading" className="text-sm font-semibold">Submit for review</h2>
             <label htmlFor="change-note" className="mt-2 block text-sm">Change note (required): what changed and why</label>
-            <textarea id="change-note" rows={2} value={changeNote} onChange={(e) => setChangeNote(e.target.value)} className="mt-1 w-full rounded border border-stone-300 p-2 text-sm" />
+            <textarea id="change-note" rows={initialChangeNote ? 5 : 2} value={changeNote} onChange={(e) => setChangeNote(e.target.value)} className="mt-1 w-full rounded border border-stone-300 p-2 text-sm" />
             {submitError ? <p role="alert" className="mt-1 text-sm text-red-800">⚠ {submitError}</p> : null}
             <button
               type="button"

@@ -12,17 +12,13 @@ import { describeChange } from "./describe-change";
 import type { DigestMail } from "./digest-mail";
 import { countNeedsAttention, listNeedsAttention } from "./needs-attention";
 import { topSymptom } from "./rollup-rows";
+import { weekStartOf } from "./week-series";
 
 // What the weekly Field digest says: its week, its lists and its stop link. Sending is in send-digest.ts,
 // the queue in digest-job.ts.
 const TOP = 5;
 
-/** The Monday (UTC) of the week `at` falls in, as YYYY-MM-DD. */
-export function weekStartOf(at: Date): string {
-  const day = new Date(Date.UTC(at.getUTCFullYear(), at.getUTCMonth(), at.getUTCDate()));
-  day.setUTCDate(day.getUTCDate() - ((day.getUTCDay() + 6) % 7));
-  return day.toISOString().slice(0, 10);
-}
+export { weekStartOf };
 
 export const digestStopUrl = (vendor: Pick<Vendor, "id" | "slug">, userId: string) =>
   appUrl(`/api/v1/vendors/${vendor.slug}/field/digest/stop?token=${createStopToken("weekly-digest", { vendorId: vendor.id, userId })}`);
@@ -46,7 +42,7 @@ export async function buildDigestContent(vendor: Vendor, weekOf: string): Promis
       return { title: `${a.title} (${a.machineClass})`, number: a.number, failed: a.failed, outcomes: a.outcomes, lowerPct: percent(a.failure.lower), upperPct: percent(a.failure.upper), symptom: symptom && outcomeSymptomLabels[symptom], url: appUrl(`/${vendor.slug}/drafting/field/${a.sheetSlug}`) };
     }),
     attentionTotal,
-    changes: changes.map((c) => ({ title: `${c.title} (${c.machineClass})`, number: c.number, sentence: describeChange(c) })),
+    changes: changes.map((c) => ({ title: `${c.title} (${c.machineClass})`, number: c.number, sentence: `${c.operationLabel}: ${describeChange(c)}` })),
     gaps: coverage.clusters.slice(0, TOP).map((c) => c.summary),
     moreGaps: Math.max(0, coverage.clusters.length - TOP),
     machines: coverage.machines,

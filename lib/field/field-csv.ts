@@ -19,8 +19,8 @@ export function needsAttentionCsv(items: AttentionItem[], confidence: number): s
 
 export function customerChangesCsv(items: ChangeItem[]): string {
   return toCsv([
-    ["sheet", "title", "machine_class", "version", "parameter", "reports", "median_change_pct", "q1_change_pct", "q3_change_pct", "lowered", "raised", "summary"],
-    ...items.map((c) => [c.sheetSlug, c.title, c.machineClass, c.number, c.param, c.reports, c.medianPct.toFixed(1), c.q1Pct.toFixed(1), c.q3Pct.toFixed(1), c.lowered, c.raised, describeChange(c)]),
+    ["sheet", "title", "machine_class", "version", "operation", "parameter", "reports", "median_change_pct", "q1_change_pct", "q3_change_pct", "lowered", "raised", "summary"],
+    ...items.map((c) => [c.sheetSlug, c.title, c.machineClass, c.number, c.operationLabel, c.param, c.reports, c.medianPct.toFixed(1), c.q1Pct.toFixed(1), c.q3Pct.toFixed(1), c.lowered, c.raised, describeChange(c)]),
   ]);
 }
 

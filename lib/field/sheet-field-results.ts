@@ -16,9 +16,21 @@ export type SheetFieldResults = {
   handoffs: (ProblemReport & { versionNumber: number | null })[];
 };
 
-export async function findFieldSheet({ vendorId, slug }: { vendorId: string; slug: string }): Promise<{ id: string; slug: string } | null> {
+export type FieldSheet = { id: string; slug: string; title: string; machineClass: string };
+
+/** The sheet under this vendor, with the title of its latest readable version and its machine class. */
+export async function findFieldSheet({ vendorId, slug }: { vendorId: string; slug: string }): Promise<FieldSheet | null> {
   const db = await readDb();
-  return (await db("sheets").where({ vendor_id: vendorId, slug }).first("id", "slug")) ?? null;
+  const row = await db("sheets as s")
+    .join("machine_classes as mc", function () {
+      this.on("mc.id", "s.machine_class_id").andOn("mc.vendor_id", "s.vendor_id");
+    })
+    .where({ "s.vendor_id": vendorId, "s.slug": slug })
+    .first(
+      "s.id", "s.slug", "mc.name as machine_class",
+      db.raw("(select v.title from sheet_versions v where v.sheet_id = s.id and v.vendor_id = s.vendor_id and v.state in ('published', 'superseded', 'withdrawn') order by v.number desc limit 1) as title"),
+    );
+  return row ? { id: String(row.id), slug: String(row.slug), title: row.title ? String(row.title) : String(row.slug), machineClass: String(row.machine_class) } : null;
 }
 
 /** Everything Field results knows about one sheet, version by version (oldest first). */

@@ -16,9 +16,10 @@ export async function createFieldCustomer(vendorId: string, machine: Record<stri
 
 /**
  * Inserts setups and outcome reports on one version with exactly the given counts (bulk, no audit):
- * rollup tests need hundreds of rows with known totals, not the customer's form.
+ * rollup tests need hundreds of rows with known totals, not the customer's form. `operationIndex` is the setups'
+ * operation, `at` the reports' date (now when left out).
  */
-export async function reportOutcomes(vendorId: string, versionId: string, counts: Counts, changes: Change[] = [{ feedMmMin: { from: 1000, to: 800 } }]) {
+export async function reportOutcomes(vendorId: string, versionId: string, counts: Counts, changes: Change[] = [{ feedMmMin: { from: 1000, to: 800 } }], { operationIndex = 0, at }: { operationIndex?: number; at?: Date } = {}) {
   const customer = await createFieldCustomer(vendorId);
   const kinds: { result: OutcomeResult; symptom: OutcomeSymptom | null }[] = [
     ...Array.from({ length: counts.asWritten ?? 0 }, () => ({ result: "worked_as_written" as const, symptom: null })),
@@ -27,13 +28,14 @@ export async function reportOutcomes(vendorId: string, versionId: string, counts
   ];
   if (!kinds.length) return customer;
   const setups = await db("setups")
-    .insert(kinds.map(() => ({ vendor_id: vendorId, user_id: customer.userId, machine_id: customer.machineId, sheet_version_id: versionId, result: "{}" })))
+    .insert(kinds.map(() => ({ vendor_id: vendorId, user_id: customer.userId, machine_id: customer.machineId, sheet_version_id: versionId, operation_index: operationIndex, result: "{}" })))
     .returning("id");
   let changeTurn = 0;
   await db("outcomes").insert(
     kinds.map((k, i) => ({
       vendor_id: vendorId, setup_id: setups[i].id, sheet_version_id: versionId, user_id: customer.userId, machine_id: customer.machineId, result: k.result, symptom: k.symptom,
       changes: JSON.stringify(k.result === "worked_after_changes" ? changes[changeTurn++ % changes.length] : {}),
+      ...(at ? { created_at: at } : {}),
     })),
   );
   return customer;

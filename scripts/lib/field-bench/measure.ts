@@ -89,7 +89,7 @@ export const ONE_REPORT_RUNS = 5;
 export async function measureRefresh(knex: Knex, field: Field, outcomes: number): Promise<RefreshFigures> {
   const rebuilt = await field.refreshFieldRollups(knex, { rebuild: true });
   console.log(`full rebuild of both rollups: ${fmt(rebuilt.durationMs)} (${rebuilt.versions.toLocaleString("en-GB")} versions)`);
-  await knex.raw("analyze field_version_rollups, field_change_rollups, field_rollup_changes");
+  await knex.raw("analyze field_version_rollups, field_change_rollups, field_week_rollups, field_rollup_changes");
   const times: number[] = [];
   for (let i = 0; i < ONE_REPORT_RUNS; i++) {
     await knex.raw(

@@ -13,7 +13,8 @@ afterAll(async () => {
 
 const snapshot = async (vendorId: string) => ({
   versions: await db("field_version_rollups").where({ vendor_id: vendorId }).orderBy("sheet_version_id").select("*"),
-  changes: await db("field_change_rollups").where({ vendor_id: vendorId }).orderBy(["sheet_version_id", "param"]).select("*"),
+  changes: await db("field_change_rollups").where({ vendor_id: vendorId }).orderBy(["sheet_version_id", "operation_index", "param"]).select("*"),
+  weeks: await db("field_week_rollups").where({ vendor_id: vendorId }).orderBy(["sheet_version_id", "week"]).select("*"),
 });
 
 describe("incremental Field-results rollups", () => {

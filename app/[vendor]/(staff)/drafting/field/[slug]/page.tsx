@@ -1,88 +1,59 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Suspense } from "react";
 
-import { OUTCOME_SYMPTOMS, outcomeSymptomLabels } from "@/content-schema/outcome-fields";
-import { CustomerChangesList } from "@/components/field/customer-changes-list";
-import { FieldCharts } from "@/components/field/field-charts";
+import { DateRangeForm } from "@/components/field/date-range-form";
 import { FieldSection } from "@/components/field/field-section";
-import { LinkedTicketList } from "@/components/field/linked-ticket-list";
-import { findFieldSheetPage } from "@/lib/field/page-data";
-import { VersionRollupTable } from "@/components/field/version-rollup-table";
-import { formatDate } from "@/components/library/format-date";
+import { SectionSkeleton } from "@/components/field/section-skeleton";
+import { SheetActivitySections } from "@/components/field/sheet-activity-sections";
+import { SheetTrendsSection } from "@/components/field/sheet-trends-section";
+import { SheetVersionsSection } from "@/components/field/sheet-versions-section";
 import { PageHeader } from "@/components/ui/page-header";
 import { can } from "@/lib/auth/permissions";
-import { compareVersions } from "@/lib/field/compare-versions";
 import { confidenceOf } from "@/lib/field/confidence";
-import { loadSheetFieldResults } from "@/lib/field/sheet-field-results";
+import { findFieldSheetPage } from "@/lib/field/page-data";
+import { readTrendRange } from "@/lib/field/read-filters";
+
+import { startDraftFromChangeAction } from "../actions";
 
 export const metadata = { title: "Field results for a sheet" };
 
-export default async function FieldSheetPage({ params }: { params: Promise<{ vendor: string; slug: string }> }) {
+type Props = { params: Promise<{ vendor: string; slug: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+export default async function FieldSheetPage({ params, searchParams }: Props) {
   const { vendor: slug, slug: sheetSlug } = await params;
   const found = await findFieldSheetPage(slug, sheetSlug);
   if (!found) notFound();
   const { access, sheet } = found;
+  const vendorId = access.vendor.id;
   const { z, label } = confidenceOf(access.vendor.settings);
-  const results = await loadSheetFieldResults({ vendorId: access.vendor.id, sheetId: sheet.id, z });
-  if (!results) notFound();
-  const { versions } = results;
-  const comparisons = versions.slice(1).map((v, i) => ({ number: v.number, ...compareVersions(versions[i], v, label) }));
-  const chartVersions = versions.map((v) => `v${v.number}`);
-  const outcomes = versions.map((v) => ({ label: `v${v.number}`, asWritten: v.workedAsWritten, afterChanges: v.workedAfterChanges, failed: v.failed }));
-  const symptoms = OUTCOME_SYMPTOMS.map((s) => ({ symptom: outcomeSymptomLabels[s], ...Object.fromEntries(versions.map((v) => [`v${v.number}`, v.symptoms[s]])) }));
-  const deskLinks = access.member ? can(access.member.role, "desk.use") : false;
+  const { range, chosen, error } = readTrendRange(await searchParams, new Date());
+  const role = access.member?.role;
+  const deskLinks = role ? can(role, "desk.use") : false;
+  const canDraft = role ? can(role, "sheets.author") : false;
+  const here = `/${slug}/drafting/field/${sheet.slug}`;
   return (
     <>
       <PageHeader
-        title={results.sheet.title}
-        lead={<>For the {results.sheet.machineClass} class; field results version by version. <Link className="underline" href={`/${slug}/drafting/sheets/${sheet.slug}`}>Open the sheet in Drafting</Link> · <Link className="underline" href={`/${slug}/drafting/field`}>All Field results</Link></>}
+        title={sheet.title}
+        lead={<>For the {sheet.machineClass} class; field results version by version. <Link className="underline" href={`/${slug}/drafting/sheets/${sheet.slug}`}>Open the sheet in Drafting</Link> · <Link className="underline" href={`/${slug}/drafting/field`}>All Field results</Link></>}
       />
-      {versions.length === 0 ? (
-        <p className="text-sm text-stone-600">No published version of this sheet has field results yet; they refresh every few minutes.</p>
-      ) : (
-        <>
-          <div className="mb-2 flex justify-end">
-            <a href={`/api/v1/vendors/${slug}/field/sheet-versions?sheet=${encodeURIComponent(sheet.slug)}`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-3 text-sm" download>Export CSV<span className="sr-only"> of the versions</span></a>
-          </div>
-          <VersionRollupTable versions={versions} confidenceLabel={label} />
-          {comparisons.length ? (
-            <section aria-labelledby="compare-heading" className="mt-6">
-              <h2 id="compare-heading" className="mb-2 text-lg font-semibold">Against the previous version</h2>
-              <ul className="space-y-2 text-sm" data-testid="version-comparisons">
-                {comparisons.map((c) => (
-                  <li key={c.number} data-verdict={c.verdict} className="rounded-md border border-stone-300 bg-white px-4 py-3">
-                    <strong>Version {c.number}:</strong> {c.sentence}
-                    {versions.find((v) => v.number === c.number)?.changeNote ? <span className="block text-stone-600">Change note: {versions.find((v) => v.number === c.number)?.changeNote}</span> : null}
-                  </li>
-                ))}
-              </ul>
-            </section>
-          ) : null}
-          <FieldCharts outcomes={outcomes} symptoms={symptoms} versions={chartVersions} />
-        </>
-      )}
-      <FieldSection id="sheet-changes" title="What customers changed" lead="Per version, from “worked after changes” reports. A suggestion for the next draft, never applied for you.">
-        <CustomerChangesList items={results.changes} vendorSlug={slug} showSheet={false} />
+      <Suspense fallback={<SectionSkeleton label="the versions' results" rows={5} />}>
+        <SheetVersionsSection vendorSlug={slug} vendorId={vendorId} sheet={sheet} z={z} confidenceLabel={label} />
+      </Suspense>
+      <FieldSection
+        id="sheet-trends"
+        title="Trends"
+        lead={<>Outcome reports and the share that failed, week by week (weeks start on Monday, UTC), all versions together; a dashed line marks the week a version was published. Whether failures fell after a new version is said only once the {label} intervals of the two versions no longer overlap.</>}
+      >
+        <DateRangeForm action={here} label="Trend date range" from={chosen.from ?? range.from} to={chosen.to ?? range.to} error={error} />
+        <Suspense key={`${range.from}:${range.to}`} fallback={<SectionSkeleton label="the trends" rows={6} />}>
+          <SheetTrendsSection vendorId={vendorId} sheetId={sheet.id} from={range.from} to={range.to} z={z} confidenceLabel={label} />
+        </Suspense>
       </FieldSection>
-      <FieldSection id="sheet-tickets" title="Linked tickets" lead="Tickets that link a version of this sheet. A customer appears only here, through a ticket they opened.">
-        <LinkedTicketList tickets={results.tickets} vendorSlug={slug} deskLinks={deskLinks} />
-      </FieldSection>
-      <FieldSection id="sheet-handoffs" title="Hand-offs from Support" lead="Problems Support handed to engineering for a version of this sheet.">
-        {results.handoffs.length === 0 ? (
-          <p className="text-sm text-stone-600">No hand-offs.</p>
-        ) : (
-          <ul className="divide-y divide-stone-200 rounded-md border border-stone-300 bg-white text-sm">
-            {results.handoffs.map((h) => (
-              <li key={h.id} className="px-4 py-3">
-                <span className="font-medium">{h.summary}</span> <span className="num text-stone-600">v{h.versionNumber}</span>{" "}
-                <span className="rounded border border-stone-300 px-1.5 text-xs">{h.status === "open" ? "Open" : "Resolved"}</span>
-                <span className="block text-stone-600">{formatDate(h.createdAt)}{h.ticketNumber ? ` · from ticket #${h.ticketNumber}` : ""}</span>
-                {h.details ? <p className="mt-1 whitespace-pre-line">{h.details}</p> : null}
-              </li>
-            ))}
-          </ul>
-        )}
-      </FieldSection>
+      <Suspense fallback={<SectionSkeleton label="changes, tickets and hand-offs" />}>
+        <SheetActivitySections vendorSlug={slug} vendorId={vendorId} sheetId={sheet.id} z={z} deskLinks={deskLinks} startDraft={canDraft ? startDraftFromChangeAction : undefined} />
+      </Suspense>
     </>
   );
 }

@@ -34,7 +34,12 @@ export default async function EditDraftPage({ params }: Props) {
   return (
     <>
       <PageHeader title={`Edit version ${draft.number}: ${draft.title}`} lead={<><Link className="underline" href={back}>Back to the sheet</Link> · <span className="num">{data.cutter.sku}</span> · {data.material.name} · {data.machineClass.name}</>} />
-      <SheetEditor vendorSlug={vendorSlug} slug={data.sheet.slug} initialSource={draft.source} initialRevision={draft.revision} saveAction={saveDraftAction} previewAction={previewDraftAction} submitAction={submitDraftAction} />
+      {draft.changeNote ? (
+        <p role="note" data-testid="draft-change-note" className="mb-4 rounded-md border border-amber-300 bg-amber-50 px-4 py-3 text-sm">
+          <strong>This draft starts with a change note:</strong> {draft.changeNote} Edit it below before you submit.
+        </p>
+      ) : null}
+      <SheetEditor vendorSlug={vendorSlug} slug={data.sheet.slug} initialSource={draft.source} initialRevision={draft.revision} initialChangeNote={draft.changeNote} saveAction={saveDraftAction} previewAction={previewDraftAction} submitAction={submitDraftAction} />
     </>
   );
 }

@@ -1,4 +1,5 @@
 import { fieldExportSchema } from "@/content-schema/field-export";
+import { type AttentionFilter, attentionFilterSchema } from "@/content-schema/field-filters";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { confidenceOf } from "@/lib/field/confidence";
 import { loadCoverageGaps } from "@/lib/field/coverage";
@@ -11,11 +12,11 @@ import type { Vendor } from "@/content-schema/vendor";
 
 const EXPORT_LIMIT = 5000;
 
-async function render(vendor: Vendor, query: ReturnType<typeof fieldExportSchema.parse>): Promise<string> {
+async function render(vendor: Vendor, query: ReturnType<typeof fieldExportSchema.parse>, filter: AttentionFilter): Promise<string> {
   const { z, confidence } = confidenceOf(vendor.settings);
   switch (query.list) {
     case "needs-attention":
-      return needsAttentionCsv(await listNeedsAttention({ vendorId: vendor.id, z, limit: EXPORT_LIMIT }), confidence);
+      return needsAttentionCsv(await listNeedsAttention({ vendorId: vendor.id, z, limit: EXPORT_LIMIT, filters: { from: filter.from, to: filter.to, machineClass: filter.class } }), confidence);
     case "customer-changes":
       return customerChangesCsv(await listCustomerChanges({ vendorId: vendor.id, limit: EXPORT_LIMIT }));
     case "coverage-gaps":
@@ -29,11 +30,13 @@ async function render(vendor: Vendor, query: ReturnType<typeof fieldExportSchema
   }
 }
 
-// GET /api/v1/vendors/{vendor}/field/{needs-attention|customer-changes|coverage-gaps|sheet-versions?sheet=…}: a Field-results list as CSV.
+// GET /api/v1/vendors/{vendor}/field/{needs-attention[?from&to&class]|customer-changes|coverage-gaps|sheet-versions?sheet=…}: a Field-results list as CSV.
 export const GET = withVendor<{ vendor: string; list: string }>(
   async (request, { access, params }) => {
     const query = fieldExportSchema.parse({ list: params.list, sheet: request.nextUrl.searchParams.get("sheet") ?? undefined });
-    const body = await render(access.vendor, query);
+    const search = request.nextUrl.searchParams;
+    const filter = query.list === "needs-attention" ? attentionFilterSchema.parse({ from: search.get("from") ?? undefined, to: search.get("to") ?? undefined, class: search.get("class") ?? undefined }) : {};
+    const body = await render(access.vendor, query, filter);
     const fileName = `${access.vendor.slug}-${query.list}${query.list === "sheet-versions" ? `-${query.sheet}` : ""}-${new Date().toISOString().slice(0, 10)}`;
     return new Response(body, {
       headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${fileName}.csv"`, "cache-control": "private, no-store" },
