@@ -10,6 +10,7 @@ import { seedSearchIndex } from "@/search/indexing/seed-search-index";
 
 // Tables in dependency order for a reset; later features add theirs at the front.
 export const TENANT_TABLES = [
+  "webhook_deliveries", "webhooks",
   "field_digests_sent", "sheet_version_activity",
   "search_words", "search_documents",
   "inbound_mail_log", "problem_reports", "reply_snippets", "desk_views", "ticket_attachments", "ticket_messages", "ticket_sheet_links", "tickets",
