@@ -5,6 +5,7 @@ import { seedField } from "./seed-field";
 import { seedFoundation } from "./seed-foundation";
 import { seedSheets } from "./seed-sheets";
 import { seedSupport } from "./seed-support";
+import { seedWebhooks } from "./seed-webhooks";
 import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { seedSearchIndex } from "@/search/indexing/seed-search-index";
 
@@ -27,6 +28,7 @@ export async function runSeeds(knex: Knex, { reset }: { reset: boolean }) {
   await seedBench(knex, ids);
   await seedSupport(knex, ids);
   await seedField(knex, ids);
+  await seedWebhooks(knex, ids);
   await seedSearchIndex(knex);
   await refreshFieldRollups(knex);
   return ids;
