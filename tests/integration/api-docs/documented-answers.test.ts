@@ -58,16 +58,17 @@ describe("documented answers", () => {
     const { vendor, customer } = await createVendorWithStaff();
     const sheet = await createBenchSheet(vendor.id);
     const token = await tokenFor(vendor.id, customer.user.id);
-    const params = (extra: Record<string, string> = {}) => ({ params: Promise.resolve({ vendor: vendor.slug, ...extra }) });
+    const params = () => ({ params: Promise.resolve({ vendor: vendor.slug }) });
+    const sheetParams = (slug: string) => ({ params: Promise.resolve({ vendor: vendor.slug, slug }) });
 
     const list = await listSheets(call(`/api/v1/vendors/${vendor.slug}/sheets`, token), params());
     expect(sheetListResponseSchema.safeParse(await list.json()).error).toBeUndefined();
 
-    const one = await getSheet(call(`/api/v1/vendors/${vendor.slug}/sheets/${sheet.sheetSlug}`, token), params({ slug: sheet.sheetSlug }));
+    const one = await getSheet(call(`/api/v1/vendors/${vendor.slug}/sheets/${sheet.sheetSlug}`, token), sheetParams(sheet.sheetSlug));
     expect(one.status).toBe(200);
     expect(sheetVersionResponseSchema.safeParse(await one.json()).error).toBeUndefined();
 
-    const missing = await getSheet(call(`/api/v1/vendors/${vendor.slug}/sheets/no-such-sheet`, token), params({ slug: "no-such-sheet" }));
+    const missing = await getSheet(call(`/api/v1/vendors/${vendor.slug}/sheets/no-such-sheet`, token), sheetParams("no-such-sheet"));
     expect(missing.status).toBe(404);
     expect(apiErrorSchema.safeParse(await missing.json()).error).toBeUndefined();
 
