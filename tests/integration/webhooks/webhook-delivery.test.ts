@@ -11,6 +11,7 @@ import { createWebhook } from "@/lib/webhooks/create-webhook";
 import { deliverWebhookJob } from "@/lib/webhooks/deliver-webhook";
 import { getWebhook, listDeliveries } from "@/lib/webhooks/list-webhooks";
 import { redeliverWebhook, resumeWebhook } from "@/lib/webhooks/manage-webhook";
+import { pruneWebhookDeliveriesJob } from "@/lib/webhooks/prune-deliveries";
 import { WEBHOOK_DELIVERY_QUEUE } from "@/lib/webhooks/queue-webhook-event";
 import { verifySignature } from "@/lib/webhooks/sign-payload";
 import { webhookSheetSubscriber } from "@/lib/webhooks/webhook-sheet-subscriber";
@@ -256,5 +257,15 @@ describe("webhook delivery", () => {
     } finally {
       await receiver.close();
     }
+  });
+
+  it("prunes finished deliveries after 30 days and keeps held ones", async () => {
+    const s = await scenario();
+    const { id } = await s.hook("http://127.0.0.1:9/never");
+    const row = (state: string, days: number) => ({ vendor_id: s.vendor.id, webhook_id: id, event_id: randomUUID(), event_type: "ticket.created", body: "{}", state, created_at: db.raw(`now() - interval '${days} days'`) });
+    await db("webhook_deliveries").insert([row("delivered", 31), row("failed", 31), row("held", 31), row("delivered", 29)]);
+    await pruneWebhookDeliveriesJob();
+    const left = await db("webhook_deliveries").where({ webhook_id: id }).orderBy("state").select("state");
+    expect(left.map((r) => r.state)).toEqual(["delivered", "held"]);
   });
 });
