@@ -59,7 +59,7 @@ echo "== production build (into .next-test)"
 export NEXT_DIST_DIR=.next-test
 node_modules/.bin/next build >.tmp/test-build.log 2>&1 || { tail -60 .tmp/test-build.log; exit 1; }
 # The browsers of the e2e run all come from 127.0.0.1, so the app's API limits are raised for it.
-API_RATE_LIMIT_MULTIPLIER=50 node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >.tmp/test-app.log 2>&1 &
+API_RATE_LIMIT_MULTIPLIER=50 WEBHOOKS_ALLOW_LOOPBACK=on WEBHOOK_RETRY_BASE_SECONDS=2 node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >.tmp/test-app.log 2>&1 &
 pids+=("$!")
 wait_for_url "$E2E_BASE_URL/api/health" 90
 

@@ -5,11 +5,13 @@ import { seedField } from "./seed-field";
 import { seedFoundation } from "./seed-foundation";
 import { seedSheets } from "./seed-sheets";
 import { seedSupport } from "./seed-support";
+import { seedWebhooks } from "./seed-webhooks";
 import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { seedSearchIndex } from "@/search/indexing/seed-search-index";
 
 // Tables in dependency order for a reset; later features add theirs at the front.
 export const TENANT_TABLES = [
+  "webhook_deliveries", "webhooks",
   "field_week_rollups", "field_change_rollups", "field_version_rollups", "field_digests_sent", "sheet_version_activity",
   "search_words", "search_documents",
   "inbound_mail_log", "problem_reports", "reply_snippets", "desk_views", "ticket_attachments", "ticket_messages", "ticket_sheet_links", "tickets",
@@ -26,6 +28,7 @@ export async function runSeeds(knex: Knex, { reset }: { reset: boolean }) {
   await seedBench(knex, ids);
   await seedSupport(knex, ids);
   await seedField(knex, ids);
+  await seedWebhooks(knex, ids);
   await seedSearchIndex(knex);
   await refreshFieldRollups(knex);
   return ids;

@@ -34,6 +34,9 @@ const LABELS: Record<string, string> = {
   "ticket.tags": "Ticket tags changed",
   "vendor.branding": "Branding changed",
   "vendor.create": "Workspace created",
+  "webhook.create": "Webhook added",
+  "webhook.delete": "Webhook removed",
+  "webhook.resume": "Webhook resumed",
 };
 
 /** A role as a word in running text: "support staff", "vendor admin". */

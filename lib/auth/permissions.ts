@@ -14,6 +14,7 @@ export const PERMISSIONS = {
   "members.manage": ["admin"],
   "vendor.settings": ["admin"],
   "audit.read": ["admin"],
+  "integrations.manage": ["admin"],
   "tokens.manage": ["admin", "engineer", "support", "customer"],
 } as const satisfies Record<string, readonly Role[]>;
 

@@ -8,6 +8,7 @@ import { scheduleFieldRefresh } from "@/lib/field/refresh-rollups";
 import { InvalidInput, NotFound } from "@/lib/errors/domain-errors";
 import { getStorage, newStorageKey, sniffUpload } from "@/lib/storage";
 import { assertUploadQuota } from "@/lib/storage/upload-quota";
+import { queueOutcomeReported } from "@/lib/webhooks/queue-domain-events";
 
 export type Outcome = {
   id: string;
@@ -60,6 +61,7 @@ export async function recordOutcome({ vendorId, userId, setupId, fields, photo, 
       .returning("id");
     await writeAudit({ vendorId, actorUserId: userId, action: "outcome.create", objectType: "outcome", objectId: row.id, details: { setupId, result: fields.result } }, trx);
     await scheduleFieldRefresh(trx);
+    await queueOutcomeReported(trx, { vendorId, outcomeId: row.id, versionId: setup.sheet_version_id, result: fields.result, symptom: fields.result === "failed" ? (fields.symptom ?? null) : null });
     return { id: row.id as string, created: true };
   });
 }

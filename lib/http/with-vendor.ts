@@ -13,6 +13,7 @@ import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 
 import { clientIp } from "./client-ip";
 import { errorResponse } from "./error-response";
+import { DEFAULT_PUBLIC_RATE, DEFAULT_VENDOR_RATE } from "./rate-defaults";
 import { requireSameOrigin } from "./same-origin";
 
 type Params = Record<string, string | string[] | undefined>;
@@ -24,7 +25,6 @@ export type VendorHandler<P extends Params> = (
 
 export type WithVendorOptions = { permission?: Permission; rateLimit?: { limit: number; windowSeconds: number } };
 
-const DEFAULT_RATE = { limit: 300, windowSeconds: 60 };
 
 // Operators (and the test run, whose browsers share one address) can raise every API limit at once.
 function scaled(rate: { limit: number; windowSeconds: number }) {
@@ -44,7 +44,7 @@ export function withVendor<P extends Params & { vendor: string }>(handler: Vendo
       const bearer = request.headers.get("authorization")?.match(/^Bearer\s+(\S+)$/i)?.[1];
       // A route with its own limit counts in its own bucket; the rest share the general one.
       const scope = options.rateLimit ? request.nextUrl.pathname : "all";
-      const rate = scaled(options.rateLimit ?? DEFAULT_RATE);
+      const rate = scaled(options.rateLimit ?? DEFAULT_VENDOR_RATE);
       const byAddress = () => consumeRateLimit({ key: `api:${scope}:${clientIp(request.headers)}`, ...rate });
       let user = null;
       if (bearer) {
@@ -81,7 +81,7 @@ function pinned(response: Response): Response {
 }
 
 /** For public, vendor-free endpoints such as /api/v1/calculate. */
-export function withPublic(handler: (request: NextRequest) => Promise<Response>, rate = { limit: 120, windowSeconds: 60 }) {
+export function withPublic(handler: (request: NextRequest) => Promise<Response>, rate = DEFAULT_PUBLIC_RATE) {
   return async (request: NextRequest): Promise<Response> => {
     try {
       await consumeRateLimit({ key: `public:${new URL(request.url).pathname}:${clientIp(request.headers)}`, ...scaled(rate) });

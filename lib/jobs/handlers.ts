@@ -8,6 +8,9 @@ import { MAIL_QUEUE, mailRetrySchedule } from "@/lib/mail/enqueue-mail";
 import { DEAD_LETTER_CHECK_CRON, DEAD_LETTER_CHECK_QUEUE, deadLetterCheckJob } from "@/lib/mail/notify-dead-letters";
 import { sendMailJob } from "@/lib/mail/send-mail-job";
 import { cleanupUploadsJob, UPLOAD_CLEANUP_CRON, UPLOAD_CLEANUP_QUEUE } from "@/lib/storage/cleanup-uploads";
+import { deliverWebhookJob } from "@/lib/webhooks/deliver-webhook";
+import { pruneWebhookDeliveriesJob, WEBHOOK_PRUNE_CRON, WEBHOOK_PRUNE_QUEUE } from "@/lib/webhooks/prune-deliveries";
+import { WEBHOOK_DELIVERY_QUEUE } from "@/lib/webhooks/queue-webhook-event";
 import { reindexVendorJob, SEARCH_REINDEX_VENDOR_QUEUE } from "@/search/indexing/search-index-jobs";
 
 import type { JobMeta } from "./job-meta";
@@ -24,6 +27,8 @@ export const JOB_HANDLERS: Record<string, JobHandler> = {
   [FIELD_DIGEST_QUEUE]: weeklyDigestJob,
   [UPLOAD_CLEANUP_QUEUE]: cleanupUploadsJob,
   [DEAD_LETTER_CHECK_QUEUE]: deadLetterCheckJob,
+  [WEBHOOK_DELIVERY_QUEUE]: deliverWebhookJob,
+  [WEBHOOK_PRUNE_QUEUE]: pruneWebhookDeliveriesJob,
 };
 
 // Queues that also run on a clock (cron, UTC).
@@ -33,6 +38,7 @@ export const JOB_SCHEDULES: Record<string, string> = {
   [FIELD_DIGEST_QUEUE]: FIELD_DIGEST_CRON,
   [UPLOAD_CLEANUP_QUEUE]: UPLOAD_CLEANUP_CRON,
   [DEAD_LETTER_CHECK_QUEUE]: DEAD_LETTER_CHECK_CRON,
+  [WEBHOOK_PRUNE_QUEUE]: WEBHOOK_PRUNE_CRON,
 };
 
 // Queues whose retries follow a capped exponential backoff over a long window (the rest use DEFAULT_JOB_OPTIONS).

@@ -6,6 +6,7 @@ import type { TicketCard } from "@/content-schema/ticket-card";
 import type { MessageVisibility, TicketStatus } from "@/content-schema/ticket-status";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
+import { queueTicketAnswered } from "@/lib/webhooks/queue-domain-events";
 
 import { auditTicketChange } from "./audit-change";
 import { notifyCustomerOfReply, notifyStaffOfCustomerReply } from "./notify/notify-reply";
@@ -114,6 +115,7 @@ export async function addStaffMessage(o: Base & { visibility: MessageVisibility;
     await trx("tickets").where({ id: o.ticketId, vendor_id: o.vendorId }).update(patch);
     if (o.visibility === "public") {
       await notifyCustomerOfReply(trx, { vendorId: o.vendorId, ticketId: o.ticketId, messageId, authorName: await authorName(trx, o.authorId), body: o.body, hasCard: Boolean(o.card) });
+      await queueTicketAnswered(trx, { vendorId: o.vendorId, ticketId: o.ticketId, messageId });
     }
     return { id: messageId, created: true };
   });

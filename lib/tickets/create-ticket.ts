@@ -4,6 +4,8 @@ import type { CreateTicketInput } from "@/content-schema/ticket-create";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import type { Vendor } from "@/content-schema/vendor";
+import { appUrl } from "@/lib/http/app-url";
+import { queueWebhookEvent } from "@/lib/webhooks/queue-webhook-event";
 
 import { firstResponseDueAt } from "./first-response-due";
 import { notifyNewTicket } from "./notify/notify-new-ticket";
@@ -58,6 +60,11 @@ export async function createTicket({ vendor, customerId, input }: Options): Prom
       trx,
     );
     await notifyNewTicket(trx, { vendor, ticketId: row.id });
+    await queueWebhookEvent(trx, {
+      vendorId: vendor.id,
+      type: "ticket.created",
+      data: { ticketId: row.id, number: row.number, subject: input.subject, url: appUrl(`/${vendor.slug}/desk/tickets/${row.id}`) },
+    });
     return { ...row, created: true };
   });
   return result;

@@ -49,6 +49,7 @@ const VALUE_SOURCES: Record<string, ValueSource> = {
   "attachments/[attachment]": firstId("ticket_attachments"),
   "field/[slug]": firstId("sheets", "slug"),
   "field/[list]": async () => "needs-attention",
+  "webhooks/[webhook]": firstId("webhooks"),
 };
 
 describe("cross-vendor probe", () => {

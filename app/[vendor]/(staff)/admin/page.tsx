@@ -23,6 +23,10 @@ export default async function AdminPage({ params }: { params: Promise<{ vendor: 
           <Link href={`/${vendor.slug}/admin/members`} className="font-medium underline">Members and roles</Link>
           <p className="mt-1 text-sm text-stone-600">Invite staff, change roles, remove people.</p>
         </li>
+        <li className="rounded-lg border border-stone-200 bg-white p-4">
+          <Link href={`/${vendor.slug}/admin/integrations`} className="font-medium underline">Integrations</Link>
+          <p className="mt-1 text-sm text-stone-600">Webhooks for your shop or ERP, and the API reference.</p>
+        </li>
       </ul>
       <h2 className="mb-3 text-lg font-semibold">Branding and settings</h2>
       <div className="mb-8"><BrandingForm updateBrandingAction={updateBrandingAction} vendor={vendor} /></div>

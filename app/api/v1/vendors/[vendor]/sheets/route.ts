@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 
+import { sheetListQuerySchema } from "@/content-schema/api-queries";
 import { apiNewSheetSchema } from "@/content-schema/sheet-workflow";
 import { parseInput } from "@/lib/errors/zod-field-errors";
 import { readJson } from "@/lib/http/read-json";
@@ -11,8 +12,7 @@ import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 // GET /api/v1/vendors/{vendor}/sheets: the published sheets (filters: cutter, material, machineClass).
 export const GET = withVendor(
   async (request, { access }) => {
-    const q = request.nextUrl.searchParams;
-    const filters = { cutter: q.get("cutter") ?? undefined, material: q.get("material") ?? undefined, machineClass: q.get("machineClass") ?? undefined };
+    const filters = sheetListQuerySchema.parse(Object.fromEntries(request.nextUrl.searchParams));
     const sheets = await listPublishedSheets({ vendorId: access.vendor.id, filters });
     return NextResponse.json({ sheets });
   },

@@ -3,7 +3,7 @@ import { NextResponse } from "next/server";
 import { createTicketSchema } from "@/content-schema/ticket-create";
 import { requireMember } from "@/lib/auth/access";
 import { listQueue } from "@/lib/desk/list-queue";
-import { parseQueueFilters } from "@/lib/desk/queue-filters";
+import { queueFiltersSchema } from "@/lib/desk/queue-filters";
 import { parseInput } from "@/lib/errors/zod-field-errors";
 import { readJson } from "@/lib/http/read-json";
 import { withVendor } from "@/lib/http/with-vendor";
@@ -15,7 +15,8 @@ import { supportRole } from "@/lib/tickets/member-kind";
 export const GET = withVendor(async (request, { access }) => {
   const who = supportRole(access);
   if (who.kind === "customer") return NextResponse.json({ tickets: await listCustomerTickets({ vendorId: access.vendor.id, customerId: who.userId }) });
-  const filters = parseQueueFilters(Object.fromEntries(new URL(request.url).searchParams));
+  // Unknown or malformed filters are dropped, never refused: a saved link keeps working.
+  const filters = queueFiltersSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams)).data ?? {};
   return NextResponse.json({ tickets: await listQueue({ vendorId: access.vendor.id, userId: who.userId, filters }) });
 });
 

@@ -1,3 +1,4 @@
+import { cutterQrQuerySchema } from "@/content-schema/api-queries";
 import { cutterQr } from "@/lib/bench/cutter-links";
 import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
 import { NotFound } from "@/lib/errors/domain-errors";
@@ -9,10 +10,10 @@ export const GET = withVendor<{ vendor: string; sku: string }>(async (request, {
   const sku = safeDecode(params.sku);
   const cutter = sku === null ? null : await getCutterBySku({ vendorId: access.vendor.id, sku });
   if (!cutter) throw new NotFound();
-  const query = new URL(request.url).searchParams;
-  const format = query.get("format") === "svg" ? "svg" : "png";
+  const query = cutterQrQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
+  const format = query.format;
   const { body, contentType } = await cutterQr(cutter.shortCode, format);
   const headers: Record<string, string> = { "content-type": contentType, "cache-control": "public, max-age=86400", "content-security-policy": "default-src 'none'; style-src 'unsafe-inline'" };
-  if (query.get("download")) headers["content-disposition"] = `attachment; filename="${cutter.sku.replace(/[^A-Za-z0-9._-]/g, "-")}-qr.${format}"`;
+  if (query.download) headers["content-disposition"] = `attachment; filename="${cutter.sku.replace(/[^A-Za-z0-9._-]/g, "-")}-qr.${format}"`;
   return new Response(body, { headers });
 }, { permission: "library.read" });

@@ -1,0 +1,24 @@
+import { z } from "zod";
+
+const optional = z
+  .string()
+  .trim()
+  .max(120)
+  .optional()
+  .transform((v) => v || undefined);
+
+/** GET /api/v1/vendors/{vendor}/sheets: optional filters by slug. */
+export const sheetListQuerySchema = z.object({
+  cutter: optional.describe("A cutter's SKU."),
+  material: optional.describe("A material's slug."),
+  machineClass: optional.describe("A machine class's slug."),
+});
+
+/** GET /api/v1/vendors/{vendor}/cutters/{sku}/qr */
+export const cutterQrQuerySchema = z.object({
+  format: z.enum(["png", "svg"]).default("png").catch("png"),
+  download: z.string().max(8).optional().describe("Any value: answer as a file download."),
+});
+
+/** POST /api/v1/vendors/{vendor}/tickets/{ticket}/messages */
+export const ticketMessageSchema = z.object({ body: z.string().trim().min(1).max(20_000) });

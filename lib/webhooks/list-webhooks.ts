@@ -1,0 +1,28 @@
+import "server-only";
+
+import { db } from "@/lib/db/knex";
+import { NotFound } from "@/lib/errors/domain-errors";
+
+import { DELIVERY_COLUMNS, type Webhook, WEBHOOK_COLUMNS, type WebhookDelivery } from "./webhook-rows";
+
+export async function listWebhooks({ vendorId }: { vendorId: string }): Promise<Webhook[]> {
+  return db("webhooks").where({ vendor_id: vendorId }).orderBy("created_at").select<Webhook[]>(WEBHOOK_COLUMNS);
+}
+
+/** One webhook of this vendor; another vendor's is not found. */
+export async function getWebhook({ vendorId, webhookId }: { vendorId: string; webhookId: string }): Promise<Webhook> {
+  const hook = await db("webhooks").where({ vendor_id: vendorId, id: webhookId }).first<Webhook | undefined>(WEBHOOK_COLUMNS);
+  if (!hook) throw new NotFound("No such webhook.");
+  return hook;
+}
+
+export const DELIVERY_LOG_SIZE = 50;
+
+/** The newest deliveries of one webhook, for the log. */
+export async function listDeliveries({ vendorId, webhookId }: { vendorId: string; webhookId: string }): Promise<WebhookDelivery[]> {
+  return db("webhook_deliveries")
+    .where({ vendor_id: vendorId, webhook_id: webhookId })
+    .orderBy([{ column: "created_at", order: "desc" }, { column: "id", order: "desc" }])
+    .limit(DELIVERY_LOG_SIZE)
+    .select<WebhookDelivery[]>(DELIVERY_COLUMNS);
+}
