@@ -1,5 +1,9 @@
 import "server-only";
 
+import { generateBatchJob } from "@/lib/families/generate-batch";
+import { FAMILY_ALERTS_QUEUE } from "@/lib/families/publish-batch";
+import { sendBatchAlertsJob } from "@/lib/families/send-batch-alerts";
+import { FAMILY_GENERATE_QUEUE } from "@/lib/families/start-generation";
 import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/field/send-digest";
 import { FIELD_REFRESH_QUEUE, refreshFieldRollupsJob } from "@/lib/field/refresh-rollups";
 import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
@@ -24,6 +28,8 @@ export const JOB_HANDLERS: Record<string, JobHandler> = {
   [FIELD_DIGEST_QUEUE]: weeklyDigestJob,
   [UPLOAD_CLEANUP_QUEUE]: cleanupUploadsJob,
   [DEAD_LETTER_CHECK_QUEUE]: deadLetterCheckJob,
+  [FAMILY_GENERATE_QUEUE]: generateBatchJob,
+  [FAMILY_ALERTS_QUEUE]: sendBatchAlertsJob,
 };
 
 // Queues that also run on a clock (cron, UTC).
