@@ -1,3 +1,4 @@
+import { parse as parseYaml, stringify as stringifyYaml } from "yaml";
 import { z } from "zod";
 
 import { catalogueSlugSchema } from "./catalogue-fields";
@@ -57,3 +58,40 @@ export const familyDefinitionSchema = z.object({
 export type FamilyDefinition = z.output<typeof familyDefinitionSchema>;
 
 export const batchExcludeSchema = z.object({ itemId: z.uuid(), reason: z.string().trim().min(3, "Say why this sheet is left out.").max(500) });
+
+/** Family rules as an engineer types them (YAML), parsed and then validated by the rules schema. */
+export const familyRulesTextSchema = z
+  .string()
+  .max(50_000, "The rules are at most 50,000 characters.")
+  .transform((text, ctx) => {
+    try {
+      return parseYaml(text) as unknown;
+    } catch (error) {
+      ctx.addIssue({ code: "custom", message: `The rules are not valid YAML: ${error instanceof Error ? error.message.split("\n")[0] : "unreadable"}` });
+      return z.NEVER;
+    }
+  })
+  .pipe(familyRulesSchema);
+
+/** Rules as YAML text for the editor. */
+export const familyRulesToText = (rules: FamilyRules) => stringifyYaml(rules, { lineWidth: 0 });
+
+/** The family form as it arrives from the browser (repeated fields, SKUs by line), reshaped and then validated. */
+const list = (value: unknown) => (value === undefined ? [] : Array.isArray(value) ? value : [value]);
+const given = (value: unknown) => (typeof value === "string" && value.trim() !== "" ? value.trim() : undefined);
+const numberGiven = (value: unknown) => (given(value) === undefined ? undefined : Number(String(value).replace(",", ".")));
+
+function reshapeFamilyForm(raw: unknown) {
+  const f = (raw ?? {}) as Record<string, unknown>;
+  const skus = typeof f.skus === "string" ? f.skus.split(/[\n,]/).map((s) => s.trim()).filter(Boolean) : [];
+  return {
+    name: f.name,
+    slug: f.slug,
+    cutters: { series: given(f.series), geometries: list(f.geometries), diameterMinMm: numberGiven(f.diameterMinMm), diameterMaxMm: numberGiven(f.diameterMaxMm), skus },
+    materialIds: list(f.materialIds),
+    machineClassIds: list(f.machineClassIds),
+    rules: { kinds: list(f.kinds), rules: [] },
+  };
+}
+
+export const familyFormSchema = z.preprocess(reshapeFamilyForm, familyDefinitionSchema.extend({ rules: familyRulesSchema }));

@@ -1,6 +1,7 @@
 import type { Knex } from "knex";
 
 import { seedBench } from "./seed-bench";
+import { seedFamilies } from "./seed-families";
 import { seedField } from "./seed-field";
 import { seedFoundation } from "./seed-foundation";
 import { seedSheets } from "./seed-sheets";
@@ -27,6 +28,7 @@ export async function runSeeds(knex: Knex, { reset }: { reset: boolean }) {
   await seedBench(knex, ids);
   await seedSupport(knex, ids);
   await seedField(knex, ids);
+  await seedFamilies(knex, ids);
   await seedSearchIndex(knex);
   await refreshFieldRollups(knex);
   return ids;

@@ -12,10 +12,10 @@ import { loadFamilyCatalogue } from "./load-family-catalogue";
 export type PreviewCell = ComputedCell & { status: CellStatus; existing: { slug: string; number: number; state: string } | null; diff: OperationDiff[] };
 
 /** Most cells a preview computes at once; a larger family is previewed a page at a time. */
-export const PREVIEW_LIMIT = 2000;
+export const PREVIEW_PAGE = 1000;
 
 /** Every cell of the family under `rules` (default: its newest rules), with the engine's warnings and the change against each existing sheet's current version. */
-export async function previewFamily({ vendorId, slug, rules, offset = 0, limit = PREVIEW_LIMIT }: { vendorId: string; slug: string; rules: FamilyRules; offset?: number; limit?: number }) {
+export async function previewFamily({ vendorId, slug, rules, offset = 0, limit = PREVIEW_PAGE }: { vendorId: string; slug: string; rules: FamilyRules; offset?: number; limit?: number }) {
   const family = await getFamily({ vendorId, slug });
   const catalogue = await loadFamilyCatalogue({ vendorId, family });
   const sheets = await findCellSheets({ vendorId, cutterIds: catalogue.cutters.map((c) => c.id), materialIds: family.materialIds, machineClassIds: family.machineClassIds });

@@ -48,6 +48,8 @@ const VALUE_SOURCES: Record<string, ValueSource> = {
   "attachments/[attachment]": firstId("ticket_attachments"),
   "field/[slug]": firstId("sheets", "slug"),
   "field/[list]": async () => "needs-attention",
+  "families/[family]": firstId("families", "slug"),
+  "batches/[batch]": async () => "1",
 };
 
 describe("cross-vendor probe", () => {
