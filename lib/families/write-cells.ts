@@ -2,7 +2,7 @@ import "server-only";
 
 import type { Knex } from "knex";
 
-import { validateSheetSource } from "@/lib/mdx/validate-sheet-source";
+import { validateGeneratedSource } from "./validate-generated";
 
 import type { CellSheet } from "./cell-sheets";
 import { cellSlug } from "./cell-slug";
@@ -19,7 +19,7 @@ const OUTCOME = { new: "created", changed: "new-version", unchanged: "unchanged"
 
 function versionRow(batch: BatchInfo, cell: ComputedCell, sheetId: string, number: number) {
   const source = cellSource(cell, { name: batch.familyName, ruleVersion: batch.ruleVersion }, cell.operations);
-  const checked = validateSheetSource(source);
+  const checked = validateGeneratedSource(source);
   // The template is ours: a source it makes that does not validate is a defect, not the engineer's input.
   if (!checked.ok) throw new Error(`Generated sheet for ${cell.cutter.sku} does not validate: ${checked.issues.map((i) => i.message).join("; ")}`);
   return {
