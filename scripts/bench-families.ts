@@ -15,10 +15,10 @@ const SIZES = [3, 3.175, 4, 5, 6, 6.35, 8, 10, 12];
 const MATERIALS = [
   ["cast-acrylic", "plastics", 150, 300, 0.05, 120], ["hdpe", "plastics", 200, 450, 0.08, 60], ["polycarbonate", "plastics", 150, 300, 0.05, 130],
   ["mdf", "wood", 200, 700, 0.06, 60], ["plywood", "wood", 200, 650, 0.05, 70], ["hard-maple", "wood", 200, 600, 0.05, 95],
-  ["aluminium-6061", "non-ferrous", 150, 400, 0.02, 700], ["brass", "non-ferrous", 100, 250, 0.02, 780], ["g10", "composites", 100, 250, 0.03, 250], ["cfrp", "composites", 100, 250, 0.03, 280],
+  ["aluminium-6061", "non-ferrous", 150, 400, 0.02, 700], ["abs", "plastics", 150, 350, 0.05, 90], ["g10", "composites", 100, 250, 0.03, 250], ["cfrp", "composites", 100, 250, 0.03, 280],
 ] as const;
 const CLASSES = [
-  ["light-router", 8000, 24000, 0.8, 5000, 0.4, 150], ["rigid-router", 6000, 24000, 2.2, 15000, 0.7, 400], ["machining-centre", 500, 12000, 5.5, 10000, 1, 2000],
+  ["light-router", 8000, 24000, 0.8, 5000, 0.4, 150], ["medium-router", 6000, 24000, 1.5, 8000, 0.55, 250], ["rigid-router", 6000, 24000, 2.2, 15000, 0.7, 400],
 ] as const;
 
 type Peak = { rssMb: number; heapMb: number };
@@ -104,6 +104,8 @@ async function run(url: string, knex: Knex) {
   const generated = await measure("generate (chunks of 250, as the job does)", () => m.generateBatch({ vendorId, batchId: batch.id }));
   const outcomes = await knex("family_batch_items").where({ batch_id: batch.id }).groupBy("outcome").select("outcome", knex.raw("count(*)::int as n"));
   console.log(`  ${generated.written} drafts written; ${outcomes.map((o) => `${o.outcome} ${o.n}`).join(", ")}`);
+  const codes = await knex.raw("select w->>'code' as code, count(*)::int as n from family_batch_items, jsonb_array_elements(warnings) w where batch_id = ? group by 1 order by 2 desc limit 5", [batch.id]);
+  if (codes.rows.length) console.log(`  warnings behind the blocked cells: ${codes.rows.map((r: { code: string; n: number }) => `${r.code} ${r.n}`).join(", ")}`);
   const approved = await measure("approve (one transaction)", () => m.approveBatch({ vendorId, userId: reviewer, slug: "catalogue", number: batch.number }));
   const published = await measure("publish (one transaction)", () => m.publishBatch({ vendorId, userId: reviewer, slug: "catalogue", number: batch.number }));
   console.log(`  ${approved.approved} approved, ${published.published} published`);

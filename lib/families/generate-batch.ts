@@ -4,6 +4,8 @@ import { z } from "zod";
 
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
+import { DEFAULT_JOB_OPTIONS } from "@/lib/jobs/enqueue";
+import type { JobMeta } from "@/lib/jobs/job-meta";
 
 import { findCellSheets } from "./cell-sheets";
 import { computeCell, eachCell } from "./compute-cells";
@@ -55,6 +57,16 @@ export async function generateBatch({ vendorId, batchId, chunkSize = CHUNK }: { 
   return { written };
 }
 
-export async function generateBatchJob(data: unknown): Promise<void> {
-  await generateBatch(jobSchema.parse(data));
+/** The job: a batch whose last attempt failed is marked failed (with the reason for staff), so a new batch can start. */
+export async function generateBatchJob(data: unknown, job?: JobMeta): Promise<void> {
+  const input = jobSchema.parse(data);
+  try {
+    await generateBatch(input);
+  } catch (error) {
+    if (job && job.retryCount >= DEFAULT_JOB_OPTIONS.retryLimit) {
+      const reason = error instanceof Error ? error.message.slice(0, 500) : "unknown error";
+      await db("family_batches").where({ vendor_id: input.vendorId, id: input.batchId, state: "generating" }).update({ state: "failed", error: reason, updated_at: db.fn.now() });
+    }
+    throw error;
+  }
 }
