@@ -28,10 +28,10 @@ async function insertSeries(series: string) {
   })));
 }
 
-async function saveRules(page: Page, rules: string, note: string) {
+async function saveRules(page: Page, rules: string, note: string, version: number) {
   await page.getByLabel(/^Rules \(version/).fill(rules);
   await page.getByLabel("What changes").fill(note);
-  await Promise.all([page.waitForURL(/\?saved=\d+/, { timeout: 60_000 }), page.getByRole("button", { name: "Save as a new rules version" }).click()]);
+  await Promise.all([page.waitForURL(new RegExp(`\\?saved=${version}$`), { timeout: 60_000 }), page.getByRole("button", { name: "Save as a new rules version" }).click()]);
 }
 
 async function generateAndWait(page: Page) {
@@ -83,13 +83,13 @@ describe("sheet families", () => {
     await expect(p.locator('[data-testid="family-preview"] tbody tr[data-status="new"]').count()).resolves.toBe(4);
 
     // A rule that profiles 3·D deep on the light router: the engine warns, those cells are blocked.
-    await saveRules(p, DEEP, "Deep profiles on light routers.");
+    await saveRules(p, DEEP, "Deep profiles on light routers.", 2);
     await expect(p.locator('tr[data-status="warned"]').count()).resolves.toBe(2);
     await expect(p.locator('tr[data-status="warned"] [data-warning="deflection-above-limit"]').count()).resolves.toBeGreaterThan(0);
     await screenshot(p, "family-preview-warned");
 
     // Fixed by changing the rule: no warned cell is left.
-    await saveRules(p, FIXED, "Profiles 0.5·D deep on light routers.");
+    await saveRules(p, FIXED, "Profiles 0.5·D deep on light routers.", 3);
     await expect(p.locator('tr[data-status="warned"]').count()).resolves.toBe(0);
     const first = await generateAndWait(p);
     await expect(p.locator('[data-count="created"] dd').textContent()).resolves.toBe("4");
@@ -111,7 +111,7 @@ describe("sheet families", () => {
     // New rules, a second batch: every sheet gets a new version; published as a batch, one mail lists both sheets.
     const started = Date.now();
     await p.goto(`/${VENDOR}/drafting/families/${slug}`);
-    await saveRules(p, HIGHER_CHIP, "Slots with a larger chip.");
+    await saveRules(p, HIGHER_CHIP, "Slots with a larger chip.", 4);
     const second = await generateAndWait(p);
     await expect(p.locator('[data-count="new-version"] dd').textContent()).resolves.toBe("4");
     await reviewAndPublish(e2.page, second, 4);

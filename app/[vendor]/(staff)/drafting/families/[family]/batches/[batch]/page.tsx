@@ -22,7 +22,7 @@ const OUTCOMES = new Set(["created", "new-version", "unchanged", "blocked", "bus
 
 export default async function BatchPage({ params, searchParams }: Props) {
   const { vendor: vendorSlug, family: slug, batch: segment } = await params;
-  const { vendor, member } = await requirePageAccess(vendorSlug, "sheets.author", `/${vendorSlug}/drafting/families/${slug}/batches/${segment}`);
+  const { vendor, member, user } = await requirePageAccess(vendorSlug, "sheets.author", `/${vendorSlug}/drafting/families/${slug}/batches/${segment}`);
   const [family, batch] = await Promise.all([loadFamily(vendorSlug, slug), loadBatch(vendorSlug, slug, segment)]);
   if (!family || !batch) notFound();
   const requested = (await searchParams).outcome;
@@ -43,9 +43,10 @@ export default async function BatchPage({ params, searchParams }: Props) {
       {batch.state !== "generating" ? (
         <div className="flex flex-col gap-4">
           <BatchSummary counts={counts} base={base} />
-          {batch.state === "in_review" && can(member?.role, "sheets.review") ? (
+          {batch.state === "in_review" && can(member?.role, "sheets.review") && batch.createdBy !== user?.id ? (
             <ActionForm action={approveBatchAction} hidden={hidden} submitLabel={`Approve ${written} sheets`} label="Approve the batch" />
           ) : null}
+          {batch.state === "in_review" && batch.createdBy === user?.id ? <p className="text-sm text-stone-700">You generated this batch: an engineer other than you reviews and approves it.</p> : null}
           {batch.state === "approved" && can(member?.role, "sheets.publish") ? (
             <ActionForm action={publishBatchAction} hidden={hidden} submitLabel={`Publish ${written} sheets`} label="Publish the batch" confirm={{ question: `Publish all ${written} sheets at once? Customers with setups on them get one e-mail listing their changes.`, yes: "Publish the batch" }} />
           ) : null}
