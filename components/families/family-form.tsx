@@ -15,7 +15,7 @@ const errorText = (errors: Record<string, string[]>, prefix: string) =>
 
 function Checks({ legend, name, options, errors, checked = [] }: { legend: string; name: string; options: Option[]; errors: string; checked?: string[] }) {
   return (
-    <fieldset className="flex flex-col gap-1" aria-invalid={errors ? true : undefined}>
+    <fieldset className="flex flex-col gap-1">
       <legend className="text-sm font-medium">{legend}</legend>
       <div className="flex flex-wrap gap-x-4 gap-y-1">
         {options.map((o) => (
