@@ -28,6 +28,12 @@ async function insertSeries(series: string) {
   })));
 }
 
+/** The outcome of every preview cell, once the preview has rendered. */
+async function statuses(page: Page) {
+  await page.getByTestId("family-preview").waitFor({ timeout: 60_000 });
+  return page.locator('[data-testid="family-preview"] tbody tr').evaluateAll((rows) => rows.map((r) => (r as HTMLElement).dataset.status).sort());
+}
+
 async function saveRules(page: Page, rules: string, note: string, version: number) {
   await page.getByLabel(/^Rules \(version/).fill(rules);
   await page.getByLabel("What changes").fill(note);
@@ -36,7 +42,7 @@ async function saveRules(page: Page, rules: string, note: string, version: numbe
 
 async function generateAndWait(page: Page) {
   await Promise.all([page.waitForURL(/\/batches\/\d+$/, { timeout: 60_000 }), page.getByRole("button", { name: /^Generate with rules version/ }).click()]);
-  await page.getByTestId("batch-counts").waitFor({ timeout: 120_000 });
+  await page.getByTestId("batch-counts").waitFor({ timeout: 180_000 });
   return page.url();
 }
 
@@ -50,7 +56,8 @@ async function reviewAndPublish(page: Page, url: string, sheets: number) {
 
 const DEEP = "kinds: [slotting, profile]\nrules:\n  - materialGroup: plastics\n    kind: profile\n    machineClass: light-router\n    apPerD: 3\n";
 const FIXED = DEEP.replace("apPerD: 3", "apPerD: 0.5");
-const HIGHER_CHIP = `${FIXED}  - materialGroup: plastics\n    kind: slotting\n    chipLoadPosition: 0.6\n`;
+// Lower in the vc window for slots and profiles: n (and so vf) changes on every sheet.
+const SLOWER = `${FIXED}  - materialGroup: plastics\n    kind: slotting\n    vcPosition: 0.3\n  - materialGroup: plastics\n    kind: profile\n    vcPosition: 0.3\n`;
 
 describe("sheet families", () => {
   const sessions: Session[] = [];
@@ -80,17 +87,17 @@ describe("sheet families", () => {
     await p.getByLabel("Light belt-drive router").check();
     await p.getByLabel("Rigid ball-screw router").check();
     await Promise.all([p.waitForURL(new RegExp(`/families/${slug}$`), { timeout: 60_000 }), p.getByRole("button", { name: "Create family" }).click()]);
-    await expect(p.locator('[data-testid="family-preview"] tbody tr[data-status="new"]').count()).resolves.toBe(4);
+    expect(await statuses(p)).toEqual(["new", "new", "new", "new"]);
 
     // A rule that profiles 3·D deep on the light router: the engine warns, those cells are blocked.
     await saveRules(p, DEEP, "Deep profiles on light routers.", 2);
-    await expect(p.locator('tr[data-status="warned"]').count()).resolves.toBe(2);
+    expect(await statuses(p)).toEqual(["new", "new", "warned", "warned"]);
     await expect(p.locator('tr[data-status="warned"] [data-warning="deflection-above-limit"]').count()).resolves.toBeGreaterThan(0);
     await screenshot(p, "family-preview-warned");
 
     // Fixed by changing the rule: no warned cell is left.
     await saveRules(p, FIXED, "Profiles 0.5·D deep on light routers.", 3);
-    await expect(p.locator('tr[data-status="warned"]').count()).resolves.toBe(0);
+    expect(await statuses(p)).toEqual(["new", "new", "new", "new"]);
     const first = await generateAndWait(p);
     await expect(p.locator('[data-count="created"] dd').textContent()).resolves.toBe("4");
     await screenshot(p, "family-batch-generated");
@@ -111,7 +118,7 @@ describe("sheet families", () => {
     // New rules, a second batch: every sheet gets a new version; published as a batch, one mail lists both sheets.
     const started = Date.now();
     await p.goto(`/${VENDOR}/drafting/families/${slug}`);
-    await saveRules(p, HIGHER_CHIP, "Slots with a larger chip.", 4);
+    await saveRules(p, SLOWER, "Lower in the cutting-speed window.", 4);
     const second = await generateAndWait(p);
     await expect(p.locator('[data-count="new-version"] dd').textContent()).resolves.toBe("4");
     await reviewAndPublish(e2.page, second, 4);
