@@ -1,6 +1,7 @@
 import type { Knex } from "knex";
 
 import { seedBench } from "./seed-bench";
+import { seedFamilies } from "./seed-families";
 import { seedField } from "./seed-field";
 import { seedFoundation } from "./seed-foundation";
 import { seedSheets } from "./seed-sheets";
@@ -16,6 +17,7 @@ export const TENANT_TABLES = [
   "search_words", "search_documents",
   "inbound_mail_log", "problem_reports", "reply_snippets", "desk_views", "ticket_attachments", "ticket_messages", "ticket_sheet_links", "tickets",
   "cutter_images",
+  "family_batch_items", "family_batches", "family_rule_sets", "families",
   "change_alerts_sent", "mail_preferences", "outcomes", "setups", "machines",
   "sheet_versions", "sheets", "machine_classes", "materials", "cutters",
   "api_tokens", "audit_log", "invitations", "members", "verification_tokens", "rate_limit_buckets", "users", "vendors",
@@ -29,6 +31,7 @@ export async function runSeeds(knex: Knex, { reset }: { reset: boolean }) {
   await seedSupport(knex, ids);
   await seedField(knex, ids);
   await seedWebhooks(knex, ids);
+  await seedFamilies(knex, ids);
   await seedSearchIndex(knex);
   await refreshFieldRollups(knex);
   return ids;

@@ -3,6 +3,7 @@ import Link from "next/link";
 const LINKS = [
   ["", "Overview"],
   ["/sheets", "Sheets"],
+  ["/families", "Families"],
   ["/cutters", "Cutters"],
   ["/materials", "Materials"],
   ["/machine-classes", "Machine classes"],

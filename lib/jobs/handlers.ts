@@ -1,6 +1,10 @@
 import "server-only";
 
 import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/field/digest-job";
+import { generateBatchJob } from "@/lib/families/generate-batch";
+import { FAMILY_ALERTS_QUEUE } from "@/lib/families/publish-batch";
+import { sendBatchAlertsJob } from "@/lib/families/send-batch-alerts";
+import { FAMILY_GENERATE_QUEUE } from "@/lib/families/start-generation";
 import { FIELD_REFRESH_QUEUE, refreshFieldRollupsJob } from "@/lib/field/refresh-rollups";
 import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
 import { SHEET_EVENTS_QUEUE } from "@/lib/events/sheet-events";
@@ -29,6 +33,8 @@ export const JOB_HANDLERS: Record<string, JobHandler> = {
   [DEAD_LETTER_CHECK_QUEUE]: deadLetterCheckJob,
   [WEBHOOK_DELIVERY_QUEUE]: deliverWebhookJob,
   [WEBHOOK_PRUNE_QUEUE]: pruneWebhookDeliveriesJob,
+  [FAMILY_GENERATE_QUEUE]: generateBatchJob,
+  [FAMILY_ALERTS_QUEUE]: sendBatchAlertsJob,
 };
 
 // Queues that also run on a clock (cron, UTC).

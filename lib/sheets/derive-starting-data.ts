@@ -100,7 +100,7 @@ const clamp = (value: number, lo: number, hi: number) => Math.min(hi, Math.max(l
 const mm = (value: number) => `${Number(value.toFixed(2))} mm`;
 
 /** The band's usable part after margins, and the pocketing chip inside it; `hi < lo` for a cutter too small for the band. */
-export function chipTargets(material: DeriveMaterial, diameterMm: number, chipLoadScale = 1) {
+export function chipTargets(material: DeriveMaterial, diameterMm: number, chipLoadScale = 1, bandPosition = BAND_POSITION) {
   const typical = CHIP_BAND_PCT_BY_GROUP[material.materialGroup as keyof typeof CHIP_BAND_PCT_BY_GROUP] ?? { min: 0.5, max: 1.5 };
   const pct = { min: (material.chipLoadMinPctD ?? typical.min) / 100, max: (material.chipLoadMaxPctD ?? typical.max) / 100 };
   const band = chipLoadBand({ minChipLoadMm: material.minChipLoadMm, chipLoadPctOfD: pct }, diameterMm);
@@ -111,7 +111,7 @@ export function chipTargets(material: DeriveMaterial, diameterMm: number, chipLo
   const lo = Math.min(band.minMm * FLOOR_MARGIN, middle);
   const hi = Math.max(band.maxMm * CEILING_MARGIN, middle);
   // The pocketing chip leaves room for the slot at the slotting factor above the floor.
-  const pocket = clamp(Math.max(lo + BAND_POSITION * (hi - lo), lo / SLOTTING_FACTOR) * chipLoadScale, lo, hi);
+  const pocket = clamp(Math.max(lo + bandPosition * (hi - lo), lo / SLOTTING_FACTOR) * chipLoadScale, lo, hi);
   return { band, lo, hi, pocket, slot: Math.max(lo, pocket * SLOTTING_FACTOR) };
 }
 
@@ -158,13 +158,19 @@ export type DeriveOptions = {
   chipLoadScale?: number;
   depthScale?: number;
   label?: string;
+  /** An engineer's rule (a sheet family's): depths as multiples of D taken as written, for the engine to judge. */
+  rule?: DeriveRule;
 };
 
-export function deriveOperation({ cutter, material, machine, kind, vcFraction, chipLoadScale = 1, depthScale = 1, label }: DeriveOptions): DerivedOperation {
+/** What a family rule may set; absent fields keep the defaults above. */
+export type DeriveRule = { chipLoadPosition?: number; apPerD?: number; aePerD?: number; entry?: DerivedOperation["entry"]; rampAngleDeg?: number };
+
+export function deriveOperation({ cutter, material, machine, kind, vcFraction, chipLoadScale = 1, depthScale = 1, label, rule = {} }: DeriveOptions): DerivedOperation {
   const D = cutter.diameterMm;
   const z = cutter.flutes;
   const ball = cutter.cornerForm === "ball";
-  const depth = DEPTHS[kind] ?? DEPTHS.profile!;
+  const base = DEPTHS[kind] ?? DEPTHS.profile!;
+  const depth = { ...base, ae: base.ae === "full" ? base.ae : (rule.aePerD ?? base.ae), entry: rule.entry ?? base.entry, angle: rule.rampAngleDeg ?? base.angle };
   const vcLo = material.vcMinMpm * 1.05;
   const vcHi = material.vcMaxMpm * 0.95;
   const vfCap = FEED_SHARE_OF_MAX * machine.maxFeedMmMin;
@@ -172,12 +178,13 @@ export function deriveOperation({ cutter, material, machine, kind, vcFraction, c
 
   // Depths. A ball nose cuts at De < D when shallow: go deep enough that vc(De) reaches the window at top speed.
   const metalFactor = METAL.has(material.materialGroup) ? 0.5 : 1;
-  let ap = Math.max(0.1, roundTo(D * (ball ? depth.ballAp : depth.ap) * metalFactor * machine.rigidity * depthScale, 0.1));
+  const ruleAp = rule.apPerD === undefined ? null : Math.max(0.1, roundTo(D * rule.apPerD, 0.1));
+  let ap = ruleAp ?? Math.max(0.1, roundTo(D * (ball ? depth.ballAp : depth.ap) * metalFactor * machine.rigidity * depthScale, 0.1));
   if (ball) ap = Math.max(ap, ceilTo(apForEffectiveDiameter(D, (1000 * vcLo) / (Math.PI * machine.rpmMax)), 0.1));
-  if (cutter.fluteLengthMm) ap = Math.min(ap, floorTo(cutter.fluteLengthMm * 0.9, 0.1));
+  if (cutter.fluteLengthMm && ruleAp === null) ap = Math.min(ap, floorTo(cutter.fluteLengthMm * 0.9, 0.1));
   if (ball) ap = Math.min(ap, D / 2);
   const slot = depth.ae === "full";
-  const targets = chipTargets(material, D, chipLoadScale);
+  const targets = chipTargets(material, D, chipLoadScale, rule.chipLoadPosition);
 
   // The cut at one ap (a ball nose's De, and so its n and chip, depend on ap).
   const cutAt = (apMm: number) => {
@@ -213,7 +220,8 @@ export function deriveOperation({ cutter, material, machine, kind, vcFraction, c
   const fz = chipLoad({ feedMmMin: vf, rpm, flutes: z });
   ap = cut.ap;
 
-  ap = limitDepth({ cutter, material, machine, ap, aeMm, fz, rpm, vf });
+  // A rule's depth stands as written: the engine's check of the whole sheet says whether it is too much.
+  if (ruleAp === null) ap = limitDepth({ cutter, material, machine, ap, aeMm, fz, rpm, vf });
 
   // Plunge: fn whose thrust on the reference machine's Z is 80 % of what it can push; never faster than vf.
   const kc = thrustKc(material);

@@ -50,6 +50,8 @@ const VALUE_SOURCES: Record<string, ValueSource> = {
   "field/[slug]": firstId("sheets", "slug"),
   "field/[list]": async () => "needs-attention",
   "webhooks/[webhook]": firstId("webhooks"),
+  "families/[family]": firstId("families", "slug"),
+  "batches/[batch]": async () => "1",
 };
 
 describe("cross-vendor probe", () => {
