@@ -5,6 +5,8 @@ import { db } from "@/lib/db/knex";
 import type { SheetEvent } from "@/lib/events/sheet-events";
 import { appUrl } from "@/lib/http/app-url";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
+import { wantsMailSql } from "@/lib/mail-preferences/mail-preferences";
+import { mailFooter, withFooter } from "@/lib/mail-preferences/preferences-link";
 import { type EntryCapability, isMachiningInputError, type UnitSystem } from "@/lib/machining";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 
@@ -68,11 +70,8 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
       this.on("mb.user_id", "st.user_id").andOn("mb.vendor_id", "st.vendor_id");
     })
     .join("users as u", "u.id", "st.user_id")
-    .leftJoin("mail_preferences as mp", function () {
-      this.on("mp.user_id", "st.user_id").andOn("mp.vendor_id", "st.vendor_id");
-    })
     .where({ "st.vendor_id": vendorId, "st.sheet_version_id": supersededVersionId })
-    .andWhere((q) => q.whereNull("mp.change_alerts").orWhere("mp.change_alerts", true))
+    .andWhere(wantsMailSql("change_alerts", "st.user_id", "st.vendor_id"))
     .orderBy(["st.user_id", "st.created_at"])
     .select("st.id", "st.user_id", "u.email", "st.name", "st.operation_index", "st.overrides", "st.units", "st.entry_capability", "m.name as machine_name", "m.preset", "m.rpm_min", "m.rpm_max", "m.power_kw", "m.max_feed_mm_min", "m.rigidity", "m.z_thrust_n", "m.spindle_kind", "m.rated_rpm", "m.stickout_mm", "m.updated_at");
   if (!rows.length) return 0;
@@ -83,7 +82,7 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
   let sent = 0;
   for (const [userId, setups] of byUser) {
     const units = setups[0].units;
-    const mail = renderChangeAlert({
+    const mail = withFooter(renderChangeAlert({
       vendorName: vendor.name,
       sheetTitle: newCtx.title,
       oldNumber: oldCtx.versionNumber,
@@ -94,7 +93,7 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
       units,
       sheetDiff,
       setups: setups.map((s) => reAdapt(oldCtx, newCtx, s, appUrl(`/${vendor.slug}/bench/setups/${s.id}`))),
-    });
+    }), mailFooter(vendor.slug, vendor.name, { vendorId, userId }));
     await db.transaction(async (trx) => {
       const inserted = await trx("change_alerts_sent")
         .insert({ vendor_id: vendorId, version_id: versionId, superseded_version_id: supersededVersionId, user_id: userId, setup_count: setups.length })

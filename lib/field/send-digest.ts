@@ -9,6 +9,7 @@ import { appUrl } from "@/lib/http/app-url";
 import { enqueue } from "@/lib/jobs/enqueue";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { createStopToken } from "@/lib/mail/stop-token";
+import { mailFooter, withFooter } from "@/lib/mail-preferences/preferences-link";
 import { listVendors } from "@/lib/vendors/get-vendor";
 import type { Vendor } from "@/lib/vendors/vendor-schema";
 
@@ -69,12 +70,9 @@ const FIELD_ROLES = PERMISSIONS["field.read"] as readonly string[];
 async function recipients(vendorId: string, userId?: string) {
   const q = db("members as m")
     .join("users as u", "u.id", "m.user_id")
-    .leftJoin("mail_preferences as mp", function () {
-      this.on("mp.user_id", "m.user_id").andOn("mp.vendor_id", "m.vendor_id");
-    })
     .where("m.vendor_id", vendorId)
     .whereIn("m.role", FIELD_ROLES)
-    .select("u.id", "u.email", db.raw("coalesce(mp.weekly_digest, true) as wanted"));
+    .select("u.id", "u.email", db.raw("not exists (select 1 from mail_preferences p where p.vendor_id = m.vendor_id and p.user_id = m.user_id and p.kind = 'weekly_digest' and not p.enabled) as wanted"));
   if (userId) q.where("u.id", userId);
   return q;
 }
@@ -91,7 +89,7 @@ export async function sendVendorDigests(vendor: Vendor, now = new Date()): Promi
   let sent = 0;
   for (const person of people) {
     const stopUrl = digestStopUrl(vendor, person.id);
-    const mail = renderDigest({ ...content, stopUrl });
+    const mail = withFooter(renderDigest({ ...content, stopUrl }), mailFooter(vendor.slug, vendor.name, { vendorId: vendor.id, userId: person.id }));
     await db.transaction(async (trx) => {
       const inserted = await trx("field_digests_sent").insert({ vendor_id: vendor.id, user_id: person.id, week_start: week }).onConflict(["vendor_id", "user_id", "week_start"]).ignore().returning("user_id");
       if (!inserted.length) return;
@@ -108,7 +106,7 @@ export async function sendDigestOnRequest(vendor: Vendor, userId: string, now = 
   const [person] = await recipients(vendor.id, userId);
   if (!person) return false;
   const stopUrl = digestStopUrl(vendor, person.id);
-  const mail = renderDigest({ ...(await buildDigestContent(vendor, weekStartOf(now))), stopUrl });
+  const mail = withFooter(renderDigest({ ...(await buildDigestContent(vendor, weekStartOf(now))), stopUrl }), mailFooter(vendor.slug, vendor.name, { vendorId: vendor.id, userId: person.id }));
   await enqueueMail(db, { to: person.email, ...mail, headers: { "List-Unsubscribe": `<${stopUrl}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" } });
   return true;
 }

@@ -9,7 +9,7 @@ import { setupActionSchema } from "@/content-schema/setup-fields";
 import { vendorAction } from "@/lib/actions/vendor-action";
 import { createSetup } from "@/lib/bench/create-setup";
 import { createMachine, deleteMachine, updateMachine } from "@/lib/bench/machines";
-import { setChangeAlerts } from "@/lib/bench/mail-preferences";
+import { setMailPreference } from "@/lib/mail-preferences/mail-preferences";
 
 export const saveMachineAction = vendorAction({ permission: "bench.use", schema: machineFormSchema }, async (input, { vendor, user }) => {
   const { vendor: _slug, id, ...fields } = input;
@@ -35,7 +35,7 @@ export const saveSetupAction = vendorAction({ permission: "bench.use", schema: s
 const alertsSchema = z.object({ vendor: z.string().min(1), enabled: z.enum(["on", "off"]) });
 
 export const setChangeAlertsAction = vendorAction({ permission: "bench.use", schema: alertsSchema }, async (input, { vendor, user }) => {
-  await setChangeAlerts({ vendorId: vendor.id, userId: user.id, enabled: input.enabled === "on" });
+  await setMailPreference({ vendorId: vendor.id, userId: user.id, kind: "change_alerts", enabled: input.enabled === "on" });
   revalidatePath(`/${vendor.slug}/bench`);
   return { ok: true, message: input.enabled === "on" ? "Change alerts are on." : "Change alerts are off." };
 });

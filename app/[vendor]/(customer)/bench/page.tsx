@@ -8,7 +8,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { listSetups } from "@/lib/bench/list-setups";
 import { listMachines } from "@/lib/bench/machines";
-import { wantsChangeAlerts } from "@/lib/bench/mail-preferences";
+import { wantsMail } from "@/lib/mail-preferences/mail-preferences";
 
 export const metadata = { title: "Bench" };
 
@@ -16,7 +16,7 @@ export default async function BenchPage({ params }: { params: Promise<{ vendor: 
   const { vendor: slug } = await params;
   const { vendor, user } = await requirePageAccess(slug, "bench.use", `/${slug}/bench`);
   const owner = { vendorId: vendor.id, userId: user!.id };
-  const [machines, setups, alerts] = await Promise.all([listMachines(owner), listSetups(owner), wantsChangeAlerts(owner)]);
+  const [machines, setups, alerts] = await Promise.all([listMachines(owner), listSetups(owner), wantsMail(undefined, { ...owner, kind: "change_alerts" })]);
   const register = (
     <Link href={`/${vendor.slug}/bench/machines/new`} className="inline-flex min-h-11 items-center rounded bg-accent px-4 font-medium text-accent-ink">
       Register a machine

@@ -4,7 +4,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 
 import { vendorAction } from "@/lib/actions/vendor-action";
-import { setWeeklyDigest } from "@/lib/bench/mail-preferences";
+import { setMailPreference } from "@/lib/mail-preferences/mail-preferences";
 import { requestDigest } from "@/lib/field/send-digest";
 import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 
@@ -19,7 +19,7 @@ export const sendDigestNowAction = vendorAction({ permission: "field.read", sche
 const digestSchema = z.object({ vendor: z.string().min(1), enabled: z.enum(["on", "off"]) });
 
 export const setWeeklyDigestAction = vendorAction({ permission: "field.read", schema: digestSchema }, async (input, { vendor, user }) => {
-  await setWeeklyDigest({ vendorId: vendor.id, userId: user.id, enabled: input.enabled === "on" });
+  await setMailPreference({ vendorId: vendor.id, userId: user.id, kind: "weekly_digest", enabled: input.enabled === "on" });
   revalidatePath(`/${vendor.slug}/drafting/field`);
   return { ok: true, message: input.enabled === "on" ? "The weekly digest is on." : "The weekly digest is off." };
 });

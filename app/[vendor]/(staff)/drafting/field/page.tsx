@@ -5,7 +5,7 @@ import { FieldSection } from "@/components/field/field-section";
 import { NeedsAttentionTable } from "@/components/field/needs-attention-table";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
-import { wantsWeeklyDigest } from "@/lib/bench/mail-preferences";
+import { wantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { confidenceOf, percent } from "@/lib/field/confidence";
 import { loadCoverageGaps } from "@/lib/field/coverage";
 import { listCustomerChanges } from "@/lib/field/customer-changes";
@@ -31,7 +31,7 @@ export default async function FieldResultsPage({ params }: { params: Promise<{ v
     listCustomerChanges({ vendorId: vendor.id }),
     loadCoverageGaps({ vendorId: vendor.id }),
     lastFieldRefresh(),
-    wantsWeeklyDigest({ vendorId: vendor.id, userId: user!.id }),
+    wantsMail(undefined, { vendorId: vendor.id, userId: user!.id, kind: "weekly_digest" }),
   ]);
   const csv = (list: string) => `/api/v1/vendors/${slug}/field/${list}`;
   const tiles = [
