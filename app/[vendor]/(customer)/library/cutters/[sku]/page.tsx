@@ -27,7 +27,18 @@ export default async function CutterPage({ params }: Props) {
   const [sheets, units] = await Promise.all([listPublishedSheets({ vendorId: vendor.id, filters: { cutter: cutter.sku } }), readUnits()]);
   return (
     <>
-      <PageHeader title={`${cutter.sku}: ${cutter.name}`} lead="Published recipe sheets for this cutter." actions={<UnitsToggle units={units} />} />
+      <PageHeader
+        title={`${cutter.sku}: ${cutter.name}`}
+        lead="Published recipe sheets for this cutter."
+        actions={
+          <>
+            <a href={`/${vendor.slug}/library/cutters/${encodeURIComponent(cutter.sku)}/pdf`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500 print:hidden">
+              Cutter data sheet (PDF)
+            </a>
+            <UnitsToggle units={units} />
+          </>
+        }
+      />
       <div className="mb-6 max-w-xl">
         <CutterCard cutter={cutter} units={units} vendorSlug={vendor.slug} />
         <div className="mt-3 print:block">
