@@ -56,14 +56,14 @@ export function CutterSpecs({ cutter }: { cutter: DataSheetData["cutter"] }) {
 }
 
 const COLUMNS: { key: keyof DataSheetOperation; label: string; width: string }[] = [
-  { key: "label", label: "Operation", width: "16%" },
-  { key: "n", label: "n", width: "10%" },
+  { key: "label", label: "Operation", width: "20%" },
+  { key: "n", label: "n", width: "9%" },
   { key: "vf", label: "vf", width: "13%" },
   { key: "fz", label: "fz", width: "15%" },
-  { key: "ap", label: "ap", width: "10%" },
+  { key: "ap", label: "ap", width: "9%" },
   { key: "ae", label: "ae", width: "13%" },
-  { key: "plunge", label: "Plunge feed", width: "12%" },
-  { key: "entry", label: "Entry", width: "11%" },
+  { key: "plunge", label: "Plunge feed", width: "11%" },
+  { key: "entry", label: "Entry", width: "10%" },
 ];
 
 function Cell({ value }: { value: string | BothUnits | null }) {

@@ -44,7 +44,7 @@ describe("my cutters", () => {
     await page.waitForLoadState("networkidle").catch(() => undefined);
     await page.getByLabel("Cutter SKU").fill(typed.sku.toLowerCase());
     await page.getByRole("button", { name: "Add to my cutters" }).click();
-    await page.getByText(`${typed.sku} is in your cutters now.`).waitFor({ timeout: 30_000 });
+    await page.getByRole("status").filter({ hasText: `${typed.sku} is in your cutters now.` }).waitFor({ timeout: 30_000 });
     await page.reload();
     for (const cutter of [scanned, typed]) {
       const card = page.locator(`[data-my-cutter="${cutter.sku}"]`);
@@ -64,7 +64,7 @@ describe("my cutters", () => {
     await page.goto("/northbeck/bench");
     await page.waitForLoadState("networkidle").catch(() => undefined);
     await page.getByRole("form", { name: `Remove ${typed.sku} from my cutters` }).getByRole("button", { name: "Remove" }).click();
-    await page.getByText("Removed from your cutters.").waitFor({ timeout: 30_000 });
+    await page.locator(`[data-my-cutter="${typed.sku}"]`).waitFor({ state: "detached", timeout: 30_000 });
     expect(await db("customer_cutters").where({ vendor_id: vendor.id, user_id: user.id }).pluck("cutter_id")).toEqual([scanned.id]);
   });
 });
