@@ -18,7 +18,7 @@ export const TENANT_TABLES = [
   "inbound_mail_log", "problem_reports", "reply_snippets", "desk_views", "ticket_attachments", "ticket_messages", "ticket_sheet_links", "tickets",
   "cutter_images",
   "family_batch_items", "family_batches", "family_rule_sets", "families",
-  "change_alerts_sent", "mail_preferences", "outcomes", "setups", "machines",
+  "change_alerts_sent", "mail_preferences", "customer_cutters", "outcomes", "setups", "machines",
   "sheet_versions", "sheets", "machine_classes", "materials", "cutters",
   "api_tokens", "audit_log", "invitations", "members", "verification_tokens", "rate_limit_buckets", "users", "vendors",
 ];

@@ -8,9 +8,9 @@ import { safeDecode } from "@/lib/http/safe-decode";
 
 export const loadLibraryCutter = cache(async (vendorSlug: string, sku: string) => {
   // The access check runs here, so the page checks it as well as the layout (a page segment can render alone).
-  const { vendor } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/cutters/${sku}`);
+  const { vendor, user, member } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/cutters/${sku}`);
   const decoded = safeDecode(sku);
   if (decoded === null) return null;
   const cutter = await getCutterBySku({ vendorId: vendor.id, sku: decoded });
-  return cutter ? { vendor, cutter } : null;
+  return cutter ? { vendor, cutter, user, member } : null;
 });

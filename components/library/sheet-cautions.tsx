@@ -1,7 +1,7 @@
 import { Caution } from "@/components/mdx";
 import type { SheetCaution } from "@/content-schema/sheet-front-matter";
 
-import { STANDARD_CAUTIONS } from "./standard-cautions";
+import { STANDARD_CAUTIONS } from "@/lib/library/standard-cautions";
 
 /** The sheet's own cautions first, then the standard ones every sheet carries. */
 export function SheetCautions({ cautions }: { cautions: SheetCaution[] }) {

@@ -42,6 +42,11 @@ export function SheetView({ data, units, vendorSlug, vendorName, renderAdaptPane
           <p className="mt-1 max-w-3xl text-stone-700">{frontMatter.summary}</p>
         </div>
         <div className="flex flex-wrap items-end gap-3">
+          {version.state === "published" || version.state === "superseded" ? (
+            <a href={`${href(version.number)}/pdf`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500 print:hidden">
+              Data sheet (PDF)
+            </a>
+          ) : null}
           {vendorName ? <AskAboutSheet vendorSlug={vendorSlug} vendorName={vendorName} sheetVersionId={version.id} /> : null}
           <UnitsToggle units={units} />
         </div>

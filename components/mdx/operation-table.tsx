@@ -1,6 +1,6 @@
 import { operationTablePropsSchema } from "@/content-schema/mdx-components";
 
-import { operationCells } from "./operation-cells";
+import { operationCells } from "@/lib/library/operation-cells";
 import type { SheetRenderContext } from "./sheet-render-context";
 
 export type OperationTableMdxProps = { only?: string };

@@ -6,6 +6,7 @@ import { readStoredOperations } from "@/lib/adapt/read-front-matter";
 import { readaptOperation } from "@/lib/adapt/readapt-operation";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
+import { wantsMailSql } from "@/lib/mail-preferences/mail-preferences";
 import type { EntryCapability, UnitSystem } from "@/lib/machining";
 import { hasFrontMatter } from "@/lib/sheets/version-rows";
 
@@ -33,8 +34,8 @@ export const frontMatterOf = async (vendorId: string, versionId: string) => {
   return { frontMatter, changeNote: row.change_note };
 };
 
-/** Setups saved from a version, of customers who still take change alerts, ordered by person. */
-export async function listAlertSetups({ vendorId, supersededVersionId }: { vendorId: string; supersededVersionId: string }): Promise<SetupRow[]> {
+/** Setups saved from a version, of customers who still take this kind of mail, ordered by person. */
+export async function listAlertSetups({ vendorId, supersededVersionId, kind = "change_alerts" }: { vendorId: string; supersededVersionId: string; kind?: "change_alerts" | "batch_changes" }): Promise<SetupRow[]> {
   return db("setups as st")
     .join("machines as m", function () {
       this.on("m.id", "st.machine_id").andOn("m.vendor_id", "st.vendor_id");
@@ -43,11 +44,8 @@ export async function listAlertSetups({ vendorId, supersededVersionId }: { vendo
       this.on("mb.user_id", "st.user_id").andOn("mb.vendor_id", "st.vendor_id");
     })
     .join("users as u", "u.id", "st.user_id")
-    .leftJoin("mail_preferences as mp", function () {
-      this.on("mp.user_id", "st.user_id").andOn("mp.vendor_id", "st.vendor_id");
-    })
     .where({ "st.vendor_id": vendorId, "st.sheet_version_id": supersededVersionId })
-    .andWhere((q) => q.whereNull("mp.change_alerts").orWhere("mp.change_alerts", true))
+    .andWhere(wantsMailSql(kind, "st.user_id", "st.vendor_id"))
     .orderBy(["st.user_id", "st.created_at"])
     .select("st.id", "st.user_id", "u.email", "st.name", "st.operation_index", "st.overrides", "st.units", "st.entry_capability", "m.name as machine_name", "m.preset", "m.rpm_min", "m.rpm_max", "m.power_kw", "m.max_feed_mm_min", "m.rigidity", "m.z_thrust_n", "m.spindle_kind", "m.rated_rpm", "m.stickout_mm", "m.updated_at");
 }

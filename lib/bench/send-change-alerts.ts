@@ -4,6 +4,7 @@ import { db } from "@/lib/db/knex";
 import type { SheetEvent } from "@/lib/events/sheet-events";
 import { appUrl } from "@/lib/http/app-url";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
+import { mailFooter, withFooter } from "@/lib/mail-preferences/preferences-link";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 
 import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "./alert-setups";
@@ -34,7 +35,7 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
   let sent = 0;
   for (const [userId, setups] of byUser) {
     const units = setups[0].units;
-    const mail = renderChangeAlert({
+    const mail = withFooter(renderChangeAlert({
       vendorName: vendor.name,
       sheetTitle: newCtx.title,
       oldNumber: oldCtx.versionNumber,
@@ -45,7 +46,7 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
       units,
       sheetDiff,
       setups: setups.map((s) => reAdapt(oldCtx, newCtx, s, appUrl(`/${vendor.slug}/bench/setups/${s.id}`))),
-    });
+    }), mailFooter(vendor.slug, vendor.name, { vendorId, userId }));
     await db.transaction(async (trx) => {
       const inserted = await trx("change_alerts_sent")
         .insert({ vendor_id: vendorId, version_id: versionId, superseded_version_id: supersededVersionId, user_id: userId, setup_count: setups.length })

@@ -1,36 +1,20 @@
 import "server-only";
 
-import { existsSync } from "node:fs";
+import { Document, Image, Page, renderToBuffer, StyleSheet, Text, View } from "@react-pdf/renderer";
 
-import { Document, Font, Image, Page, renderToBuffer, StyleSheet, Text, View } from "@react-pdf/renderer";
-import QRCode from "qrcode";
+import { pdfBase, pdfText as plain, qrDataUrl } from "@/lib/pdf/pdf-kit";
 
 import type { SetupSheetData } from "./setup-sheet-data";
 
-// DejaVu covers Ø, ≈, ±, → and the no-break space; without it the built-in Helvetica is used and the
-// few symbols outside Latin-1 are spelt out.
-const DEJAVU = "/usr/share/fonts/truetype/dejavu/DejaVuSans.ttf";
-const DEJAVU_BOLD = "/usr/share/fonts/truetype/dejavu/DejaVuSans-Bold.ttf";
-const hasDejaVu = existsSync(DEJAVU) && existsSync(DEJAVU_BOLD);
-if (hasDejaVu) Font.register({ family: "DejaVu", fonts: [{ src: DEJAVU }, { src: DEJAVU_BOLD, fontWeight: "bold" }] });
-Font.registerHyphenationCallback((word) => [word]);
-const family = hasDejaVu ? "DejaVu" : "Helvetica";
-const plain = (text: string) => (hasDejaVu ? text : text.replace(/→/g, "->").replace(/[\u00a0\u202f]/g, " ").replace(/·/g, "x").replace(/³/g, "3"));
-
-const s = StyleSheet.create({
-  page: { padding: 32, fontSize: 9, fontFamily: family, color: "#1c1917" },
-  header: { flexDirection: "row", justifyContent: "space-between", borderBottomWidth: 2, borderBottomColor: "#292524", paddingBottom: 8, marginBottom: 10 },
-  h1: { fontSize: 15, fontWeight: "bold" },
-  h2: { fontSize: 10, fontWeight: "bold", marginTop: 10, marginBottom: 4 },
-  muted: { color: "#57534e" },
-  row: { flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: "#d6d3d1", paddingVertical: 3 },
-  th: { fontWeight: "bold" },
-  c1: { width: "40%" },
-  c2: { width: "30%", textAlign: "right" },
-  c3: { width: "30%", textAlign: "right", fontWeight: "bold" },
-  li: { marginBottom: 3 },
-  qr: { width: 72, height: 72 },
-});
+const s = {
+  ...pdfBase,
+  ...StyleSheet.create({
+    header: { flexDirection: "row", justifyContent: "space-between", borderBottomWidth: 2, borderBottomColor: "#292524", paddingBottom: 8, marginBottom: 10 },
+    c1: { width: "40%" },
+    c2: { width: "30%", textAlign: "right" },
+    c3: { width: "30%", textAlign: "right", fontWeight: "bold" },
+  }),
+};
 
 function SetupSheet({ data, qr, url, vendorName }: { data: SetupSheetData; qr: string; url: string; vendorName: string }) {
   const t = plain;
@@ -83,6 +67,6 @@ function SetupSheet({ data, qr, url, vendorName }: { data: SetupSheetData; qr: s
 
 /** A one-page PDF for the machine: numbers in the setup's units, steps, cautions, QR code to the sheet version. */
 export async function renderSetupSheetPdf({ data, versionUrl, vendorName }: { data: SetupSheetData; versionUrl: string; vendorName: string }): Promise<Buffer> {
-  const qr = await QRCode.toDataURL(versionUrl, { margin: 1, width: 240, errorCorrectionLevel: "M" });
+  const qr = await qrDataUrl(versionUrl);
   return renderToBuffer(<SetupSheet data={data} qr={qr} url={versionUrl} vendorName={vendorName} />);
 }

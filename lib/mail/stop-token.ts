@@ -6,7 +6,8 @@ import { isUuid } from "@/lib/ids/is-uuid";
 
 // A stop link works without signing in, so it carries its own proof: an HMAC over purpose, vendor and user.
 // The purpose is part of the signature: a change-alert link cannot stop the weekly digest, or the reverse.
-export type StopPurpose = "change-alerts" | "weekly-digest";
+// "mail-preferences" opens the preferences page of the person the mail went to.
+export type StopPurpose = "change-alerts" | "weekly-digest" | "mail-preferences";
 
 function secret(): string {
   const value = process.env.NEXTAUTH_SECRET ?? (process.env.NODE_ENV === "production" ? undefined : "swarfbook-dev-alert-secret");

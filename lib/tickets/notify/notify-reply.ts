@@ -5,6 +5,8 @@ import type { Knex } from "knex";
 import { appUrl } from "@/lib/http/app-url";
 import { replyAddress } from "@/lib/inbound-mail/reply-address";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
+import { filterWantsMail, wantsMail } from "@/lib/mail-preferences/mail-preferences";
+import { mailFooter, withFooter } from "@/lib/mail-preferences/preferences-link";
 
 import { renderReplyMail } from "./reply-mail";
 import { loadTicketMailContext, supportTeam } from "./ticket-mail-context";
@@ -14,7 +16,7 @@ type Options = { vendorId: string; ticketId: string; messageId: string; authorNa
 /** A staff reply (never a note) goes to the customer, with a signed Reply-To for answering by mail. */
 export async function notifyCustomerOfReply(trx: Knex.Transaction, { vendorId, ticketId, messageId, authorName, body, hasCard }: Options): Promise<void> {
   const ctx = await loadTicketMailContext(trx, vendorId, ticketId);
-  if (!ctx) return;
+  if (!ctx || !(await wantsMail(trx, { vendorId, userId: ctx.customer.id, kind: "ticket_notifications" }))) return;
   const link = appUrl(`/${ctx.vendorSlug}/support/tickets/${ticketId}`);
   const note = hasCard ? "The reply includes a sheet adapted to your machine: open the ticket to see it." : undefined;
   await enqueueMail(
@@ -22,7 +24,7 @@ export async function notifyCustomerOfReply(trx: Knex.Transaction, { vendorId, t
     {
       to: ctx.customer.email,
       subject: `[${ctx.vendorName} #${ctx.number}] ${ctx.subject}`,
-      ...renderReplyMail({ intro: `${authorName} replied to your ticket #${ctx.number}:`, body, note, linkLabel: "See the whole thread", link }),
+      ...withFooter(renderReplyMail({ intro: `${authorName} replied to your ticket #${ctx.number}:`, body, note, linkLabel: "See the whole thread", link }), mailFooter(ctx.vendorSlug, ctx.vendorName, { vendorId, userId: ctx.customer.id })),
       replyTo: replyAddress({ ticketId, userId: ctx.customer.id }),
     },
     { key: `message:${messageId}` },
@@ -34,14 +36,14 @@ export async function notifyStaffOfCustomerReply(trx: Knex.Transaction, { vendor
   const ctx = await loadTicketMailContext(trx, vendorId, ticketId);
   if (!ctx) return;
   const link = appUrl(`/${ctx.vendorSlug}/desk/tickets/${ticketId}`);
-  const recipients = ctx.assignee ? [ctx.assignee] : await supportTeam(trx, vendorId);
+  const recipients = await filterWantsMail(trx, { vendorId, kind: "ticket_notifications", people: ctx.assignee ? [ctx.assignee] : await supportTeam(trx, vendorId) });
   for (const person of recipients) {
     await enqueueMail(
       trx,
       {
         to: person.email,
         subject: `[${ctx.vendorName} #${ctx.number}] Customer reply: ${ctx.subject}`,
-        ...renderReplyMail({ intro: `${authorName} wrote on ticket #${ctx.number}:`, body, linkLabel: "Open it on the Desk", link }),
+        ...withFooter(renderReplyMail({ intro: `${authorName} wrote on ticket #${ctx.number}:`, body, linkLabel: "Open it on the Desk", link }), mailFooter(ctx.vendorSlug, ctx.vendorName, { vendorId, userId: person.id })),
         replyTo: replyAddress({ ticketId, userId: person.id }),
       },
       { key: `message:${messageId}` },

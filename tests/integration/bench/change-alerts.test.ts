@@ -5,7 +5,7 @@ import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { createAlertStopToken, readAlertStopToken } from "@/lib/bench/alert-token";
 import { createSetup } from "@/lib/bench/create-setup";
 import { createMachine } from "@/lib/bench/machines";
-import { setChangeAlerts } from "@/lib/mail/mail-preferences";
+import { setMailPreference } from "@/lib/mail-preferences/mail-preferences";
 import { sendChangeAlerts } from "@/lib/bench/send-change-alerts";
 import { db } from "@/lib/db/knex";
 import { getBoss } from "@/lib/jobs/boss";
@@ -61,7 +61,7 @@ describe("change alerts", () => {
     expect(readAlertStopToken(`${token.slice(0, -2)}xx`)).toBeNull();
     const who = readAlertStopToken(token);
     expect(who).toEqual({ vendorId: vendor.id, userId: user.id });
-    await setChangeAlerts({ ...who!, enabled: false });
+    await setMailPreference({ ...who!, kind: "change_alerts", enabled: false });
     expect(await sendChangeAlerts(await supersede(vendor.id, sheet.sheetId))).toBe(0);
     expect(await mailsTo(user.email)).toHaveLength(0);
   });

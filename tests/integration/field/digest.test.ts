@@ -2,7 +2,7 @@ import { NextRequest } from "next/server";
 import { afterAll, describe, expect, it } from "vitest";
 
 import { createAlertStopToken } from "@/lib/bench/alert-token";
-import { setWeeklyDigest, wantsWeeklyDigest } from "@/lib/mail/mail-preferences";
+import { setMailPreference, wantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { db } from "@/lib/db/knex";
 import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { weekStartOf } from "@/lib/field/digest-content";
@@ -48,7 +48,7 @@ describe("weekly Field-results digest", () => {
     // One click on the stop link turns it off for that person only.
     const token = new URL(mail.headers["List-Unsubscribe"].slice(1, -1)).searchParams.get("token")!;
     expect((await stop(vendor.slug, token)).status).toBe(200);
-    expect(await wantsWeeklyDigest({ vendorId: vendor.id, userId: engineer.user.id })).toBe(false);
+    expect(await wantsMail(undefined, { vendorId: vendor.id, userId: engineer.user.id, kind: "weekly_digest" })).toBe(false);
     expect(await sendVendorDigests(v, new Date("2026-12-07T07:00:00Z"))).toBe(2);
     expect(await mailsTo(engineer.user.email)).toHaveLength(1);
     expect(await mailsTo(engineer2.user.email)).toHaveLength(2);
@@ -71,12 +71,12 @@ describe("weekly Field-results digest", () => {
     const who = { vendorId: a.vendor.id, userId: a.engineer.user.id };
     expect((await stop(a.vendor.slug, createAlertStopToken(who))).status).toBe(400);
     expect(readStopToken("weekly-digest", createAlertStopToken(who))).toBeNull();
-    await setWeeklyDigest({ ...who, enabled: true });
+    await setMailPreference({ ...who, kind: "weekly_digest", enabled: true });
     await sendDigestOnRequest(await loadVendor(a.vendor.id), a.engineer.user.id);
     const [mail] = await mailsTo(a.engineer.user.email);
     const token = new URL(mail.headers["List-Unsubscribe"].slice(1, -1)).searchParams.get("token")!;
     expect((await stop(b.vendor.slug, token)).status).toBe(400);
-    expect(await wantsWeeklyDigest(who)).toBe(true);
+    expect(await wantsMail(undefined, { ...who, kind: "weekly_digest" })).toBe(true);
   });
 
   it("counts weeks from Monday, UTC", () => {

@@ -1,41 +1,17 @@
-import { randomBytes } from "node:crypto";
-import { readdirSync } from "node:fs";
-import path from "node:path";
-
-import knexFactory, { type Knex } from "knex";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Knex } from "knex";
+import { beforeAll, describe, expect, it } from "vitest";
 
 import type { MaterialFields } from "@/content-schema/catalogue-material";
-import { assertLocalDatabase } from "@/tests/support/local-db-guard";
+import { loadMigration as load, migrationDatabase } from "@/tests/support/migration-db";
 import { mustExist } from "@/tests/support/must-exist";
 
 // The migration that added chip-load bands, spindle kinds and entry capability, run over rows written before it,
 // in a database of its own (built up to the migration before, so the fill can be seen).
 const MIGRATION = "20261202071100_chip_bands_spindles_entry.ts";
-const root = path.resolve(import.meta.dirname, "../../..");
-const adminUrl = process.env.TEST_ADMIN_URL ?? "postgres://postgres@127.0.0.1:54329/postgres";
-const name = `swarfbook_mig_${process.pid}_${randomBytes(3).toString("hex")}`;
-let admin: Knex;
+const database = migrationDatabase(MIGRATION);
 let knex: Knex;
-
-type Migration = { up: (knex: Knex) => Promise<void> };
-const load = async (file: string): Promise<Migration> => import(path.join(root, "migrations", file));
-
-beforeAll(async () => {
-  assertLocalDatabase(adminUrl);
-  admin = knexFactory({ client: "pg", connection: adminUrl, pool: { min: 0, max: 1 } });
-  await admin.raw(`create database ${name} template template1`);
-  const url = new URL(adminUrl);
-  url.pathname = `/${name}`;
-  knex = knexFactory({ client: "pg", connection: url.toString(), pool: { min: 0, max: 2 } });
-  const files = readdirSync(path.join(root, "migrations")).filter((f) => f.endsWith(".ts")).sort();
-  for (const file of files.slice(0, files.indexOf(MIGRATION))) await (await load(file)).up(knex);
-}, 120_000);
-
-afterAll(async () => {
-  await knex?.destroy();
-  await admin?.raw(`drop database if exists ${name} with (force)`);
-  await admin?.destroy();
+beforeAll(() => {
+  knex = database.knex();
 });
 
 describe(`migration ${MIGRATION}`, () => {

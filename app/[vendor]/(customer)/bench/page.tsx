@@ -2,13 +2,16 @@ import Link from "next/link";
 
 import { AlertsToggle } from "@/components/bench/alerts-toggle";
 import { MachineList } from "@/components/bench/machine-list";
+import { MyCuttersSection } from "@/components/bench/my-cutters-section";
 import { SetupsTable } from "@/components/bench/setups-table";
+import { readUnits } from "@/components/library/read-units";
 import { EmptyState } from "@/components/ui/empty-state";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { listSetups } from "@/lib/bench/list-setups";
 import { listMachines } from "@/lib/bench/machines";
-import { wantsChangeAlerts } from "@/lib/mail/mail-preferences";
+import { wantsMail } from "@/lib/mail-preferences/mail-preferences";
+import { listMyCutterSheets } from "@/lib/my-cutters/list-shop-sheets";
 
 import { setChangeAlertsAction } from "./actions";
 
@@ -18,7 +21,13 @@ export default async function BenchPage({ params }: { params: Promise<{ vendor: 
   const { vendor: slug } = await params;
   const { vendor, user } = await requirePageAccess(slug, "bench.use", `/${slug}/bench`);
   const owner = { vendorId: vendor.id, userId: user!.id };
-  const [machines, setups, alerts] = await Promise.all([listMachines(owner), listSetups(owner), wantsChangeAlerts(owner)]);
+  const [machines, setups, alerts, myCutters, units] = await Promise.all([
+    listMachines(owner),
+    listSetups(owner),
+    wantsMail(undefined, { ...owner, kind: "change_alerts" }),
+    listMyCutterSheets(owner),
+    readUnits(),
+  ]);
   const register = (
     <Link href={`/${vendor.slug}/bench/machines/new`} className="inline-flex min-h-11 items-center rounded bg-accent px-4 font-medium text-accent-ink">
       Register a machine
@@ -35,6 +44,7 @@ export default async function BenchPage({ params }: { params: Promise<{ vendor: 
           <EmptyState title="No machines registered yet.">Register your machine to adapt any sheet to its spindle, power and rigidity.</EmptyState>
         )}
       </section>
+      <MyCuttersSection vendorSlug={vendor.slug} rows={myCutters} hasMachines={machines.length > 0} units={units} />
       <section aria-labelledby="setups" className="mb-8">
         <h2 id="setups" className="mb-3 text-lg font-semibold">Saved setups</h2>
         {setups.length ? (
@@ -47,6 +57,9 @@ export default async function BenchPage({ params }: { params: Promise<{ vendor: 
       </section>
       <section aria-label="E-mail" className="border-t border-stone-200 pt-4">
         <AlertsToggle setChangeAlertsAction={setChangeAlertsAction} vendorSlug={vendor.slug} enabled={alerts} />
+        <p className="mt-2 text-sm">
+          <Link className="underline" href={`/${vendor.slug}/mail-preferences`}>All mail preferences</Link>
+        </p>
       </section>
     </>
   );

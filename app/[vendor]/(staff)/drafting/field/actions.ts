@@ -6,10 +6,10 @@ import { z } from "zod";
 
 import { startDraftFromChangeSchema } from "@/content-schema/field-filters";
 import { vendorAction } from "@/lib/actions/vendor-action";
-import { setWeeklyDigest } from "@/lib/mail/mail-preferences";
 import { confidenceOf } from "@/lib/field/confidence";
 import { requestDigest } from "@/lib/field/digest-job";
 import { startDraftFromChange } from "@/lib/field/start-draft-from-change";
+import { setMailPreference } from "@/lib/mail-preferences/mail-preferences";
 import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 
 const vendorOnly = z.object({ vendor: z.string().min(1) });
@@ -23,7 +23,7 @@ export const sendDigestNowAction = vendorAction({ permission: "field.read", sche
 const digestSchema = z.object({ vendor: z.string().min(1), enabled: z.enum(["on", "off"]) });
 
 export const setWeeklyDigestAction = vendorAction({ permission: "field.read", schema: digestSchema }, async (input, { vendor, user }) => {
-  await setWeeklyDigest({ vendorId: vendor.id, userId: user.id, enabled: input.enabled === "on" });
+  await setMailPreference({ vendorId: vendor.id, userId: user.id, kind: "weekly_digest", enabled: input.enabled === "on" });
   revalidatePath(`/${vendor.slug}/drafting/field`);
   return { ok: true, message: input.enabled === "on" ? "The weekly digest is on." : "The weekly digest is off." };
 });

@@ -13,7 +13,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
 import { listMachineClasses } from "@/lib/catalogue/list-catalogue";
-import { wantsWeeklyDigest } from "@/lib/mail/mail-preferences";
+import { wantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { confidenceOf, percent } from "@/lib/field/confidence";
 import { readAttentionFilter } from "@/lib/field/read-filters";
 import { wilsonInterval } from "@/lib/field/wilson";
@@ -38,7 +38,7 @@ export default async function FieldResultsPage({ params, searchParams }: Props) 
   // The explanation uses the vendor's own level, so it stays true at 80 % as at 99 %.
   const oneInOne = wilsonInterval(1, 1, z).lower;
   const thirtyInHundred = wilsonInterval(30, 100, z).lower;
-  const [digestOn, classes] = await Promise.all([wantsWeeklyDigest({ vendorId: vendor.id, userId: user!.id }), listMachineClasses({ vendorId: vendor.id })]);
+  const [digestOn, classes] = await Promise.all([wantsMail(undefined, { vendorId: vendor.id, userId: user!.id, kind: "weekly_digest" }), listMachineClasses({ vendorId: vendor.id })]);
   const unknownClass = filter.class && !classes.some((c) => c.slug === filter.class) ? "No machine class of that name; showing every class." : null;
   const shown = unknownClass ? { ...filter, class: undefined } : filter;
   const canDraft = member ? can(member.role, "sheets.author") : false;

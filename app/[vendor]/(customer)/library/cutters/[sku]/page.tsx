@@ -4,11 +4,14 @@ import { notFound } from "next/navigation";
 import { CutterQrLinks } from "@/components/bench/cutter-qr-links";
 import { CutterCard } from "@/components/library/cutter-card";
 import { loadLibraryCutter } from "@/components/library/load-library-cutter";
+import { MyCutterButton } from "@/components/library/my-cutter-button";
 import { readUnits } from "@/components/library/read-units";
 import { SheetCards } from "@/components/library/sheet-cards";
 import { UnitsToggle } from "@/components/library/units-toggle";
 import { PageHeader } from "@/components/ui/page-header";
 import { cutterShortUrl } from "@/lib/bench/cutter-links";
+import { can } from "@/lib/auth/permissions";
+import { hasMyCutter } from "@/lib/my-cutters/my-cutters";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 
 type Props = { params: Promise<{ vendor: string; sku: string }> };
@@ -23,13 +26,33 @@ export default async function CutterPage({ params }: Props) {
   const { vendor: vendorSlug, sku } = await params;
   const found = await loadLibraryCutter(vendorSlug, sku);
   if (!found) notFound();
-  const { vendor, cutter } = found;
-  const [sheets, units] = await Promise.all([listPublishedSheets({ vendorId: vendor.id, filters: { cutter: cutter.sku } }), readUnits()]);
+  const { vendor, cutter, user, member } = found;
+  const keeper = user && member && can(member.role, "bench.use") ? user : null;
+  const [sheets, units, mine] = await Promise.all([
+    listPublishedSheets({ vendorId: vendor.id, filters: { cutter: cutter.sku } }),
+    readUnits(),
+    keeper ? hasMyCutter({ vendorId: vendor.id, userId: keeper.id, cutterId: cutter.id }) : false,
+  ]);
+  const state = !user ? "signed-out" : !keeper ? "not-member" : mine ? "mine" : "not-mine";
   return (
     <>
-      <PageHeader title={`${cutter.sku}: ${cutter.name}`} lead="Published recipe sheets for this cutter." actions={<UnitsToggle units={units} />} />
+      <PageHeader
+        title={`${cutter.sku}: ${cutter.name}`}
+        lead="Published recipe sheets for this cutter."
+        actions={
+          <>
+            <a href={`/${vendor.slug}/library/cutters/${encodeURIComponent(cutter.sku)}/pdf`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500 print:hidden">
+              Cutter data sheet (PDF)
+            </a>
+            <UnitsToggle units={units} />
+          </>
+        }
+      />
       <div className="mb-6 max-w-xl">
         <CutterCard cutter={cutter} units={units} vendorSlug={vendor.slug} />
+        <div className="mt-3 print:hidden">
+          <MyCutterButton vendorSlug={vendor.slug} sku={cutter.sku} cutterId={cutter.id} state={state} />
+        </div>
         <div className="mt-3 print:block">
           <CutterQrLinks vendorSlug={vendor.slug} sku={cutter.sku} shortUrl={cutterShortUrl(cutter.shortCode)} />
         </div>

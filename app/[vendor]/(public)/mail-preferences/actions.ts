@@ -1,0 +1,28 @@
+"use server";
+
+import { redirect } from "next/navigation";
+import { z } from "zod";
+
+import { MAIL_KINDS, kindsForRole } from "@/lib/mail-preferences/mail-kinds";
+import { saveMailPreferences } from "@/lib/mail-preferences/mail-preferences";
+import { findPreferencesPerson } from "@/lib/mail-preferences/find-preferences-person";
+
+const inputSchema = z.object({
+  vendor: z.string().min(1).max(80),
+  token: z.string().max(400).optional(),
+  ...Object.fromEntries(MAIL_KINDS.map((k) => [k, z.literal("on").optional()])),
+});
+
+/** Saves the boxes the page showed for this person's role: a shown box left unticked turns that mail off. */
+export async function saveMailPreferencesAction(form: FormData): Promise<void> {
+  const parsed = inputSchema.safeParse(Object.fromEntries([...form.entries()].filter(([, v]) => typeof v === "string" && v !== "")));
+  if (!parsed.success) redirect("/");
+  const { vendor: slug, token } = parsed.data;
+  const person = await findPreferencesPerson({ vendorSlug: slug, token });
+  if (!person) redirect(`/${encodeURIComponent(slug)}/mail-preferences`);
+  const values = parsed.data as Record<string, string | undefined>;
+  const choices = Object.fromEntries(kindsForRole(person.role).map((kind) => [kind, values[kind] === "on"]));
+  await saveMailPreferences({ vendorId: person.vendor.id, userId: person.userId, choices });
+  const query = new URLSearchParams({ saved: "1", ...(token ? { token } : {}) });
+  redirect(`/${person.vendor.slug}/mail-preferences?${query}`);
+}

@@ -1,0 +1,36 @@
+import { notFound } from "next/navigation";
+
+import { MailPreferencesForm } from "@/components/mail/mail-preferences-form";
+import { PageHeader } from "@/components/ui/page-header";
+import { MAIL_KIND_TEXTS, kindsForRole, mailKindSchema } from "@/lib/mail-preferences/mail-kinds";
+import { listMailPreferences } from "@/lib/mail-preferences/mail-preferences";
+import { findPreferencesPerson } from "@/lib/mail-preferences/find-preferences-person";
+
+export const metadata = { title: "Mail preferences", robots: { index: false } };
+
+type Props = { params: Promise<{ vendor: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+const one = (v: string | string[] | undefined) => (typeof v === "string" && v.length <= 400 ? v : undefined);
+
+// Reached from every mail's footer (a signed link, no sign-in needed) and from the header when signed in.
+export default async function MailPreferencesPage({ params, searchParams }: Props) {
+  const { vendor: slug } = await params;
+  const q = await searchParams;
+  const token = one(q.token);
+  const person = await findPreferencesPerson({ vendorSlug: slug, token });
+  if (!person) notFound();
+  const choices = await listMailPreferences({ vendorId: person.vendor.id, userId: person.userId });
+  const stopped = mailKindSchema.safeParse(one(q.stopped));
+  return (
+    <>
+      <PageHeader title="Mail preferences" lead={<>Which e-mails {person.vendor.name} sends to <span className="num">{person.email}</span>.</>} />
+      <div role="status" className="mb-4 space-y-2">
+        {stopped.success ? <p className="rounded border border-stone-300 bg-stone-100 px-3 py-2">{MAIL_KIND_TEXTS[stopped.data].label}: off. Nothing more of this kind will come.</p> : null}
+        {q.saved === "1" ? <p className="rounded border border-stone-300 bg-stone-100 px-3 py-2">✓ Saved.</p> : null}
+      </div>
+      <MailPreferencesForm vendorSlug={person.vendor.slug} token={person.viaLink ? token : undefined} kinds={kindsForRole(person.role)} choices={choices} />
+      <p className="mt-6 max-w-2xl text-sm text-stone-600">
+        Sign-in links, address checks and invitations always come: they are sent only when you ask for them. These choices are for {person.vendor.name} only.
+      </p>
+    </>
+  );
+}
