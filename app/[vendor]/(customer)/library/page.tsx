@@ -1,12 +1,9 @@
 import Link from "next/link";
 
-import { LibraryFilters } from "@/components/library/library-filters";
+import { CachedLibraryIndex } from "@/components/library/cached-library-index";
 import { readUnits } from "@/components/library/read-units";
-import { SheetCards } from "@/components/library/sheet-cards";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
-import { listCutters, listMachineClasses, listMaterials } from "@/lib/catalogue/list-catalogue";
-import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 
 export const metadata = { title: "Library" };
 
@@ -18,20 +15,10 @@ export default async function LibraryPage({ params, searchParams }: Props) {
   const { vendor } = await requirePageAccess(slug, "library.read", `/${slug}/library`);
   const q = await searchParams;
   const filters = { cutter: one(q.cutter), material: one(q.material), machineClass: one(q.machineClass) };
-  const [sheets, cutters, materials, machineClasses, units] = await Promise.all([
-    listPublishedSheets({ vendorId: vendor.id, filters }),
-    listCutters({ vendorId: vendor.id }),
-    listMaterials({ vendorId: vendor.id }),
-    listMachineClasses({ vendorId: vendor.id }),
-    readUnits(),
-  ]);
-  const filtered = Boolean(filters.cutter || filters.material || filters.machineClass);
   return (
     <>
       <PageHeader title="Library" lead={`Published recipe sheets from ${vendor.name}: starting-point cutting data per cutter, material and machine class.`} actions={<Link href={`/${vendor.slug}/library/search`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500">Search sheets</Link>} />
-      <LibraryFilters action={`/${vendor.slug}/library`} filters={filters} cutters={cutters} materials={materials} machineClasses={machineClasses} />
-      <p className="mb-3 text-sm text-stone-600" role="status"><span className="num">{sheets.length}</span> {sheets.length === 1 ? "sheet" : "sheets"}</p>
-      <SheetCards sheets={sheets} vendorSlug={vendor.slug} units={units} empty={filtered ? "No sheet matches these filters." : "No sheets are published yet."} />
+      <CachedLibraryIndex vendorId={vendor.id} vendorSlug={vendor.slug} filters={filters} units={await readUnits()} />
     </>
   );
 }

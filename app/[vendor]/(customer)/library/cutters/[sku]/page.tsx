@@ -1,15 +1,11 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 
-import { CutterQrLinks } from "@/components/bench/cutter-qr-links";
-import { CutterCard } from "@/components/library/cutter-card";
+import { CachedCutterSheets } from "@/components/library/cached-library-cutter";
 import { loadLibraryCutter } from "@/components/library/load-library-cutter";
 import { readUnits } from "@/components/library/read-units";
-import { SheetCards } from "@/components/library/sheet-cards";
 import { UnitsToggle } from "@/components/library/units-toggle";
 import { PageHeader } from "@/components/ui/page-header";
-import { cutterShortUrl } from "@/lib/bench/cutter-links";
-import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 
 type Props = { params: Promise<{ vendor: string; sku: string }> };
 
@@ -24,17 +20,11 @@ export default async function CutterPage({ params }: Props) {
   const found = await loadLibraryCutter(vendorSlug, sku);
   if (!found) notFound();
   const { vendor, cutter } = found;
-  const [sheets, units] = await Promise.all([listPublishedSheets({ vendorId: vendor.id, filters: { cutter: cutter.sku } }), readUnits()]);
+  const units = await readUnits();
   return (
     <>
       <PageHeader title={`${cutter.sku}: ${cutter.name}`} lead="Published recipe sheets for this cutter." actions={<UnitsToggle units={units} />} />
-      <div className="mb-6 max-w-xl">
-        <CutterCard cutter={cutter} units={units} vendorSlug={vendor.slug} />
-        <div className="mt-3 print:block">
-          <CutterQrLinks vendorSlug={vendor.slug} sku={cutter.sku} shortUrl={cutterShortUrl(cutter.shortCode)} />
-        </div>
-      </div>
-      <SheetCards sheets={sheets} vendorSlug={vendor.slug} units={units} empty="No sheet is published for this cutter yet." />
+      <CachedCutterSheets vendorId={vendor.id} vendorSlug={vendor.slug} sku={cutter.sku} units={units} />
     </>
   );
 }
