@@ -5,7 +5,7 @@ import { cacheLife, cacheTag } from "next/cache";
 import { CutterQrLinks } from "@/components/bench/cutter-qr-links";
 import { cutterShortUrl } from "@/lib/bench/cutter-links";
 import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
-import { libraryTag } from "@/lib/library/library-cache";
+import { libraryCacheDb, libraryTag } from "@/lib/library/library-cache";
 import type { UnitSystem } from "@/lib/machining";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 
@@ -30,7 +30,7 @@ export async function CachedCutterSheets({ vendorId, vendorSlug, sku, units }: {
   cacheTag(libraryTag(vendorId));
   const cutter = await getCachedLibraryCutter(vendorId, sku);
   if (!cutter) return null;
-  const sheets = await listPublishedSheets({ vendorId, filters: { cutter: cutter.sku } });
+  const sheets = await listPublishedSheets({ vendorId, filters: { cutter: cutter.sku }, from: libraryCacheDb });
   return (
     <>
       <div className="mb-6 max-w-xl">

@@ -3,7 +3,7 @@ import "server-only";
 import { cacheLife, cacheTag } from "next/cache";
 
 import { listCutters, listMachineClasses, listMaterials } from "@/lib/catalogue/list-catalogue";
-import { libraryTag } from "@/lib/library/library-cache";
+import { libraryCacheDb, libraryTag } from "@/lib/library/library-cache";
 import type { UnitSystem } from "@/lib/machining";
 import { type LibraryFilters as Filters, listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 
@@ -21,7 +21,7 @@ export async function CachedLibraryIndex({ vendorId, vendorSlug, filters, units 
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
   const [sheets, cutters, materials, machineClasses] = await Promise.all([
-    listPublishedSheets({ vendorId, filters }),
+    listPublishedSheets({ vendorId, filters, from: libraryCacheDb }),
     listCutters({ vendorId }),
     listMaterials({ vendorId }),
     listMachineClasses({ vendorId }),
