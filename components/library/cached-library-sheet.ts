@@ -2,7 +2,7 @@ import "server-only";
 
 import { cacheLife, cacheTag } from "next/cache";
 
-import { libraryTag, librarySheetTag } from "@/lib/library/library-cache";
+import { libraryCacheDb, librarySheetTag, libraryTag } from "@/lib/library/library-cache";
 import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
 
 /**
@@ -14,7 +14,7 @@ export async function getCachedLibrarySheet(vendorId: string, slug: string, numb
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
-  const data = await getLibrarySheet({ vendorId, slug, number });
+  const data = await getLibrarySheet({ vendorId, slug, number, from: libraryCacheDb });
   if (data) cacheTag(librarySheetTag(data.sheet.id));
   return data;
 }

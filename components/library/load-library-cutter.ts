@@ -3,14 +3,15 @@ import "server-only";
 import { cache } from "react";
 
 import { requirePageAccess } from "@/lib/auth/page-access";
-import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
 import { safeDecode } from "@/lib/http/safe-decode";
+
+import { getCachedLibraryCutter } from "./cached-library-cutter";
 
 export const loadLibraryCutter = cache(async (vendorSlug: string, sku: string) => {
   // The access check runs here, so the page checks it as well as the layout (a page segment can render alone).
   const { vendor, user, member } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/cutters/${sku}`);
   const decoded = safeDecode(sku);
   if (decoded === null) return null;
-  const cutter = await getCutterBySku({ vendorId: vendor.id, sku: decoded });
+  const cutter = await getCachedLibraryCutter(vendor.id, decoded);
   return cutter ? { vendor, cutter, user, member } : null;
 });

@@ -5,6 +5,7 @@ import { randomBytes } from "node:crypto";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
+import { invalidateLibrary } from "@/lib/library/library-cache";
 
 import { checkImage } from "./check-image";
 import { deleteImage, putImage } from "./image-store";
@@ -17,6 +18,8 @@ export async function setCutterImage({ vendorId, userId, cutterId, bytes }: { ve
   const key = `cutters/${cutterId}/${randomBytes(6).toString("hex")}`;
   await putImage({ vendorId, key, image: { contentType, bytes: Buffer.from(bytes) } });
   await db("cutters").where({ vendor_id: vendorId, id: cutterId }).update({ image_key: key, updated_at: db.fn.now() });
+  // The Library shows the picture on the cutter card of its cached pages.
+  invalidateLibrary({ vendorId });
   if (cutter.image_key) await deleteImage({ vendorId, key: cutter.image_key });
   await writeAudit({ vendorId, actorUserId: userId, action: "cutter.image", objectType: "cutter", objectId: cutterId, details: { contentType, bytes: bytes.byteLength } });
   return { key, contentType };

@@ -2,9 +2,18 @@ import "server-only";
 
 import { revalidateTag } from "next/cache";
 
+import { db } from "@/lib/db/knex";
+
 // Tags of the Library's cached reads and renderings ('use cache' entries in components/library).
 export const libraryTag = (vendorId: string) => `library:${vendorId}`;
 export const librarySheetTag = (sheetId: string) => `library-sheet:${sheetId}`;
+
+/**
+ * The connection the cached Library reads use: the primary, never the read replica. An entry dropped by a publish
+ * is filled again by the next reader, often within milliseconds; filled from a standby that has not replayed the
+ * publish yet, it would keep the old version until it expires. The cache takes the load the replica would take.
+ */
+export const libraryCacheDb = db;
 
 /**
  * Drops the cached Library entries a change touches: the sheet's own, and the vendor's (catalogue cards,

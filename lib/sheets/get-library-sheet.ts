@@ -1,5 +1,7 @@
 import "server-only";
 
+import type { Knex } from "knex";
+
 import { getCutterById, getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
 import { readDb } from "@/lib/db/read-db";
 
@@ -10,9 +12,10 @@ import { rowToVersion, versionQuery } from "./version-rows";
 /**
  * What a Library reader may see of a sheet: the requested version (default: the published one, else the
  * latest withdrawn one) and the history of readable versions. Drafts and versions in review never appear.
+ * `from`: the connection to read (default readDb(); the Library's cache entries read the primary).
  */
-export async function getLibrarySheet({ vendorId, slug, number }: { vendorId: string; slug: string; number?: number }) {
-  const db = await readDb();
+export async function getLibrarySheet({ vendorId, slug, number, from }: { vendorId: string; slug: string; number?: number; from?: Knex }) {
+  const db = from ?? (await readDb());
   const sheet = await findSheet({ vendorId, slug, trx: db });
   if (!sheet) return null;
   const history: SheetVersion[] = (

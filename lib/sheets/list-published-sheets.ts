@@ -1,5 +1,7 @@
 import "server-only";
 
+import type { Knex } from "knex";
+
 import { readDb } from "@/lib/db/read-db";
 
 export type PublishedSheetSummary = {
@@ -25,9 +27,12 @@ export type PublishedSheetSummary = {
 /** `cutterIds` and `machineClassIds` narrow to those ids (an empty list finds nothing): "fits my shop". */
 export type LibraryFilters = { cutter?: string; material?: string; machineClass?: string; cutterIds?: string[]; machineClassIds?: string[] };
 
-/** Current published versions, optionally narrowed to one cutter (SKU), material or machine class (slugs). */
-export async function listPublishedSheets({ vendorId, limit = 500, filters = {} }: { vendorId: string; limit?: number; filters?: LibraryFilters }): Promise<PublishedSheetSummary[]> {
-  const db = await readDb();
+/**
+ * Current published versions, optionally narrowed to one cutter (SKU), material or machine class (slugs).
+ * `from`: the connection to read (default readDb(); the Library's cache entries read the primary).
+ */
+export async function listPublishedSheets({ vendorId, limit = 500, filters = {}, from }: { vendorId: string; limit?: number; filters?: LibraryFilters; from?: Knex }): Promise<PublishedSheetSummary[]> {
+  const db = from ?? (await readDb());
   const query = db("sheet_versions as v")
     .join("sheets as s", function () {
       this.on("s.id", "v.sheet_id").andOn("s.vendor_id", "v.vendor_id");

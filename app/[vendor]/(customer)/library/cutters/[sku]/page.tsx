@@ -1,18 +1,14 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 
-import { CutterQrLinks } from "@/components/bench/cutter-qr-links";
-import { CutterCard } from "@/components/library/cutter-card";
+import { CachedCutterSheets } from "@/components/library/cached-library-cutter";
 import { loadLibraryCutter } from "@/components/library/load-library-cutter";
 import { MyCutterButton } from "@/components/library/my-cutter-button";
 import { readUnits } from "@/components/library/read-units";
-import { SheetCards } from "@/components/library/sheet-cards";
 import { UnitsToggle } from "@/components/library/units-toggle";
 import { PageHeader } from "@/components/ui/page-header";
-import { cutterShortUrl } from "@/lib/bench/cutter-links";
 import { can } from "@/lib/auth/permissions";
 import { hasMyCutter } from "@/lib/my-cutters/my-cutters";
-import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 
 type Props = { params: Promise<{ vendor: string; sku: string }> };
 
@@ -28,11 +24,7 @@ export default async function CutterPage({ params }: Props) {
   if (!found) notFound();
   const { vendor, cutter, user, member } = found;
   const keeper = user && member && can(member.role, "bench.use") ? user : null;
-  const [sheets, units, mine] = await Promise.all([
-    listPublishedSheets({ vendorId: vendor.id, filters: { cutter: cutter.sku } }),
-    readUnits(),
-    keeper ? hasMyCutter({ vendorId: vendor.id, userId: keeper.id, cutterId: cutter.id }) : false,
-  ]);
+  const [units, mine] = await Promise.all([readUnits(), keeper ? hasMyCutter({ vendorId: vendor.id, userId: keeper.id, cutterId: cutter.id }) : false]);
   const state = !user ? "signed-out" : !keeper ? "not-member" : mine ? "mine" : "not-mine";
   return (
     <>
@@ -48,16 +40,10 @@ export default async function CutterPage({ params }: Props) {
           </>
         }
       />
-      <div className="mb-6 max-w-xl">
-        <CutterCard cutter={cutter} units={units} vendorSlug={vendor.slug} />
-        <div className="mt-3 print:hidden">
-          <MyCutterButton vendorSlug={vendor.slug} sku={cutter.sku} cutterId={cutter.id} state={state} />
-        </div>
-        <div className="mt-3 print:block">
-          <CutterQrLinks vendorSlug={vendor.slug} sku={cutter.sku} shortUrl={cutterShortUrl(cutter.shortCode)} />
-        </div>
+      <div className="mb-4 max-w-xl print:hidden">
+        <MyCutterButton vendorSlug={vendor.slug} sku={cutter.sku} cutterId={cutter.id} state={state} />
       </div>
-      <SheetCards sheets={sheets} vendorSlug={vendor.slug} units={units} empty="No sheet is published for this cutter yet." />
+      <CachedCutterSheets vendorId={vendor.id} vendorSlug={vendor.slug} sku={cutter.sku} units={units} />
     </>
   );
 }
