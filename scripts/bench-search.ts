@@ -31,8 +31,8 @@ async function main() {
     let roundTrips = 0;
     const engine = {
       ...pgEngine,
-      search: (query: Parameters<typeof pgEngine.search>[0]) => (roundTrips++, pgEngine.search(query)),
-      searchSteps: (queries: Parameters<NonNullable<typeof pgEngine.searchSteps>>[0]) => (roundTrips++, pgEngine.searchSteps!(queries)),
+      search: (...args: Parameters<typeof pgEngine.search>) => (roundTrips++, pgEngine.search(...args)),
+      searchSteps: (...args: Parameters<NonNullable<typeof pgEngine.searchSteps>>) => (roundTrips++, pgEngine.searchSteps!(...args)),
     };
     t = performance.now();
     for (const v of vendors) await reindexVendor({ engine, knex, vendorId: v.id });

@@ -54,6 +54,7 @@ export interface SearchEngine {
   /**
    * Optional: the steps of a search (strictest first) in one round trip, answering the first step that
    * matched anything (else the last) and its index. Without it, runSearch calls `search` step by step.
+   * `shapeKey`, when given, names everything about the queries but the vendor (the same key, the same queries).
    */
-  searchSteps?(queries: readonly EngineQuery[]): Promise<{ step: number; result: EngineResult }>;
+  searchSteps?(queries: readonly EngineQuery[], shapeKey?: string): Promise<{ step: number; result: EngineResult }>;
 }

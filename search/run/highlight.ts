@@ -7,10 +7,36 @@ const ASCII = /^[\x00-\x7f]*$/;
 const foldChar = (c: string) => (c.charCodeAt(0) < 128 ? c : (c.normalize("NFKD").replace(/[\u0300-\u036f]/g, "")[0] ?? c)).toLowerCase();
 const foldChars = (text: string) => (ASCII.test(text) ? text.toLowerCase() : Array.from(text, foldChar).join(""));
 
-/** The highlighter of one search: its terms folded once, then applied to each field of each hit. */
+const MAX_REMEMBERED = 200;
+const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
+const isWordChar = (c: string) => {
+  const code = c.charCodeAt(0);
+  if (code < 128) return (code >= 48 && code <= 57) || (code >= 97 && code <= 122) || (code >= 65 && code <= 90);
+  return LETTER_OR_DIGIT.test(c);
+};
+
+/**
+ * The highlighter of one search: its terms folded once and grouped by first character (longest first, so a
+ * word start takes its longest term), then applied to each field of each hit. A text met again (the same
+ * cutter or material on many hits) is marked once.
+ */
 export function highlighter(terms: readonly string[]): (text: string) => HighlightRange[] {
-  const folded = [...new Set(terms.map((t) => foldChars(t.trim())).filter((t) => t.length >= 2))];
-  return (text) => rangesOf(text, folded);
+  const byFirst = new Map<string, string[]>();
+  for (const term of new Set(terms.map((t) => foldChars(t.trim())))) {
+    if (term.length >= 2) byFirst.set(term[0], [...(byFirst.get(term[0]) ?? []), term]);
+  }
+  if (byFirst.size === 0) return () => [];
+  for (const list of byFirst.values()) list.sort((a, b) => b.length - a.length);
+  const seen = new Map<string, HighlightRange[]>();
+  return (text) => {
+    let ranges = seen.get(text);
+    if (!ranges) {
+      // A highlighter lives as long as its search plan is kept; it remembers a bounded number of texts.
+      if (seen.size >= MAX_REMEMBERED) seen.clear();
+      seen.set(text, (ranges = rangesOf(text, byFirst)));
+    }
+    return ranges.map(([start, end]) => [start, end]);
+  };
 }
 
 /**
@@ -21,22 +47,20 @@ export function highlightRanges(text: string, terms: readonly string[]): Highlig
   return highlighter(terms)(text);
 }
 
-function rangesOf(text: string, terms: readonly string[]): HighlightRange[] {
+function rangesOf(text: string, byFirst: ReadonlyMap<string, readonly string[]>): HighlightRange[] {
   // Offsets count UTF-16 units; text with astral characters (emoji) is not marked rather than marked wrong.
   if (/[\uD800-\uDFFF]/.test(text)) return [];
   const hay = foldChars(text);
-  const ranges: HighlightRange[] = [];
-  for (const term of terms) {
-    for (let at = hay.indexOf(term); at !== -1; at = hay.indexOf(term, at + 1)) {
-      if (at === 0 || !/[\p{L}\p{N}]/u.test(hay[at - 1])) ranges.push([at, at + term.length]);
-    }
-  }
-  ranges.sort((a, b) => a[0] - b[0] || b[1] - a[1]);
   const merged: HighlightRange[] = [];
-  for (const r of ranges) {
+  for (let at = 0; at < hay.length; at++) {
+    const candidates = byFirst.get(hay[at]);
+    if (!candidates || (at > 0 && isWordChar(hay[at - 1]))) continue;
+    const term = candidates.find((t) => hay.startsWith(t, at));
+    if (!term) continue;
+    // Starts come in order, so an overlapping or touching term extends the range before it.
     const last = merged.at(-1);
-    if (last && r[0] <= last[1]) last[1] = Math.max(last[1], r[1]);
-    else merged.push([r[0], r[1]]);
+    if (last && at <= last[1]) last[1] = Math.max(last[1], at + term.length);
+    else merged.push([at, at + term.length]);
   }
   return merged;
 }

@@ -1,13 +1,16 @@
+import { LruCache } from "@/lib/mdx/lru-cache";
 import { describeQuery, looserQueries } from "@/search/parse/looser-queries";
 import { parseQuery } from "@/search/parse/parse-query";
 import type { ParsedQuery } from "@/search/parse/types";
 import { oneWaySynonyms, synonymGroups } from "@/search/vocabulary/synonyms";
 
 import type { EngineQuery, EngineResult, SearchEngine } from "../engines/engine-types";
-import { correctTypos } from "./correct-typos";
-import { toHits } from "./to-hit";
+import { type Correction, correctTypos } from "./correct-typos";
+import type { HighlightRange } from "./highlight";
 import { type ExplicitFilters, planSearch } from "./plan-search";
 import type { SearchResponse } from "./search-response";
+import { highlightTerms, toHit } from "./to-hit";
+import { highlighter } from "./highlight";
 
 export type SearchRequest = { vendorId: string; q: string; filters?: ExplicitFilters; page?: number; perPage?: number };
 
@@ -27,24 +30,69 @@ function prefixOf(raw: string, parsed: ParsedQuery): string | undefined {
   return last && !/\s$/.test(raw) && parsed.query.toLowerCase().endsWith(last) ? last : undefined;
 }
 
-/** The engine queries of a search, strictest first (exported for the benchmark's query plan). */
-export function engineQueriesFor(req: SearchRequest) {
+/** Everything about a search that depends on its text, filters and page alone (not on the vendor or the index). */
+type SearchPlanOfText = {
+  /** Names the text, filters and page: equal keys, equal plans. */
+  key: string;
+  parsed: ParsedQuery;
+  corrections: Correction[];
+  page: number;
+  perPage: number;
+  /** Engine queries strictest first, without the vendor. */
+  steps: { query: Omit<EngineQuery, "vendorId">; dropped: SearchResponse["relaxed"] }[];
+  mark: (text: string) => HighlightRange[];
+  looser: string[];
+  description: string;
+};
+
+function planOfText(key: string, q: string, filters: ExplicitFilters | undefined, page: number, perPage: number): SearchPlanOfText {
+  const { parsed, corrections } = correctTypos(parseQuery(q));
+  const words = parsed.text.split(" ").filter(Boolean);
+  const plan = planSearch(parsed, filters);
+  const base = { words, alternatives: alternativesOf(words), prefix: prefixOf(q, parsed), boosts: plan.boosts, page, perPage };
+  return {
+    key,
+    parsed,
+    corrections,
+    page,
+    perPage,
+    steps: plan.steps.map((step) => ({ query: { ...base, filters: step.filters }, dropped: step.dropped })),
+    mark: highlighter(highlightTerms(parsed, corrections)),
+    looser: looserQueries(parsed),
+    description: describeQuery(parsed),
+  };
+}
+
+// Parsing, typo correction and planning are pure functions of the text; searches repeat (typeahead, popular
+// queries, every vendor's customers), so the last few hundred plans are kept.
+const recentPlans = new LruCache<string, SearchPlanOfText>(500);
+
+function textPlan(req: SearchRequest): SearchPlanOfText {
   const page = Math.max(1, req.page ?? 1);
   const perPage = Math.min(50, Math.max(1, req.perPage ?? 20));
-  const { parsed, corrections } = correctTypos(parseQuery(req.q));
-  const words = parsed.text.split(" ").filter(Boolean);
-  const plan = planSearch(parsed, req.filters);
-  const base = { vendorId: req.vendorId, words, alternatives: alternativesOf(words), prefix: prefixOf(req.q, parsed), boosts: plan.boosts, page, perPage };
-  return { parsed, corrections, page, perPage, steps: plan.steps.map((step) => ({ query: { ...base, filters: step.filters } satisfies EngineQuery, dropped: step.dropped })) };
+  const key = JSON.stringify([req.q, req.filters ?? null, page, perPage]);
+  const known = recentPlans.get(key);
+  if (known) return known;
+  const plan = planOfText(key, req.q, req.filters, page, perPage);
+  recentPlans.set(key, plan);
+  return plan;
+}
+
+/** The engine queries of a search, strictest first (exported for the benchmark's query plan). */
+export function engineQueriesFor(req: SearchRequest) {
+  const { parsed, corrections, page, perPage, steps } = textPlan(req);
+  return { parsed, corrections, page, perPage, steps: steps.map((s) => ({ query: { ...s.query, vendorId: req.vendorId } satisfies EngineQuery, dropped: s.dropped })) };
 }
 
 /** Parse → plan → engine (relaxing filters while nothing matches) → hits with highlight ranges and facets. */
 export async function runSearch(engine: SearchEngine, req: SearchRequest): Promise<SearchResponse> {
-  const { parsed, corrections, page, perPage, steps } = engineQueriesFor(req);
+  const plan = textPlan(req);
+  const { parsed, corrections, page, perPage } = plan;
+  const steps = plan.steps.map((s) => ({ query: { ...s.query, vendorId: req.vendorId } satisfies EngineQuery, dropped: s.dropped }));
   let result: EngineResult = { total: 0, hits: [], facets: {}, cutters: [] };
   let relaxed: SearchResponse["relaxed"] = [];
   if (engine.searchSteps) {
-    const found = await engine.searchSteps(steps.map((s) => s.query));
+    const found = await engine.searchSteps(steps.map((s) => s.query), plan.key);
     result = found.result;
     relaxed = steps[found.step].dropped;
   } else {
@@ -60,14 +108,14 @@ export async function runSearch(engine: SearchEngine, req: SearchRequest): Promi
     page,
     perPage,
     total: result.total,
-    hits: toHits(result.hits.map((h) => h.doc), parsed, corrections),
+    hits: result.hits.map((h) => toHit(h.doc, plan.mark)),
     facets: result.facets,
     cutters: result.cutters.map((c) => ({ sku: c.cutterSku, name: c.cutterName, diameterMm: c.diameterMm, flutes: c.flutes })),
-    chips: parsed.chips,
-    corrections,
-    relaxed,
-    suggestions: result.total === 0 || relaxed.length ? looserQueries(parsed) : [],
-    description: describeQuery(parsed),
+    chips: [...parsed.chips],
+    corrections: [...corrections],
+    relaxed: [...relaxed],
+    suggestions: result.total === 0 || relaxed.length ? [...plan.looser] : [],
+    description: plan.description,
     engine: engine.name,
   };
 }

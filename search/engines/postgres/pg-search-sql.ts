@@ -1,8 +1,9 @@
 import { searchSettings } from "@/search/settings";
 
-import type { EngineQuery } from "../engine-types";
+import type { EngineQuery, QueryParts } from "../engine-types";
 import { partConditions } from "./pg-conditions";
 import { DOC_COLUMNS } from "./pg-columns";
+import { widestConditions } from "./pg-widest";
 import { type Fragment, compose, frag, joinFrags } from "./sql-fragment";
 import { buildTsQuery, typoWords } from "./ts-query";
 
@@ -12,6 +13,8 @@ const NEAR_WORDS_PER_TYPO = 3;
 const MAX_CUTTERS = 5;
 const cols = DOC_COLUMNS.map((c) => `d.${c}`).join(", ");
 const FACET_COLS = "d.material_group, d.material_key, d.diameter_mm, d.flutes, d.corner_form, d.machine_class, d.operations";
+// Columns the score reads beside the facet columns (partConditions and the text rank).
+const SCORE_COLS = "d.search_vector, d.cutter_sku, d.geometry";
 
 // Scalar facets in one GROUP BY GROUPING SETS pass; operations (an array) by unnest.
 const FACETS_SQL = `select case when grouping(material_group) = 0 then 'materialGroup' when grouping(material_key) = 0 then 'materialKey'
@@ -21,18 +24,13 @@ const FACETS_SQL = `select case when grouping(material_group) = 0 then 'material
   from matched group by grouping sets ((material_group), (material_key), (diameter_mm), (flutes), (corner_form), (machine_class))
   union all select 'operations', op, count(*)::int from matched, unnest(operations) as op group by op`;
 
-/**
- * The one round trip of a search: the words of the vendor's index close to each long word
- * (pg_trgm on search_words) join the full-text query; then the matching documents with a score,
- * the requested page, the total, the facet counts over all matches, and cutters whose SKU was typed.
- */
-export function buildSearchSql(q: EngineQuery): Fragment {
+/** The parts of a search that do not depend on its filters: the text query, the score, what "matches something" means, the cutters. */
+function searchParts(q: EngineQuery) {
   // A typed SKU is matched on the cutter_sku column (a boost), not as a slow positional phrase.
   const skuWords = new Set((q.boosts.skus ?? []).map((s) => s.toLowerCase()));
   const textWords = q.words.filter((w) => !skuWords.has(w.toLowerCase()));
   const tsq = buildTsQuery(textWords, q.alternatives, q.prefix && !skuWords.has(q.prefix.toLowerCase()) ? q.prefix : undefined);
   const typos = typoWords(textWords, searchSettings.typoTolerance.minWordSizeForOneTypo).filter((w) => !/\d/.test(w));
-  const filters = partConditions(q.filters).map((p) => p.cond);
   const boosts = partConditions(q.boosts);
 
   const score: Fragment[] = [frag("0")];
@@ -45,10 +43,6 @@ export function buildSearchSql(q: EngineQuery): Fragment {
   for (const b of boosts) score.push(compose(`(case when $1 then ${b.weight} else 0 end)`, b.cond));
   anyMatch.push(...boosts.map((b) => b.cond));
 
-  const where: Fragment[] = [frag("d.vendor_id = ?", q.vendorId), frag("d.kind = 'sheet'"), ...filters];
-  // Without a filter, a document must match something typed: a word, a near word, or a parsed part.
-  if (filters.length === 0 && anyMatch.length > 0) where.push(compose("($1)", joinFrags(anyMatch, " or ")));
-
   const skus = [...new Set([...(q.boosts.skus ?? []), ...q.words.filter((w) => /\d/.test(w) && w.length >= 3)].map((s) => s.toUpperCase()))];
   const near = typos.length
     ? frag(
@@ -59,43 +53,113 @@ export function buildSearchSql(q: EngineQuery): Fragment {
         q.vendorId,
       )
     : frag("null::tsquery");
-  return compose(
-    `with q as (select to_tsquery('simple', sb_unaccent($1)) as tsq, coalesce($2, ''::tsquery) as near),
-matched as (select d.doc_id, d.published_at, ${FACET_COLS}, $3 as score from search_documents d cross join q where $4),
-page as (select doc_id, score, published_at from matched order by score desc, published_at desc nulls last, doc_id limit $5),
-facet_rows as (${FACETS_SQL}),
-cutters as (select ${cols} from search_documents d where $6 order by d.cutter_sku limit ${MAX_CUTTERS})
-select (select count(*)::int from matched) as total,
-  (select coalesce(json_agg(h order by h.score desc, h.published_at desc nulls last, h.doc_id), '[]'::json)
-     from (select ${cols}, p.score from page p join search_documents d on $7 and d.doc_id = p.doc_id) as h) as hits,
-  (select coalesce(json_agg(f), '[]'::json) from facet_rows f where f.value is not null) as facets,
-  (select coalesce(json_agg(c), '[]'::json) from cutters c) as cutters`,
-    frag("?::text", tsq ?? ""),
-    near,
-    joinFrags(score, " + "),
-    joinFrags(where, " and "),
-    frag("? offset ?", q.perPage, (q.page - 1) * q.perPage),
-    frag(
+  return {
+    /** The `q` CTE: the full-text query and the index words near each long typed word. */
+    queryCte: compose("q as (select to_tsquery('simple', sb_unaccent($1)) as tsq, coalesce($2, ''::tsquery) as near)", frag("?::text", tsq ?? ""), near),
+    score: joinFrags(score, " + "),
+    /** Without a filter, a document must match something typed: a word, a near word, or a parsed part. */
+    anyMatch: anyMatch.length > 0 ? compose("($1)", joinFrags(anyMatch, " or ")) : undefined,
+    cutters: frag(
       "d.vendor_id = ? and d.kind = 'cutter' and (upper(d.cutter_sku) = any(?::text[]) or upper(d.cutter_sku) like any(?::text[]))",
       q.vendorId,
       skus,
       skus.filter((s) => s.length >= 4 && s.includes("-")).map((s) => `${s.replace(/[\\%_]/g, "\\$&")}%`),
     ),
+  };
+}
+
+type Parts = ReturnType<typeof searchParts>;
+
+/** What a document must meet for one step beside its vendor and kind; undefined when anything goes. */
+function stepCondition(filters: QueryParts, parts: Parts): Fragment | undefined {
+  const conds = partConditions(filters).map((p) => p.cond);
+  return conds.length ? joinFrags(conds, " and ") : parts.anyMatch;
+}
+
+/** From `matched` (doc_id, published_at, facet columns, score) on: the page, the total, facet counts and typed cutters. */
+function resultsFrom(q: EngineQuery, parts: Parts, head: string, columns: string): Fragment {
+  return compose(
+    `page as (select doc_id, score, published_at from matched order by score desc, published_at desc nulls last, doc_id limit $1),
+facet_rows as (${FACETS_SQL}),
+cutters as (select ${cols} from search_documents d where $2 order by d.cutter_sku limit ${MAX_CUTTERS})
+select ${head}(select count(*)::int from matched) as total,
+  (select coalesce(json_agg(h order by h.score desc, h.published_at desc nulls last, h.doc_id), '[]'::json)
+     from (select ${columns}, p.score from page p join search_documents d on $3 and d.doc_id = p.doc_id) as h) as hits,
+  (select coalesce(json_agg(f), '[]'::json) from facet_rows f where f.value is not null) as facets,
+  (select coalesce(json_agg(c), '[]'::json) from cutters c) as cutters`,
+    frag("? offset ?", q.perPage, (q.page - 1) * q.perPage),
+    parts.cutters,
     frag("d.vendor_id = ?", q.vendorId),
   );
 }
 
 /**
- * The steps of a search in one statement: step i runs only when every earlier step matched nothing (a
- * one-time filter on already computed totals), so relaxing a search costs no extra round trip.
+ * The one round trip of a search: the words of the vendor's index close to each long word
+ * (pg_trgm on search_words) join the full-text query; then the matching documents with a score,
+ * the requested page, the total, the facet counts over all matches, and cutters whose SKU was typed.
+ */
+export function buildSearchSql(q: EngineQuery): Fragment {
+  const parts = searchParts(q);
+  const filters = partConditions(q.filters).map((p) => p.cond);
+  const where: Fragment[] = [frag("d.vendor_id = ?", q.vendorId), frag("d.kind = 'sheet'"), ...filters];
+  if (filters.length === 0 && parts.anyMatch) where.push(parts.anyMatch);
+  return compose(
+    `with $1,
+matched as (select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from search_documents d cross join q where $3),
+$4`,
+    parts.queryCte,
+    parts.score,
+    joinFrags(where, " and "),
+    resultsFrom(q, parts, "", cols),
+  );
+}
+
+/**
+ * Conditions every document meeting one of the later steps meets (an index-friendly outer bound): the widest
+ * form of the filters all of them share; a step without filters adds whatever matches something typed.
+ */
+function laterBound(filters: readonly QueryParts[], conds: readonly (Fragment | undefined)[], parts: Parts): Fragment[] {
+  const withFilters = filters.filter((f) => partConditions(f).length > 0);
+  const widest = widestConditions(withFilters);
+  if (withFilters.length === filters.length) return widest;
+  // Some step has no filter: it takes what matches something typed, or everything when nothing was typed.
+  if (conds.some((c) => c === undefined) || !parts.anyMatch) return [];
+  if (withFilters.length === 0) return [parts.anyMatch];
+  return widest.length ? [compose("($1 or $2)", joinFrags(widest, " and "), parts.anyMatch)] : [];
+}
+
+/**
+ * The steps of a search (strictest first, differing only in their filters) in one statement that costs
+ * about what the first step alone costs while the first step matches. Only when it matches nothing are
+ * the later steps looked at: one pass over the documents within the widest bound of those steps marks
+ * each with the first step it meets, and the lowest mark found is the step answered. Answers that step's
+ * index (the last one when nothing matched) beside the results.
  */
 export function buildSearchStepsSql(queries: readonly EngineQuery[]): Fragment {
-  const steps = queries.map(buildSearchSql);
-  if (steps.length === 1) return { sql: `select 0 as step, s0.* from (${steps[0].sql}) as s0`, bindings: steps[0].bindings };
-  const ctes = joinFrags(steps.map((step, i) => ({ sql: `s${i} as (${step.sql})`, bindings: step.bindings })), ",\n");
-  const branches = steps.map((_, i) => {
-    const earlierEmpty = Array.from({ length: i }, (__, j) => `(select total from s${j}) = 0`);
-    return `select ${i} as step, s${i}.* from s${i}${earlierEmpty.length ? ` where ${earlierEmpty.join(" and ")}` : ""}`;
-  });
-  return { sql: `with ${ctes.sql}\n${branches.join("\nunion all ")}`, bindings: ctes.bindings };
+  const [first, ...later] = queries;
+  if (later.length === 0) return compose("select 0 as step, s0.* from ($1) as s0", buildSearchSql(first));
+  const parts = searchParts(first);
+  const vendor = frag("d.vendor_id = ? and d.kind = 'sheet'", first.vendorId);
+  const firstCond = stepCondition(first.filters, parts);
+  const laterConds = later.map((s) => stepCondition(s.filters, parts));
+  const marks = joinFrags(
+    laterConds.map((c, i) => compose(`when $1 then ${i + 1}`, c ?? frag("true"))),
+    " ",
+  );
+  const bound = laterBound(later.map((s) => s.filters), laterConds, parts);
+  return compose(
+    `with $1,
+m0 as (select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from search_documents d cross join q where $3),
+later as (select d.doc_id, d.published_at, ${FACET_COLS}, ${SCORE_COLS}, case $4 end as step from search_documents d cross join q where not exists (select 1 from m0) and $5),
+chosen as (select case when exists (select 1 from m0) then 0 else coalesce((select min(step) from later), ${later.length}) end as step),
+matched as (select * from m0
+  union all select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from later d cross join q where d.step = (select step from chosen)),
+$6`,
+    parts.queryCte,
+    parts.score,
+    joinFrags([vendor, ...(firstCond ? [firstCond] : [])], " and "),
+    marks,
+    joinFrags([vendor, ...bound], " and "),
+    resultsFrom(first, parts, "(select step from chosen) as step, ", cols),
+  );
 }

@@ -1,10 +1,12 @@
 import type { Knex } from "knex";
 
+import { LruCache } from "@/lib/mdx/lru-cache";
+
 import { compareFacetValues } from "../facet-order";
 import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
 import { rowToDoc } from "./pg-columns";
 import { buildSearchSql, buildSearchStepsSql } from "./pg-search-sql";
-import { preparedQuery } from "./prepared-query";
+import { type NativeStatement, numberPlaceholders, preparedQuery, runNative } from "./prepared-query";
 import { removeRows, replaceVendorRows, upsertRows } from "./pg-write";
 
 type Raw = { total: number; hits: Record<string, unknown>[]; facets: { facet: FacetName; value: string; count: number }[]; cutters: Record<string, unknown>[] };
@@ -23,6 +25,26 @@ const toResult = (row: Raw): EngineResult => ({
   cutters: row.cutters.map(rowToDoc),
 });
 
+// Statements by everything but the vendor, built with a stand-in vendor that each search replaces with its own.
+const VENDOR = "\u0000vendor";
+const recentStatements = new LruCache<string, NativeStatement>(500);
+
+/** The steps statement of `queries` (one vendor), built once per text, filters and page. */
+function stepsStatement(queries: readonly EngineQuery[], shapeKey?: string): NativeStatement {
+  const vendorId = queries[0].vendorId;
+  const build = (qs: readonly EngineQuery[]) => {
+    const { sql, bindings } = buildSearchStepsSql(qs);
+    const native = numberPlaceholders(sql, bindings);
+    if (!native) throw new Error("The search statement has text only knex can number.");
+    return native;
+  };
+  if (queries.some((q) => q.vendorId !== vendorId)) return build(queries);
+  const key = shapeKey !== undefined ? `k${shapeKey}` : `q${JSON.stringify(queries.map(({ vendorId: _, ...rest }) => rest))}`;
+  let cached = recentStatements.get(key);
+  if (!cached) recentStatements.set(key, (cached = build(queries.map((q) => ({ ...q, vendorId: VENDOR })))));
+  return { text: cached.text, values: cached.values.map((v) => (v === VENDOR ? vendorId : v)) };
+}
+
 /**
  * The default engine: the search_documents table (weighted tsvector, pg_trgm, unaccent) in the app's own database.
  * Writes go to `knex`; searches to the connection `reads` picks (the read replica when there is one).
@@ -40,10 +62,8 @@ export function createPostgresEngine(knex: Knex, reads: () => Promise<Knex> = as
       const [row] = await preparedQuery<Raw>(await reads(), sql, bindings);
       return toResult(row);
     },
-    async searchSteps(queries: readonly EngineQuery[]) {
-      const { sql, bindings } = buildSearchStepsSql(queries);
-      const rows = await preparedQuery<Raw & { step: number }>(await reads(), sql, bindings);
-      const row = rows.find((r) => r.total > 0) ?? rows.reduce((last, r) => (r.step > last.step ? r : last));
+    async searchSteps(queries: readonly EngineQuery[], shapeKey?: string) {
+      const [row] = await runNative<Raw & { step: number }>(await reads(), stepsStatement(queries, shapeKey));
       return { step: row.step, result: toResult(row) };
     },
   };

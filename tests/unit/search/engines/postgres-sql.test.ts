@@ -2,6 +2,8 @@ import { describe, expect, it } from "vitest";
 
 import type { EngineQuery } from "@/search/engines/engine-types";
 import { buildSearchSql, buildSearchStepsSql } from "@/search/engines/postgres/pg-search-sql";
+import { widestConditions } from "@/search/engines/postgres/pg-widest";
+import { numberPlaceholders } from "@/search/engines/postgres/prepared-query";
 import { compose, frag } from "@/search/engines/postgres/sql-fragment";
 import { buildTsQuery, lexemeOf, typoWords } from "@/search/engines/postgres/ts-query";
 
@@ -59,14 +61,68 @@ describe("sql fragments", () => {
 });
 
 describe("search steps in one statement", () => {
-  const step = (filters: EngineQuery["filters"]): EngineQuery => ({ vendorId: "00000000-0000-4000-8000-000000000001", words: ["acrylic"], alternatives: [], boosts: {}, filters, page: 1, perPage: 20 });
+  const step = (filters: EngineQuery["filters"]): EngineQuery => ({ vendorId: "00000000-0000-4000-8000-000000000001", words: ["jig"], alternatives: [], boosts: {}, filters, page: 1, perPage: 20 });
 
-  it("runs a later step only when every earlier one matched nothing, with all bindings in order", () => {
+  it("is the first step's own statement when there is one step", () => {
+    const only = step({ flutes: 2 });
+    const { sql, bindings } = buildSearchStepsSql([only]);
+    expect(sql).toContain(buildSearchSql(only).sql);
+    expect(bindings).toEqual(buildSearchSql(only).bindings);
+  });
+
+  it("scans the later steps only when the first matched nothing, marking each document with the first later step it meets", () => {
     const steps = [step({ flutes: 2, diameterMm: 3.175 }), step({ diameterMm: 3.175 }), step({})];
     const { sql, bindings } = buildSearchStepsSql(steps);
-    expect(sql).toContain("select 0 as step, s0.* from s0\nunion all select 1 as step, s1.* from s1 where (select total from s0) = 0");
-    expect(sql).toContain("select 2 as step, s2.* from s2 where (select total from s0) = 0 and (select total from s1) = 0");
-    expect(bindings).toEqual(steps.flatMap((s) => buildSearchSql(s).bindings));
-    expect(sql.split("?").length - 1).toBe(bindings.length);
+    expect(sql).toContain("where not exists (select 1 from m0) and d.vendor_id = ?");
+    expect(sql).toMatch(/case when d\.diameter_mm between \? and \? then 1 when \(d\.search_vector @@ q\.tsq\) then 2 end as step/);
+    expect(sql).toContain("coalesce((select min(step) from later), 2)");
+    // The second step has a filter, the last only words: the bound is either.
+    expect(sql).toContain("(d.diameter_mm between ? and ? or (d.search_vector @@ q.tsq))");
+    expect(placeholders(sql)).toBe(bindings.length);
+    expect(bindings.filter((b) => b === steps[0].vendorId).length).toBeGreaterThanOrEqual(3);
+  });
+
+  it("has no bound when a later step takes everything (no filter and nothing typed)", () => {
+    const bare = (filters: EngineQuery["filters"]): EngineQuery => ({ ...step(filters), words: [] });
+    const { sql } = buildSearchStepsSql([bare({ flutes: 2 }), bare({})]);
+    expect(sql).toContain("case when true then 1 end as step");
+    expect(sql).toMatch(/where not exists \(select 1 from m0\) and d\.vendor_id = \? and d\.kind = 'sheet'\),/);
+  });
+});
+
+describe("the widest bound of relaxed steps", () => {
+  it("keeps a part every step has, at its widest", () => {
+    const conds = widestConditions([
+      { materialKeys: ["acrylic-cast"], operations: ["slotting", "profile"], diameterMm: 3.175, flutes: 1 },
+      { materialKeys: ["acrylic", "acrylic-cast"], operations: ["slotting"], diameterMm: 3 },
+      { materialGroups: ["plastics"], operations: ["slotting", "pocket"], diameterMm: 3.175, flutes: 2 },
+    ]);
+    expect(conds.map((c) => c.sql)).toEqual([
+      "(d.material_key = any(?::text[]) or d.material_group = any(?::text[]))",
+      "d.operations @> ?::text[]",
+      "d.diameter_mm between ? and ?",
+    ]);
+    expect(conds[0].bindings).toEqual([["acrylic-cast", "acrylic"], ["plastics"]]);
+    expect(conds[1].bindings).toEqual([["slotting"]]);
+    expect(conds[2].bindings[0]).toBeCloseTo(2.99);
+    expect(conds[2].bindings[1]).toBeCloseTo(3.185);
+  });
+
+  it("drops a part some step lacks, and operations no step shares", () => {
+    expect(widestConditions([{ flutes: 2, operations: ["ramp"] }, { cornerForms: ["ball"], operations: ["slotting"] }])).toEqual([]);
+    expect(widestConditions([{ flutes: 2 }, { flutes: 3 }]).map((c) => c.bindings)).toEqual([[[2, 3]]]);
+  });
+});
+
+describe("placeholders", () => {
+  it("numbers them in order and sends a repeated text or array once, never a repeated number", () => {
+    const native = numberPlaceholders("a = ? and b = any(?) and c = ? and d = ? and e = ? and f = any(?)", ["v", ["x"], 2, "v", 2, ["x"]]);
+    expect(native).toEqual({ text: "a = $1 and b = any($2) and c = $3 and d = $1 and e = $4 and f = any($2)", values: ["v", ["x"], 2, 2] });
+  });
+
+  it("leaves identifier and escaped placeholders to knex, and refuses a count that does not match", () => {
+    expect(numberPlaceholders("select ?? from t", ["a"])).toBeUndefined();
+    expect(() => numberPlaceholders("a = ? and b = ?", [1])).toThrow();
+    expect(() => numberPlaceholders("a = ?", [1, 2])).toThrow();
   });
 });

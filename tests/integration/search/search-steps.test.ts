@@ -1,0 +1,62 @@
+import { afterEach, beforeAll, describe, expect, it } from "vitest";
+
+import { db } from "@/lib/db/knex";
+import type { SearchEngine } from "@/search/engines/engine-types";
+import { createPostgresEngine } from "@/search/engines/postgres/postgres-engine";
+import { reindexVendor } from "@/search/indexing/reindex";
+import { runSearch } from "@/search/run/run-search";
+import { runSeeds } from "@/seeds/run-seeds";
+
+import { RELEVANCE_CASES } from "./relevance-cases";
+
+// The steps of a search in one statement must answer exactly what running the steps one by one answers.
+const engine = createPostgresEngine(db);
+const stepByStep: SearchEngine = { ...engine, searchSteps: undefined };
+let vendors: Record<string, string> = {};
+
+// Relaxing queries (nothing matches every part), filters, pages, an empty box, words only, nonsense.
+const EXTRA = [
+  "1/8 2F acrylic slot", "12 mm 4 flute brass ball nose ramp", "1/2 compression mdf slot", "3mm 3 flute plywood", "alumnium 6mm 2 flute",
+  "", "jig", "xyzzy plugh", "6 mm", "ball", "polycarbonate 1/4 2F profile", "plastics 1/8 4 flute", "oak", "NB-SF",
+];
+
+beforeAll(async () => {
+  const ids = await runSeeds(db, { reset: true });
+  vendors = ids.vendors;
+  for (const id of Object.values(vendors)) await reindexVendor({ engine, vendorId: id });
+}, 120_000);
+
+afterEach(() => {
+  delete process.env.DATABASE_POOL_MODE;
+});
+
+const requests = () => [
+  ...RELEVANCE_CASES.map((c) => ({ vendorId: vendors[c.vendor], q: c.q })),
+  ...Object.values(vendors).flatMap((vendorId) => EXTRA.map((q) => ({ vendorId, q }))),
+  { vendorId: vendors.northbeck, q: "acrylic", filters: { flutes: 2 } },
+  { vendorId: vendors.northbeck, q: "1/8 slot", filters: { materialGroup: "wood" as const } },
+  { vendorId: vendors.northbeck, q: "mdf", page: 2, perPage: 2 },
+];
+
+describe("search steps in one statement (PostgreSQL)", () => {
+  it("answers what the steps run one by one answer: step, total, hits in order, facets, cutters", async () => {
+    let relaxedSeen = 0;
+    for (const req of requests()) {
+      const [one, each] = [await runSearch(engine, req), await runSearch(stepByStep, req)];
+      expect(one, `“${req.q}”`).toEqual(each);
+      if (one.relaxed.length > 0) relaxedSeen++;
+    }
+    // The list must exercise relaxation, or the comparison proves little.
+    expect(relaxedSeen).toBeGreaterThan(3);
+  });
+
+  it("runs the same statements unnamed behind a pooler in transaction mode", async () => {
+    const req = { vendorId: vendors.northbeck, q: "1/8 2F acrylic slot" };
+    const named = await runSearch(engine, req);
+    process.env.DATABASE_POOL_MODE = "transaction";
+    const unnamed = await runSearch(engine, req);
+    expect(unnamed).toEqual(named);
+    expect(named.relaxed).toContain("flutes");
+    expect(named.total).toBeGreaterThan(0);
+  });
+});
