@@ -22,6 +22,7 @@ export async function generateMetadata({ params }: Props) {
   return { title: (await loadFamily(vendor, family))?.name ?? "Family" };
 }
 
+const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 const box = "rounded-md border border-stone-300 bg-white p-4";
 
 export default async function FamilyPage({ params, searchParams }: Props) {
@@ -38,7 +39,7 @@ export default async function FamilyPage({ params, searchParams }: Props) {
     <>
       <PageHeader
         title={family.name}
-        lead={`${cutters.length} cutters × ${materials.length} materials × ${machineClasses.length} machine classes = ${preview.total} sheets; rules version ${ruleSet.number}.`}
+        lead={`${count(cutters.length, "cutter")} × ${count(materials.length, "material")} × ${count(machineClasses.length, "machine class", "machine classes")} = ${count(preview.total, "sheet")}; rules version ${ruleSet.number}.`}
       />
       <div className="grid gap-6 lg:grid-cols-2">
         <section aria-labelledby="rules-heading" className={box}>
