@@ -2,11 +2,10 @@
 
 import { useActionState } from "react";
 
-import { redeliverAction } from "@/app/[vendor]/(staff)/admin/integrations/actions";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
+import { type FormAction, initialActionState } from "@/lib/actions/action-state";
 
-export function RedeliverButton({ vendor, webhookId, deliveryId }: { vendor: string; webhookId: string; deliveryId: string }) {
+export function RedeliverButton({ vendor, webhookId, deliveryId, redeliverAction }: { vendor: string; webhookId: string; deliveryId: string; redeliverAction: FormAction }) {
   const [state, action] = useActionState(redeliverAction, initialActionState);
   return (
     <form action={action} className="flex flex-col items-start gap-1">

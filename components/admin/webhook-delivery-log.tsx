@@ -1,4 +1,5 @@
 import { EmptyState } from "@/components/ui/empty-state";
+import type { FormAction } from "@/lib/actions/action-state";
 import { formatDateTime } from "@/lib/ui/dates";
 import type { WebhookDelivery } from "@/lib/webhooks/webhook-rows";
 
@@ -12,7 +13,7 @@ const STATE_WORDS: Record<WebhookDelivery["state"], string> = {
   held: "Held while paused",
 };
 
-export function WebhookDeliveryLog({ vendor, webhookId, deliveries }: { vendor: string; webhookId: string; deliveries: WebhookDelivery[] }) {
+export function WebhookDeliveryLog({ vendor, webhookId, deliveries, redeliverAction }: { vendor: string; webhookId: string; deliveries: WebhookDelivery[]; redeliverAction: FormAction }) {
   if (deliveries.length === 0) return <EmptyState title="Nothing delivered yet." />;
   return (
     <div className="overflow-x-auto rounded-lg border border-stone-200 bg-white">
@@ -33,7 +34,7 @@ export function WebhookDeliveryLog({ vendor, webhookId, deliveries }: { vendor: 
                 {d.responseExcerpt ? <pre className="mt-1 max-w-md whitespace-pre-wrap break-all text-xs text-stone-600">{d.responseExcerpt}</pre> : null}
               </td>
               <td className="num px-3 py-2">{d.attempts}</td>
-              <td className="px-3 py-2">{d.state === "pending" || d.state === "retrying" ? null : <RedeliverButton vendor={vendor} webhookId={webhookId} deliveryId={d.id} />}</td>
+              <td className="px-3 py-2">{d.state === "pending" || d.state === "retrying" ? null : <RedeliverButton vendor={vendor} webhookId={webhookId} deliveryId={d.id} redeliverAction={redeliverAction} />}</td>
             </tr>
           ))}
         </tbody>

@@ -1,14 +1,14 @@
 "use client";
 
-import { createWebhookAction } from "@/app/[vendor]/(staff)/admin/integrations/actions";
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import { WEBHOOK_EVENT_TYPES, webhookEventLabels } from "@/content-schema/webhook-events";
 import { webhookFormSchema } from "@/content-schema/webhook-form";
+import type { FormAction } from "@/lib/actions/action-state";
 
-export function WebhookForm({ vendor }: { vendor: string }) {
+export function WebhookForm({ vendor, createWebhookAction }: { vendor: string; createWebhookAction: FormAction }) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(createWebhookAction, webhookFormSchema);
   const created = state.ok ? (state.data as { id: string; secret: string } | undefined) : undefined;
   return (

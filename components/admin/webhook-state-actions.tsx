@@ -2,12 +2,11 @@
 
 import { useActionState } from "react";
 
-import { deleteWebhookAction, resumeWebhookAction } from "@/app/[vendor]/(staff)/admin/integrations/actions";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
+import { type FormAction, initialActionState } from "@/lib/actions/action-state";
 
-export function WebhookStateActions({ vendor, webhookId, state }: { vendor: string; webhookId: string; state: "active" | "paused" }) {
+export function WebhookStateActions({ vendor, webhookId, state, resumeWebhookAction, deleteWebhookAction }: { vendor: string; webhookId: string; state: "active" | "paused"; resumeWebhookAction: FormAction; deleteWebhookAction: FormAction }) {
   const [resumeState, resume] = useActionState(resumeWebhookAction, initialActionState);
   const [deleteState, remove] = useActionState(deleteWebhookAction, initialActionState);
   return (

@@ -2,14 +2,13 @@
 
 import { useActionState } from "react";
 
-import { addMyCutterAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
+import { type FormAction, initialActionState } from "@/lib/actions/action-state";
 
 /** Type a cutter's SKU (as printed on the box) to add it to my cutters; says whether it was new. */
-export function AddCutterForm({ vendorSlug }: { vendorSlug: string }) {
+export function AddCutterForm({ vendorSlug, addMyCutterAction }: { vendorSlug: string; addMyCutterAction: FormAction }) {
   const [state, action] = useActionState(addMyCutterAction, initialActionState);
   return (
     <form action={action} aria-label="Add a cutter by its SKU" className="flex flex-col gap-2">

@@ -1,22 +1,22 @@
 import Link from "next/link";
 
-import { removeMyCutterAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { ActionForm } from "@/components/drafting/action-form";
+import type { FormAction } from "@/lib/actions/action-state";
 import { EmptyState } from "@/components/ui/empty-state";
 import { formatLength, type UnitSystem } from "@/lib/machining";
 import type { CutterShopSheets } from "@/lib/my-cutters/list-shop-sheets";
 
 import { AddCutterForm } from "./add-cutter-form";
 
-type Props = { vendorSlug: string; rows: CutterShopSheets[]; hasMachines: boolean; units: UnitSystem };
+type Props = { vendorSlug: string; rows: CutterShopSheets[]; hasMachines: boolean; units: UnitSystem; addMyCutterAction: FormAction; removeMyCutterAction: FormAction };
 
 /** My cutters, and for each the sheets that fit each of my machines. */
-export function MyCuttersSection({ vendorSlug, rows, hasMachines, units }: Props) {
+export function MyCuttersSection({ vendorSlug, rows, hasMachines, units, addMyCutterAction, removeMyCutterAction }: Props) {
   return (
     <section aria-labelledby="my-cutters" className="mb-8">
       <h2 id="my-cutters" className="mb-3 text-lg font-semibold">My cutters</h2>
       <div className="mb-4 max-w-md">
-        <AddCutterForm vendorSlug={vendorSlug} />
+        <AddCutterForm vendorSlug={vendorSlug} addMyCutterAction={addMyCutterAction} />
       </div>
       {rows.length === 0 ? (
         <EmptyState title="No cutters yet.">Add the cutters in your shop to see which sheets fit your machines, and to filter the Library to your shop.</EmptyState>

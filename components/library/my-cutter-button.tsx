@@ -1,12 +1,12 @@
 import Link from "next/link";
 
-import { addMyCutterAction, removeMyCutterAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { ActionForm } from "@/components/drafting/action-form";
+import type { FormAction } from "@/lib/actions/action-state";
 
-type Props = { vendorSlug: string; sku: string; cutterId: string; state: "signed-out" | "not-member" | "mine" | "not-mine" };
+type Props = { vendorSlug: string; sku: string; cutterId: string; state: "signed-out" | "not-member" | "mine" | "not-mine"; addMyCutterAction: FormAction; removeMyCutterAction: FormAction };
 
 /** On a cutter's page (where its box's QR code leads): add it to my cutters, or sign in to do so. */
-export function MyCutterButton({ vendorSlug, sku, cutterId, state }: Props) {
+export function MyCutterButton({ vendorSlug, sku, cutterId, state, addMyCutterAction, removeMyCutterAction }: Props) {
   if (state === "not-member") return null;
   if (state === "signed-out") {
     const back = `/${vendorSlug}/library/cutters/${encodeURIComponent(sku)}`;

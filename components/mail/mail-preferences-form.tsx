@@ -1,10 +1,9 @@
-import { saveMailPreferencesAction } from "@/app/[vendor]/(public)/mail-preferences/actions";
 import { MAIL_KIND_TEXTS, type MailKind } from "@/lib/mail-preferences/mail-kinds";
 
-type Props = { vendorSlug: string; token?: string; kinds: MailKind[]; choices: Record<MailKind, boolean> };
+type Props = { vendorSlug: string; token?: string; kinds: MailKind[]; choices: Record<MailKind, boolean>; saveMailPreferencesAction: (form: FormData) => Promise<void> };
 
 /** One box per kind of mail this person can get; works without JavaScript. */
-export function MailPreferencesForm({ vendorSlug, token, kinds, choices }: Props) {
+export function MailPreferencesForm({ vendorSlug, token, kinds, choices, saveMailPreferencesAction }: Props) {
   return (
     <form action={saveMailPreferencesAction} className="max-w-2xl space-y-3">
       <input type="hidden" name="vendor" value={vendorSlug} />

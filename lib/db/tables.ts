@@ -11,6 +11,7 @@ import type { SheetState } from "@/content-schema/sheet-workflow";
 import type { SpindleKindKey } from "@/content-schema/spindle-kind";
 import type { MessageVisibility, TicketPriority, TicketStatus } from "@/content-schema/ticket-status";
 import type { Role } from "@/lib/auth/roles";
+import type { MailKind } from "@/lib/mail-preferences/mail-kinds";
 import type { UnitSystem } from "@/lib/machining/quantities";
 
 export interface ApiTokenRow {
@@ -95,6 +96,7 @@ export interface DeskViewRow {
 export interface FieldChangeRollupRow {
   vendor_id: string | null;
   sheet_version_id: string;
+  operation_index: number;
   param: string;
   reports: number | null;
   median_pct: number | null;
@@ -213,9 +215,16 @@ export interface MachineRow {
 export interface MailPreferenceRow {
   vendor_id: string;
   user_id: string;
-  change_alerts: boolean;
-  weekly_digest: boolean;
+  kind: MailKind;
+  enabled: boolean;
   updated_at: Date;
+}
+
+export interface CustomerCutterRow {
+  vendor_id: string;
+  user_id: string;
+  cutter_id: string;
+  created_at: Date;
 }
 
 export interface MaterialRow {
@@ -495,6 +504,7 @@ declare module "knex/types/tables" {
     audit_log: AuditLogEntryRow;
     change_alerts_sent: ChangeAlertSentRow;
     cutter_images: CutterImageRow;
+    customer_cutters: CustomerCutterRow;
     cutters: CutterRow;
     dead_letter_notices: DeadLetterNoticeRow;
     desk_views: DeskViewRow;

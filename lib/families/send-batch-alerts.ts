@@ -4,11 +4,11 @@ import { z } from "zod";
 
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
 import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "@/lib/bench/alert-setups";
-import { createAlertStopToken } from "@/lib/bench/alert-token";
 import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { db } from "@/lib/db/knex";
 import { appUrl } from "@/lib/http/app-url";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
+import { mailFooter, preferencesUrl, withFooter } from "@/lib/mail-preferences/preferences-link";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 
 import { type BatchAlertSheet, renderBatchChangeAlert } from "./batch-alert-mail";
@@ -25,7 +25,7 @@ async function changedSheets(vendorId: string, batchId: string, vendorSlug: stri
     .select<{ version_id: string; previous_version_id: string }[]>("version_id", "previous_version_id");
   const changed: Changed[] = [];
   for (const item of items) {
-    const rows = await listAlertSetups({ vendorId, supersededVersionId: item.previous_version_id });
+    const rows = await listAlertSetups({ vendorId, supersededVersionId: item.previous_version_id, kind: "batch_changes" });
     if (!rows.length) continue;
     const [newCtx, oldCtx, before, after] = await Promise.all([
       loadAdaptContext({ vendorId, versionId: item.version_id }),
@@ -67,21 +67,21 @@ export async function sendBatchAlerts({ vendorId, batchId }: { vendorId: string;
   }
   let sent = 0;
   for (const [userId, entry] of byUser) {
-    const stop = appUrl(`/api/v1/vendors/${batch.vendor_slug}/setups/alerts/stop?token=${createAlertStopToken({ vendorId, userId })}`);
-    const mail = renderBatchChangeAlert({
+    // Batch mails are their own kind of mail: the stop link opens the preferences page with it picked out.
+    const stop = preferencesUrl(batch.vendor_slug, { vendorId, userId }, "batch_changes");
+    const mail = withFooter(renderBatchChangeAlert({
       vendorName: batch.vendor_name,
       familyName: batch.family_name,
       changeNote: entry.sheets[0].changed.changeNote,
       stopUrl: stop,
       units: entry.units,
       sheets: entry.sheets.map(({ changed: c, rows }) => ({ ...c.sheet, setups: rows.map((r) => reAdapt(c.oldCtx, c.newCtx, r, appUrl(`/${batch.vendor_slug}/bench/setups/${r.id}`))) })),
-    });
+    }), mailFooter(batch.vendor_slug, batch.vendor_name, { vendorId, userId }));
     await db.transaction(async (trx) => {
       const rows = entry.sheets.map(({ changed: c, rows: setups }) => ({ vendor_id: vendorId, version_id: c.versionId, superseded_version_id: c.previousId, user_id: userId, setup_count: setups.length }));
       const inserted = await trx("change_alerts_sent").insert(rows).onConflict(["version_id", "user_id"]).ignore().returning("user_id");
       if (!inserted.length) return;
-      const headers = { "List-Unsubscribe": `<${stop}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" };
-      await enqueueMail(trx, { to: entry.email, ...mail, headers }, { key: `family-alert:${batchId}:${userId}` });
+      await enqueueMail(trx, { to: entry.email, ...mail, headers: { "List-Unsubscribe": `<${stop}>` } }, { key: `family-alert:${batchId}:${userId}` });
       sent += 1;
     });
   }

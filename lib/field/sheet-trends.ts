@@ -24,7 +24,7 @@ export async function loadSheetTrends({ vendorId, sheetId, from, to, z }: { vend
       .orderBy("number")
       .select("number", "published_at"),
   ]);
-  const publications = published.map((p) => ({ number: Number(p.number), publishedAt: new Date(p.published_at).toISOString() }));
+  const publications = published.flatMap((p) => (p.published_at ? [{ number: p.number, publishedAt: p.published_at.toISOString() }] : []));
   const counts = rows.map((r) => ({ week: String(r.week), outcomes: Number(r.outcomes), failed: Number(r.failed) }));
   return { range: { from, to }, weeks: weekSeries(counts, { from, to }, publications, z), publications };
 }

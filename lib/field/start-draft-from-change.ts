@@ -5,7 +5,7 @@ import { operationKindLabels } from "@/content-schema/sheet-kinds";
 import { readStoredOperations } from "@/lib/adapt/read-front-matter";
 import { db } from "@/lib/db/knex";
 import { Conflict, NotFound } from "@/lib/errors/domain-errors";
-import { findOpenDraft, requireSheet } from "@/lib/sheets/find-sheet";
+import { findOpenDraft, getSheet } from "@/lib/sheets/find-sheet";
 import { startNewVersionIn } from "@/lib/sheets/start-new-version";
 
 import { checkChangedOperation } from "./check-changed-operation";
@@ -41,7 +41,7 @@ export async function startDraftFromChange({ vendorId, userId, versionId, operat
       .where({ "v.vendor_id": vendorId, "v.id": versionId })
       .first("v.id", "v.number", "v.state", "v.source", "v.front_matter", "s.slug");
     if (!version) throw new NotFound("No such sheet version.");
-    const sheet = await requireSheet({ vendorId, slug: version.slug, trx, lock: true });
+    const sheet = await getSheet({ vendorId, slug: version.slug, trx, lock: true });
     const origin = { fromField: { versionId, operationIndex, param } };
 
     const open = await findOpenDraft({ vendorId, sheetId: sheet.id, trx });

@@ -1,7 +1,7 @@
 import "server-only";
 
 import { db } from "@/lib/db/knex";
-import type { SheetEventSubscriber } from "@/lib/events/subscribers";
+import type { SheetEventSubscriber } from "@/lib/events/sheet-events";
 import { appUrl } from "@/lib/http/app-url";
 import { jobIdFor } from "@/lib/jobs/enqueue";
 

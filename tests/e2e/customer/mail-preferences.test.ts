@@ -4,6 +4,7 @@ import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { firstLink, waitForMail } from "../support/maildev";
 import { signInWithPassword } from "../support/sign-in";
+import { mustExist } from "@/tests/support/must-exist";
 
 const ENGINEER = "eng2@northbeck.test";
 
@@ -12,7 +13,7 @@ describe("mail preferences", () => {
   afterAll(async () => {
     for (const s of sessions) await s.close();
     const db = e2eDb();
-    const user = await db("users").where({ email: ENGINEER }).first("id");
+    const user = mustExist(await db("users").where({ email: ENGINEER }).first("id"), "user");
     if (user) await db("mail_preferences").where({ user_id: user.id }).delete();
     await closeE2eDb();
   });
@@ -47,7 +48,7 @@ describe("mail preferences", () => {
     await reader.page.getByRole("button", { name: "Save mail preferences" }).click();
     await reader.page.getByText("✓ Saved.").waitFor();
     const db = e2eDb();
-    const user = await db("users").where({ email: ENGINEER }).first("id");
+    const user = mustExist(await db("users").where({ email: ENGINEER }).first("id"), "user");
     const rows = Object.fromEntries((await db("mail_preferences").where({ user_id: user.id }).select("kind", "enabled")).map((r) => [r.kind, r.enabled]));
     expect(rows).toMatchObject({ weekly_digest: true, change_alerts: false, batch_changes: true });
 

@@ -3,6 +3,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { signInWithPassword } from "../support/sign-in";
+import { mustExist } from "@/tests/support/must-exist";
 
 // hobby@example.test owns a 24 000 rpm, 1.5 kW garage router (demo data) that both of Northbeck's machine classes fit.
 const CUSTOMER = "hobby@example.test";
@@ -12,15 +13,15 @@ describe("my cutters", () => {
   afterAll(async () => {
     await session?.close();
     const db = e2eDb();
-    const user = await db("users").where({ email: CUSTOMER }).first("id");
+    const user = mustExist(await db("users").where({ email: CUSTOMER }).first("id"), "user");
     if (user) await db("customer_cutters").where({ user_id: user.id }).delete();
     await closeE2eDb();
   });
 
   it("scan a cutter's QR code → add it; type another's SKU → the Bench lists their sheets per machine; the Library fits my shop", { timeout: 300_000 }, async () => {
     const db = e2eDb();
-    const vendor = await db("vendors").where({ slug: "northbeck" }).first("id");
-    const user = await db("users").where({ email: CUSTOMER }).first("id");
+    const vendor = mustExist(await db("vendors").where({ slug: "northbeck" }).first("id"), "vendor");
+    const user = mustExist(await db("users").where({ email: CUSTOMER }).first("id"), "user");
     await db("customer_cutters").where({ vendor_id: vendor.id, user_id: user.id }).delete();
     const withSheets = await db("cutters as c").where("c.vendor_id", vendor.id)
       .whereExists((q) => q.select(db.raw("1")).from("sheets as s").join("sheet_versions as v", "v.sheet_id", "s.id").whereRaw("s.cutter_id = c.id").where("v.state", "published"))

@@ -8,6 +8,7 @@ import { closeE2eDb, e2eDb } from "../support/db";
 import { BASE_URL, MAILDEV_URL } from "../support/env";
 import { waitForMail } from "../support/maildev";
 import { signInWithPassword } from "../support/sign-in";
+import { mustExist } from "@/tests/support/must-exist";
 
 const VENDOR = "northbeck";
 const CUSTOMER = "hobby@example.test";
@@ -21,7 +22,7 @@ async function api(page: Page, url: string, data: unknown) {
 /** A new invented cutter series of two single-flute cutters, so the journey touches no other test's sheets. */
 async function insertSeries(series: string) {
   const db = e2eDb();
-  const vendor = await db("vendors").where({ slug: VENDOR }).first("id");
+  const vendor = mustExist(await db("vendors").where({ slug: VENDOR }).first("id"), "vendor");
   await db("cutters").insert([3.175, 6.35].map((d, i) => ({
     vendor_id: vendor.id, sku: `${series}${i + 1}`, name: `${d} mm single-flute cutter (e2e family ${i + 1})`, diameter_mm: d, flutes: 1, flute_length_mm: 3 * d + 3,
     overall_length_mm: 50, shank_mm: d, geometry: "single-flute", short_code: `${series}${i + 1}`.toLowerCase().replace(/[^a-z0-9]/g, ""),

@@ -3,6 +3,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { signInWithPassword } from "../support/sign-in";
+import { mustExist } from "@/tests/support/must-exist";
 
 const ENGINEER = "eng2@northbeck.test";
 const VENDOR = "northbeck";
@@ -11,7 +12,7 @@ const VENDOR = "northbeck";
 // sheet with no open draft.
 async function demoSuggestion() {
   const db = e2eDb();
-  const vendor = await db("vendors").where({ slug: VENDOR }).first("id");
+  const vendor = mustExist(await db("vendors").where({ slug: VENDOR }).first("id"), "vendor");
   const row = await db("field_change_rollups as c")
     .join("sheet_versions as v", "v.id", "c.sheet_version_id")
     .join("sheets as s", "s.id", "v.sheet_id")

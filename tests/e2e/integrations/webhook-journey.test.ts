@@ -6,14 +6,15 @@ import { receiverAccepts, startReceiver } from "../../support/webhook-receiver";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { signInWithPassword } from "../support/sign-in";
+import { mustExist } from "@/tests/support/must-exist";
 
 const ADMIN = "admin@northbeck.test";
 
 /** A personal access token for a demo person (setup only; the calls below go through the API). */
 async function tokenFor(email: string): Promise<string> {
   const db = e2eDb();
-  const vendor = await db("vendors").where({ slug: "northbeck" }).first("id");
-  const user = await db("users").where({ email }).first("id");
+  const vendor = mustExist(await db("vendors").where({ slug: "northbeck" }).first("id"), "vendor");
+  const user = mustExist(await db("users").where({ email }).first("id"), "user");
   const secret = `sbk_${randomBytes(24).toString("base64url")}`;
   await db("api_tokens").insert({ vendor_id: vendor.id, user_id: user.id, name: "webhook e2e", prefix: secret.slice(0, 12), token_hash: createHash("sha256").update(secret).digest("hex") });
   return secret;

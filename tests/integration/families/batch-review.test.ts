@@ -7,6 +7,7 @@ import { createSetup } from "@/lib/bench/create-setup";
 import { createMachine } from "@/lib/bench/machines";
 import { sendChangeAlerts } from "@/lib/bench/send-change-alerts";
 import { db } from "@/lib/db/knex";
+import { mustExist } from "@/tests/support/must-exist";
 import { approveBatch } from "@/lib/families/approve-batch";
 import { excludeBatchItem } from "@/lib/families/exclude-batch-item";
 import { generateBatch } from "@/lib/families/generate-batch";
@@ -70,7 +71,7 @@ describe("sheet families: batch review and publish", () => {
     await excludeBatchItem({ ...review(s, batch.number), itemId: item.id, reason: "Test cut pending on this cutter." });
     await approveBatch(review(s, batch.number));
     expect(await publishBatch(review(s, batch.number))).toEqual({ published: 3, returned: 1 });
-    expect((await db("sheet_versions").where({ id: item.version_id }).first()).state).toBe("draft");
+    expect(mustExist(await db("sheet_versions").where({ id: item.version_id }).first(), "version").state).toBe("draft");
   });
 
   it("batch publish is all or nothing: one sheet that cannot be published keeps every sheet of the batch unpublished", async () => {

@@ -5,6 +5,7 @@ import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { db } from "@/lib/db/knex";
 import { getBoss } from "@/lib/jobs/boss";
 import { runSeeds } from "@/seeds/run-seeds";
+import { mustExist } from "@/tests/support/must-exist";
 
 afterAll(async () => {
   await (await getBoss()).stop({ graceful: false, wait: true });
@@ -27,7 +28,7 @@ describe("demo family (invented demo data)", () => {
     expect(published.length).toBeGreaterThan(4);
     for (const { id, machine_class_id } of published) {
       const context = (await loadAdaptContext({ vendorId: family.vendor_id, versionId: id }))!;
-      const k = await db("machine_classes").where({ id: machine_class_id }).first();
+      const k = mustExist(await db("machine_classes").where({ id: machine_class_id }).first(), "k");
       const machine = { minRpm: k.rpm_min, maxRpm: k.rpm_max, spindlePowerKw: k.power_kw, maxFeedMmMin: k.max_feed_mm_min, rigidity: k.rigidity, zThrustN: k.z_thrust_n ?? undefined, spindleKind: k.spindle_kind, ratedRpm: k.rated_rpm ?? undefined, stickoutMm: context.cutter.fluteLengthMm };
       for (const op of context.operations) {
         const codes = adaptOperation(context, op.index, machine, {}, { entryCapability: "helix" }).warnings.map((w) => w.code).filter((c) => c !== "standard-cautions" && c !== "values-adapted");

@@ -12,6 +12,7 @@ import { getBoss } from "@/lib/jobs/boss";
 import { createFamilyScenario, FAMILY_RULES } from "@/tests/factories/families";
 
 import { engineOperation, engineWarnings } from "./engine-cells";
+import { mustExist } from "@/tests/support/must-exist";
 
 afterAll(async () => {
   await (await getBoss()).stop({ graceful: false, wait: true });
@@ -56,7 +57,7 @@ describe("sheet families: preview and generation", () => {
         continue;
       }
       expect(item.outcome).toBe("created");
-      const version = await db("sheet_versions").where({ id: item.version_id }).first();
+      const version = mustExist(await db("sheet_versions").where({ id: item.version_id }).first(), "version");
       expect(version.state).toBe("in_review");
       expect(readStoredOperations(version.front_matter)).toEqual(cell.operations.map((op) => op.operation));
       // Every generated number names its rules and rules version, in the record and in the sheet's own prose.
@@ -81,7 +82,7 @@ describe("sheet families: preview and generation", () => {
     const created = rows.filter((r) => r.outcome === "created");
     for (const r of created) {
       expect(r.provenance[1].rules).toEqual(["plastics/profile@light-router"]);
-      const version = await db("sheet_versions").where({ id: r.version_id }).first();
+      const version = mustExist(await db("sheet_versions").where({ id: r.version_id }).first(), "version");
       expect(version.source).toContain("Profile (contour): rule plastics/profile@light-router, rules version 2");
       expect(version.change_note).toContain("rules version 2");
     }

@@ -4,6 +4,7 @@ import { db } from "@/lib/db/knex";
 import { countSheetView, flushSheetViews } from "@/lib/field/count-sheet-view";
 import { createBenchSheet } from "@/tests/factories/bench";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
+import { mustExist } from "@/tests/support/must-exist";
 
 const viewsOf = async (versionId: string) =>
   (await db("sheet_version_activity").where({ sheet_version_id: versionId }).sum<{ views: string | null }[]>("views as views"))[0].views;
@@ -15,7 +16,7 @@ describe("Library page views counted in memory", () => {
     const sheetA = await createBenchSheet(a.vendor.id);
     const sheetB = await createBenchSheet(b.vendor.id);
     await db("sheet_versions").insert({ vendor_id: b.vendor.id, sheet_id: sheetB.sheetId, number: 2, state: "draft", title: "Draft", source: "x", front_matter: "{}" });
-    const draft = await db("sheet_versions").where({ sheet_id: sheetB.sheetId, number: 2 }).first("id");
+    const draft = mustExist(await db("sheet_versions").where({ sheet_id: sheetB.sheetId, number: 2 }).first("id"), "draft");
 
     for (let i = 0; i < 5; i++) countSheetView(a.vendor.id, sheetA.versionId);
     countSheetView(b.vendor.id, sheetB.versionId);

@@ -11,6 +11,7 @@ import { findOpenDraft } from "@/lib/sheets/find-sheet";
 import { createBenchSheet } from "@/tests/factories/bench";
 import { reportOutcomes } from "@/tests/factories/field";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
+import { mustExist } from "@/tests/support/must-exist";
 
 // Invented demo data: the bench sheet's slot (operation 0) runs n 18 000 rpm, vf 1800 mm/min; its profile (operation 1)
 // n 18 000 rpm, vf 1800 mm/min, ap 3 mm. See tests/factories/bench.ts.
@@ -51,7 +52,7 @@ describe("Start a draft from a customers' change", () => {
     const checked = validateSheetSource(draft.source);
     expect(checked.ok).toBe(true);
     const [slot, profile] = checked.frontMatter!.operations;
-    const median = (await db("field_change_rollups").where({ vendor_id: s.vendor.id, sheet_version_id: s.sheet.versionId, operation_index: 0, param: "feedMmMin" }).first()).median_pct;
+    const median = mustExist(mustExist(await db("field_change_rollups").where({ vendor_id: s.vendor.id, sheet_version_id: s.sheet.versionId, operation_index: 0, param: "feedMmMin" }).first(), "rollup").median_pct, "median");
     expect(median).toBeCloseTo(-20, 9);
     expect(slot.vf.value).toBe(1800 * (1 + median / 100));
     expect(slot.vf.text).toBe("1440 mm/min");
@@ -77,8 +78,8 @@ describe("Start a draft from a customers' change", () => {
       expect(note).not.toContain(c.email.split("@")[0]);
     }
     // The audit entry records where the draft came from.
-    const audit = await db("audit_log").where({ vendor_id: s.vendor.id, action: "sheet.new_version" }).first("details");
-    expect(audit.details.fromField).toEqual({ versionId: s.sheet.versionId, operationIndex: 0, param: "feedMmMin" });
+    const audit = mustExist(await db("audit_log").where({ vendor_id: s.vendor.id, action: "sheet.new_version" }).first("details"), "audit");
+    expect(audit.details).toMatchObject({ fromField: { versionId: s.sheet.versionId, operationIndex: 0, param: "feedMmMin" } });
   });
 
   it("says so in the note when the engine warns about the new number", async () => {

@@ -1,3 +1,4 @@
+import type { SheetState } from "@/content-schema/sheet-workflow";
 import { NextRequest } from "next/server";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
@@ -9,6 +10,7 @@ import { createBenchSheet, supersede } from "@/tests/factories/bench";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
 import { buildSheetSource, frontMatterInput, operationInput } from "@/tests/factories/sheet-source";
 import { readPdf } from "@/tests/support/pdf-text";
+import { mustExist } from "@/tests/support/must-exist";
 
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
 vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.user }));
@@ -18,7 +20,7 @@ const textOf = async (res: Response) => readPdf(new Uint8Array(await res.arrayBu
 const squash = (text: string) => text.replace(/[\u00a0\u202f]/g, " ").replace(/\s+/g, " ");
 
 /** A second published sheet of the same cutter, in invented MDF on an invented small router, slot at 1200 mm/min. */
-async function mdfSheet(vendorId: string, cutterId: string, state = "published") {
+async function mdfSheet(vendorId: string, cutterId: string, state: SheetState = "published") {
   const [material] = await db("materials").insert({ vendor_id: vendorId, slug: uniq("mdf"), name: "MDF board", material_group: "wood", vc_min_mpm: 150, vc_max_mpm: 400, min_chip_load_mm: 0.04, kc_nmm2: 40 }).returning("id");
   const [klass] = await db("machine_classes").insert({ vendor_id: vendorId, slug: uniq("hobby"), name: "Hobby router", rpm_min: 10000, rpm_max: 24000, power_kw: 0.8, max_feed_mm_min: 4000, rigidity: 0.4 }).returning("id");
   const [sheet] = await db("sheets").insert({ vendor_id: vendorId, slug: uniq("mdf-sheet"), cutter_id: cutterId, material_id: material.id, machine_class_id: klass.id }).returning("id");
@@ -35,7 +37,7 @@ describe("the cutter data sheet", () => {
   it("gathers every current published sheet of the cutter, in both unit systems, with the cautions, on one page", async () => {
     const { vendor } = await createVendorWithStaff();
     const sheet = await createBenchSheet(vendor.id);
-    const cutter = await db("cutters").where({ vendor_id: vendor.id, sku: sheet.cutterSku }).first("id", "short_code");
+    const cutter = mustExist(await db("cutters").where({ vendor_id: vendor.id, sku: sheet.cutterSku }).first("id", "short_code"), "cutter");
     await mdfSheet(vendor.id, cutter.id);
     await mdfSheet(vendor.id, cutter.id, "withdrawn");
     // v2 of the acrylic sheet lowers the slot feed to 1440 mm/min (56.7 in/min): only v2 is current.

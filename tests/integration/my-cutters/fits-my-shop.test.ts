@@ -7,6 +7,7 @@ import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 import { createBenchSheet } from "@/tests/factories/bench";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
 import { createMachine } from "@/tests/factories/tickets";
+import { mustExist } from "@/tests/support/must-exist";
 
 // Invented demo data. The bench sheet's class is a rigid router (8000–24 000 rpm, 2.2 kW, rigidity 0.8); a second sheet
 // of the same cutter is for a hobby router (10 000–24 000 rpm, 0.8 kW, rigidity 0.4). A 24 000 rpm, 0.8 kW, 0.4 machine
@@ -15,11 +16,11 @@ async function shop() {
   const { vendor, customer } = await createVendorWithStaff();
   const acrylic = await createBenchSheet(vendor.id);
   const otherCutter = await createBenchSheet(vendor.id);
-  const cutter = await db("cutters").where({ vendor_id: vendor.id, sku: acrylic.cutterSku }).first("id");
-  const material = await db("sheets").where({ id: acrylic.sheetId }).first("material_id");
+  const cutter = mustExist(await db("cutters").where({ vendor_id: vendor.id, sku: acrylic.cutterSku }).first("id"), "cutter");
+  const material = mustExist(await db("sheets").where({ id: acrylic.sheetId }).first("material_id"), "material");
   const [hobby] = await db("machine_classes").insert({ vendor_id: vendor.id, slug: uniq("hobby"), name: "Hobby router", rpm_min: 10000, rpm_max: 24000, power_kw: 0.8, max_feed_mm_min: 4000, rigidity: 0.4 }).returning("id");
   const [hobbySheet] = await db("sheets").insert({ vendor_id: vendor.id, slug: uniq("hobby-sheet"), cutter_id: cutter.id, material_id: material.material_id, machine_class_id: hobby.id }).returning(["id", "slug"]);
-  const v1 = await db("sheet_versions").where({ id: acrylic.versionId }).first();
+  const v1 = mustExist(await db("sheet_versions").where({ id: acrylic.versionId }).first(), "v1");
   await db("sheet_versions").insert({ vendor_id: vendor.id, sheet_id: hobbySheet.id, number: 1, state: "published", title: "Hobby version", source: v1.source, front_matter: JSON.stringify(v1.front_matter), published_at: db.fn.now() });
   return { vendor, owner: { vendorId: vendor.id, userId: customer.user.id }, acrylic, otherCutter, hobbySheet };
 }

@@ -13,7 +13,7 @@ import { listMachines } from "@/lib/bench/machines";
 import { wantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { listMyCutterSheets } from "@/lib/my-cutters/list-shop-sheets";
 
-import { setChangeAlertsAction } from "./actions";
+import { addMyCutterAction, removeMyCutterAction, setChangeAlertsAction } from "./actions";
 
 export const metadata = { title: "Bench" };
 
@@ -44,7 +44,7 @@ export default async function BenchPage({ params }: { params: Promise<{ vendor: 
           <EmptyState title="No machines registered yet.">Register your machine to adapt any sheet to its spindle, power and rigidity.</EmptyState>
         )}
       </section>
-      <MyCuttersSection vendorSlug={vendor.slug} rows={myCutters} hasMachines={machines.length > 0} units={units} />
+      <MyCuttersSection vendorSlug={vendor.slug} rows={myCutters} hasMachines={machines.length > 0} units={units} addMyCutterAction={addMyCutterAction} removeMyCutterAction={removeMyCutterAction} />
       <section aria-labelledby="setups" className="mb-8">
         <h2 id="setups" className="mb-3 text-lg font-semibold">Saved setups</h2>
         {setups.length ? (

@@ -6,6 +6,8 @@ import { MAIL_KIND_TEXTS, kindsForRole, mailKindSchema } from "@/lib/mail-prefer
 import { listMailPreferences } from "@/lib/mail-preferences/mail-preferences";
 import { findPreferencesPerson } from "@/lib/mail-preferences/find-preferences-person";
 
+import { saveMailPreferencesAction } from "./actions";
+
 export const metadata = { title: "Mail preferences", robots: { index: false } };
 
 type Props = { params: Promise<{ vendor: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -27,7 +29,7 @@ export default async function MailPreferencesPage({ params, searchParams }: Prop
         {stopped.success ? <p className="rounded border border-stone-300 bg-stone-100 px-3 py-2">{MAIL_KIND_TEXTS[stopped.data].label}: off. Nothing more of this kind will come.</p> : null}
         {q.saved === "1" ? <p className="rounded border border-stone-300 bg-stone-100 px-3 py-2">✓ Saved.</p> : null}
       </div>
-      <MailPreferencesForm vendorSlug={person.vendor.slug} token={person.viaLink ? token : undefined} kinds={kindsForRole(person.role)} choices={choices} />
+      <MailPreferencesForm vendorSlug={person.vendor.slug} token={person.viaLink ? token : undefined} kinds={kindsForRole(person.role)} choices={choices} saveMailPreferencesAction={saveMailPreferencesAction} />
       <p className="mt-6 max-w-2xl text-sm text-stone-600">
         Sign-in links, address checks and invitations always come: they are sent only when you ask for them. These choices are for {person.vendor.name} only.
       </p>

@@ -8,6 +8,8 @@ import { requirePageAccess } from "@/lib/auth/page-access";
 import { formatDate } from "@/lib/ui/dates";
 import { listWebhooks } from "@/lib/webhooks/list-webhooks";
 
+import { createWebhookAction } from "./actions";
+
 export const metadata = { title: "Integrations" };
 
 export default async function IntegrationsPage({ params }: { params: Promise<{ vendor: string }> }) {
@@ -42,7 +44,7 @@ export default async function IntegrationsPage({ params }: { params: Promise<{ v
           </ul>
         )}
         <h3 className="mb-2 mt-6 font-semibold">Add a webhook</h3>
-        <WebhookForm vendor={vendor.slug} />
+        <WebhookForm vendor={vendor.slug} createWebhookAction={createWebhookAction} />
       </section>
     </>
   );

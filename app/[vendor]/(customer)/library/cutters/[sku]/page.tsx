@@ -10,6 +10,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { can } from "@/lib/auth/permissions";
 import { hasMyCutter } from "@/lib/my-cutters/my-cutters";
 
+import { addMyCutterAction, removeMyCutterAction } from "../../../bench/actions";
+
 type Props = { params: Promise<{ vendor: string; sku: string }> };
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
@@ -41,7 +43,7 @@ export default async function CutterPage({ params }: Props) {
         }
       />
       <div className="mb-4 max-w-xl print:hidden">
-        <MyCutterButton vendorSlug={vendor.slug} sku={cutter.sku} cutterId={cutter.id} state={state} />
+        <MyCutterButton vendorSlug={vendor.slug} sku={cutter.sku} cutterId={cutter.id} state={state} addMyCutterAction={addMyCutterAction} removeMyCutterAction={removeMyCutterAction} />
       </div>
       <CachedCutterSheets vendorId={vendor.id} vendorSlug={vendor.slug} sku={cutter.sku} units={units} />
     </>

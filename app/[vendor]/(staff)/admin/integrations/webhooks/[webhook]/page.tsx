@@ -9,6 +9,8 @@ import { formatDateTime } from "@/lib/ui/dates";
 import { getWebhook, listDeliveries } from "@/lib/webhooks/list-webhooks";
 import { REPLAY_WINDOW_SECONDS } from "@/lib/webhooks/sign-payload";
 
+import { deleteWebhookAction, redeliverAction, resumeWebhookAction } from "../../actions";
+
 export const metadata = { title: "Webhook" };
 
 export default async function WebhookPage({ params }: { params: Promise<{ vendor: string; webhook: string }> }) {
@@ -33,9 +35,9 @@ export default async function WebhookPage({ params }: { params: Promise<{ vendor
           refuse timestamps more than {REPLAY_WINDOW_SECONDS / 60} minutes from your clock. See the <Link href="/developers/api#webhooks" className="underline">API reference</Link>.
         </dd>
       </dl>
-      <div className="mb-8"><WebhookStateActions vendor={vendor.slug} webhookId={hook.id} state={hook.state} /></div>
+      <div className="mb-8"><WebhookStateActions vendor={vendor.slug} webhookId={hook.id} state={hook.state} resumeWebhookAction={resumeWebhookAction} deleteWebhookAction={deleteWebhookAction} /></div>
       <h2 className="mb-3 text-lg font-semibold">Delivery log</h2>
-      <WebhookDeliveryLog vendor={vendor.slug} webhookId={hook.id} deliveries={deliveries} />
+      <WebhookDeliveryLog vendor={vendor.slug} webhookId={hook.id} deliveries={deliveries} redeliverAction={redeliverAction} />
     </>
   );
 }
