@@ -14,7 +14,7 @@ export const calculateOperations: ApiOperation[] = [
     access: "public",
     rateLimit: { limit: 120, windowSeconds: 60 },
     body: calculateBodySchema,
-    parsedIn: "lib/calculate/run-calculation.ts",
+    parsedIn: "lib/adapt/calculate/run-calculation.ts",
     requestExamples: {
       metric: { summary: "Metric: 6 mm two-flute slot on a 2.2 kW router", value: calculateMetricExample },
       imperial: { summary: "Imperial: 1/4 in two-flute profile on a 3 hp router", value: calculateImperialExample },
