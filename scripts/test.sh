@@ -50,6 +50,7 @@ fi
 echo "== type check and lint"
 npx tsc --noEmit -p tsconfig.json
 npx eslint . --max-warnings=50
+npx prettier --check --log-level warn .
 
 echo "== migrate and seed the e2e database (demo data)"
 migrate
