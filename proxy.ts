@@ -1,4 +1,4 @@
-import { type NextRequest, NextResponse } from "next/server";
+import { NextResponse, type NextRequest } from "next/server";
 
 // The proxy only sets headers (a per-request CSP nonce); it never authorizes: every layout,
 // page, action and route handler checks the session, vendor and role itself.

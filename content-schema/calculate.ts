@@ -6,8 +6,7 @@ import { operationKindSchema } from "./sheet-kinds";
 // so a caller can mix systems (a metric cutter on an imperial machine) without guessing.
 
 const amount = z.number().positive();
-const quantity = <U extends readonly [string, ...string[]]>(units: U) =>
-  z.strictObject({ value: amount, unit: z.enum(units) });
+const quantity = <U extends readonly [string, ...string[]]>(units: U) => z.strictObject({ value: amount, unit: z.enum(units) });
 
 export const LENGTH_UNITS = ["mm", "in"] as const;
 export const FEED_UNITS = ["mm/min", "m/min", "in/min"] as const;
@@ -77,10 +76,7 @@ export const calculateBodySchema = z.strictObject({
   }),
   /** What the caller's CAM can do to enter the material. */
   entryCapability: z.enum(["plunge-only", "ramp", "helix"]).optional(),
-  overrides: z
-    .strictObject({ radialDepth: lengthSchema, axialDepth: lengthSchema, stickout: lengthSchema })
-    .partial()
-    .optional(),
+  overrides: z.strictObject({ radialDepth: lengthSchema, axialDepth: lengthSchema, stickout: lengthSchema }).partial().optional(),
   options: z
     .strictObject({
       usablePowerFraction: fractionSchema,

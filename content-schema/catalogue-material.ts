@@ -27,7 +27,13 @@ export const CHIP_BAND_PCT_BY_GROUP: Record<(typeof materialGroups)[number], { m
 export const materialCautionSchema = z.object({ kind: cautionKindSchema, text: z.string().trim().min(1).max(500) });
 export type MaterialCaution = z.output<typeof materialCautionSchema>;
 
-const list = (value: unknown) => (typeof value === "string" ? value.split(/[,\n]/).map((s) => s.trim()).filter(Boolean) : value);
+const list = (value: unknown) =>
+  typeof value === "string"
+    ? value
+        .split(/[,\n]/)
+        .map((s) => s.trim())
+        .filter(Boolean)
+    : value;
 
 // In a form, one caution per line: `melting: Keep the feed up.` (a line without a known kind is "general").
 const cautionLines = (value: unknown) => {
@@ -52,10 +58,24 @@ export const materialFieldsSchema = z
     minChipLoadMm: formNumber("Minimum chip load").pipe(z.number().min(0).max(2, "A minimum chip load above 2 mm is not plausible.")),
     kcNmm2: formNumber("kc").pipe(z.number().gt(0, "kc must be more than 0 N/mm².").max(10000)),
     // Blank takes the group's typical band (CHIP_BAND_PCT_BY_GROUP).
-    chipLoadMinPctD: optionalFormNumber("Lowest chip load (% of D)").pipe(z.number().gt(0, "The lowest chip load must be more than 0 % of D.").max(20, "A chip load above 20 % of D is not plausible.").optional()),
-    chipLoadMaxPctD: optionalFormNumber("Highest chip load (% of D)").pipe(z.number().gt(0, "The highest chip load must be more than 0 % of D.").max(20, "A chip load above 20 % of D is not plausible.").optional()),
+    chipLoadMinPctD: optionalFormNumber("Lowest chip load (% of D)").pipe(
+      z
+        .number()
+        .gt(0, "The lowest chip load must be more than 0 % of D.")
+        .max(20, "A chip load above 20 % of D is not plausible.")
+        .optional(),
+    ),
+    chipLoadMaxPctD: optionalFormNumber("Highest chip load (% of D)").pipe(
+      z
+        .number()
+        .gt(0, "The highest chip load must be more than 0 % of D.")
+        .max(20, "A chip load above 20 % of D is not plausible.")
+        .optional(),
+    ),
     kc11Nmm2: optionalFormNumber("kc1.1").pipe(z.number().gt(0, "kc1.1 must be more than 0 N/mm², or left empty.").max(10000).optional()),
-    mc: optionalFormNumber("mc").pipe(z.number().min(0, "mc is between 0 and 1.").lt(1, "mc is between 0 and 1 (typically 0.2–0.4).").optional()),
+    mc: optionalFormNumber("mc").pipe(
+      z.number().min(0, "mc is between 0 and 1.").lt(1, "mc is between 0 and 1 (typically 0.2–0.4).").optional(),
+    ),
     synonyms: z.preprocess(list, z.array(z.string().trim().min(1).max(60)).max(30)).default([]),
     cautions: z.preprocess(cautionLines, z.array(materialCautionSchema).max(20)).default([]),
     notes: z.string().trim().max(2000).default(""),
@@ -66,7 +86,10 @@ export const materialFieldsSchema = z
     const band = CHIP_BAND_PCT_BY_GROUP[m.materialGroup];
     return { ...m, chipLoadMinPctD: m.chipLoadMinPctD ?? band.min, chipLoadMaxPctD: m.chipLoadMaxPctD ?? band.max };
   })
-  .refine((m) => m.chipLoadMaxPctD >= m.chipLoadMinPctD, { path: ["chipLoadMaxPctD"], message: "The highest chip load cannot be below the lowest." });
+  .refine((m) => m.chipLoadMaxPctD >= m.chipLoadMinPctD, {
+    path: ["chipLoadMaxPctD"],
+    message: "The highest chip load cannot be below the lowest.",
+  });
 
 export type MaterialFields = z.output<typeof materialFieldsSchema>;
 export type MaterialFieldsInput = z.input<typeof materialFieldsSchema>;

@@ -1,8 +1,8 @@
 import { parse as parseYaml, stringify as stringifyYaml } from "yaml";
 import { z } from "zod";
 
-import { catalogueSlugSchema } from "./catalogue-fields";
 import { cutterGeometries } from "./catalogue-cutter";
+import { catalogueSlugSchema } from "./catalogue-fields";
 import { materialGroups } from "./catalogue-material";
 import { entryMethodSchema, operationKindSchema } from "./sheet-kinds";
 
@@ -11,16 +11,18 @@ import { entryMethodSchema, operationKindSchema } from "./sheet-kinds";
 // default position in its cutting-speed window and chip-load band, the operation's usual depths).
 
 /** Which cutters a family covers; all given filters apply together. */
-export const cutterSelectionSchema = z.strictObject({
-  series: z.string().trim().max(40).optional().describe("SKU prefix of the series, e.g. SF-"),
-  geometries: z.array(z.enum(cutterGeometries)).max(cutterGeometries.length).default([]),
-  diameterMinMm: z.number().positive().max(100).optional(),
-  diameterMaxMm: z.number().positive().max(100).optional(),
-  skus: z.array(z.string().trim().min(1).max(64)).max(2000).default([]),
-}).refine((s) => s.diameterMinMm === undefined || s.diameterMaxMm === undefined || s.diameterMinMm <= s.diameterMaxMm, {
-  message: "The smallest diameter must not be larger than the largest.",
-  path: ["diameterMaxMm"],
-});
+export const cutterSelectionSchema = z
+  .strictObject({
+    series: z.string().trim().max(40).optional().describe("SKU prefix of the series, e.g. SF-"),
+    geometries: z.array(z.enum(cutterGeometries)).max(cutterGeometries.length).default([]),
+    diameterMinMm: z.number().positive().max(100).optional(),
+    diameterMaxMm: z.number().positive().max(100).optional(),
+    skus: z.array(z.string().trim().min(1).max(64)).max(2000).default([]),
+  })
+  .refine((s) => s.diameterMinMm === undefined || s.diameterMaxMm === undefined || s.diameterMinMm <= s.diameterMaxMm, {
+    message: "The smallest diameter must not be larger than the largest.",
+    path: ["diameterMaxMm"],
+  });
 export type CutterSelection = z.output<typeof cutterSelectionSchema>;
 
 /** The numbers one rule sets; shares are 0 (lowest) to 1 (highest), depths are multiples of the cutter diameter. */
@@ -57,7 +59,10 @@ export const familyDefinitionSchema = z.object({
 });
 export type FamilyDefinition = z.output<typeof familyDefinitionSchema>;
 
-export const batchExcludeSchema = z.object({ itemId: z.uuid(), reason: z.string().trim().min(3, "Say why this sheet is left out.").max(500) });
+export const batchExcludeSchema = z.object({
+  itemId: z.uuid(),
+  reason: z.string().trim().min(3, "Say why this sheet is left out.").max(500),
+});
 
 /** Family rules as an engineer types them (YAML), parsed and then validated by the rules schema. */
 export const familyRulesTextSchema = z
@@ -67,7 +72,10 @@ export const familyRulesTextSchema = z
     try {
       return parseYaml(text) as unknown;
     } catch (error) {
-      ctx.addIssue({ code: "custom", message: `The rules are not valid YAML: ${error instanceof Error ? error.message.split("\n")[0] : "unreadable"}` });
+      ctx.addIssue({
+        code: "custom",
+        message: `The rules are not valid YAML: ${error instanceof Error ? error.message.split("\n")[0] : "unreadable"}`,
+      });
       return z.NEVER;
     }
   })
@@ -83,11 +91,23 @@ const numberGiven = (value: unknown) => (given(value) === undefined ? undefined 
 
 function reshapeFamilyForm(raw: unknown) {
   const f = (raw ?? {}) as Record<string, unknown>;
-  const skus = typeof f.skus === "string" ? f.skus.split(/[\n,]/).map((s) => s.trim()).filter(Boolean) : [];
+  const skus =
+    typeof f.skus === "string"
+      ? f.skus
+          .split(/[\n,]/)
+          .map((s) => s.trim())
+          .filter(Boolean)
+      : [];
   return {
     name: f.name,
     slug: f.slug,
-    cutters: { series: given(f.series), geometries: list(f.geometries), diameterMinMm: numberGiven(f.diameterMinMm), diameterMaxMm: numberGiven(f.diameterMaxMm), skus },
+    cutters: {
+      series: given(f.series),
+      geometries: list(f.geometries),
+      diameterMinMm: numberGiven(f.diameterMinMm),
+      diameterMaxMm: numberGiven(f.diameterMaxMm),
+      skus,
+    },
     materialIds: list(f.materialIds),
     machineClassIds: list(f.machineClassIds),
     rules: { kinds: list(f.kinds), rules: [] },

@@ -25,7 +25,15 @@ export const attentionFilterSchema = z
   .object({
     from: optionalDate,
     to: optionalDate,
-    class: z.preprocess((v) => blank(first(v)), z.string().trim().max(80).regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, "Pick a machine class from the list.").optional()),
+    class: z.preprocess(
+      (v) => blank(first(v)),
+      z
+        .string()
+        .trim()
+        .max(80)
+        .regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, "Pick a machine class from the list.")
+        .optional(),
+    ),
   })
   .superRefine(rangeChecks);
 export type AttentionFilter = z.output<typeof attentionFilterSchema>;

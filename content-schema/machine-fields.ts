@@ -35,16 +35,30 @@ function quantityText(parse: (text: string) => number, what: string, max: number
 /** A customer's machine as entered in the form or sent as JSON; stored in metric machining units. */
 export const machineFieldsSchema = z
   .object({
-    name: z.string({ error: "Give the machine a name." }).trim().min(2, "The name needs at least 2 characters.").max(80, "At most 80 characters."),
+    name: z
+      .string({ error: "Give the machine a name." })
+      .trim()
+      .min(2, "The name needs at least 2 characters.")
+      .max(80, "At most 80 characters."),
     preset: z.preprocess(blankToUndefined, z.string().trim().max(60).optional()),
-    rpmMin: formNumber("The lowest spindle speed").pipe(z.number().gt(0, "The lowest spindle speed must be more than 0 rpm.").max(100000, "At most 100 000 rpm.")),
-    rpmMax: formNumber("The highest spindle speed").pipe(z.number().gt(0, "The highest spindle speed must be more than 0 rpm.").max(100000, "At most 100 000 rpm.")),
-    powerKw: formNumber("Spindle power").pipe(z.number().gt(0, "Spindle power must be more than 0 kW.").max(100, "Spindle power above 100 kW is not plausible.")),
+    rpmMin: formNumber("The lowest spindle speed").pipe(
+      z.number().gt(0, "The lowest spindle speed must be more than 0 rpm.").max(100000, "At most 100 000 rpm."),
+    ),
+    rpmMax: formNumber("The highest spindle speed").pipe(
+      z.number().gt(0, "The highest spindle speed must be more than 0 rpm.").max(100000, "At most 100 000 rpm."),
+    ),
+    powerKw: formNumber("Spindle power").pipe(
+      z.number().gt(0, "Spindle power must be more than 0 kW.").max(100, "Spindle power above 100 kW is not plausible."),
+    ),
     maxFeedMmMin: quantityText((t) => parseFeed(t), "The highest feed", 200000),
     rigidity: z.enum(RIGIDITY_KEYS, { error: "Choose how stiff the machine is." }),
-    zThrustN: optionalFormNumber("Z thrust").pipe(z.number().gt(0, "Z thrust must be more than 0 N, or left empty.").max(100000).optional()),
+    zThrustN: optionalFormNumber("Z thrust").pipe(
+      z.number().gt(0, "Z thrust must be more than 0 N, or left empty.").max(100000).optional(),
+    ),
     spindleKind: spindleKindSchema,
-    ratedRpm: optionalFormNumber("Rated speed").pipe(z.number().gt(0, "The rated speed must be more than 0 rpm, or left empty.").max(100000, "At most 100 000 rpm.").optional()),
+    ratedRpm: optionalFormNumber("Rated speed").pipe(
+      z.number().gt(0, "The rated speed must be more than 0 rpm, or left empty.").max(100000, "At most 100 000 rpm.").optional(),
+    ),
     stickoutMm: z.preprocess(blankToUndefined, quantityText((t) => parseLength(t), "Stick-out", 300).optional()),
     units: z.enum(["metric", "imperial"], { error: "Units are metric or imperial." }).default("metric"),
   })
@@ -70,5 +84,7 @@ export type MachineFields = z.output<typeof machineFieldsSchema>;
 export type MachineFieldsInput = z.input<typeof machineFieldsSchema>;
 
 /** The same fields in a server-action form, with the vendor and (for an edit) the machine's id. */
-export const machineFormSchema = machineFieldsSchema.and(z.object({ vendor: z.string().min(1), id: z.preprocess(blankToUndefined, z.uuid().optional()) }));
+export const machineFormSchema = machineFieldsSchema.and(
+  z.object({ vendor: z.string().min(1), id: z.preprocess(blankToUndefined, z.uuid().optional()) }),
+);
 export const machineDeleteSchema = z.object({ vendor: z.string().min(1), id: z.uuid("Unknown machine.") });

@@ -6,8 +6,13 @@ import { cautionKindSchema, operationKindSchema } from "./sheet-kinds";
 
 const onlyKindsSchema = z
   .string()
-  .transform((text) => text.split(",").map((part) => part.trim()).filter(Boolean))
-  .pipe(z.array(operationKindSchema).min(1, "List at least one operation kind, e.g. only=\"slotting,profile\""));
+  .transform((text) =>
+    text
+      .split(",")
+      .map((part) => part.trim())
+      .filter(Boolean),
+  )
+  .pipe(z.array(operationKindSchema).min(1, 'List at least one operation kind, e.g. only="slotting,profile"'));
 
 const IMAGE_PATH = /\.(png|jpe?g|webp|avif|gif|svg)$/i;
 

@@ -24,5 +24,10 @@ export const acceptInvitationSchema = z.object({
   token: z.string().min(20).max(200),
   // Name and password are asked only when the invitation creates the account (a signed-in account has both).
   name: z.string().trim().max(120).optional(),
-  password: z.string().min(10, "At least 10 characters.").max(200).optional().or(z.literal("").transform(() => undefined)),
+  password: z
+    .string()
+    .min(10, "At least 10 characters.")
+    .max(200)
+    .optional()
+    .or(z.literal("").transform(() => undefined)),
 });

@@ -44,7 +44,8 @@ export const outcomeFieldsSchema = z
   })
   .superRefine((o, ctx) => {
     if (o.result === "failed" && !o.symptom) ctx.addIssue({ code: "custom", path: ["symptom"], message: "Pick what went wrong." });
-    if (o.result !== "failed" && o.symptom) ctx.addIssue({ code: "custom", path: ["symptom"], message: "A symptom goes only with a failed cut." });
+    if (o.result !== "failed" && o.symptom)
+      ctx.addIssue({ code: "custom", path: ["symptom"], message: "A symptom goes only with a failed cut." });
     if (o.result === "worked_after_changes" && Object.keys(o.changes).length === 0) {
       ctx.addIssue({ code: "custom", path: ["changes"], message: "Say which numbers you changed (from and to)." });
     }

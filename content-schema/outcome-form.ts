@@ -2,14 +2,15 @@ import { z } from "zod";
 
 import { isMachiningInputError, parseFeed, parseLength, parseSpindleSpeed } from "@/lib/machining";
 
-import { CHANGEABLE_PARAMS, type ChangeableParam, outcomeFieldsSchema } from "./outcome-fields";
+import { CHANGEABLE_PARAMS, outcomeFieldsSchema, type ChangeableParam } from "./outcome-fields";
 
 type Values = Record<string, unknown>;
 
 function parserFor(param: ChangeableParam, units: string) {
   const imperial = units === "imperial";
   if (param === "rpm") return (t: string) => parseSpindleSpeed(t);
-  if (param === "feedMmMin" || param === "plungeFeedMmMin") return (t: string) => parseFeed(t, { defaultUnit: imperial ? "in/min" : "mm/min" });
+  if (param === "feedMmMin" || param === "plungeFeedMmMin")
+    return (t: string) => parseFeed(t, { defaultUnit: imperial ? "in/min" : "mm/min" });
   return (t: string) => parseLength(t, { defaultUnit: imperial ? "in" : "mm" });
 }
 

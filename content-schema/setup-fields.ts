@@ -34,7 +34,9 @@ export const entryCapabilityLabels: Record<EntryCapabilityKey, string> = {
   helix: "Helix in (and ramp)",
 };
 
-export const entryCapabilitySchema = z.enum(ENTRY_CAPABILITY_KEYS, { error: "Choose how your CAM enters the material: straight plunge only, ramp or helix." }).default("ramp");
+export const entryCapabilitySchema = z
+  .enum(ENTRY_CAPABILITY_KEYS, { error: "Choose how your CAM enters the material: straight plunge only, ramp or helix." })
+  .default("ramp");
 
 export const setupOverridesSchema = z.object({
   radialDepthMm: lengthOverrideSchema("ae"),

@@ -11,4 +11,7 @@ export const spindleKindLabels: Record<SpindleKindKey, string> = {
 
 const blankToUndefined = (value: unknown) => (typeof value === "string" && value.trim() === "" ? undefined : value);
 
-export const spindleKindSchema = z.preprocess(blankToUndefined, z.enum(SPINDLE_KIND_KEYS, { error: "Choose how the spindle delivers power." }).default("constant-torque"));
+export const spindleKindSchema = z.preprocess(
+  blankToUndefined,
+  z.enum(SPINDLE_KIND_KEYS, { error: "Choose how the spindle delivers power." }).default("constant-torque"),
+);

@@ -23,11 +23,28 @@ export const cardOperationSchema = z.object({
   label: z.string(),
   kind: z.string(),
   // The sheet's own numbers; fz, vc and the plunge feed were added later, so older cards lack them.
-  reference: z.object({ rpm: num, feedMmMin: num, axialDepthMm: num, radialDepthMm: num, chipLoadMm: num.optional(), cuttingSpeedMpm: num.optional(), plungeFeedMmMin: nullableNum.optional() }),
+  reference: z.object({
+    rpm: num,
+    feedMmMin: num,
+    axialDepthMm: num,
+    radialDepthMm: num,
+    chipLoadMm: num.optional(),
+    cuttingSpeedMpm: num.optional(),
+    plungeFeedMmMin: nullableNum.optional(),
+  }),
   adapted: cardNumbersSchema.nullable(),
   error: z.string().optional(),
   steps: z.array(
-    z.object({ rule: z.string(), title: z.string(), field: z.string(), quantity: z.string(), before: num, after: num, why: z.string(), source: z.string() }),
+    z.object({
+      rule: z.string(),
+      title: z.string(),
+      field: z.string(),
+      quantity: z.string(),
+      before: num,
+      after: num,
+      why: z.string(),
+      source: z.string(),
+    }),
   ),
   warnings: z.array(z.object({ code: z.string(), title: z.string(), message: z.string() })),
 });

@@ -2,7 +2,10 @@ import { z } from "zod";
 
 import { accentColorSchema } from "./vendor";
 
-const checkbox = z.union([z.literal("on"), z.literal("true"), z.literal("")]).optional().transform((v) => v === "on" || v === "true");
+const checkbox = z
+  .union([z.literal("on"), z.literal("true"), z.literal("")])
+  .optional()
+  .transform((v) => v === "on" || v === "true");
 
 /** Confidence levels offered for the Wilson interval of Field results (Needs attention ranks by its lower end). */
 export const WILSON_CONFIDENCE_CHOICES = ["0.8", "0.9", "0.95", "0.99"] as const;

@@ -1,8 +1,8 @@
 import { z } from "zod";
 
 import { emailSchema } from "@/content-schema/auth";
-
 import { vendorSlugSchema } from "@/lib/vendors/reserved-slugs";
+
 import { accentColorSchema } from "./vendor";
 
 export const createVendorSchema = z.object({

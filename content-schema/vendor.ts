@@ -12,10 +12,13 @@ export const vendorSettingsSchema = z.object({
 });
 export type VendorSettings = z.infer<typeof vendorSettingsSchema>;
 
-export const accentColorSchema = z.string().trim().superRefine((value, ctx) => {
-  const why = explainAccentColor(value);
-  if (why) ctx.addIssue({ code: "custom", message: why });
-});
+export const accentColorSchema = z
+  .string()
+  .trim()
+  .superRefine((value, ctx) => {
+    const why = explainAccentColor(value);
+    if (why) ctx.addIssue({ code: "custom", message: why });
+  });
 
 export type Vendor = {
   id: string;

@@ -1,7 +1,14 @@
 import { z } from "zod";
 
 /** What a vendor can subscribe a webhook to. */
-export const WEBHOOK_EVENT_TYPES = ["sheet.published", "sheet.superseded", "sheet.withdrawn", "ticket.created", "ticket.answered", "outcome.reported"] as const;
+export const WEBHOOK_EVENT_TYPES = [
+  "sheet.published",
+  "sheet.superseded",
+  "sheet.withdrawn",
+  "ticket.created",
+  "ticket.answered",
+  "outcome.reported",
+] as const;
 export type WebhookEventType = (typeof WEBHOOK_EVENT_TYPES)[number];
 
 export const webhookEventLabels: Record<WebhookEventType, string> = {
@@ -24,7 +31,12 @@ export const webhookEventDataSchemas = {
   "sheet.published": sheetVersionRef.extend({ publishedAt: z.iso.datetime(), supersedes: z.int().min(1).nullable() }),
   "sheet.superseded": sheetVersionRef.extend({ supersededBy: z.int().min(1) }),
   "sheet.withdrawn": sheetVersionRef.extend({ reason: z.string().nullable() }),
-  "ticket.created": z.object({ ticketId: z.uuid(), number: z.int(), subject: z.string(), url: z.url().describe("The ticket in the Desk.") }),
+  "ticket.created": z.object({
+    ticketId: z.uuid(),
+    number: z.int(),
+    subject: z.string(),
+    url: z.url().describe("The ticket in the Desk."),
+  }),
   "ticket.answered": z.object({ ticketId: z.uuid(), number: z.int(), subject: z.string(), messageId: z.uuid(), url: z.url() }),
   "outcome.reported": z.object({
     outcomeId: z.uuid(),

@@ -32,9 +32,7 @@ export async function up(knex: Knex): Promise<void> {
     t.timestamps(true, true);
     t.unique(["vendor_id", "user_id"]);
   });
-  await knex.raw(
-    "alter table members add constraint members_role_check check (role in ('admin','engineer','support','customer'))",
-  );
+  await knex.raw("alter table members add constraint members_role_check check (role in ('admin','engineer','support','customer'))");
 
   await knex.schema.createTable("invitations", (t) => {
     t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
@@ -48,9 +46,7 @@ export async function up(knex: Knex): Promise<void> {
     t.timestamp("revoked_at", { useTz: true });
     t.timestamps(true, true);
   });
-  await knex.raw(
-    "alter table invitations add constraint invitations_role_check check (role in ('admin','engineer','support','customer'))",
-  );
+  await knex.raw("alter table invitations add constraint invitations_role_check check (role in ('admin','engineer','support','customer'))");
 
   // next-auth e-mail provider tokens (stored hashed by next-auth itself).
   await knex.schema.createTable("verification_tokens", (t) => {

@@ -125,8 +125,14 @@ export async function up(knex: Knex): Promise<void> {
 
 export async function down(knex: Knex): Promise<void> {
   for (const table of [
-    "inbound_mail_log", "problem_reports", "reply_snippets", "desk_views",
-    "ticket_attachments", "ticket_messages", "ticket_sheet_links", "tickets",
+    "inbound_mail_log",
+    "problem_reports",
+    "reply_snippets",
+    "desk_views",
+    "ticket_attachments",
+    "ticket_messages",
+    "ticket_sheet_links",
+    "tickets",
   ]) {
     await knex.schema.dropTableIfExists(table);
   }

@@ -100,5 +100,6 @@ export async function up(knex: Knex): Promise<void> {
 export async function down(knex: Knex): Promise<void> {
   await knex.raw("drop materialized view if exists field_change_rollups");
   await knex.raw("drop materialized view if exists field_version_rollups");
-  for (const table of ["field_rollup_refreshes", "field_digests_sent", "sheet_version_activity"]) await knex.schema.dropTableIfExists(table);
+  for (const table of ["field_rollup_refreshes", "field_digests_sent", "sheet_version_activity"])
+    await knex.schema.dropTableIfExists(table);
 }

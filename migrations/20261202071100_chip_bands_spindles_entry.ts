@@ -34,7 +34,9 @@ export async function up(knex: Knex): Promise<void> {
       new.chip_load_max_pct_d := coalesce(new.chip_load_max_pct_d, ${BAND_MAX.replaceAll("material_group", "new.material_group")});
       return new;
     end $$`);
-  await knex.raw(`create trigger materials_fill_chip_band before insert or update on materials for each row execute function materials_fill_chip_band()`);
+  await knex.raw(
+    `create trigger materials_fill_chip_band before insert or update on materials for each row execute function materials_fill_chip_band()`,
+  );
   await knex.raw(`update materials set
     chip_load_min_pct_d = ${BAND_MIN},
     chip_load_max_pct_d = ${BAND_MAX},
@@ -52,14 +54,19 @@ export async function up(knex: Knex): Promise<void> {
       t.double("rated_rpm");
     });
     await knex.raw(`update ?? set z_thrust_n = ${Z_THRUST_DEFAULT} where z_thrust_n is null`, [table]);
-    await knex.raw(`alter table ?? add constraint ?? check (spindle_kind in ('constant-torque','constant-power')
-      and (rated_rpm is null or (rated_rpm > 0 and rated_rpm <= rpm_max)) and (z_thrust_n is null or z_thrust_n > 0))`, [table, `${table}_spindle_check`]);
+    await knex.raw(
+      `alter table ?? add constraint ?? check (spindle_kind in ('constant-torque','constant-power')
+      and (rated_rpm is null or (rated_rpm > 0 and rated_rpm <= rpm_max)) and (z_thrust_n is null or z_thrust_n > 0))`,
+      [table, `${table}_spindle_check`],
+    );
   }
 
   await knex.schema.alterTable("setups", (t) => {
     t.text("entry_capability").notNullable().defaultTo("ramp");
   });
-  await knex.raw(`alter table setups add constraint setups_entry_capability_check check (entry_capability in ('plunge-only','ramp','helix'))`);
+  await knex.raw(
+    `alter table setups add constraint setups_entry_capability_check check (entry_capability in ('plunge-only','ramp','helix'))`,
+  );
 }
 
 export async function down(knex: Knex): Promise<void> {
@@ -73,7 +80,9 @@ export async function down(knex: Knex): Promise<void> {
   }
   await knex.raw(`drop trigger if exists materials_fill_chip_band on materials`);
   await knex.raw(`drop function if exists materials_fill_chip_band()`);
-  await knex.raw(`alter table materials drop constraint if exists materials_chip_band_check, drop constraint if exists materials_kienzle_check`);
+  await knex.raw(
+    `alter table materials drop constraint if exists materials_chip_band_check, drop constraint if exists materials_kienzle_check`,
+  );
   await knex.schema.alterTable("materials", (t) => {
     t.dropColumn("chip_load_min_pct_d");
     t.dropColumn("chip_load_max_pct_d");

@@ -11,7 +11,9 @@ const TABLES = [
 export async function up(knex: Knex): Promise<void> {
   for (const { table, actor } of TABLES) {
     await knex.schema.alterTable(table, (t) => t.text("idempotency_key"));
-    await knex.raw(`create unique index ${table}_idempotency_key on ${table} (vendor_id, ${actor}, idempotency_key) where idempotency_key is not null`);
+    await knex.raw(
+      `create unique index ${table}_idempotency_key on ${table} (vendor_id, ${actor}, idempotency_key) where idempotency_key is not null`,
+    );
   }
 }
 

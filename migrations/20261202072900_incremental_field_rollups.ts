@@ -66,7 +66,11 @@ const CHANGE_ROWS = `
 
 // Source tables whose rows carry sheet_version_id; sheet_versions itself notes its own id.
 const SOURCES = ["outcomes", "setups", "sheet_version_activity", "ticket_sheet_links", "problem_reports"] as const;
-const EVENTS = [["insert", "new"], ["update", "new"], ["delete", "old"]] as const;
+const EVENTS = [
+  ["insert", "new"],
+  ["update", "new"],
+  ["delete", "old"],
+] as const;
 
 export async function up(knex: Knex): Promise<void> {
   await knex.raw("drop materialized view field_change_rollups");
@@ -149,16 +153,26 @@ export async function down(knex: Knex): Promise<void> {
   for (const table of [...SOURCES, "sheet_versions"]) {
     for (const [event] of EVENTS) await knex.raw(`drop trigger if exists ${table}_field_rollups_${event} on ${table}`);
   }
-  for (const fn of ["field_rollups_note_versions()", "field_rollups_note_rows()", "field_rollups_rebuild()", "field_rollups_refresh_pending(int)", "field_rollups_refresh_versions(uuid[])"]) {
+  for (const fn of [
+    "field_rollups_note_versions()",
+    "field_rollups_note_rows()",
+    "field_rollups_rebuild()",
+    "field_rollups_refresh_pending(int)",
+    "field_rollups_refresh_versions(uuid[])",
+  ]) {
     await knex.raw(`drop function ${fn}`);
   }
   await knex.raw("drop table field_rollup_changes, field_change_rollups, field_version_rollups");
   // Back to the materialized views, over every version, built from the same row functions.
-  await knex.raw("create materialized view field_version_rollups as select * from field_rollup_version_rows(array(select id from sheet_versions))");
+  await knex.raw(
+    "create materialized view field_version_rollups as select * from field_rollup_version_rows(array(select id from sheet_versions))",
+  );
   await knex.raw("create unique index field_version_rollups_version on field_version_rollups (sheet_version_id)");
   await knex.raw("create index field_version_rollups_vendor on field_version_rollups (vendor_id, state)");
   await knex.raw("create index field_version_rollups_sheet on field_version_rollups (vendor_id, sheet_id, number)");
-  await knex.raw("create materialized view field_change_rollups as select * from field_rollup_change_rows(array(select id from sheet_versions))");
+  await knex.raw(
+    "create materialized view field_change_rollups as select * from field_rollup_change_rows(array(select id from sheet_versions))",
+  );
   await knex.raw("create unique index field_change_rollups_key on field_change_rollups (sheet_version_id, param)");
   await knex.raw("create index field_change_rollups_vendor on field_change_rollups (vendor_id, reports desc)");
 }

@@ -40,7 +40,9 @@ export async function up(knex: Knex): Promise<void> {
     t.unique(["webhook_id", "event_id"]);
     t.index(["vendor_id", "webhook_id", "created_at"]);
   });
-  await knex.raw("alter table webhook_deliveries add constraint webhook_deliveries_state_check check (state in ('pending', 'retrying', 'delivered', 'failed', 'held'))");
+  await knex.raw(
+    "alter table webhook_deliveries add constraint webhook_deliveries_state_check check (state in ('pending', 'retrying', 'delivered', 'failed', 'held'))",
+  );
 }
 
 export async function down(knex: Knex): Promise<void> {

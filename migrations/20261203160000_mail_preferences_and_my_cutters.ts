@@ -17,7 +17,9 @@ export async function up(knex: Knex): Promise<void> {
     t.primary(["vendor_id", "user_id", "kind"]);
   });
   // DDL takes no bind parameters; the kinds are this file's own constants.
-  await knex.raw(`alter table mail_preferences add constraint mail_preferences_kind check (kind in (${KINDS.map((k) => `'${k}'`).join(", ")}))`);
+  await knex.raw(
+    `alter table mail_preferences add constraint mail_preferences_kind check (kind in (${KINDS.map((k) => `'${k}'`).join(", ")}))`,
+  );
   await knex.raw(`insert into mail_preferences (vendor_id, user_id, kind, enabled, updated_at)
     select vendor_id, user_id, 'change_alerts', change_alerts, updated_at from mail_preferences_v1
     union all

@@ -1,7 +1,6 @@
 // Benchmark: adaptRecipe throughput on one core over a seeded, realistic mix of inputs.
 // Run: npm run bench:engine
-import { adaptRecipe, type AdaptInput, OPERATION_KINDS } from "../lib/machining/index";
-
+import { adaptRecipe, OPERATION_KINDS, type AdaptInput } from "../lib/machining/index";
 import { prng } from "./lib/prng";
 
 const TARGET_PER_SECOND = 500_000;
@@ -40,7 +39,12 @@ function sampleInput(): AdaptInput {
       cuttingSpeedWindowMpm: maybe(0.9, () => [between(100, 300), between(350, 900)] as const),
       minChipLoadMm: maybe(0.7, () => between(0.01, 0.08)),
       specificCuttingForceNmm2: maybe(0.9, () => between(100, 2000)),
-      chipLoadPctOfD: maybe(0.6, () => pick([{ min: 0.012, max: 0.03 }, { min: 0.005, max: 0.015 }])),
+      chipLoadPctOfD: maybe(0.6, () =>
+        pick([
+          { min: 0.012, max: 0.03 },
+          { min: 0.005, max: 0.015 },
+        ]),
+      ),
       kc11Nmm2: maybe(0.4, () => between(100, 1500)),
       mc: maybe(0.4, () => between(0.15, 0.35)),
       meltsWhenRubbing: maybe(0.3, () => true),
@@ -83,7 +87,10 @@ const plain = (input: AdaptInput) => {
   const r = op.radialDepthMm / op.diameterMm;
   const hex = r >= 0.5 ? fz : fz * 2 * Math.sqrt(r * (1 - r));
   const n = Math.min(Math.max(op.rpm, input.machine.minRpm), input.machine.maxRpm);
-  return { vc: (Math.PI * op.diameterMm * n) / 1000, vf: Math.min((hex / Math.max(hex, 1e-12)) * fz * op.flutes * n, input.machine.maxFeedMmMin) };
+  return {
+    vc: (Math.PI * op.diameterMm * n) / 1000,
+    vf: Math.min((hex / Math.max(hex, 1e-12)) * fz * op.flutes * n, input.machine.maxFeedMmMin),
+  };
 };
 let baseCalls = 0;
 const baseStart = performance.now();
@@ -106,7 +113,9 @@ const pct = (p: number) => times[Math.min(times.length - 1, Math.floor(p * times
 const verdict = perSecond >= TARGET_PER_SECOND ? "PASS" : "BELOW";
 console.log(`adaptRecipe benchmark (node ${process.version}, one core, ${MIX_SIZE} seeded inputs)`);
 console.log(`  throughput: ${Math.round(perSecond).toLocaleString("en-US")} adaptations/s over ${calls.toLocaleString("en-US")} calls`);
-console.log(`  baseline:   ${Math.round(basePerSecond).toLocaleString("en-US")} plain speed-and-feed evaluations/s on the same mix; adaptRecipe costs ${(basePerSecond / perSecond).toFixed(1)}× one`);
+console.log(
+  `  baseline:   ${Math.round(basePerSecond).toLocaleString("en-US")} plain speed-and-feed evaluations/s on the same mix; adaptRecipe costs ${(basePerSecond / perSecond).toFixed(1)}× one`,
+);
 console.log(`  per call:   p50 ${pct(0.5).toFixed(2)} µs, p99 ${pct(0.99).toFixed(2)} µs`);
 console.log(`  target:     ≥ ${TARGET_PER_SECOND.toLocaleString("en-US")}/s: ${verdict}`);
 if (!Number.isFinite(sink)) console.log("  (checksum not finite)");

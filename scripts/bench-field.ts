@@ -17,12 +17,13 @@
 // Run: npm run bench:field -- [--outcomes 1000000] [--versions 20000] [--vendors 20] [--machines 50000] [--iterations 200]
 // Only the refresh figures, at several sizes (one throwaway database each): npm run bench:field -- --refresh-at 1000000,5000000
 import type { Knex } from "knex";
+
 import { arg } from "./lib/bench-args";
 import { withBenchDatabase } from "./lib/bench-database";
-import { fmt, type Options } from "./lib/field-bench/shape";
+import { loadDrillInSheets, loadFieldModules, measure, measureRefresh, type RefreshFigures } from "./lib/field-bench/measure";
+import { printDataShape, printPlans, printTable } from "./lib/field-bench/report";
 import { seed } from "./lib/field-bench/seed";
-import { loadFieldModules, loadDrillInSheets, measure, type RefreshFigures, measureRefresh } from "./lib/field-bench/measure";
-import { printDataShape, printTable, printPlans } from "./lib/field-bench/report";
+import { fmt, type Options } from "./lib/field-bench/shape";
 
 const TARGET_P95_MS = 200;
 
@@ -38,7 +39,9 @@ function readOptions(): Options {
 }
 
 async function run(url: string, knex: Knex, o: Options, refreshOnly = false): Promise<RefreshFigures> {
-  console.log(`${o.outcomes.toLocaleString("en-GB")} outcomes over ${o.versions.toLocaleString("en-GB")} versions, ${o.vendors} vendors, ${o.machines.toLocaleString("en-GB")} machines`);
+  console.log(
+    `${o.outcomes.toLocaleString("en-GB")} outcomes over ${o.versions.toLocaleString("en-GB")} versions, ${o.vendors} vendors, ${o.machines.toLocaleString("en-GB")} machines`,
+  );
   await seed(knex, o);
   const field = await loadFieldModules(url);
   try {
@@ -53,7 +56,9 @@ async function run(url: string, knex: Knex, o: Options, refreshOnly = false): Pr
 
     const page = stats.get("page    overview (all four in parallel)") ?? Infinity;
     const drill = stats.get("page    drill-in loadSheetFieldResults") ?? Infinity;
-    console.log(`\nOverview page load p95 ${page.toFixed(1)} ms; drill-in p95 ${drill.toFixed(1)} ms (${drill <= TARGET_P95_MS ? "within" : "over"} ${TARGET_P95_MS} ms)`);
+    console.log(
+      `\nOverview page load p95 ${page.toFixed(1)} ms; drill-in p95 ${drill.toFixed(1)} ms (${drill <= TARGET_P95_MS ? "within" : "over"} ${TARGET_P95_MS} ms)`,
+    );
     console.log(`Target p95 ≤ ${TARGET_P95_MS} ms (page load): ${page <= TARGET_P95_MS ? "PASS" : "BELOW"}`);
     return figures;
   } finally {
@@ -65,8 +70,11 @@ async function run(url: string, knex: Knex, o: Options, refreshOnly = false): Pr
 function refreshSizes(): number[] {
   const at = process.argv.indexOf("--refresh-at");
   if (at === -1) return [];
-  const sizes = String(process.argv[at + 1] ?? "").split(",").map(Number);
-  if (!sizes.length || sizes.some((n) => !Number.isInteger(n) || n < 1_000 || n > 5_000_000)) throw new Error("--refresh-at takes outcome totals from 1000 to 5000000, comma-separated.");
+  const sizes = String(process.argv[at + 1] ?? "")
+    .split(",")
+    .map(Number);
+  if (!sizes.length || sizes.some((n) => !Number.isInteger(n) || n < 1_000 || n > 5_000_000))
+    throw new Error("--refresh-at takes outcome totals from 1000 to 5000000, comma-separated.");
   return sizes;
 }
 
@@ -79,12 +87,19 @@ async function main() {
   }
   const figures: RefreshFigures[] = [];
   for (const outcomes of sizes) {
-    await withBenchDatabase({ prefix: "swarfbook_bench_field", poolMax: 4 }, async (url, knex) => void figures.push(await run(url, knex, { ...options, outcomes }, true)));
+    await withBenchDatabase(
+      { prefix: "swarfbook_bench_field", poolMax: 4 },
+      async (url, knex) => void figures.push(await run(url, knex, { ...options, outcomes }, true)),
+    );
   }
   console.log(`\n${"outcomes".padStart(12)}${"full rebuild".padStart(16)}${"one new report".padStart(18)}`);
-  for (const f of figures) console.log(`${f.outcomes.toLocaleString("en-GB").padStart(12)}${fmt(f.rebuildMs).padStart(16)}${fmt(f.oneReportMs).padStart(18)}`);
+  for (const f of figures)
+    console.log(`${f.outcomes.toLocaleString("en-GB").padStart(12)}${fmt(f.rebuildMs).padStart(16)}${fmt(f.oneReportMs).padStart(18)}`);
   const [first, last] = [figures[0], figures.at(-1)!];
-  if (figures.length > 1) console.log(`one-report refresh at ${last.outcomes.toLocaleString("en-GB")} vs ${first.outcomes.toLocaleString("en-GB")}: ${(last.oneReportMs / Math.max(1, first.oneReportMs)).toFixed(2)}× (full rebuild ${(last.rebuildMs / Math.max(1, first.rebuildMs)).toFixed(2)}×)`);
+  if (figures.length > 1)
+    console.log(
+      `one-report refresh at ${last.outcomes.toLocaleString("en-GB")} vs ${first.outcomes.toLocaleString("en-GB")}: ${(last.oneReportMs / Math.max(1, first.oneReportMs)).toFixed(2)}× (full rebuild ${(last.rebuildMs / Math.max(1, first.rebuildMs)).toFixed(2)}×)`,
+    );
 }
 
 main().catch((error: unknown) => {

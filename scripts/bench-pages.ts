@@ -6,7 +6,7 @@
 //        [--clients 8] [--blocks 6] [--per-block 40] [--seconds 40] [--only sheet,search,desk,thread,calculate]
 import path from "node:path";
 
-import { buildApp, startApp, BENCH_DIST_DIR } from "./bench-pages/app-server";
+import { BENCH_DIST_DIR, buildApp, startApp } from "./bench-pages/app-server";
 import { requester, sessionCookie } from "./bench-pages/http-get";
 import { pageJavaScript } from "./bench-pages/page-javascript";
 import { seedPagesData } from "./bench-pages/seed-pages-data";
@@ -19,11 +19,27 @@ import { reportRatio, summarize } from "./lib/bench-report";
 const SHEET_JS_GOAL_KB = 110;
 const CALCULATE_BODY = JSON.stringify({
   units: "metric",
-  operation: { kind: "slotting", diameter: { value: 6, unit: "mm" }, flutes: 2, spindleSpeed: { value: 18000, unit: "rpm" },
-    feed: { value: 2500, unit: "mm/min" }, axialDepth: { value: 3, unit: "mm" }, radialDepth: { value: 6, unit: "mm" } },
-  material: { cuttingSpeedWindow: { min: 100, max: 350, unit: "m/min" }, minChipLoad: { value: 0.05, unit: "mm/tooth" }, specificCuttingForce: { value: 100, unit: "N/mm²" } },
+  operation: {
+    kind: "slotting",
+    diameter: { value: 6, unit: "mm" },
+    flutes: 2,
+    spindleSpeed: { value: 18000, unit: "rpm" },
+    feed: { value: 2500, unit: "mm/min" },
+    axialDepth: { value: 3, unit: "mm" },
+    radialDepth: { value: 6, unit: "mm" },
+  },
+  material: {
+    cuttingSpeedWindow: { min: 100, max: 350, unit: "m/min" },
+    minChipLoad: { value: 0.05, unit: "mm/tooth" },
+    specificCuttingForce: { value: 100, unit: "N/mm²" },
+  },
   referenceMachine: { rigidity: 0.8 },
-  machine: { spindleSpeed: { min: 8000, max: 12000, unit: "rpm" }, maxFeed: { value: 4000, unit: "mm/min" }, spindlePower: { value: 0.8, unit: "kW" }, rigidity: 0.5 },
+  machine: {
+    spindleSpeed: { min: 8000, max: 12000, unit: "rpm" },
+    maxFeed: { value: 4000, unit: "mm/min" },
+    spindlePower: { value: 0.8, unit: "kW" },
+    rigidity: 0.5,
+  },
 });
 
 async function main() {
@@ -51,16 +67,35 @@ async function main() {
       const staticFile = { name: "static file", run: async () => void (await get({ path: staticPath })) };
       const v = targets.vendorSlug;
       const pages = [
-        { key: "sheet", label: "sheet-page/static", name: "Library sheet page", request: { path: `/${v}/library/${targets.sheetSlug}` }, goal: { p95: 1.5 } },
-        { key: "search", label: "search-api/static", name: "search API", request: { path: `/api/v1/vendors/${v}/search?q=${encodeURIComponent("1/8 acrylic slot")}` } },
+        {
+          key: "sheet",
+          label: "sheet-page/static",
+          name: "Library sheet page",
+          request: { path: `/${v}/library/${targets.sheetSlug}` },
+          goal: { p95: 1.5 },
+        },
+        {
+          key: "search",
+          label: "search-api/static",
+          name: "search API",
+          request: { path: `/api/v1/vendors/${v}/search?q=${encodeURIComponent("1/8 acrylic slot")}` },
+        },
         { key: "desk", label: "desk-queue/static", name: "Desk queue", request: { path: `/${v}/desk`, cookie: staff } },
-        { key: "thread", label: "ticket-thread/static", name: "ticket thread", request: { path: `/${v}/desk/tickets/${targets.threadTicketId}`, cookie: staff } },
+        {
+          key: "thread",
+          label: "ticket-thread/static",
+          name: "ticket thread",
+          request: { path: `/${v}/desk/tickets/${targets.threadTicketId}`, cookie: staff },
+        },
       ].filter((p) => only.has(p.key));
       for (const page of pages) {
         for (let i = 0; i < 5; i++) await get(page.request); // warm-up: compile caches, fill pools, first render
         const [subject, baseline] = await runBlocks({
           kinds: [{ name: page.name, run: async () => void (await get(page.request)) }, staticFile],
-          clients, perBlock, blocks, maxSeconds: seconds,
+          clients,
+          perBlock,
+          blocks,
+          maxSeconds: seconds,
         });
         reportRatio(page.label, summarize(subject), summarize(baseline), page.goal);
       }
@@ -68,15 +103,23 @@ async function main() {
         const calculate = { path: "/api/v1/calculate", method: "POST" as const, body: CALCULATE_BODY };
         for (let i = 0; i < 5; i++) await get(calculate);
         const [subject, baseline] = await runBlocks({
-          kinds: [{ name: "POST /api/v1/calculate", run: async () => void (await get(calculate)) }, { name: "GET /api/health", run: async () => void (await get({ path: "/api/health" })) }],
-          clients: 10, perBlock: perBlock * 5, blocks, maxSeconds: seconds,
+          kinds: [
+            { name: "POST /api/v1/calculate", run: async () => void (await get(calculate)) },
+            { name: "GET /api/health", run: async () => void (await get({ path: "/api/health" })) },
+          ],
+          clients: 10,
+          perBlock: perBlock * 5,
+          blocks,
+          maxSeconds: seconds,
         });
         reportRatio("calculate/health", summarize(subject), summarize(baseline), { throughput: 0.9 });
       }
       if (only.has("sheet")) {
         const js = await pageJavaScript(app.baseUrl, `/${v}/library/${targets.sheetSlug}`);
         const kb = js.compressed / 1024;
-        console.log(`\nLibrary sheet page JavaScript: ${js.chunks} chunks, ${(js.raw / 1024).toFixed(0)} KB raw, ${kb.toFixed(0)} KB gzip (goal ≤ ${SHEET_JS_GOAL_KB} KB: ${kb <= SHEET_JS_GOAL_KB ? "met" : "not met"}; ${js.skippedNoModule} noModule polyfill chunk(s) not counted)`);
+        console.log(
+          `\nLibrary sheet page JavaScript: ${js.chunks} chunks, ${(js.raw / 1024).toFixed(0)} KB raw, ${kb.toFixed(0)} KB gzip (goal ≤ ${SHEET_JS_GOAL_KB} KB: ${kb <= SHEET_JS_GOAL_KB ? "met" : "not met"}; ${js.skippedNoModule} noModule polyfill chunk(s) not counted)`,
+        );
       }
     } finally {
       await app.stop();

@@ -4,13 +4,12 @@
 // Run: node --conditions=react-server --import tsx scripts/bench-search.ts [--versions 20000] [--vendors 20] [--queries 4000] [--clients 20] [--seconds 120]
 import type { Knex } from "knex";
 
-import { createPostgresEngine } from "../search/engines/postgres/postgres-engine";
 import { buildSearchSql } from "../search/engines/postgres/pg-search-sql";
+import { createPostgresEngine } from "../search/engines/postgres/postgres-engine";
 import { preparedQuery, preparedStatementsEnabled } from "../search/engines/postgres/prepared-query";
 import { reindexVendor } from "../search/indexing/reindex";
 import { engineQueriesFor, runSearch } from "../search/run/run-search";
-
-import { type BenchVendor, createBenchVendor, queryMix } from "./bench-search-data";
+import { createBenchVendor, queryMix, type BenchVendor } from "./bench-search-data";
 import { arg, percentile } from "./lib/bench-args";
 import { runBlocks } from "./lib/bench-blocks";
 import { withBenchDatabase } from "./lib/bench-database";
@@ -80,13 +79,17 @@ async function main() {
       console.log("\nPostgreSQL execution + planning time of the first query of each search in the mix:");
       for (const q of [...new Set(mix.map((m) => (/^B\d+-/.test(m.q) ? vendors[0].skus[0] : m.q)))]) {
         const first = buildSearchSql(engineQueriesFor({ vendorId: vendors[0].id, q }).steps[0].query);
-        const rows = (await knex.raw<{ rows: { "QUERY PLAN": string }[] }>(`explain (analyze) ${first.sql}`, first.bindings as Knex.ValueDict[])).rows.map((r) => r["QUERY PLAN"]);
+        const rows = (
+          await knex.raw<{ rows: { "QUERY PLAN": string }[] }>(`explain (analyze) ${first.sql}`, first.bindings as Knex.ValueDict[])
+        ).rows.map((r) => r["QUERY PLAN"]);
         const ms = (label: string) => rows.find((r) => r.startsWith(label))?.replace(/[^\d.]/g, "") ?? "?";
         console.log(`  exec ${ms("Execution Time").padStart(7)} ms  plan ${ms("Planning Time").padStart(6)} ms  “${q}”`);
       }
     }
     const search = summarize(searchResult);
-    console.log(`\n${latencies.length} searches, ${CLIENTS} concurrent clients, ${Math.round(search.perSecond)} searches/s, ${tripsPerSearch.toFixed(2)} engine round trips per search`);
+    console.log(
+      `\n${latencies.length} searches, ${CLIENTS} concurrent clients, ${Math.round(search.perSecond)} searches/s, ${tripsPerSearch.toFixed(2)} engine round trips per search`,
+    );
     console.log(`p50 ${p50.toFixed(1)} ms · p95 ${p95.toFixed(1)} ms · p99 ${p99.toFixed(1)} ms · max ${latencies.at(-1)!.toFixed(1)} ms`);
     console.log(`plan reuse (named prepared statements): ${preparedStatementsEnabled() ? "on" : "off"}`);
     reportRatio("search/bare-SQL", search, summarize(bareResult), { p95: 1.3, throughput: 0.8 });

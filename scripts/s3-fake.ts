@@ -1,7 +1,6 @@
 // A local S3 fake on loopback for `npm start`/tests when STORAGE_ENGINE=s3 (credentials S3RVER/S3RVER).
 import os from "node:os";
 import path from "node:path";
-
 import S3rver from "s3rver";
 
 const port = Number(process.env.S3_PORT ?? 4569);

@@ -17,7 +17,10 @@ try {
   }
   console.log(`\nDemo sign-ins (password for all: ${DEMO_PASSWORD}):`);
   for (const p of DEMO_PEOPLE) {
-    const roles = Object.entries(p.roles).map(([v, r]) => `${r} @ ${v}`).join(", ") || "platform operator";
+    const roles =
+      Object.entries(p.roles)
+        .map(([v, r]) => `${r} @ ${v}`)
+        .join(", ") || "platform operator";
     console.log(`  ${p.email.padEnd(28)} ${roles}`);
   }
 } finally {

@@ -2,8 +2,9 @@
 // personal access token for an existing member (shown once; only its hash is stored).
 import { parseArgs } from "node:util";
 
-import { db } from "../lib/db/knex";
 import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
+
+import { db } from "../lib/db/knex";
 
 const { positionals, values } = parseArgs({
   allowPositionals: true,
@@ -17,7 +18,10 @@ async function main(): Promise<number> {
   }
   const vendor = await db("vendors").where({ slug: values.vendor }).first<{ id: string } | undefined>("id");
   const user = await db("users").where({ email: values.email }).first<{ id: string } | undefined>("id");
-  const member = vendor && user ? await db("members").where({ vendor_id: vendor.id, user_id: user.id }).first<{ role: string } | undefined>("role") : undefined;
+  const member =
+    vendor && user
+      ? await db("members").where({ vendor_id: vendor.id, user_id: user.id }).first<{ role: string } | undefined>("role")
+      : undefined;
   if (!vendor || !user || !member) {
     console.error(`No member ${values.email} in vendor ${values.vendor}.`);
     return 1;

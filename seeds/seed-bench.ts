@@ -9,12 +9,67 @@ import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import type { SeededIds } from "./seed-foundation";
 import { meltingStorySlug } from "./sheets/demo-sheet-plan";
 
-type MachineSeed = { name: string; preset: string; rpm_min: number; rpm_max: number; power_kw: number; max_feed_mm_min: number; rigidity: number; z_thrust_n: number | null; stickout_mm: number; units: "metric" | "imperial" };
+type MachineSeed = {
+  name: string;
+  preset: string;
+  rpm_min: number;
+  rpm_max: number;
+  power_kw: number;
+  max_feed_mm_min: number;
+  rigidity: number;
+  z_thrust_n: number | null;
+  stickout_mm: number;
+  units: "metric" | "imperial";
+};
 
-const LIGHT: MachineSeed = { name: "Belt-drive desk router", preset: "light-trim-router", rpm_min: 10000, rpm_max: 16000, power_kw: 0.8, max_feed_mm_min: 3000, rigidity: 0.35, z_thrust_n: 200, stickout_mm: 18, units: "metric" };
-const HOBBY: MachineSeed = { name: "Garage router, water-cooled spindle", preset: "hobby-water-cooled", rpm_min: 6000, rpm_max: 24000, power_kw: 1.5, max_feed_mm_min: 5000, rigidity: 0.55, z_thrust_n: 300, stickout_mm: 20, units: "imperial" };
-const RIGID: MachineSeed = { name: "Ball-screw router, 2.2 kW", preset: "rigid-ball-screw", rpm_min: 6000, rpm_max: 24000, power_kw: 2.2, max_feed_mm_min: 10000, rigidity: 0.75, z_thrust_n: 600, stickout_mm: 20, units: "metric" };
-const VMC: MachineSeed = { name: "Small machining centre", preset: "small-machining-centre", rpm_min: 500, rpm_max: 12000, power_kw: 5.5, max_feed_mm_min: 15000, rigidity: 1, z_thrust_n: 5000, stickout_mm: 30, units: "metric" };
+const LIGHT: MachineSeed = {
+  name: "Belt-drive desk router",
+  preset: "light-trim-router",
+  rpm_min: 10000,
+  rpm_max: 16000,
+  power_kw: 0.8,
+  max_feed_mm_min: 3000,
+  rigidity: 0.35,
+  z_thrust_n: 200,
+  stickout_mm: 18,
+  units: "metric",
+};
+const HOBBY: MachineSeed = {
+  name: "Garage router, water-cooled spindle",
+  preset: "hobby-water-cooled",
+  rpm_min: 6000,
+  rpm_max: 24000,
+  power_kw: 1.5,
+  max_feed_mm_min: 5000,
+  rigidity: 0.55,
+  z_thrust_n: 300,
+  stickout_mm: 20,
+  units: "imperial",
+};
+const RIGID: MachineSeed = {
+  name: "Ball-screw router, 2.2 kW",
+  preset: "rigid-ball-screw",
+  rpm_min: 6000,
+  rpm_max: 24000,
+  power_kw: 2.2,
+  max_feed_mm_min: 10000,
+  rigidity: 0.75,
+  z_thrust_n: 600,
+  stickout_mm: 20,
+  units: "metric",
+};
+const VMC: MachineSeed = {
+  name: "Small machining centre",
+  preset: "small-machining-centre",
+  rpm_min: 500,
+  rpm_max: 12000,
+  power_kw: 5.5,
+  max_feed_mm_min: 15000,
+  rigidity: 1,
+  z_thrust_n: 5000,
+  stickout_mm: 30,
+  units: "metric",
+};
 
 const MACHINES: Record<string, MachineSeed[]> = {
   "maker@example.test": [LIGHT],
@@ -42,12 +97,17 @@ export async function seedBench(knex: Knex, ids: SeededIds): Promise<void> {
   for (const [vendorSlug, vendorId] of Object.entries(ids.vendors)) {
     // Without --reset the seed runs again over existing data: add nothing twice.
     if (await knex("setups").where({ vendor_id: vendorId }).first("id")) continue;
-    const customers = await knex("members as m").join("users as u", "u.id", "m.user_id").where({ "m.vendor_id": vendorId, "m.role": "customer" }).select("u.id", "u.email");
+    const customers = await knex("members as m")
+      .join("users as u", "u.id", "m.user_id")
+      .where({ "m.vendor_id": vendorId, "m.role": "customer" })
+      .select("u.id", "u.email");
     const machines: { id: string; userId: string; seed: MachineSeed }[] = [];
     for (const c of customers) {
       if (await knex("machines").where({ vendor_id: vendorId, user_id: c.id }).first("id")) continue;
       for (const seed of MACHINES[c.email] ?? [LIGHT]) {
-        const [row] = await knex("machines").insert({ vendor_id: vendorId, user_id: c.id, ...seed }).returning("id");
+        const [row] = await knex("machines")
+          .insert({ vendor_id: vendorId, user_id: c.id, ...seed })
+          .returning("id");
         machines.push({ id: row.id, userId: c.id, seed });
       }
     }
@@ -75,18 +135,52 @@ export async function seedBench(knex: Knex, ids: SeededIds): Promise<void> {
           const machine = machines[turn++ % machines.length];
           let result;
           try {
-            result = adaptOperation(context, 0, { minRpm: machine.seed.rpm_min, maxRpm: machine.seed.rpm_max, spindlePowerKw: machine.seed.power_kw, maxFeedMmMin: machine.seed.max_feed_mm_min, rigidity: machine.seed.rigidity, zThrustN: machine.seed.z_thrust_n ?? undefined, stickoutMm: machine.seed.stickout_mm });
+            result = adaptOperation(context, 0, {
+              minRpm: machine.seed.rpm_min,
+              maxRpm: machine.seed.rpm_max,
+              spindlePowerKw: machine.seed.power_kw,
+              maxFeedMmMin: machine.seed.max_feed_mm_min,
+              rigidity: machine.seed.rigidity,
+              zThrustN: machine.seed.z_thrust_n ?? undefined,
+              stickoutMm: machine.seed.stickout_mm,
+            });
           } catch {
             continue;
           }
           const created = daysAgo(40 - version.number * 10 - k);
           const [setup] = await knex("setups")
-            .insert({ vendor_id: vendorId, user_id: machine.userId, machine_id: machine.id, sheet_version_id: version.id, operation_index: 0, name: `${context.title}: ${context.operations[0].label} on ${machine.seed.name}`, overrides: "{}", result: JSON.stringify(result), units: machine.seed.units, created_at: created, updated_at: created })
+            .insert({
+              vendor_id: vendorId,
+              user_id: machine.userId,
+              machine_id: machine.id,
+              sheet_version_id: version.id,
+              operation_index: 0,
+              name: `${context.title}: ${context.operations[0].label} on ${machine.seed.name}`,
+              overrides: "{}",
+              result: JSON.stringify(result),
+              units: machine.seed.units,
+              created_at: created,
+              updated_at: created,
+            })
             .returning("id");
           // v1 of the melting story rubbed and welded; v2 raised the chip load and cut, and so does its revision.
           const outcome: Outcome = list === melting ? (version.number === 1 ? MELTED : CLEAN) : MIXED[(turn + k) % MIXED.length];
-          const changes = outcome.result === "worked_after_changes" ? { feedMmMin: { from: result.feedMmMin, to: Math.round(result.feedMmMin * 0.85) } } : {};
-          await knex("outcomes").insert({ vendor_id: vendorId, setup_id: setup.id, sheet_version_id: version.id, user_id: machine.userId, machine_id: machine.id, result: outcome.result, symptom: outcome.symptom ?? null, changes: JSON.stringify(changes), notes: outcome.notes, created_at: daysAgo(38 - version.number * 10 - k) });
+          const changes =
+            outcome.result === "worked_after_changes"
+              ? { feedMmMin: { from: result.feedMmMin, to: Math.round(result.feedMmMin * 0.85) } }
+              : {};
+          await knex("outcomes").insert({
+            vendor_id: vendorId,
+            setup_id: setup.id,
+            sheet_version_id: version.id,
+            user_id: machine.userId,
+            machine_id: machine.id,
+            result: outcome.result,
+            symptom: outcome.symptom ?? null,
+            changes: JSON.stringify(changes),
+            notes: outcome.notes,
+            created_at: daysAgo(38 - version.number * 10 - k),
+          });
         }
       }
     }

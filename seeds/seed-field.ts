@@ -5,7 +5,6 @@
 //   - a published sheet that chatters on light machines (it tops Needs attention, with a ticket and a hand-off);
 //   - two clusters of customers' machines that no published machine class covers.
 import { randomUUID } from "node:crypto";
-
 import type { Knex } from "knex";
 
 import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
@@ -15,15 +14,75 @@ import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import type { SeededIds } from "./seed-foundation";
 import { meltingStorySlug } from "./sheets/demo-sheet-plan";
 
-type Archetype = { name: string; rpm_min: number; rpm_max: number; power_kw: number; max_feed_mm_min: number; rigidity: number; z_thrust_n: number; stickout_mm: number; count: number };
+type Archetype = {
+  name: string;
+  rpm_min: number;
+  rpm_max: number;
+  power_kw: number;
+  max_feed_mm_min: number;
+  rigidity: number;
+  z_thrust_n: number;
+  stickout_mm: number;
+  count: number;
+};
 
 // Invented machine park, 36 machines per vendor.
 const ARCHETYPES: Archetype[] = [
-  { name: "Desk router with a 12,000 rpm spindle", rpm_min: 6000, rpm_max: 12000, power_kw: 0.5, max_feed_mm_min: 2500, rigidity: 0.35, z_thrust_n: 150, stickout_mm: 18, count: 8 },
-  { name: "Desk router with a 12,000 rpm spindle (0.8 kW)", rpm_min: 6000, rpm_max: 12000, power_kw: 0.8, max_feed_mm_min: 3000, rigidity: 0.35, z_thrust_n: 150, stickout_mm: 18, count: 6 },
-  { name: "Trim-router gantry", rpm_min: 10000, rpm_max: 30000, power_kw: 0.6, max_feed_mm_min: 4000, rigidity: 0.35, z_thrust_n: 150, stickout_mm: 18, count: 8 },
-  { name: "Ball-screw router, 2.2 kW", rpm_min: 6000, rpm_max: 24000, power_kw: 2.2, max_feed_mm_min: 10000, rigidity: 0.75, z_thrust_n: 600, stickout_mm: 20, count: 8 },
-  { name: "Panel router, 9 kW", rpm_min: 6000, rpm_max: 24000, power_kw: 9, max_feed_mm_min: 30000, rigidity: 1, z_thrust_n: 2000, stickout_mm: 25, count: 6 },
+  {
+    name: "Desk router with a 12,000 rpm spindle",
+    rpm_min: 6000,
+    rpm_max: 12000,
+    power_kw: 0.5,
+    max_feed_mm_min: 2500,
+    rigidity: 0.35,
+    z_thrust_n: 150,
+    stickout_mm: 18,
+    count: 8,
+  },
+  {
+    name: "Desk router with a 12,000 rpm spindle (0.8 kW)",
+    rpm_min: 6000,
+    rpm_max: 12000,
+    power_kw: 0.8,
+    max_feed_mm_min: 3000,
+    rigidity: 0.35,
+    z_thrust_n: 150,
+    stickout_mm: 18,
+    count: 6,
+  },
+  {
+    name: "Trim-router gantry",
+    rpm_min: 10000,
+    rpm_max: 30000,
+    power_kw: 0.6,
+    max_feed_mm_min: 4000,
+    rigidity: 0.35,
+    z_thrust_n: 150,
+    stickout_mm: 18,
+    count: 8,
+  },
+  {
+    name: "Ball-screw router, 2.2 kW",
+    rpm_min: 6000,
+    rpm_max: 24000,
+    power_kw: 2.2,
+    max_feed_mm_min: 10000,
+    rigidity: 0.75,
+    z_thrust_n: 600,
+    stickout_mm: 20,
+    count: 8,
+  },
+  {
+    name: "Panel router, 9 kW",
+    rpm_min: 6000,
+    rpm_max: 24000,
+    power_kw: 9,
+    max_feed_mm_min: 30000,
+    rigidity: 1,
+    z_thrust_n: 2000,
+    stickout_mm: 25,
+    count: 6,
+  },
 ];
 
 type Report = { result: OutcomeResult; symptom?: OutcomeSymptom; changes?: Record<string, number>; notes: string };
@@ -74,10 +133,14 @@ async function createFieldCustomers(knex: Knex, vendorSlug: string, vendorId: st
     for (let i = 0; i < archetype.count; i++) {
       n += 1;
       const label = String(n).padStart(2, "0");
-      const [user] = await knex("users").insert({ email: `field-${vendorSlug}-${label}@example.test`, name: `Field demo customer ${label} (invented)` }).returning("id");
+      const [user] = await knex("users")
+        .insert({ email: `field-${vendorSlug}-${label}@example.test`, name: `Field demo customer ${label} (invented)` })
+        .returning("id");
       await knex("members").insert({ vendor_id: vendorId, user_id: user.id, role: "customer" });
       const { count: _count, ...columns } = archetype;
-      const [machine] = await knex("machines").insert({ vendor_id: vendorId, user_id: user.id, ...columns, preset: null, units: "metric" }).returning("id");
+      const [machine] = await knex("machines")
+        .insert({ vendor_id: vendorId, user_id: user.id, ...columns, preset: null, units: "metric" })
+        .returning("id");
       machines.push({ id: machine.id, userId: user.id, archetype });
     }
   }
@@ -86,13 +149,27 @@ async function createFieldCustomers(knex: Knex, vendorSlug: string, vendorId: st
 
 function adaptFor(context: AdaptContext, m: Archetype) {
   try {
-    return adaptOperation(context, 0, { minRpm: m.rpm_min, maxRpm: m.rpm_max, spindlePowerKw: m.power_kw, maxFeedMmMin: m.max_feed_mm_min, rigidity: m.rigidity, zThrustN: m.z_thrust_n, stickoutMm: m.stickout_mm });
+    return adaptOperation(context, 0, {
+      minRpm: m.rpm_min,
+      maxRpm: m.rpm_max,
+      spindlePowerKw: m.power_kw,
+      maxFeedMmMin: m.max_feed_mm_min,
+      rigidity: m.rigidity,
+      zThrustN: m.z_thrust_n,
+      stickoutMm: m.stickout_mm,
+    });
   } catch {
     return null;
   }
 }
 
-const CHANGE_KEYS = { rpm: "rpm", feedMmMin: "feedMmMin", axialDepthMm: "axialDepthMm", radialDepthMm: "radialDepthMm", plungeFeedMmMin: "plungeFeedMmMin" } as const;
+const CHANGE_KEYS = {
+  rpm: "rpm",
+  feedMmMin: "feedMmMin",
+  axialDepthMm: "axialDepthMm",
+  radialDepthMm: "radialDepthMm",
+  plungeFeedMmMin: "plungeFeedMmMin",
+} as const;
 
 async function report(knex: Knex, vendorId: string, version: Version, machines: Machine[], reports: Report[], startDay: number) {
   const context = await loadAdaptContext({ vendorId, versionId: version.id, trx: knex });
@@ -106,7 +183,19 @@ async function report(knex: Knex, vendorId: string, version: Version, machines: 
     if (!result) continue;
     const created = daysAgo(startDay - k * 0.7);
     const [setup] = await knex("setups")
-      .insert({ vendor_id: vendorId, user_id: machine.userId, machine_id: machine.id, sheet_version_id: version.id, operation_index: 0, name: `${context.title}: ${context.operations[0].label} on ${machine.archetype.name}`, overrides: "{}", result: JSON.stringify(result), units: "metric", created_at: created, updated_at: created })
+      .insert({
+        vendor_id: vendorId,
+        user_id: machine.userId,
+        machine_id: machine.id,
+        sheet_version_id: version.id,
+        operation_index: 0,
+        name: `${context.title}: ${context.operations[0].label} on ${machine.archetype.name}`,
+        overrides: "{}",
+        result: JSON.stringify(result),
+        units: "metric",
+        created_at: created,
+        updated_at: created,
+      })
       .returning("id");
     const changes = Object.fromEntries(
       Object.entries(r.changes ?? {}).map(([key, factor]) => {
@@ -114,7 +203,18 @@ async function report(knex: Knex, vendorId: string, version: Version, machines: 
         return [key, { from, to: Math.round(from * factor * 1000) / 1000 }];
       }),
     );
-    await knex("outcomes").insert({ vendor_id: vendorId, setup_id: setup.id, sheet_version_id: version.id, user_id: machine.userId, machine_id: machine.id, result: r.result, symptom: r.symptom ?? null, changes: JSON.stringify(changes), notes: r.notes, created_at: created });
+    await knex("outcomes").insert({
+      vendor_id: vendorId,
+      setup_id: setup.id,
+      sheet_version_id: version.id,
+      user_id: machine.userId,
+      machine_id: machine.id,
+      result: r.result,
+      symptom: r.symptom ?? null,
+      changes: JSON.stringify(changes),
+      notes: r.notes,
+      created_at: created,
+    });
   }
 }
 
@@ -122,10 +222,22 @@ async function seedActivity(knex: Knex, vendorId: string, versions: Version[]) {
   const rows = versions.flatMap((v, i) =>
     Array.from({ length: 8 }, (_, week) => {
       const views = 4 + ((i * 37 + week * 11) % 29);
-      return { vendor_id: vendorId, sheet_version_id: v.id, day: daysAgo(week * 7 + (i % 7)).toISOString().slice(0, 10), views, adaptations: Math.floor(views * (0.2 + ((i * 13) % 5) / 10)) };
+      return {
+        vendor_id: vendorId,
+        sheet_version_id: v.id,
+        day: daysAgo(week * 7 + (i % 7))
+          .toISOString()
+          .slice(0, 10),
+        views,
+        adaptations: Math.floor(views * (0.2 + ((i * 13) % 5) / 10)),
+      };
     }),
   );
-  for (let start = 0; start < rows.length; start += 500) await knex("sheet_version_activity").insert(rows.slice(start, start + 500)).onConflict(["sheet_version_id", "day"]).ignore();
+  for (let start = 0; start < rows.length; start += 500)
+    await knex("sheet_version_activity")
+      .insert(rows.slice(start, start + 500))
+      .onConflict(["sheet_version_id", "day"])
+      .ignore();
 }
 
 async function ticketWithHandoff(knex: Knex, vendorId: string, version: Version, machine: Machine, supportId: string | undefined) {
@@ -133,19 +245,50 @@ async function ticketWithHandoff(knex: Knex, vendorId: string, version: Version,
   const created = daysAgo(6);
   const [ticket] = await knex("tickets")
     .insert({
-      vendor_id: vendorId, number, customer_id: machine.userId, subject: "Chatter and a snapped cutter at the sheet's depth", body: "On my desk router the cut sings at full ap and the second cutter snapped on entry. (Invented demo ticket.)",
-      status: "in_progress", priority: "high", assignee_id: supportId ?? null, machine_id: machine.id, tags: ["chatter"], idempotency_key: randomUUID(),
-      first_response_due_at: new Date(created.getTime() + 8 * 3_600_000), first_response_at: new Date(created.getTime() + 2 * 3_600_000), created_at: created, updated_at: created, last_activity_at: created,
+      vendor_id: vendorId,
+      number,
+      customer_id: machine.userId,
+      subject: "Chatter and a snapped cutter at the sheet's depth",
+      body: "On my desk router the cut sings at full ap and the second cutter snapped on entry. (Invented demo ticket.)",
+      status: "in_progress",
+      priority: "high",
+      assignee_id: supportId ?? null,
+      machine_id: machine.id,
+      tags: ["chatter"],
+      idempotency_key: randomUUID(),
+      first_response_due_at: new Date(created.getTime() + 8 * 3_600_000),
+      first_response_at: new Date(created.getTime() + 2 * 3_600_000),
+      created_at: created,
+      updated_at: created,
+      last_activity_at: created,
     })
     .returning("id");
-  await knex("ticket_sheet_links").insert({ vendor_id: vendorId, ticket_id: ticket.id, sheet_version_id: version.id, machine_id: machine.id });
-  await knex("problem_reports").insert({ vendor_id: vendorId, sheet_version_id: version.id, ticket_id: ticket.id, reported_by: supportId ?? null, summary: "ap too deep for light machines", details: "Several customers with light routers report chatter at the sheet's ap; half depth works. (Invented.)", created_at: daysAgo(5) });
+  await knex("ticket_sheet_links").insert({
+    vendor_id: vendorId,
+    ticket_id: ticket.id,
+    sheet_version_id: version.id,
+    machine_id: machine.id,
+  });
+  await knex("problem_reports").insert({
+    vendor_id: vendorId,
+    sheet_version_id: version.id,
+    ticket_id: ticket.id,
+    reported_by: supportId ?? null,
+    summary: "ap too deep for light machines",
+    details: "Several customers with light routers report chatter at the sheet's ap; half depth works. (Invented.)",
+    created_at: daysAgo(5),
+  });
 }
 
 export async function seedField(knex: Knex, ids: SeededIds): Promise<void> {
   for (const [vendorSlug, vendorId] of Object.entries(ids.vendors)) {
     // Without --reset the seed runs again over existing data: add nothing twice.
-    if (await knex("users").where({ email: `field-${vendorSlug}-01@example.test` }).first("id")) continue;
+    if (
+      await knex("users")
+        .where({ email: `field-${vendorSlug}-01@example.test` })
+        .first("id")
+    )
+      continue;
     const machines = await createFieldCustomers(knex, vendorSlug, vendorId);
     const versions: Version[] = await knex("sheet_versions as v")
       .join("sheets as s", "s.id", "v.sheet_id")
@@ -167,7 +310,10 @@ export async function seedField(knex: Knex, ids: SeededIds): Promise<void> {
     }
     const published = versions.filter((v) => v.state === "published" && v.sheet_id !== melting?.[0].sheet_id);
     // A hardwood sheet on the light router: full ap chatters on a flexible frame.
-    const chatter = published.find((v) => v.material_group === "wood" && v.class_slug === "light-router") ?? published.find((v) => v.material_group !== "plastics") ?? published[0];
+    const chatter =
+      published.find((v) => v.material_group === "wood" && v.class_slug === "light-router") ??
+      published.find((v) => v.material_group !== "plastics") ??
+      published[0];
     const rest = published.filter((v) => v !== chatter);
     if (chatter) {
       await report(knex, vendorId, chatter, machines, CHATTER, 30);

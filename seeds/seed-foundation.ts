@@ -9,7 +9,14 @@ export async function seedFoundation(knex: Knex): Promise<SeededIds> {
   const vendors: Record<string, string> = {};
   for (const v of DEMO_VENDORS) {
     const [row] = await knex("vendors")
-      .insert({ slug: v.slug, name: v.name, accent_color: v.accentColor, logo: Buffer.from(v.logo), logo_type: "image/svg+xml", settings: JSON.stringify(v.settings) })
+      .insert({
+        slug: v.slug,
+        name: v.name,
+        accent_color: v.accentColor,
+        logo: Buffer.from(v.logo),
+        logo_type: "image/svg+xml",
+        settings: JSON.stringify(v.settings),
+      })
       .returning("id");
     vendors[v.slug] = row.id;
   }
@@ -17,7 +24,13 @@ export async function seedFoundation(knex: Knex): Promise<SeededIds> {
   const users: Record<string, string> = {};
   for (const p of DEMO_PEOPLE) {
     const [row] = await knex("users")
-      .insert({ email: p.email, name: p.name, password_hash: passwordHash, email_verified: knex.fn.now(), is_operator: p.email === OPERATOR_EMAIL })
+      .insert({
+        email: p.email,
+        name: p.name,
+        password_hash: passwordHash,
+        email_verified: knex.fn.now(),
+        is_operator: p.email === OPERATOR_EMAIL,
+      })
       .returning("id");
     users[p.email] = row.id;
     for (const [slug, role] of Object.entries(p.roles)) {

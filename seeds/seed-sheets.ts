@@ -19,7 +19,11 @@ const START = Date.UTC(2026, 2, 2);
 async function seedCatalogue(knex: Knex, vendorSlug: string, vendorId: string) {
   const ids = { cutters: new Map<string, string>(), materials: new Map<string, string>(), classes: new Map<string, string>() };
   for (const c of DEMO_CUTTERS[vendorSlug]) {
-    const row = { ...cutterToRow(cutterFieldsSchema.parse(c)), vendor_id: vendorId, short_code: c.sku.toLowerCase().replace(/[^a-z0-9]/g, "") };
+    const row = {
+      ...cutterToRow(cutterFieldsSchema.parse(c)),
+      vendor_id: vendorId,
+      short_code: c.sku.toLowerCase().replace(/[^a-z0-9]/g, ""),
+    };
     ids.cutters.set(c.sku, (await knex("cutters").insert(row).returning("id"))[0].id);
   }
   for (const m of DEMO_MATERIALS[vendorSlug]) {
@@ -53,7 +57,14 @@ export async function seedSheets(knex: Knex, { vendors, users }: SeededIds): Pro
       const machineClass = DEMO_MACHINE_CLASSES[vendorSlug].find((k) => k.slug === sheet.machineClass)!;
       const slug = demoSheetSlug(sheet);
       const [{ id: sheetId }] = await knex("sheets")
-        .insert({ vendor_id: vendorId, slug, cutter_id: ids.cutters.get(cutter.sku), material_id: ids.materials.get(material.slug), machine_class_id: ids.classes.get(machineClass.slug), created_by: author })
+        .insert({
+          vendor_id: vendorId,
+          slug,
+          cutter_id: ids.cutters.get(cutter.sku),
+          material_id: ids.materials.get(material.slug),
+          machine_class_id: ids.classes.get(machineClass.slug),
+          created_by: author,
+        })
         .returning("id");
       sheets++;
       const all = seededVersions(sheet);
@@ -66,11 +77,21 @@ export async function seedSheets(knex: Knex, { vendors, users }: SeededIds): Pro
         const state = i < P - 1 ? "superseded" : i === P - 1 ? (sheet.withdrawnReason ? "withdrawn" : "published") : sheet.openDraft!;
         const published = i < P;
         await knex("sheet_versions").insert({
-          vendor_id: vendorId, sheet_id: sheetId, number, state,
-          title: frontMatter.title, source, front_matter: JSON.stringify(frontMatter), change_note: state === "draft" ? "" : version.changeNote,
-          author_id: author, updated_by: author, created_at: at, updated_at: at,
+          vendor_id: vendorId,
+          sheet_id: sheetId,
+          number,
+          state,
+          title: frontMatter.title,
+          source,
+          front_matter: JSON.stringify(frontMatter),
+          change_note: state === "draft" ? "" : version.changeNote,
+          author_id: author,
+          updated_by: author,
+          created_at: at,
+          updated_at: at,
           submitted_at: state === "draft" ? null : at,
-          approved_by: published ? reviewer : null, approved_at: published ? at : null,
+          approved_by: published ? reviewer : null,
+          approved_at: published ? at : null,
           published_at: published ? at : null,
           superseded_at: state === "superseded" ? new Date(at.getTime() + 40 * DAY) : null,
           withdrawn_at: state === "withdrawn" ? new Date(at.getTime() + 20 * DAY) : null,

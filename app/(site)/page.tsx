@@ -10,8 +10,8 @@ export default async function PlatformHome() {
     <>
       <h1 className="text-3xl font-semibold tracking-tight">Cutting data from your tool vendor, adapted to your machine</h1>
       <p className="mt-3 max-w-2xl text-stone-700">
-        Each vendor publishes reviewed, versioned recipe sheets for its cutters. Find the sheet for your cutter and material,
-        scale it to your machine with the reasons shown, save the setup and ask the vendor when a cut goes wrong.
+        Each vendor publishes reviewed, versioned recipe sheets for its cutters. Find the sheet for your cutter and material, scale it to
+        your machine with the reasons shown, save the setup and ask the vendor when a cut goes wrong.
       </p>
       <h2 className="mt-10 mb-3 text-lg font-semibold">Vendors</h2>
       {vendors.length === 0 ? (
@@ -20,7 +20,10 @@ export default async function PlatformHome() {
         <ul className="grid gap-3 sm:grid-cols-2">
           {vendors.map((v) => (
             <li key={v.id}>
-              <Link href={`/${v.slug}/library`} className="flex items-center gap-3 rounded-lg border border-stone-200 bg-white p-4 hover:border-stone-400">
+              <Link
+                href={`/${v.slug}/library`}
+                className="flex items-center gap-3 rounded-lg border border-stone-200 bg-white p-4 hover:border-stone-400"
+              >
                 <span aria-hidden className="h-8 w-2 rounded" style={{ backgroundColor: v.accentColor }} />
                 <span className="font-medium">{v.name}</span>
                 <span className="num ml-auto text-sm text-stone-500">/{v.slug}</span>

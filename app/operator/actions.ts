@@ -2,12 +2,12 @@
 
 import { revalidatePath } from "next/cache";
 
+import { createVendorSchema } from "@/content-schema/vendor-create";
 import type { ActionState } from "@/lib/actions/action-state";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
 import { createVendor } from "@/lib/vendors/create-vendor";
-import { createVendorSchema } from "@/content-schema/vendor-create";
 
 export async function createVendorAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const user = await getSessionUser();
@@ -18,7 +18,8 @@ export async function createVendorAction(_prev: ActionState, form: FormData): Pr
   try {
     await createVendor({ actorUserId: user.id, ...parsed.data });
   } catch (error) {
-    if (error instanceof DomainError) return { ok: false, message: error.message, values, errors: error.code === "conflict" ? { slug: [error.message] } : undefined };
+    if (error instanceof DomainError)
+      return { ok: false, message: error.message, values, errors: error.code === "conflict" ? { slug: [error.message] } : undefined };
     throw error;
   }
   revalidatePath("/operator");

@@ -13,19 +13,36 @@ export const metadata = { title: "Operator" };
 
 export default async function OperatorPage() {
   await requireOperator();
-  const [vendors, deadLetterSummary, deadLetters] = await Promise.all([listVendorsForOperator(), summariseDeadLetters(), listDeadLetters()]);
+  const [vendors, deadLetterSummary, deadLetters] = await Promise.all([
+    listVendorsForOperator(),
+    summariseDeadLetters(),
+    listDeadLetters(),
+  ]);
   return (
     <div>
-      <PageHeader title="Operator" lead="Create vendor workspaces. Vendors' private data (sheets in draft, tickets, customers) is not shown here." />
+      <PageHeader
+        title="Operator"
+        lead="Create vendor workspaces. Vendors' private data (sheets in draft, tickets, customers) is not shown here."
+      />
       <h2 className="mb-3 text-lg font-semibold">New workspace</h2>
       <CreateVendorForm createVendorAction={createVendorAction} />
       <h2 className="mt-10 mb-3 text-lg font-semibold">Workspaces</h2>
       <table className="w-full rounded-lg border border-stone-200 bg-white text-left text-sm">
-        <thead className="bg-stone-100"><tr><th className="px-3 py-2">Name</th><th className="px-3 py-2">Slug</th><th className="px-3 py-2">Members</th><th className="px-3 py-2">Created</th></tr></thead>
+        <thead className="bg-stone-100">
+          <tr>
+            <th className="px-3 py-2">Name</th>
+            <th className="px-3 py-2">Slug</th>
+            <th className="px-3 py-2">Members</th>
+            <th className="px-3 py-2">Created</th>
+          </tr>
+        </thead>
         <tbody>
           {vendors.map((v) => (
             <tr key={v.id} className="border-t border-stone-100">
-              <td className="px-3 py-2">{v.name}</td><td className="num px-3 py-2">/{v.slug}</td><td className="num px-3 py-2">{v.memberCount}</td><td className="num px-3 py-2">{formatDate(v.createdAt)}</td>
+              <td className="px-3 py-2">{v.name}</td>
+              <td className="num px-3 py-2">/{v.slug}</td>
+              <td className="num px-3 py-2">{v.memberCount}</td>
+              <td className="num px-3 py-2">{formatDate(v.createdAt)}</td>
             </tr>
           ))}
         </tbody>

@@ -1,11 +1,11 @@
 import "server-only";
 
+import type { AdaptContext } from "@/lib/adapt/adapt-context";
+import type { AdaptStart } from "@/lib/adapt/readapt-start";
 import { findMembership } from "@/lib/auth/membership";
 import { can } from "@/lib/auth/permissions";
 import { getSessionUser } from "@/lib/auth/session-user";
-import type { AdaptContext } from "@/lib/adapt/adapt-context";
 import { listMachines } from "@/lib/bench/machines";
-import type { AdaptStart } from "@/lib/adapt/readapt-start";
 import type { UnitSystem } from "@/lib/machining";
 
 import type { AdaptPanelProps } from "./adapt-panel";
@@ -23,7 +23,10 @@ export type AdaptMountOptions = {
 };
 
 /** The panel's props for this reader: the sheet-derived inputs and, for a signed-in customer, their machines. */
-export async function adaptPanelProps(context: AdaptContext, { vendor, operationIndex, units, returnTo, start, saveSetupAction }: AdaptMountOptions): Promise<AdaptPanelProps> {
+export async function adaptPanelProps(
+  context: AdaptContext,
+  { vendor, operationIndex, units, returnTo, start, saveSetupAction }: AdaptMountOptions,
+): Promise<AdaptPanelProps> {
   const user = await getSessionUser();
   const member = user ? await findMembership(vendor.id, user.id) : null;
   const benchUser = user && member && can(member.role, "bench.use") ? user : null;

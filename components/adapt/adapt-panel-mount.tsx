@@ -3,7 +3,7 @@ import "server-only";
 import { findAdaptContext } from "@/lib/adapt/page-data";
 
 import { AdaptPanel } from "./adapt-panel";
-import { type AdaptMountOptions, adaptPanelProps, NOT_ADAPTABLE } from "./adapt-panel-inputs";
+import { adaptPanelProps, NOT_ADAPTABLE, type AdaptMountOptions } from "./adapt-panel-inputs";
 
 /** Server side of the adapt panel on the Bench, loaded with the page (Library pages use LibraryAdaptPanelMount). */
 export async function AdaptPanelMount(options: AdaptMountOptions) {

@@ -15,9 +15,19 @@ export function EntryCapabilityPicker({ value, onChange }: { value: EntryCapabil
       <legend className="text-sm font-semibold">How does your CAM enter the material?</legend>
       <div className="grid gap-2 sm:grid-cols-3">
         {ENTRY_CAPABILITY_KEYS.map((key) => (
-          <label key={key} className={`flex min-h-11 cursor-pointer flex-col rounded border px-3 py-2 text-sm ${value === key ? "border-stone-900 bg-stone-100" : "border-stone-300 bg-white"}`}>
+          <label
+            key={key}
+            className={`flex min-h-11 cursor-pointer flex-col rounded border px-3 py-2 text-sm ${value === key ? "border-stone-900 bg-stone-100" : "border-stone-300 bg-white"}`}
+          >
             <span className="flex items-center gap-2 font-medium">
-              <input type="radio" name="entry-capability" value={key} checked={value === key} onChange={() => onChange(key)} className="size-4" />
+              <input
+                type="radio"
+                name="entry-capability"
+                value={key}
+                checked={value === key}
+                onChange={() => onChange(key)}
+                className="size-4"
+              />
               {entryCapabilityLabels[key]}
             </span>
             <span className="mt-1 text-xs text-stone-600">{HINTS[key]}</span>

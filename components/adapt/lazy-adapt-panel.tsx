@@ -34,5 +34,11 @@ export function LazyAdaptPanel(props: AdaptPanelProps) {
       else window.clearTimeout(idle);
     };
   }, [wanted]);
-  return wanted ? <AdaptPanel {...props} /> : <div ref={spot}><PanelPlaceholder /></div>;
+  return wanted ? (
+    <AdaptPanel {...props} />
+  ) : (
+    <div ref={spot}>
+      <PanelPlaceholder />
+    </div>
+  );
 }

@@ -1,6 +1,6 @@
 import "server-only";
 
-import { type AdaptMountOptions, adaptPanelProps, NOT_ADAPTABLE } from "./adapt-panel-inputs";
+import { adaptPanelProps, NOT_ADAPTABLE, type AdaptMountOptions } from "./adapt-panel-inputs";
 import { getCachedAdaptContext } from "./cached-adapt-context";
 import { LazyAdaptPanel } from "./lazy-adapt-panel";
 

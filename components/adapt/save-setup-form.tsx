@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useActionState } from "react";
 
 import type { EntryCapabilityKey } from "@/content-schema/setup-fields";
-import { type ActionState, initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type ActionState } from "@/lib/actions/action-state";
 import type { UnitSystem } from "@/lib/machining";
 
 export type SaveSetupAction = (state: ActionState, form: FormData) => Promise<ActionState>;
@@ -38,7 +38,9 @@ export function SaveSetupForm({ action, vendorSlug, versionId, machineId, operat
       <input type="hidden" name="units" value={units} />
       <input type="hidden" name="entryCapability" value={entryCapability} />
       <div className="flex min-w-56 flex-1 flex-col gap-1">
-        <label htmlFor="setup-name" className="text-sm font-medium">Setup name (optional)</label>
+        <label htmlFor="setup-name" className="text-sm font-medium">
+          Setup name (optional)
+        </label>
         <input id="setup-name" name="name" maxLength={120} className="min-h-11 rounded border border-stone-300 bg-white px-3" />
       </div>
       <button type="submit" disabled={pending} className="min-h-11 rounded bg-accent px-4 font-medium text-accent-ink disabled:opacity-60">
@@ -48,10 +50,18 @@ export function SaveSetupForm({ action, vendorSlug, versionId, machineId, operat
         {saved ? (
           <p className="text-green-800">
             <span aria-hidden>✓ </span>Saved, pinned to this version.{" "}
-            <Link className="underline" href={`/${vendorSlug}/bench/setups/${saved}`}>Open the setup</Link>
+            <Link className="underline" href={`/${vendorSlug}/bench/setups/${saved}`}>
+              Open the setup
+            </Link>
           </p>
         ) : state.message ? (
-          <p className="text-red-800"><span aria-hidden>⚠ </span>{state.message} {Object.values(state.errors ?? {}).flat().join(" ")}</p>
+          <p className="text-red-800">
+            <span aria-hidden>⚠ </span>
+            {state.message}{" "}
+            {Object.values(state.errors ?? {})
+              .flat()
+              .join(" ")}
+          </p>
         ) : null}
       </div>
     </form>

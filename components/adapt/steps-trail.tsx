@@ -1,10 +1,13 @@
-import { type AdaptStep, formatQuantity, RULES, type UnitSystem } from "@/lib/machining";
+import { formatQuantity, RULES, type AdaptStep, type UnitSystem } from "@/lib/machining";
 
 const title = (rule: string) => RULES.find((r) => r.id === rule)?.title ?? rule;
 
 /** Every rule that changed a number: before → after, why, and where the rule comes from. */
 export function StepsTrail({ steps, units, emptyText }: { steps: AdaptStep[]; units: UnitSystem; emptyText?: string }) {
-  if (!steps.length) return <p className="mt-2 text-sm text-stone-600">{emptyText ?? "No rule changed a number: the sheet runs as written on this machine."}</p>;
+  if (!steps.length)
+    return (
+      <p className="mt-2 text-sm text-stone-600">{emptyText ?? "No rule changed a number: the sheet runs as written on this machine."}</p>
+    );
   return (
     <ol className="mt-2 space-y-3" aria-label="Steps">
       {steps.map((s, i) => (

@@ -8,7 +8,17 @@ import { useEffect } from "react";
 const reported = new Set<string>();
 const SETTLE_MS = 1500;
 
-export function useAdaptationBeacon({ vendorSlug, versionId, adaptationKey, ok }: { vendorSlug: string; versionId: string; adaptationKey: string; ok: boolean }) {
+export function useAdaptationBeacon({
+  vendorSlug,
+  versionId,
+  adaptationKey,
+  ok,
+}: {
+  vendorSlug: string;
+  versionId: string;
+  adaptationKey: string;
+  ok: boolean;
+}) {
   useEffect(() => {
     if (!ok) return;
     const key = `${versionId}|${adaptationKey}`;

@@ -1,4 +1,4 @@
-import { type AdaptWarning, WARNING_CODES } from "@/lib/machining";
+import { WARNING_CODES, type AdaptWarning } from "@/lib/machining";
 
 const CAUTION_ONLY = new Set(["standard-cautions", "values-adapted"]);
 
@@ -8,10 +8,19 @@ export function WarningList({ warnings }: { warnings: AdaptWarning[] }) {
   return (
     <ul className="mt-2 space-y-2" aria-label="Warnings">
       {shown.map((w) => (
-        <li key={w.code} data-warning={w.code} className={`rounded border p-3 text-sm ${CAUTION_ONLY.has(w.code) ? "border-stone-300 bg-white" : "border-amber-400 bg-amber-50"}`}>
+        <li
+          key={w.code}
+          data-warning={w.code}
+          className={`rounded border p-3 text-sm ${CAUTION_ONLY.has(w.code) ? "border-stone-300 bg-white" : "border-amber-400 bg-amber-50"}`}
+        >
           <p className="font-medium">
             {CAUTION_ONLY.has(w.code) ? (
-              <span aria-hidden className="mr-1 inline-flex size-4 items-center justify-center rounded-full border border-stone-500 text-[10px]">i</span>
+              <span
+                aria-hidden
+                className="mr-1 inline-flex size-4 items-center justify-center rounded-full border border-stone-500 text-[10px]"
+              >
+                i
+              </span>
             ) : (
               <span aria-hidden>⚠ </span>
             )}

@@ -4,9 +4,21 @@ import { useActionState } from "react";
 
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { type FormAction, initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 
-export function WebhookStateActions({ vendor, webhookId, state, resumeWebhookAction, deleteWebhookAction }: { vendor: string; webhookId: string; state: "active" | "paused"; resumeWebhookAction: FormAction; deleteWebhookAction: FormAction }) {
+export function WebhookStateActions({
+  vendor,
+  webhookId,
+  state,
+  resumeWebhookAction,
+  deleteWebhookAction,
+}: {
+  vendor: string;
+  webhookId: string;
+  state: "active" | "paused";
+  resumeWebhookAction: FormAction;
+  deleteWebhookAction: FormAction;
+}) {
   const [resumeState, resume] = useActionState(resumeWebhookAction, initialActionState);
   const [deleteState, remove] = useActionState(deleteWebhookAction, initialActionState);
   return (
@@ -18,12 +30,21 @@ export function WebhookStateActions({ vendor, webhookId, state, resumeWebhookAct
           <SubmitButton pendingText="Resuming…">Resume deliveries</SubmitButton>
         </form>
       ) : null}
-      <form action={remove} onSubmit={(e) => { if (!window.confirm("Remove this webhook and its delivery log?")) e.preventDefault(); }}>
+      <form
+        action={remove}
+        onSubmit={(e) => {
+          if (!window.confirm("Remove this webhook and its delivery log?")) e.preventDefault();
+        }}
+      >
         <input type="hidden" name="vendor" value={vendor} />
         <input type="hidden" name="webhookId" value={webhookId} />
-        <SubmitButton variant="danger" pendingText="Removing…">Remove webhook</SubmitButton>
+        <SubmitButton variant="danger" pendingText="Removing…">
+          Remove webhook
+        </SubmitButton>
       </form>
-      <div className="basis-full"><FormMessage state={resumeState.message ? resumeState : deleteState} success={resumeState.message ?? deleteState.message} /></div>
+      <div className="basis-full">
+        <FormMessage state={resumeState.message ? resumeState : deleteState} success={resumeState.message ?? deleteState.message} />
+      </div>
     </div>
   );
 }

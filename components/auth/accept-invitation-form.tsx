@@ -1,22 +1,31 @@
 "use client";
 
-import Link from "next/link";
 import { signIn } from "next-auth/react";
-import { type FormEvent, useEffect, useRef, useState } from "react";
+import Link from "next/link";
+import { useEffect, useRef, useState, type FormEvent } from "react";
 
 import { Field } from "@/components/forms/field";
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
-import type { ActionState } from "@/lib/actions/action-state";
-import type { FormAction } from "@/lib/actions/action-state";
 import { acceptInvitationSchema } from "@/content-schema/members";
+import type { ActionState, FormAction } from "@/lib/actions/action-state";
 
 /**
  * `newAccount`: the invitation creates the account (name and password asked), then signs the person in with
  * the password just chosen. Otherwise the person is already signed in as the invited account.
  */
-export function AcceptInvitationForm({ vendor, token, newAccount, acceptInvitationAction }: { vendor: string; token: string; newAccount: boolean; acceptInvitationAction: FormAction }) {
+export function AcceptInvitationForm({
+  vendor,
+  token,
+  newAccount,
+  acceptInvitationAction,
+}: {
+  vendor: string;
+  token: string;
+  newAccount: boolean;
+  acceptInvitationAction: FormAction;
+}) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(acceptInvitationAction, acceptInvitationSchema);
   const accepted = state as ActionState<{ email: string; created: boolean }>;
   const password = useRef("");
@@ -36,8 +45,14 @@ export function AcceptInvitationForm({ vendor, token, newAccount, acceptInvitati
   if (accepted.ok) {
     return (
       <div role="status" className="rounded-lg border border-green-300 bg-green-50 p-4">
-        <p>✓ {accepted.message} {signInFailed ? "" : "Signing you in…"}</p>
-        {signInFailed ? <Link className="mt-2 inline-block underline" href={`/sign-in?vendor=${vendor}&callbackUrl=${home}`}>Sign in</Link> : null}
+        <p>
+          ✓ {accepted.message} {signInFailed ? "" : "Signing you in…"}
+        </p>
+        {signInFailed ? (
+          <Link className="mt-2 inline-block underline" href={`/sign-in?vendor=${vendor}&callbackUrl=${home}`}>
+            Sign in
+          </Link>
+        ) : null}
       </div>
     );
   }
@@ -54,7 +69,14 @@ export function AcceptInvitationForm({ vendor, token, newAccount, acceptInvitati
       {newAccount ? (
         <>
           <Field label="Your name" name="name" autoComplete="name" errors={errors.name} />
-          <Field label="Choose a password" name="password" type="password" autoComplete="new-password" errors={errors.password} hint="At least 10 characters." />
+          <Field
+            label="Choose a password"
+            name="password"
+            type="password"
+            autoComplete="new-password"
+            errors={errors.password}
+            hint="At least 10 characters."
+          />
         </>
       ) : null}
       <FormMessage state={state} />

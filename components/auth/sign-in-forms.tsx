@@ -1,17 +1,25 @@
 "use client";
 
-import Link from "next/link";
 import { signIn } from "next-auth/react";
-import { type FormEvent, useState } from "react";
+import Link from "next/link";
+import { useState, type FormEvent } from "react";
 
 import { Field } from "@/components/forms/field";
-import type { ActionState } from "@/lib/actions/action-state";
 import { credentialsSchema, emailSchema } from "@/content-schema/auth";
+import type { ActionState } from "@/lib/actions/action-state";
 import type { FieldErrors } from "@/lib/errors/domain-errors";
 
 type ResendVerification = (input: { email: string; vendor?: string }) => Promise<ActionState>;
 
-export function SignInForms({ callbackUrl, vendor, resendVerificationAction }: { callbackUrl: string; vendor?: string; resendVerificationAction: ResendVerification }) {
+export function SignInForms({
+  callbackUrl,
+  vendor,
+  resendVerificationAction,
+}: {
+  callbackUrl: string;
+  vendor?: string;
+  resendVerificationAction: ResendVerification;
+}) {
   const [errors, setErrors] = useState<FieldErrors>({});
   const [linkErrors, setLinkErrors] = useState<string[] | undefined>();
   const [busy, setBusy] = useState(false);
@@ -40,7 +48,9 @@ export function SignInForms({ callbackUrl, vendor, resendVerificationAction }: {
       return setErrors({ _form: [`Confirm your e-mail first: open the link we sent to ${parsed.data.email}, then sign in.`] });
     }
     setUnconfirmed(null);
-    setErrors({ _form: [result?.error === "rate_limited" ? "Too many attempts. Wait 15 minutes and try again." : "E-mail or password is not right."] });
+    setErrors({
+      _form: [result?.error === "rate_limited" ? "Too many attempts. Wait 15 minutes and try again." : "E-mail or password is not right."],
+    });
   }
 
   async function onResend() {
@@ -58,31 +68,67 @@ export function SignInForms({ callbackUrl, vendor, resendVerificationAction }: {
 
   return (
     <div className="mt-6 space-y-8">
-      <form onSubmit={onPassword} noValidate className="space-y-4 rounded-lg border border-stone-200 bg-white p-5" aria-labelledby="pw-title">
-        <h2 id="pw-title" className="font-medium">With your password</h2>
+      <form
+        onSubmit={onPassword}
+        noValidate
+        className="space-y-4 rounded-lg border border-stone-200 bg-white p-5"
+        aria-labelledby="pw-title"
+      >
+        <h2 id="pw-title" className="font-medium">
+          With your password
+        </h2>
         <Field label="E-mail" name="email" type="email" autoComplete="email" errors={errors.email} id="pw-email" />
         <Field label="Password" name="password" type="password" autoComplete="current-password" errors={errors.password} id="pw-password" />
-        {errors._form ? <p role="alert" className="text-sm text-red-800">⚠ {errors._form.join(" ")}</p> : null}
+        {errors._form ? (
+          <p role="alert" className="text-sm text-red-800">
+            ⚠ {errors._form.join(" ")}
+          </p>
+        ) : null}
         {unconfirmed ? (
           <div className="space-y-2">
-            <button type="button" onClick={onResend} className="min-h-11 rounded border border-stone-400 bg-white px-4 py-2 text-sm font-medium">
+            <button
+              type="button"
+              onClick={onResend}
+              className="min-h-11 rounded border border-stone-400 bg-white px-4 py-2 text-sm font-medium"
+            >
               Send the link again
             </button>
-            {resent ? <p role={resent.ok ? "status" : "alert"} className="text-sm">{resent.ok ? "✓" : "⚠"} {resent.message}</p> : null}
+            {resent ? (
+              <p role={resent.ok ? "status" : "alert"} className="text-sm">
+                {resent.ok ? "✓" : "⚠"} {resent.message}
+              </p>
+            ) : null}
           </div>
         ) : null}
-        <button type="submit" disabled={busy} className="min-h-11 w-full rounded bg-stone-900 px-4 py-2 font-medium text-white disabled:opacity-60">
+        <button
+          type="submit"
+          disabled={busy}
+          className="min-h-11 w-full rounded bg-stone-900 px-4 py-2 font-medium text-white disabled:opacity-60"
+        >
           {busy ? "Signing in…" : "Sign in"}
         </button>
       </form>
-      <form onSubmit={onMagicLink} noValidate className="space-y-4 rounded-lg border border-stone-200 bg-white p-5" aria-labelledby="ml-title">
-        <h2 id="ml-title" className="font-medium">With a link by e-mail</h2>
+      <form
+        onSubmit={onMagicLink}
+        noValidate
+        className="space-y-4 rounded-lg border border-stone-200 bg-white p-5"
+        aria-labelledby="ml-title"
+      >
+        <h2 id="ml-title" className="font-medium">
+          With a link by e-mail
+        </h2>
         <Field label="E-mail" name="email" type="email" autoComplete="email" errors={linkErrors} id="ml-email" />
-        <button type="submit" className="min-h-11 w-full rounded border border-stone-400 bg-white px-4 py-2 font-medium">E-mail me a sign-in link</button>
+        <button type="submit" className="min-h-11 w-full rounded border border-stone-400 bg-white px-4 py-2 font-medium">
+          E-mail me a sign-in link
+        </button>
       </form>
       {vendor ? (
         <p className="text-sm text-stone-700">
-          New here? <Link className="underline" href={`/${vendor}/sign-up`}>Create a customer account</Link>.
+          New here?{" "}
+          <Link className="underline" href={`/${vendor}/sign-up`}>
+            Create a customer account
+          </Link>
+          .
         </p>
       ) : null}
     </div>

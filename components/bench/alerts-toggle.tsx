@@ -6,7 +6,15 @@ import { FormMessage } from "@/components/forms/form-message";
 import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 
 /** Change alerts on or off: an e-mail when a sheet I saved a setup from gets a new version. */
-export function AlertsToggle({ vendorSlug, enabled, setChangeAlertsAction }: { vendorSlug: string; enabled: boolean; setChangeAlertsAction: FormAction }) {
+export function AlertsToggle({
+  vendorSlug,
+  enabled,
+  setChangeAlertsAction,
+}: {
+  vendorSlug: string;
+  enabled: boolean;
+  setChangeAlertsAction: FormAction;
+}) {
   const [state, action, pending] = useActionState(setChangeAlertsAction, initialActionState);
   return (
     <form action={action} className="flex flex-wrap items-center gap-3 text-sm">

@@ -4,14 +4,33 @@ export function CutterQrLinks({ vendorSlug, sku, shortUrl }: { vendorSlug: strin
   return (
     <div className="flex flex-wrap items-center gap-3 text-sm">
       {/* eslint-disable-next-line @next/next/no-img-element -- a generated QR code, not a content image */}
-      <img src={`${qr}?format=svg`} alt={`QR code for ${shortUrl}`} width={96} height={96} className="rounded border border-stone-200 bg-white" />
+      <img
+        src={`${qr}?format=svg`}
+        alt={`QR code for ${shortUrl}`}
+        width={96}
+        height={96}
+        className="rounded border border-stone-200 bg-white"
+      />
       <div className="space-y-1">
         <p>
-          Short link: <a className="num underline" href={shortUrl}>{shortUrl.replace(/^https?:\/\//, "")}</a>
+          Short link:{" "}
+          <a className="num underline" href={shortUrl}>
+            {shortUrl.replace(/^https?:\/\//, "")}
+          </a>
         </p>
         <p className="flex gap-2">
-          <a className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-3" href={`${qr}?format=png&download=1`}>QR as PNG</a>
-          <a className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-3" href={`${qr}?format=svg&download=1`}>QR as SVG</a>
+          <a
+            className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-3"
+            href={`${qr}?format=png&download=1`}
+          >
+            QR as PNG
+          </a>
+          <a
+            className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-3"
+            href={`${qr}?format=svg&download=1`}
+          >
+            QR as SVG
+          </a>
         </p>
       </div>
     </div>

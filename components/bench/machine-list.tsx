@@ -13,7 +13,9 @@ export function MachineList({ machines, vendorSlug }: { machines: Machine[]; ven
           <p className="font-semibold">{m.name}</p>
           <dl className="mt-2 grid grid-cols-2 gap-x-3 gap-y-1 text-sm">
             <dt className="text-stone-600">n</dt>
-            <dd className="num">{formatQuantity(m.rpmMin, "spindleSpeed", m.units)} – {formatQuantity(m.rpmMax, "spindleSpeed", m.units)}</dd>
+            <dd className="num">
+              {formatQuantity(m.rpmMin, "spindleSpeed", m.units)} – {formatQuantity(m.rpmMax, "spindleSpeed", m.units)}
+            </dd>
             <dt className="text-stone-600">Power</dt>
             <dd className="num">{formatQuantity(m.powerKw, "power", m.units)}</dd>
             <dt className="text-stone-600">Max feed</dt>
@@ -22,7 +24,10 @@ export function MachineList({ machines, vendorSlug }: { machines: Machine[]; ven
             <dd className="num">{formatQuantity(m.stickoutMm, "length", m.units)}</dd>
           </dl>
           <p className="mt-2 text-xs text-stone-600">{rigidityClassOf(m.rigidity).label}</p>
-          <Link href={`/${vendorSlug}/bench/machines/${m.id}`} className="mt-3 inline-flex min-h-11 items-center rounded border border-stone-300 px-3 text-sm">
+          <Link
+            href={`/${vendorSlug}/bench/machines/${m.id}`}
+            className="mt-3 inline-flex min-h-11 items-center rounded border border-stone-300 px-3 text-sm"
+          >
             Edit {m.name}
           </Link>
         </li>

@@ -3,7 +3,20 @@ import type { Machine } from "@/lib/bench/machine-rows";
 
 import type { MachineFormValues } from "./machine-form";
 
-export const EMPTY_MACHINE_VALUES: MachineFormValues = { name: "", preset: "", rpmMin: "", rpmMax: "", powerKw: "", maxFeedMmMin: "", rigidity: "moderate", zThrustN: "", spindleKind: "constant-torque", ratedRpm: "", stickoutMm: "", units: "metric" };
+export const EMPTY_MACHINE_VALUES: MachineFormValues = {
+  name: "",
+  preset: "",
+  rpmMin: "",
+  rpmMax: "",
+  powerKw: "",
+  maxFeedMmMin: "",
+  rigidity: "moderate",
+  zThrustN: "",
+  spindleKind: "constant-torque",
+  ratedRpm: "",
+  stickoutMm: "",
+  units: "metric",
+};
 
 /** A stored machine as form text (metric, with units written out). */
 export const machineToValues = (m: Machine): MachineFormValues => ({

@@ -10,7 +10,9 @@ export function CatalogueItemView({ title, detail, editForm }: { title: string; 
       {detail}
       {editForm ? (
         <section aria-labelledby="edit-heading" className="mt-8">
-          <h2 id="edit-heading" className="mb-3 text-lg font-semibold">Edit</h2>
+          <h2 id="edit-heading" className="mb-3 text-lg font-semibold">
+            Edit
+          </h2>
           {editForm}
         </section>
       ) : null}

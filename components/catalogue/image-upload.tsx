@@ -26,10 +26,28 @@ export function ImageUpload({ url }: { url: string }) {
   }
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor="cutter-image" className="text-sm font-medium">Cutter image (PNG, JPEG or WebP, up to 5 MB)</label>
-      <input id="cutter-image" type="file" accept="image/png,image/jpeg,image/webp" disabled={busy} onChange={(e) => upload(e.target.files?.[0])} className="min-h-11 text-sm" />
-      {busy ? <p role="status" className="text-sm">Uploading…</p> : null}
-      {message ? <p role={message.ok ? "status" : "alert"} className={`text-sm ${message.ok ? "text-green-800" : "text-red-800"}`}>{message.ok ? "✓ " : "⚠ "}{message.text}</p> : null}
+      <label htmlFor="cutter-image" className="text-sm font-medium">
+        Cutter image (PNG, JPEG or WebP, up to 5 MB)
+      </label>
+      <input
+        id="cutter-image"
+        type="file"
+        accept="image/png,image/jpeg,image/webp"
+        disabled={busy}
+        onChange={(e) => upload(e.target.files?.[0])}
+        className="min-h-11 text-sm"
+      />
+      {busy ? (
+        <p role="status" className="text-sm">
+          Uploading…
+        </p>
+      ) : null}
+      {message ? (
+        <p role={message.ok ? "status" : "alert"} className={`text-sm ${message.ok ? "text-green-800" : "text-red-800"}`}>
+          {message.ok ? "✓ " : "⚠ "}
+          {message.text}
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -1,10 +1,17 @@
 "use client";
 
-import { flexRender, getCoreRowModel, getSortedRowModel, type RowSelectionState, type SortingState, useReactTable } from "@tanstack/react-table";
+import {
+  flexRender,
+  getCoreRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type RowSelectionState,
+  type SortingState,
+} from "@tanstack/react-table";
 import { useMemo, useState, useTransition } from "react";
 
 import type { FormAction } from "@/lib/actions/action-state";
-import { type QueueFilters, queueFiltersToSearch } from "@/lib/desk/queue-filters";
+import { queueFiltersToSearch, type QueueFilters } from "@/lib/desk/queue-filters";
 import type { DeskView } from "@/lib/desk/saved-views";
 import { useDeskQueue, useDeskViews } from "@/lib/swr/use-desk-queue";
 import type { TicketSummary } from "@/lib/tickets/ticket-types";
@@ -14,9 +21,27 @@ import { QueueFilterBar } from "./queue-filter-bar";
 import { SaveViewForm } from "./save-view-form";
 
 type Option = { id: string; name: string };
-type Props = { vendor: string; initial: TicketSummary[]; initialFilters?: QueueFilters; views: DeskView[]; assignees: Option[]; materials: Option[]; bulkAssignAction: FormAction; saveViewAction: FormAction };
+type Props = {
+  vendor: string;
+  initial: TicketSummary[];
+  initialFilters?: QueueFilters;
+  views: DeskView[];
+  assignees: Option[];
+  materials: Option[];
+  bulkAssignAction: FormAction;
+  saveViewAction: FormAction;
+};
 
-export function QueueTable({ vendor, initial, initialFilters = {}, views: initialViews, assignees, materials, bulkAssignAction, saveViewAction }: Props) {
+export function QueueTable({
+  vendor,
+  initial,
+  initialFilters = {},
+  views: initialViews,
+  assignees,
+  materials,
+  bulkAssignAction,
+  saveViewAction,
+}: Props) {
   const [filters, setFiltersState] = useState<QueueFilters>(initialFilters);
   const [initialSearch] = useState(() => queueFiltersToSearch(initialFilters));
   const [activeView, setActiveView] = useState(initialSearch ? "" : "open");
@@ -69,24 +94,60 @@ export function QueueTable({ vendor, initial, initialFilters = {}, views: initia
             key={v.id}
             type="button"
             aria-pressed={activeView === v.id}
-            onClick={() => { setActiveView(v.id); setFilters(v.filters); setSelection({}); }}
+            onClick={() => {
+              setActiveView(v.id);
+              setFilters(v.filters);
+              setSelection({});
+            }}
             className="min-h-9 rounded border border-stone-300 bg-white px-3 text-sm aria-pressed:bg-stone-800 aria-pressed:text-white"
           >
             {v.name} <span className="num">({v.count})</span>
           </button>
         ))}
       </nav>
-      <QueueFilterBar filters={filters} onChange={(f) => { setFilters(f); setActiveView(""); }} assignees={assignees} materials={materials} />
+      <QueueFilterBar
+        filters={filters}
+        onChange={(f) => {
+          setFilters(f);
+          setActiveView("");
+        }}
+        assignees={assignees}
+        materials={materials}
+      />
       <SaveViewForm saveViewAction={saveViewAction} vendor={vendor} filters={filters} onSaved={() => void views.mutate()} />
       <div className="flex flex-wrap items-center gap-2 text-sm" role="group" aria-label="Bulk actions">
         <span className="num">{selectedIds.length} selected</span>
-        <select aria-label="Assign selected to" className="min-h-9 rounded border border-stone-300 bg-white px-2" value={assignTo} onChange={(e) => setAssignTo(e.target.value)}>
+        <select
+          aria-label="Assign selected to"
+          className="min-h-9 rounded border border-stone-300 bg-white px-2"
+          value={assignTo}
+          onChange={(e) => setAssignTo(e.target.value)}
+        >
           <option value="">Nobody (unassign)</option>
-          {assignees.map((a) => <option key={a.id} value={a.id}>{a.name}</option>)}
+          {assignees.map((a) => (
+            <option key={a.id} value={a.id}>
+              {a.name}
+            </option>
+          ))}
         </select>
-        <button type="button" disabled={!selectedIds.length || pending} onClick={assign} className="min-h-9 rounded bg-accent px-3 font-medium text-accent-ink disabled:opacity-50">Assign selected</button>
-        {message ? <span role="status" className="text-green-800">✓ {message}</span> : null}
-        {queue.error ? <span role="alert" className="text-red-800">⚠ The queue could not be refreshed.</span> : null}
+        <button
+          type="button"
+          disabled={!selectedIds.length || pending}
+          onClick={assign}
+          className="min-h-9 rounded bg-accent px-3 font-medium text-accent-ink disabled:opacity-50"
+        >
+          Assign selected
+        </button>
+        {message ? (
+          <span role="status" className="text-green-800">
+            ✓ {message}
+          </span>
+        ) : null}
+        {queue.error ? (
+          <span role="alert" className="text-red-800">
+            ⚠ The queue could not be refreshed.
+          </span>
+        ) : null}
       </div>
       <div className="overflow-x-auto rounded-lg border border-stone-200 bg-white">
         <table className="w-full text-left text-sm" aria-label="Ticket queue">
@@ -94,7 +155,13 @@ export function QueueTable({ vendor, initial, initialFilters = {}, views: initia
             {table.getHeaderGroups().map((hg) => (
               <tr key={hg.id}>
                 {hg.headers.map((h) => (
-                  <th key={h.id} className="px-2 py-2 whitespace-nowrap" aria-sort={h.column.getIsSorted() === "asc" ? "ascending" : h.column.getIsSorted() === "desc" ? "descending" : undefined}>
+                  <th
+                    key={h.id}
+                    className="px-2 py-2 whitespace-nowrap"
+                    aria-sort={
+                      h.column.getIsSorted() === "asc" ? "ascending" : h.column.getIsSorted() === "desc" ? "descending" : undefined
+                    }
+                  >
                     {h.column.getCanSort() ? (
                       <button type="button" onClick={h.column.getToggleSortingHandler()} className="font-semibold">
                         {flexRender(h.column.columnDef.header, h.getContext())}
@@ -110,11 +177,25 @@ export function QueueTable({ vendor, initial, initialFilters = {}, views: initia
           </thead>
           <tbody>
             {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} data-ticket-id={row.original.id} className={`border-t border-stone-100 ${row.original.overdue ? "bg-red-50" : ""}`}>
-                {row.getVisibleCells().map((cell) => <td key={cell.id} className="px-2 py-2">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>)}
+              <tr
+                key={row.id}
+                data-ticket-id={row.original.id}
+                className={`border-t border-stone-100 ${row.original.overdue ? "bg-red-50" : ""}`}
+              >
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="px-2 py-2">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
               </tr>
             ))}
-            {data.length === 0 ? <tr><td colSpan={columns.length} className="px-3 py-6 text-center text-stone-600">No tickets match these filters.</td></tr> : null}
+            {data.length === 0 ? (
+              <tr>
+                <td colSpan={columns.length} className="px-3 py-6 text-center text-stone-600">
+                  No tickets match these filters.
+                </td>
+              </tr>
+            ) : null}
           </tbody>
         </table>
       </div>

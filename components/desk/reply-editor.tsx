@@ -31,7 +31,18 @@ type Props = {
 const field = "min-h-9 rounded border border-stone-300 bg-white px-2 text-sm";
 
 /** Markdown reply or internal note, with an adapted-sheet picker and saved snippets. */
-export function ReplyEditor({ staffReplyAction, vendor, ticketId, versions, linkedVersionIds = [], machines, defaultMachineId, defaultVersionId, snippets, placeholders }: Props) {
+export function ReplyEditor({
+  staffReplyAction,
+  vendor,
+  ticketId,
+  versions,
+  linkedVersionIds = [],
+  machines,
+  defaultMachineId,
+  defaultVersionId,
+  snippets,
+  placeholders,
+}: Props) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(staffReplyAction, ticketReplySchema);
   const [visibility, setVisibility] = useState<"public" | "note">("public");
   const note = visibility === "note";
@@ -77,49 +88,108 @@ export function ReplyEditor({ staffReplyAction, vendor, ticketId, versions, link
       <IdempotencyKeyField renewOn={state.ok ? state : null} />
       <fieldset className="flex flex-wrap gap-4 text-sm">
         <legend className="sr-only">Kind of message</legend>
-        <label className="flex items-center gap-2"><input type="radio" name="visibility" value="public" checked={!note} onChange={() => setVisibility("public")} /> Reply to customer</label>
-        <label className="flex items-center gap-2"><input type="radio" name="visibility" value="note" checked={note} onChange={() => setVisibility("note")} /> Internal note (staff only)</label>
+        <label className="flex items-center gap-2">
+          <input type="radio" name="visibility" value="public" checked={!note} onChange={() => setVisibility("public")} /> Reply to customer
+        </label>
+        <label className="flex items-center gap-2">
+          <input type="radio" name="visibility" value="note" checked={note} onChange={() => setVisibility("note")} /> Internal note (staff
+          only)
+        </label>
       </fieldset>
-      {note ? <p className="text-sm font-medium text-amber-900" id="note-mode-hint">Internal note: only staff see this; the customer is not told.</p> : null}
+      {note ? (
+        <p className="text-sm font-medium text-amber-900" id="note-mode-hint">
+          Internal note: only staff see this; the customer is not told.
+        </p>
+      ) : null}
       <div className="flex flex-wrap items-center gap-2 text-sm">
-        <button type="button" onClick={() => setPreview(false)} aria-pressed={!preview} className="rounded px-2 aria-pressed:bg-stone-200">Write</button>
-        <button type="button" onClick={() => setPreview(true)} aria-pressed={preview} className="rounded px-2 aria-pressed:bg-stone-200">Preview</button>
+        <button type="button" onClick={() => setPreview(false)} aria-pressed={!preview} className="rounded px-2 aria-pressed:bg-stone-200">
+          Write
+        </button>
+        <button type="button" onClick={() => setPreview(true)} aria-pressed={preview} className="rounded px-2 aria-pressed:bg-stone-200">
+          Preview
+        </button>
         {snippets.length ? (
-          <select aria-label="Insert snippet" className={field} value="" onChange={(e) => {
-            const s = snippets.find((x) => x.id === e.target.value);
-            if (s) setBody((b) => (b ? `${b}\n\n` : "") + expandSnippet(s.body, values));
-          }}>
+          <select
+            aria-label="Insert snippet"
+            className={field}
+            value=""
+            onChange={(e) => {
+              const s = snippets.find((x) => x.id === e.target.value);
+              if (s) setBody((b) => (b ? `${b}\n\n` : "") + expandSnippet(s.body, values));
+            }}
+          >
             <option value="">Insert a snippet…</option>
-            {snippets.map((s) => <option key={s.id} value={s.id}>{s.title}</option>)}
+            {snippets.map((s) => (
+              <option key={s.id} value={s.id}>
+                {s.title}
+              </option>
+            ))}
           </select>
         ) : null}
       </div>
-      <label htmlFor="f-staff-body" className="sr-only">Message</label>
-      <textarea id="f-staff-body" name="body" rows={7} value={body} onChange={(e) => setBody(e.target.value)} hidden={preview} aria-describedby={note ? "note-mode-hint" : undefined} className={`w-full rounded border px-3 py-2 font-mono text-sm ${note ? "border-amber-400 bg-amber-100/60" : "border-stone-300 bg-white"}`} />
-      {preview ? <div className="min-h-24 rounded border border-dashed border-stone-300 p-3"><SafeMarkdown source={body || "_Nothing to preview._"} /></div> : null}
-      {errors.body ? <p className="text-sm text-red-800"><span aria-hidden>⚠ </span>{errors.body.join(" ")}</p> : null}
+      <label htmlFor="f-staff-body" className="sr-only">
+        Message
+      </label>
+      <textarea
+        id="f-staff-body"
+        name="body"
+        rows={7}
+        value={body}
+        onChange={(e) => setBody(e.target.value)}
+        hidden={preview}
+        aria-describedby={note ? "note-mode-hint" : undefined}
+        className={`w-full rounded border px-3 py-2 font-mono text-sm ${note ? "border-amber-400 bg-amber-100/60" : "border-stone-300 bg-white"}`}
+      />
+      {preview ? (
+        <div className="min-h-24 rounded border border-dashed border-stone-300 p-3">
+          <SafeMarkdown source={body || "_Nothing to preview._"} />
+        </div>
+      ) : null}
+      {errors.body ? (
+        <p className="text-sm text-red-800">
+          <span aria-hidden>⚠ </span>
+          {errors.body.join(" ")}
+        </p>
+      ) : null}
       <fieldset className="grid gap-2 text-sm sm:grid-cols-2">
         <legend className="font-medium">Embed a sheet adapted to the customer&apos;s machine</legend>
-        <label className="flex flex-col">Sheet version
+        <label className="flex flex-col">
+          Sheet version
           <select name="cardSheetVersionId" className={field} value={versionId} onChange={(e) => setVersionId(e.target.value)}>
             <option value="">No sheet</option>
             {groups.map((g) => (
               <optgroup key={g.label} label={g.label}>
-                {g.items.map((v) => <option key={v.id} value={v.id}>{v.name}</option>)}
+                {g.items.map((v) => (
+                  <option key={v.id} value={v.id}>
+                    {v.name}
+                  </option>
+                ))}
               </optgroup>
             ))}
           </select>
         </label>
-        <label className="flex flex-col">Customer&apos;s machine
+        <label className="flex flex-col">
+          Customer&apos;s machine
           <select name="cardMachineId" className={field} defaultValue={defaultMachineId ?? machines[0]?.id ?? ""}>
             <option value="">—</option>
-            {machines.map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
+            {machines.map((m) => (
+              <option key={m.id} value={m.id}>
+                {m.name}
+              </option>
+            ))}
           </select>
         </label>
         {errors.cardMachineId || errors.cardSheetVersionId ? (
-          <p className="text-red-800 sm:col-span-2"><span aria-hidden>⚠ </span>{[...(errors.cardMachineId ?? []), ...(errors.cardSheetVersionId ?? [])].join(" ")}</p>
+          <p className="text-red-800 sm:col-span-2">
+            <span aria-hidden>⚠ </span>
+            {[...(errors.cardMachineId ?? []), ...(errors.cardSheetVersionId ?? [])].join(" ")}
+          </p>
         ) : null}
-        {versionId && !machines.length ? <p className="text-amber-900 sm:col-span-2"><span aria-hidden>⚠ </span>The customer has no saved machine, so the sheet cannot be adapted.</p> : null}
+        {versionId && !machines.length ? (
+          <p className="text-amber-900 sm:col-span-2">
+            <span aria-hidden>⚠ </span>The customer has no saved machine, so the sheet cannot be adapted.
+          </p>
+        ) : null}
       </fieldset>
       <UploadField key={sent} vendor={vendor} label="Attach files" />
       <FormMessage state={state} success={state.message} />

@@ -6,7 +6,17 @@ import type { FormAction } from "@/lib/actions/action-state";
 import type { QueueFilters } from "@/lib/desk/queue-filters";
 
 /** Saves the current filters as one of this agent's views. */
-export function SaveViewForm({ vendor, filters, onSaved, saveViewAction }: { vendor: string; filters: QueueFilters; onSaved: () => void; saveViewAction: FormAction }) {
+export function SaveViewForm({
+  vendor,
+  filters,
+  onSaved,
+  saveViewAction,
+}: {
+  vendor: string;
+  filters: QueueFilters;
+  onSaved: () => void;
+  saveViewAction: FormAction;
+}) {
   const [name, setName] = useState("");
   const [message, setMessage] = useState<string | null>(null);
   const [pending, startTransition] = useTransition();
@@ -27,8 +37,22 @@ export function SaveViewForm({ vendor, filters, onSaved, saveViewAction }: { ven
   return (
     <div className="flex flex-wrap items-center gap-2 text-sm">
       <label htmlFor="view-name">Save these filters as a view</label>
-      <input id="view-name" value={name} onChange={(e) => setName(e.target.value)} maxLength={60} className="min-h-9 rounded border border-stone-300 bg-white px-2" placeholder="e.g. Urgent plastics" />
-      <button type="button" onClick={save} disabled={!name.trim() || pending} className="min-h-9 rounded border border-stone-300 bg-white px-3 disabled:opacity-50">Save view</button>
+      <input
+        id="view-name"
+        value={name}
+        onChange={(e) => setName(e.target.value)}
+        maxLength={60}
+        className="min-h-9 rounded border border-stone-300 bg-white px-2"
+        placeholder="e.g. Urgent plastics"
+      />
+      <button
+        type="button"
+        onClick={save}
+        disabled={!name.trim() || pending}
+        className="min-h-9 rounded border border-stone-300 bg-white px-3 disabled:opacity-50"
+      >
+        Save view
+      </button>
       {message ? <span role="status">{message}</span> : null}
     </div>
   );

@@ -1,6 +1,6 @@
 "use client";
 
-import { type FormEvent, startTransition, useActionState, useState } from "react";
+import { startTransition, useActionState, useState, type FormEvent } from "react";
 
 import { FormMessage } from "@/components/forms/form-message";
 import { TICKET_PRIORITIES, TICKET_STATUSES, ticketPriorityLabels, ticketStatusLabels } from "@/content-schema/ticket-status";
@@ -19,7 +19,17 @@ const isPanelValues = (data: unknown): data is TicketPanelValues =>
  * what the agent is editing, sends only the touched fields with their shown values, and takes the saved
  * ticket back after a save, a conflict, or a refresh of the page (a reply changes the status).
  */
-export function TicketControls({ vendor, ticket, assignees, updateTicketAction }: { vendor: string; ticket: TicketDetail; assignees: { id: string; name: string }[]; updateTicketAction: FormAction }) {
+export function TicketControls({
+  vendor,
+  ticket,
+  assignees,
+  updateTicketAction,
+}: {
+  vendor: string;
+  ticket: TicketDetail;
+  assignees: { id: string; name: string }[];
+  updateTicketAction: FormAction;
+}) {
   const [state, action, pending] = useActionState(updateTicketAction, initialActionState);
   const fromServer = panelValuesOf(ticket);
   const [shown, setShown] = useState(fromServer);
@@ -29,7 +39,12 @@ export function TicketControls({ vendor, ticket, assignees, updateTicketAction }
 
   // Newer values from the page (after a reply or another agent's change) replace the fields the agent has not touched.
   const adopt = (fresh: TicketPanelValues, keepEdits: boolean) => {
-    setValues((current) => Object.fromEntries(KEYS.map((key) => [key, keepEdits && current[key] !== shown[key] ? current[key] : fresh[key]])) as TicketPanelValues);
+    setValues(
+      (current) =>
+        Object.fromEntries(
+          KEYS.map((key) => [key, keepEdits && current[key] !== shown[key] ? current[key] : fresh[key]]),
+        ) as TicketPanelValues,
+    );
     setShown(fresh);
   };
   if (JSON.stringify(fromServer) !== seenServer) {
@@ -43,7 +58,8 @@ export function TicketControls({ vendor, ticket, assignees, updateTicketAction }
   }
 
   const touched = KEYS.filter((key) => values[key] !== shown[key]);
-  const set = (key: keyof TicketPanelValues) => (event: { target: { value: string } }) => setValues((v) => ({ ...v, [key]: event.target.value }));
+  const set = (key: keyof TicketPanelValues) => (event: { target: { value: string } }) =>
+    setValues((v) => ({ ...v, [key]: event.target.value }));
 
   function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -57,27 +73,47 @@ export function TicketControls({ vendor, ticket, assignees, updateTicketAction }
 
   return (
     <form onSubmit={submit} className="space-y-3 text-sm" aria-label="Ticket settings">
-      <label className="block">Status
+      <label className="block">
+        Status
         <select name="status" value={values.status} onChange={set("status")} className={field}>
-          {TICKET_STATUSES.map((s) => <option key={s} value={s}>{ticketStatusLabels[s]}</option>)}
+          {TICKET_STATUSES.map((s) => (
+            <option key={s} value={s}>
+              {ticketStatusLabels[s]}
+            </option>
+          ))}
         </select>
       </label>
-      <label className="block">Priority
+      <label className="block">
+        Priority
         <select name="priority" value={values.priority} onChange={set("priority")} className={field}>
-          {TICKET_PRIORITIES.map((p) => <option key={p} value={p}>{ticketPriorityLabels[p]}</option>)}
+          {TICKET_PRIORITIES.map((p) => (
+            <option key={p} value={p}>
+              {ticketPriorityLabels[p]}
+            </option>
+          ))}
         </select>
       </label>
-      <label className="block">Assignee
+      <label className="block">
+        Assignee
         <select name="assigneeId" value={values.assigneeId} onChange={set("assigneeId")} className={field}>
           <option value="">Unassigned</option>
-          {assignees.map((a) => <option key={a.id} value={a.id}>{a.name}</option>)}
+          {assignees.map((a) => (
+            <option key={a.id} value={a.id}>
+              {a.name}
+            </option>
+          ))}
         </select>
       </label>
-      <label className="block">Tags (comma separated)
+      <label className="block">
+        Tags (comma separated)
         <input name="tags" value={values.tags} onChange={set("tags")} className={field} />
       </label>
       <FormMessage state={state} success={state.message} />
-      <button type="submit" disabled={pending || touched.length === 0} className="min-h-11 rounded border border-stone-300 bg-white px-4 py-2 font-medium text-stone-900 disabled:opacity-60">
+      <button
+        type="submit"
+        disabled={pending || touched.length === 0}
+        className="min-h-11 rounded border border-stone-300 bg-white px-4 py-2 font-medium text-stone-900 disabled:opacity-60"
+      >
         {pending ? "Saving…" : "Save changes"}
       </button>
     </form>

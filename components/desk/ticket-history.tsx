@@ -1,6 +1,6 @@
 import { formatDateTime } from "@/components/support/ticket-badges";
-import { describeAuditAction } from "@/lib/audit/action-labels";
 import { ticketPriorityLabels, ticketStatusLabels, type TicketPriority, type TicketStatus } from "@/content-schema/ticket-status";
+import { describeAuditAction } from "@/lib/audit/action-labels";
 import type { TicketHistoryEntry } from "@/lib/tickets/list-ticket-history";
 
 const name = (names: Record<string, string>, id: unknown) => (typeof id === "string" ? (names[id] ?? "a former member") : "nobody");
@@ -8,14 +8,22 @@ const name = (names: Record<string, string>, id: unknown) => (typeof id === "str
 function describe(e: TicketHistoryEntry, people: Record<string, string>): string {
   const { from, to } = e.details as { from?: unknown; to?: unknown };
   switch (e.action) {
-    case "ticket.create": return "opened the ticket";
-    case "ticket.status": return `status ${ticketStatusLabels[from as TicketStatus] ?? from} → ${ticketStatusLabels[to as TicketStatus] ?? to}${e.details.via ? ` (${e.details.via})` : ""}`;
-    case "ticket.priority": return `priority ${ticketPriorityLabels[from as TicketPriority] ?? from} → ${ticketPriorityLabels[to as TicketPriority] ?? to}`;
-    case "ticket.assignee": return `assignee ${name(people, from)} → ${name(people, to)}`;
-    case "ticket.tags": return `tags ${(to as string[] | undefined)?.join(", ") || "none"}`;
-    case "ticket.rating": return `rated ${String(e.details.satisfaction)}/5`;
-    case "ticket.handoff": return "handed a problem to engineering";
-    default: return describeAuditAction(e.action, e.details).toLowerCase();
+    case "ticket.create":
+      return "opened the ticket";
+    case "ticket.status":
+      return `status ${ticketStatusLabels[from as TicketStatus] ?? from} → ${ticketStatusLabels[to as TicketStatus] ?? to}${e.details.via ? ` (${e.details.via})` : ""}`;
+    case "ticket.priority":
+      return `priority ${ticketPriorityLabels[from as TicketPriority] ?? from} → ${ticketPriorityLabels[to as TicketPriority] ?? to}`;
+    case "ticket.assignee":
+      return `assignee ${name(people, from)} → ${name(people, to)}`;
+    case "ticket.tags":
+      return `tags ${(to as string[] | undefined)?.join(", ") || "none"}`;
+    case "ticket.rating":
+      return `rated ${String(e.details.satisfaction)}/5`;
+    case "ticket.handoff":
+      return "handed a problem to engineering";
+    default:
+      return describeAuditAction(e.action, e.details).toLowerCase();
   }
 }
 
@@ -26,7 +34,9 @@ export function TicketHistory({ entries, people }: { entries: TicketHistoryEntry
       <summary className="cursor-pointer font-semibold">History ({entries.length})</summary>
       <ol className="mt-2 space-y-1">
         {entries.map((e) => (
-          <li key={e.id}><span className="text-stone-600">{formatDateTime(e.createdAt)}</span> · {e.actorName ?? "System"}: {describe(e, people)}</li>
+          <li key={e.id}>
+            <span className="text-stone-600">{formatDateTime(e.createdAt)}</span> · {e.actorName ?? "System"}: {describe(e, people)}
+          </li>
         ))}
       </ol>
     </details>

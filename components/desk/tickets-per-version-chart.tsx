@@ -18,9 +18,7 @@ export function TicketsPerVersionChart({ data }: { data: { label: string; ticket
           </BarChart>
         </ResponsiveContainer>
       </div>
-      <figcaption className="sr-only">
-        {data.map((d) => `${d.label}: ${d.tickets} tickets`).join("; ")}
-      </figcaption>
+      <figcaption className="sr-only">{data.map((d) => `${d.label}: ${d.tickets} tickets`).join("; ")}</figcaption>
     </figure>
   );
 }

@@ -35,16 +35,33 @@ export function OperationCard({ method, path, op }: { method: string; path: stri
       <p className="mt-1">{op.summary}</p>
       {op.description ? <p className="mt-1 text-sm text-stone-700">{op.description}</p> : null}
       <p className="mt-2 text-sm text-stone-600">
-        {op["x-swarfbook-permission"] ? <>Scope <code>{op["x-swarfbook-permission"]}</code> ({op["x-swarfbook-roles"]?.join(", ")}). </> : null}
+        {op["x-swarfbook-permission"] ? (
+          <>
+            Scope <code>{op["x-swarfbook-permission"]}</code> ({op["x-swarfbook-roles"]?.join(", ")}).{" "}
+          </>
+        ) : null}
         Rate limit {rate.limit} per {rate.windowSeconds} s{rate.bucket === "own" ? ", its own bucket" : ", shared bucket"}.
       </p>
       {op.parameters?.length ? (
         <table className="mt-3 w-full text-left text-sm">
-          <thead className="text-stone-600"><tr><th className="pr-3">Parameter</th><th className="pr-3">In</th><th className="pr-3">Type</th><th>Notes</th></tr></thead>
+          <thead className="text-stone-600">
+            <tr>
+              <th className="pr-3">Parameter</th>
+              <th className="pr-3">In</th>
+              <th className="pr-3">Type</th>
+              <th>Notes</th>
+            </tr>
+          </thead>
           <tbody>
             {op.parameters.map((p) => (
               <tr key={`${p.in}-${p.name}`} className="border-t border-stone-100 align-top">
-                <td className="num pr-3">{p.name}{p.required ? " *" : ""}</td><td className="pr-3">{p.in}</td><td className="num pr-3 break-all">{typeOf(p)}</td><td>{p.description ?? ""}</td>
+                <td className="num pr-3">
+                  {p.name}
+                  {p.required ? " *" : ""}
+                </td>
+                <td className="pr-3">{p.in}</td>
+                <td className="num pr-3 break-all">{typeOf(p)}</td>
+                <td>{p.description ?? ""}</td>
               </tr>
             ))}
           </tbody>
@@ -61,9 +78,19 @@ export function OperationCard({ method, path, op }: { method: string; path: stri
       <ul className="text-sm">
         {Object.entries(op.responses).map(([status, r]) => (
           <li key={status} className="mt-1">
-            <span className="num font-medium">{status}</span> {r.$ref ? <a className="underline" href={`#errors`}>see errors</a> : r.description}
+            <span className="num font-medium">{status}</span>{" "}
+            {r.$ref ? (
+              <a className="underline" href={`#errors`}>
+                see errors
+              </a>
+            ) : (
+              r.description
+            )}
             {r.content?.["application/json"]?.schema ? (
-              <details><summary className="cursor-pointer text-stone-600">Schema</summary><JsonBlock value={r.content["application/json"].schema} /></details>
+              <details>
+                <summary className="cursor-pointer text-stone-600">Schema</summary>
+                <JsonBlock value={r.content["application/json"].schema} />
+              </details>
             ) : null}
             <Examples media={r.content?.["application/json"]} />
           </li>

@@ -17,7 +17,9 @@ export function WebhookVerifyExample() {
   return (
     <figure className="mb-4">
       <figcaption className="mb-1 text-sm font-medium">Checking a delivery (Node.js)</figcaption>
-      <pre className="overflow-auto rounded border border-stone-200 bg-stone-50 p-3 text-xs" tabIndex={0}>{CODE}</pre>
+      <pre className="overflow-auto rounded border border-stone-200 bg-stone-50 p-3 text-xs" tabIndex={0}>
+        {CODE}
+      </pre>
     </figure>
   );
 }

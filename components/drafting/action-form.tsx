@@ -1,10 +1,10 @@
 "use client";
 
-import { type ReactNode, useActionState, useState } from "react";
+import { useActionState, useState, type ReactNode } from "react";
 
 import { FormMessage } from "@/components/forms/form-message";
 import { SubmitButton } from "@/components/forms/submit-button";
-import { type ActionState, initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type ActionState } from "@/lib/actions/action-state";
 
 type Props = {
   action: (state: ActionState, form: FormData) => Promise<ActionState>;
@@ -23,20 +23,42 @@ export function ActionForm({ action, hidden, submitLabel, variant = "primary", c
   const [asking, setAsking] = useState(false);
   return (
     <form action={formAction} aria-label={label ?? submitLabel} className="flex flex-col gap-2">
-      {Object.entries(hidden).map(([name, value]) => <input key={name} type="hidden" name={name} value={value} />)}
+      {Object.entries(hidden).map(([name, value]) => (
+        <input key={name} type="hidden" name={name} value={value} />
+      ))}
       {children?.(state.errors ?? {})}
       {confirm && asking ? (
-        <div role="group" aria-label="Confirm" className="flex flex-wrap items-center gap-3 rounded border border-amber-300 bg-amber-50 p-3">
+        <div
+          role="group"
+          aria-label="Confirm"
+          className="flex flex-wrap items-center gap-3 rounded border border-amber-300 bg-amber-50 p-3"
+        >
           <p className="text-sm">{confirm.question}</p>
-          <SubmitButton variant={variant} pendingText="Working…">{confirm.yes}</SubmitButton>
-          <button type="button" onClick={() => setAsking(false)} className="min-h-11 rounded border border-stone-300 bg-white px-4 py-2 font-medium">Cancel</button>
+          <SubmitButton variant={variant} pendingText="Working…">
+            {confirm.yes}
+          </SubmitButton>
+          <button
+            type="button"
+            onClick={() => setAsking(false)}
+            className="min-h-11 rounded border border-stone-300 bg-white px-4 py-2 font-medium"
+          >
+            Cancel
+          </button>
         </div>
       ) : (
         <div className="flex flex-wrap items-center gap-3">
           {confirm ? (
-            <button type="button" onClick={() => setAsking(true)} className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">{submitLabel}</button>
+            <button
+              type="button"
+              onClick={() => setAsking(true)}
+              className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink"
+            >
+              {submitLabel}
+            </button>
           ) : (
-            <SubmitButton variant={variant} pendingText="Working…">{submitLabel}</SubmitButton>
+            <SubmitButton variant={variant} pendingText="Working…">
+              {submitLabel}
+            </SubmitButton>
           )}
         </div>
       )}

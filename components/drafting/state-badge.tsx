@@ -12,7 +12,10 @@ const STYLE: Record<SheetState, [icon: string, className: string]> = {
 export function StateBadge({ state }: { state: SheetState }) {
   const [icon, className] = STYLE[state];
   return (
-    <span data-state={state} className={`inline-flex items-center gap-1 rounded border bg-white px-1.5 py-0.5 text-xs font-medium ${className}`}>
+    <span
+      data-state={state}
+      className={`inline-flex items-center gap-1 rounded border bg-white px-1.5 py-0.5 text-xs font-medium ${className}`}
+    >
       <span aria-hidden>{icon}</span>
       {sheetStateLabels[state]}
     </span>

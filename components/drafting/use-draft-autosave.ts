@@ -2,7 +2,7 @@
 
 import { useCallback, useEffect, useRef, useState } from "react";
 
-import { type ActionState, initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type ActionState } from "@/lib/actions/action-state";
 
 export type Conflict = { source: string; revision: number; updatedByName: string | null };
 type SaveData = { revision?: number; valid?: boolean; conflict?: Conflict };
@@ -15,7 +15,17 @@ const AUTOSAVE_DELAY_MS = 1500;
  * The draft's text and its saving: saves with the revision it was loaded at, autosaves after a pause, and holds a
  * conflict (someone else saved meanwhile) until the author keeps theirs or takes the other text.
  */
-export function useDraftAutosave({ base, initialSource, initialRevision, saveAction }: { base: { vendor: string; slug: string }; initialSource: string; initialRevision: number; saveAction: DraftAction }) {
+export function useDraftAutosave({
+  base,
+  initialSource,
+  initialRevision,
+  saveAction,
+}: {
+  base: { vendor: string; slug: string };
+  initialSource: string;
+  initialRevision: number;
+  saveAction: DraftAction;
+}) {
   const [source, setSource] = useState(initialSource);
   const [revision, setRevision] = useState(initialRevision);
   const [saved, setSaved] = useState(initialSource);

@@ -1,8 +1,8 @@
 "use client";
 
-import { type ReactNode, useEffect, useRef, useState, useTransition } from "react";
+import { useEffect, useRef, useState, useTransition, type ReactNode } from "react";
 
-import { type ActionState, initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type ActionState } from "@/lib/actions/action-state";
 import type { SheetIssue } from "@/lib/mdx/sheet-issue";
 
 import type { DraftAction } from "./use-draft-autosave";
@@ -12,7 +12,15 @@ type PreviewData = { issues: SheetIssue[]; valid: boolean; preview: ReactNode; r
 const PREVIEW_DELAY_MS = 400;
 
 /** The live preview and the problem list of the text being edited, asked of the server after a short pause. */
-export function useDraftPreview({ base, source, previewAction }: { base: { vendor: string; slug: string }; source: string; previewAction: DraftAction }) {
+export function useDraftPreview({
+  base,
+  source,
+  previewAction,
+}: {
+  base: { vendor: string; slug: string };
+  source: string;
+  previewAction: DraftAction;
+}) {
   const [issues, setIssues] = useState<SheetIssue[]>([]);
   const [preview, setPreview] = useState<ReactNode>(null);
   const [renderError, setRenderError] = useState<string | null>(null);

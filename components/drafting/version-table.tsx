@@ -13,21 +13,42 @@ export function VersionTable({ versions, libraryHref }: { versions: SheetVersion
         <caption className="sr-only">Versions</caption>
         <thead className="bg-stone-100 text-left">
           <tr>
-            <th scope="col" className="px-3 py-2">Version</th>
-            <th scope="col" className="px-3 py-2">State</th>
-            <th scope="col" className="px-3 py-2">Change note</th>
-            <th scope="col" className="px-3 py-2">Author</th>
-            <th scope="col" className="px-3 py-2">Approved by</th>
-            <th scope="col" className="px-3 py-2">Published</th>
+            <th scope="col" className="px-3 py-2">
+              Version
+            </th>
+            <th scope="col" className="px-3 py-2">
+              State
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Change note
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Author
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Approved by
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Published
+            </th>
           </tr>
         </thead>
         <tbody>
           {versions.map((v) => (
             <tr key={v.id} className="border-t border-stone-200 align-top">
               <td className="num px-3 py-2">
-                {["published", "superseded", "withdrawn"].includes(v.state) ? <Link className="underline" href={libraryHref(v.number)}>v{v.number}</Link> : `v${v.number}`}
+                {["published", "superseded", "withdrawn"].includes(v.state) ? (
+                  <Link className="underline" href={libraryHref(v.number)}>
+                    v{v.number}
+                  </Link>
+                ) : (
+                  `v${v.number}`
+                )}
               </td>
-              <td className="px-3 py-2"><StateBadge state={v.state} />{v.withdrawnReason ? <span className="mt-1 block text-xs text-red-900">{v.withdrawnReason}</span> : null}</td>
+              <td className="px-3 py-2">
+                <StateBadge state={v.state} />
+                {v.withdrawnReason ? <span className="mt-1 block text-xs text-red-900">{v.withdrawnReason}</span> : null}
+              </td>
               <td className="px-3 py-2">{v.changeNote || "—"}</td>
               <td className="px-3 py-2">{v.authorName ?? "—"}</td>
               <td className="px-3 py-2">{v.approvedByName ?? "—"}</td>

@@ -14,12 +14,23 @@ export function WithdrawForm({ action, vendorSlug, slug, versions }: Props) {
           <label className="flex flex-col gap-1 text-sm font-medium">
             Version
             <select name="version" className="min-h-11 rounded border border-stone-300 bg-white px-3">
-              {versions.map((n) => <option key={n} value={n}>Version {n}</option>)}
+              {versions.map((n) => (
+                <option key={n} value={n}>
+                  Version {n}
+                </option>
+              ))}
             </select>
           </label>
           <label className="flex flex-col gap-1 text-sm font-medium">
             Reason (shown to readers)
-            <textarea name="reason" rows={2} required minLength={5} aria-invalid={errors.reason ? true : undefined} className="rounded border border-stone-300 p-2 font-normal" />
+            <textarea
+              name="reason"
+              rows={2}
+              required
+              minLength={5}
+              aria-invalid={errors.reason ? true : undefined}
+              className="rounded border border-stone-300 p-2 font-normal"
+            />
           </label>
           {errors.reason ? <p className="text-sm text-red-800">⚠ {errors.reason.join(" ")}</p> : null}
         </>

@@ -13,7 +13,9 @@ export function BatchProgress({ done, total }: { done: number; total: number }) 
   const pct = total ? Math.floor((100 * done) / total) : 0;
   return (
     <div role="status" aria-live="polite" className="flex flex-col gap-1">
-      <label htmlFor="batch-progress" className="text-sm font-medium">Generating: <span className="num">{done}</span> of <span className="num">{total}</span> sheets ({pct} %)</label>
+      <label htmlFor="batch-progress" className="text-sm font-medium">
+        Generating: <span className="num">{done}</span> of <span className="num">{total}</span> sheets ({pct} %)
+      </label>
       <progress id="batch-progress" value={done} max={Math.max(total, 1)} className="h-3 w-full max-w-xl" />
     </div>
   );

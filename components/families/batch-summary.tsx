@@ -13,7 +13,15 @@ export function BatchSummary({ counts, base }: { counts: Record<string, number>;
     <dl className="flex flex-wrap gap-3 text-sm" data-testid="batch-counts">
       {LABELS.map(([key, label]) => (
         <div key={key} data-count={key} className="rounded border border-stone-300 bg-white px-3 py-2">
-          <dt>{key === "excluded" ? <span className="text-stone-600">{label}</span> : <a className="text-stone-700 underline" href={`${base}?outcome=${key}`}>{label}</a>}</dt>
+          <dt>
+            {key === "excluded" ? (
+              <span className="text-stone-600">{label}</span>
+            ) : (
+              <a className="text-stone-700 underline" href={`${base}?outcome=${key}`}>
+                {label}
+              </a>
+            )}
+          </dt>
           <dd className="num text-lg font-semibold">{counts[key] ?? 0}</dd>
         </div>
       ))}

@@ -12,7 +12,10 @@ const STYLE: Record<CellStatus, [icon: string, className: string]> = {
 export function CellStatusBadge({ status }: { status: CellStatus }) {
   const [icon, className] = STYLE[status];
   return (
-    <span data-status={status} className={`inline-flex items-center gap-1 rounded border bg-white px-1.5 py-0.5 text-xs font-medium whitespace-nowrap ${className}`}>
+    <span
+      data-status={status}
+      className={`inline-flex items-center gap-1 rounded border bg-white px-1.5 py-0.5 text-xs font-medium whitespace-nowrap ${className}`}
+    >
       <span aria-hidden>{icon}</span>
       {cellStatusLabels[status]}
     </span>

@@ -15,7 +15,13 @@ export function ExcludeForm({ action, hidden, sku }: Props) {
           <>
             <label className="flex flex-col gap-1 text-sm font-medium">
               Reason
-              <input name="reason" required minLength={3} aria-invalid={errors.reason ? true : undefined} className="min-h-11 rounded border border-stone-300 px-3 font-normal" />
+              <input
+                name="reason"
+                required
+                minLength={3}
+                aria-invalid={errors.reason ? true : undefined}
+                className="min-h-11 rounded border border-stone-300 px-3 font-normal"
+              />
             </label>
             {errors.reason ? <p className="text-sm text-red-800">⚠ {errors.reason.join(" ")}</p> : null}
           </>

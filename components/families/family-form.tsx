@@ -1,19 +1,39 @@
 "use client";
 
-import { geometryLabels } from "@/content-schema/catalogue-cutter";
-import { operationKindLabels } from "@/content-schema/sheet-kinds";
 import { ActionForm } from "@/components/drafting/action-form";
 import { Field } from "@/components/forms/field";
+import { geometryLabels } from "@/content-schema/catalogue-cutter";
+import { operationKindLabels } from "@/content-schema/sheet-kinds";
 import type { ActionState } from "@/lib/actions/action-state";
 
 type Option = { id: string; label: string };
-type Props = { action: (s: ActionState, f: FormData) => Promise<ActionState>; vendorSlug: string; materials: Option[]; machineClasses: Option[] };
+type Props = {
+  action: (s: ActionState, f: FormData) => Promise<ActionState>;
+  vendorSlug: string;
+  materials: Option[];
+  machineClasses: Option[];
+};
 
 const KINDS = ["slotting", "pocket", "constant-engagement", "profile", "finishing"] as const;
 const errorText = (errors: Record<string, string[]>, prefix: string) =>
-  Object.entries(errors).filter(([k]) => k === prefix || k.startsWith(`${prefix}.`)).flatMap(([, v]) => v).join(" ");
+  Object.entries(errors)
+    .filter(([k]) => k === prefix || k.startsWith(`${prefix}.`))
+    .flatMap(([, v]) => v)
+    .join(" ");
 
-function Checks({ legend, name, options, errors, checked = [] }: { legend: string; name: string; options: Option[]; errors: string; checked?: string[] }) {
+function Checks({
+  legend,
+  name,
+  options,
+  errors,
+  checked = [],
+}: {
+  legend: string;
+  name: string;
+  options: Option[];
+  errors: string;
+  checked?: string[];
+}) {
   return (
     <fieldset className="flex flex-col gap-1">
       <legend className="text-sm font-medium">{legend}</legend>
@@ -24,7 +44,12 @@ function Checks({ legend, name, options, errors, checked = [] }: { legend: strin
           </label>
         ))}
       </div>
-      {errors ? <p className="text-sm text-red-800"><span aria-hidden>⚠ </span>{errors}</p> : null}
+      {errors ? (
+        <p className="text-sm text-red-800">
+          <span aria-hidden>⚠ </span>
+          {errors}
+        </p>
+      ) : null}
     </fieldset>
   );
 }
@@ -36,14 +61,25 @@ export function FamilyForm({ action, vendorSlug, materials, machineClasses }: Pr
       {(errors) => (
         <div className="grid max-w-3xl gap-4">
           <Field label="Name" name="name" required errors={errors.name} />
-          <Field label="Slug" name="slug" required hint="Lowercase letters, digits and hyphens, e.g. sf-series-acrylic" errors={errors.slug} />
+          <Field
+            label="Slug"
+            name="slug"
+            required
+            hint="Lowercase letters, digits and hyphens, e.g. sf-series-acrylic"
+            errors={errors.slug}
+          />
           <fieldset className="grid gap-3 rounded border border-stone-300 p-3 sm:grid-cols-3">
             <legend className="px-1 text-sm font-semibold">Cutters (all filters given apply together)</legend>
             <Field label="Series (SKU starts with)" name="series" errors={errors["cutters.series"]} />
             <Field label="Smallest D (mm)" name="diameterMinMm" inputMode="decimal" errors={errors["cutters.diameterMinMm"]} />
             <Field label="Largest D (mm)" name="diameterMaxMm" inputMode="decimal" errors={errors["cutters.diameterMaxMm"]} />
             <div className="sm:col-span-3">
-              <Checks legend="Geometry" name="geometries" options={Object.entries(geometryLabels).map(([id, label]) => ({ id, label }))} errors={errorText(errors, "cutters.geometries")} />
+              <Checks
+                legend="Geometry"
+                name="geometries"
+                options={Object.entries(geometryLabels).map(([id, label]) => ({ id, label }))}
+                errors={errorText(errors, "cutters.geometries")}
+              />
             </div>
             <label className="flex flex-col gap-1 text-sm font-medium sm:col-span-3">
               SKUs (one a line; empty: every cutter the filters pick)
@@ -52,7 +88,13 @@ export function FamilyForm({ action, vendorSlug, materials, machineClasses }: Pr
           </fieldset>
           <Checks legend="Materials" name="materialIds" options={materials} errors={errorText(errors, "materialIds")} />
           <Checks legend="Machine classes" name="machineClassIds" options={machineClasses} errors={errorText(errors, "machineClassIds")} />
-          <Checks legend="Operations on every sheet" name="kinds" options={KINDS.map((k) => ({ id: k, label: operationKindLabels[k] }))} checked={["slotting", "profile"]} errors={errorText(errors, "rules")} />
+          <Checks
+            legend="Operations on every sheet"
+            name="kinds"
+            options={KINDS.map((k) => ({ id: k, label: operationKindLabels[k] }))}
+            checked={["slotting", "profile"]}
+            errors={errorText(errors, "rules")}
+          />
         </div>
       )}
     </ActionForm>

@@ -8,7 +8,7 @@ import { getFamily } from "@/lib/families/get-family";
 import { safeDecode } from "@/lib/http/safe-decode";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
-const orNull = async <T,>(load: () => Promise<T>): Promise<T | null> => {
+const orNull = async <T>(load: () => Promise<T>): Promise<T | null> => {
   try {
     return await load();
   } catch (error) {

@@ -10,9 +10,17 @@ export function LinkedTicketList({ tickets, vendorSlug, deskLinks }: { tickets: 
       {tickets.map((t) => (
         <li key={`${t.id}:${t.versionNumber}`} className="flex flex-wrap items-baseline gap-2 px-4 py-3">
           <span className="num text-stone-600">#{t.number}</span>
-          {deskLinks ? <Link className="font-medium underline" href={`/${vendorSlug}/desk/tickets/${t.id}`}>{t.subject}</Link> : <span className="font-medium">{t.subject}</span>}
+          {deskLinks ? (
+            <Link className="font-medium underline" href={`/${vendorSlug}/desk/tickets/${t.id}`}>
+              {t.subject}
+            </Link>
+          ) : (
+            <span className="font-medium">{t.subject}</span>
+          )}
           <span className="num text-stone-600">v{t.versionNumber}</span>
-          <span className="text-stone-600">{t.status.replace(/_/g, " ")} · {formatDate(t.createdAt)}</span>
+          <span className="text-stone-600">
+            {t.status.replace(/_/g, " ")} · {formatDate(t.createdAt)}
+          </span>
         </li>
       ))}
     </ul>

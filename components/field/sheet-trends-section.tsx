@@ -6,11 +6,33 @@ import { loadSheetResults } from "./load-sheet-results";
 import { LazyTrendChart } from "./trend-chart-lazy";
 import { TrendTable } from "./trend-table";
 
-const VERDICT_STYLE = { fell: "border-green-700 bg-green-50", rose: "border-red-700 bg-red-50", not_yet_clear: "border-amber-400 bg-amber-50", single_version: "border-stone-300 bg-white" } as const;
+const VERDICT_STYLE = {
+  fell: "border-green-700 bg-green-50",
+  rose: "border-red-700 bg-red-50",
+  not_yet_clear: "border-amber-400 bg-amber-50",
+  single_version: "border-stone-300 bg-white",
+} as const;
 
 /** Reports and failure share week by week over the chosen range, publications marked, and the verdict on the latest. */
-export async function SheetTrendsSection({ vendorId, sheetId, from, to, z, confidenceLabel }: { vendorId: string; sheetId: string; from: string; to: string; z: number; confidenceLabel: string }) {
-  const [trends, results] = await Promise.all([loadSheetTrends({ vendorId, sheetId, from, to, z }), loadSheetResults(vendorId, sheetId, z)]);
+export async function SheetTrendsSection({
+  vendorId,
+  sheetId,
+  from,
+  to,
+  z,
+  confidenceLabel,
+}: {
+  vendorId: string;
+  sheetId: string;
+  from: string;
+  to: string;
+  z: number;
+  confidenceLabel: string;
+}) {
+  const [trends, results] = await Promise.all([
+    loadSheetTrends({ vendorId, sheetId, from, to, z }),
+    loadSheetResults(vendorId, sheetId, z),
+  ]);
   const verdict = publicationVerdict(results?.versions ?? [], confidenceLabel);
   const points = trends.weeks.map((w) => ({
     week: w.week,
@@ -21,7 +43,11 @@ export async function SheetTrendsSection({ vendorId, sheetId, from, to, z, confi
   }));
   return (
     <>
-      <p data-testid="publication-verdict" data-verdict={verdict.verdict} className={`mb-4 rounded-md border px-4 py-3 text-sm ${VERDICT_STYLE[verdict.verdict]}`}>
+      <p
+        data-testid="publication-verdict"
+        data-verdict={verdict.verdict}
+        className={`mb-4 rounded-md border px-4 py-3 text-sm ${VERDICT_STYLE[verdict.verdict]}`}
+      >
         <strong>{verdict.headline}.</strong> {verdict.detail}
       </p>
       <div className="mb-4 rounded-md border border-stone-300 bg-white p-4">

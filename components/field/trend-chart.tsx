@@ -18,10 +18,27 @@ export function TrendChart({ data }: { data: TrendPoint[] }) {
             <Tooltip />
             <Legend />
             <Bar yAxisId="reports" dataKey="reports" name="Reports" fill="#57534e" />
-            <Line yAxisId="share" dataKey="failedPct" name="Failed (% of reports)" stroke="#a8322d" strokeWidth={2} connectNulls dot={false} />
-            {data.filter((d) => d.published).map((d) => (
-              <ReferenceLine key={d.week} yAxisId="reports" x={d.label} stroke="#1d4ed8" strokeDasharray="4 2" label={{ value: d.published, position: "top", fill: "#1d4ed8", fontSize: 12 }} />
-            ))}
+            <Line
+              yAxisId="share"
+              dataKey="failedPct"
+              name="Failed (% of reports)"
+              stroke="#a8322d"
+              strokeWidth={2}
+              connectNulls
+              dot={false}
+            />
+            {data
+              .filter((d) => d.published)
+              .map((d) => (
+                <ReferenceLine
+                  key={d.week}
+                  yAxisId="reports"
+                  x={d.label}
+                  stroke="#1d4ed8"
+                  strokeDasharray="4 2"
+                  label={{ value: d.published, position: "top", fill: "#1d4ed8", fontSize: 12 }}
+                />
+              ))}
           </ComposedChart>
         </ResponsiveContainer>
       </div>

@@ -3,7 +3,15 @@
 import type { ReactNode } from "react";
 import { useFormStatus } from "react-dom";
 
-export function SubmitButton({ children, pendingText, variant = "primary" }: { children: ReactNode; pendingText?: string; variant?: "primary" | "quiet" | "danger" }) {
+export function SubmitButton({
+  children,
+  pendingText,
+  variant = "primary",
+}: {
+  children: ReactNode;
+  pendingText?: string;
+  variant?: "primary" | "quiet" | "danger";
+}) {
   const { pending } = useFormStatus();
   const styles = {
     primary: "bg-accent text-accent-ink",

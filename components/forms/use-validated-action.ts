@@ -1,9 +1,9 @@
 "use client";
 
-import { type FormEvent, useActionState, useState } from "react";
+import { useActionState, useState, type FormEvent } from "react";
 import type { z } from "zod";
 
-import { type FormAction, initialActionState } from "@/lib/actions/action-state";
+import { initialActionState, type FormAction } from "@/lib/actions/action-state";
 import type { FieldErrors } from "@/lib/errors/domain-errors";
 
 /** Server action state plus the same zod schema checked in the browser before submitting. */

@@ -24,7 +24,17 @@ export async function getCachedLibraryCutter(vendorId: string, sku: string) {
 }
 
 /** The cutter's card, its short link and QR codes, and its published sheets. */
-export async function CachedCutterSheets({ vendorId, vendorSlug, sku, units }: { vendorId: string; vendorSlug: string; sku: string; units: UnitSystem }) {
+export async function CachedCutterSheets({
+  vendorId,
+  vendorSlug,
+  sku,
+  units,
+}: {
+  vendorId: string;
+  vendorSlug: string;
+  sku: string;
+  units: UnitSystem;
+}) {
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));

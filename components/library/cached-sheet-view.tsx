@@ -3,8 +3,8 @@ import "server-only";
 import { cacheLife, cacheTag } from "next/cache";
 import type { ReactNode } from "react";
 
+import { librarySheetTag, libraryTag } from "@/lib/library/library-cache";
 import type { UnitSystem } from "@/lib/machining";
-import { libraryTag, librarySheetTag } from "@/lib/library/library-cache";
 import type { LibrarySheet } from "@/lib/sheets/get-library-sheet";
 
 import { getCachedLibrarySheet } from "./cached-library-sheet";
@@ -19,7 +19,15 @@ type Props = {
   renderAdaptPanel?: (slot: { index: number; operation: LibrarySheet["frontMatter"]["operations"][number] }) => ReactNode;
 };
 
-type CachedProps = { vendorId: string; vendorSlug: string; vendorName: string; slug: string; number: number; units: UnitSystem; adaptPanels: ReactNode[] };
+type CachedProps = {
+  vendorId: string;
+  vendorSlug: string;
+  vendorName: string;
+  slug: string;
+  number: number;
+  units: UnitSystem;
+  adaptPanels: ReactNode[];
+};
 
 // Rendered once per version and unit system; the adapt panels (the reader's own machines) pass through
 // as holes, so the entry holds nothing personal.
@@ -30,11 +38,29 @@ async function CachedSheet({ vendorId, vendorSlug, vendorName, slug, number, uni
   const data = await getCachedLibrarySheet(vendorId, slug, number);
   if (!data) return null;
   cacheTag(librarySheetTag(data.sheet.id));
-  return <SheetView data={data} units={units} vendorSlug={vendorSlug} vendorName={vendorName} renderAdaptPanel={({ index }) => adaptPanels[index] ?? null} />;
+  return (
+    <SheetView
+      data={data}
+      units={units}
+      vendorSlug={vendorSlug}
+      vendorName={vendorName}
+      renderAdaptPanel={({ index }) => adaptPanels[index] ?? null}
+    />
+  );
 }
 
 /** SheetView served from Next's cache: the page's access checks and personal parts stay per request. */
 export function CachedSheetView({ vendorId, vendorSlug, vendorName, data, units, renderAdaptPanel }: Props) {
   const adaptPanels = data.frontMatter.operations.map((operation, index) => renderAdaptPanel?.({ index, operation }) ?? null);
-  return <CachedSheet vendorId={vendorId} vendorSlug={vendorSlug} vendorName={vendorName} slug={data.sheet.slug} number={data.version.number} units={units} adaptPanels={adaptPanels} />;
+  return (
+    <CachedSheet
+      vendorId={vendorId}
+      vendorSlug={vendorSlug}
+      vendorName={vendorName}
+      slug={data.sheet.slug}
+      number={data.version.number}
+      units={units}
+      adaptPanels={adaptPanels}
+    />
+  );
 }

@@ -27,11 +27,18 @@ export function CutterCard({ cutter, units, vendorSlug }: { cutter: Cutter; unit
       <div className="flex gap-4">
         {cutter.imageKey ? (
           // eslint-disable-next-line @next/next/no-img-element -- served by our own route, checked by content on upload
-          <img src={`/${vendorSlug}/library/cutters/${encodeURIComponent(cutter.sku)}/image`} alt={`Cutter ${cutter.sku}`} className="h-24 w-24 rounded border border-stone-200 object-contain" />
+          <img
+            src={`/${vendorSlug}/library/cutters/${encodeURIComponent(cutter.sku)}/image`}
+            alt={`Cutter ${cutter.sku}`}
+            className="h-24 w-24 rounded border border-stone-200 object-contain"
+          />
         ) : null}
         <div className="min-w-0 flex-1">
           <p className="font-semibold">
-            <Link href={`/${vendorSlug}/library/cutters/${encodeURIComponent(cutter.sku)}`} className="num hover:underline">{cutter.sku}</Link> · {cutter.name}
+            <Link href={`/${vendorSlug}/library/cutters/${encodeURIComponent(cutter.sku)}`} className="num hover:underline">
+              {cutter.sku}
+            </Link>{" "}
+            · {cutter.name}
           </p>
           <p className="mb-2 text-sm text-stone-600">
             {geometryLabels[cutter.geometry]} · {cornerFormLabels[cutter.cornerForm]} · {cutter.toolMaterial === "hss" ? "HSS" : "Carbide"}

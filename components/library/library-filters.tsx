@@ -2,7 +2,14 @@ import type { Cutter, MachineClass, Material } from "@/lib/catalogue/catalogue-t
 import type { LibraryFilters as Filters } from "@/lib/sheets/list-published-sheets";
 
 /** `shop`: null hides "fits my shop" (visitors, staff without a Bench); true or false is its state. */
-type Props = { action: string; filters: Filters; cutters: Cutter[]; materials: Material[]; machineClasses: MachineClass[]; shop?: boolean | null };
+type Props = {
+  action: string;
+  filters: Filters;
+  cutters: Cutter[];
+  materials: Material[];
+  machineClasses: MachineClass[];
+  shop?: boolean | null;
+};
 
 const select = "min-h-11 w-full max-w-full rounded border border-stone-300 bg-white px-3 py-2 sm:w-auto";
 
@@ -15,7 +22,9 @@ export function LibraryFilters({ action, filters, cutters, materials, machineCla
         <select name="cutter" defaultValue={filters.cutter ?? ""} className={select}>
           <option value="">All cutters</option>
           {cutters.map((c) => (
-            <option key={c.id} value={c.sku}>{c.sku} · {c.name}</option>
+            <option key={c.id} value={c.sku}>
+              {c.sku} · {c.name}
+            </option>
           ))}
         </select>
       </label>
@@ -24,7 +33,9 @@ export function LibraryFilters({ action, filters, cutters, materials, machineCla
         <select name="material" defaultValue={filters.material ?? ""} className={select}>
           <option value="">All materials</option>
           {materials.map((m) => (
-            <option key={m.id} value={m.slug}>{m.name}</option>
+            <option key={m.id} value={m.slug}>
+              {m.name}
+            </option>
           ))}
         </select>
       </label>
@@ -33,7 +44,9 @@ export function LibraryFilters({ action, filters, cutters, materials, machineCla
         <select name="machineClass" defaultValue={filters.machineClass ?? ""} className={select}>
           <option value="">All machine classes</option>
           {machineClasses.map((k) => (
-            <option key={k.id} value={k.slug}>{k.name}</option>
+            <option key={k.id} value={k.slug}>
+              {k.name}
+            </option>
           ))}
         </select>
       </label>
@@ -43,9 +56,13 @@ export function LibraryFilters({ action, filters, cutters, materials, machineCla
           Fits my shop
         </label>
       )}
-      <button type="submit" className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">Show sheets</button>
+      <button type="submit" className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">
+        Show sheets
+      </button>
       {filters.cutter || filters.material || filters.machineClass || shop ? (
-        <a href={action} className="min-h-11 px-2 py-2 text-sm underline">Clear filters</a>
+        <a href={action} className="min-h-11 px-2 py-2 text-sm underline">
+          Clear filters
+        </a>
       ) : null}
     </form>
   );

@@ -4,7 +4,7 @@ import type { Knex } from "knex";
 
 import { listCutters, listMachineClasses, listMaterials } from "@/lib/catalogue/list-catalogue";
 import type { UnitSystem } from "@/lib/machining";
-import { type LibraryFilters as Filters, listPublishedSheets } from "@/lib/sheets/list-published-sheets";
+import { listPublishedSheets, type LibraryFilters as Filters } from "@/lib/sheets/list-published-sheets";
 
 import { LibraryFilters } from "./library-filters";
 import { SheetCards } from "./sheet-cards";
@@ -30,9 +30,23 @@ export async function LibraryIndex({ vendorId, vendorSlug, filters, units, shop,
   const filtered = Boolean(filters.cutter || filters.material || filters.machineClass || shop);
   return (
     <>
-      <LibraryFilters action={`/${vendorSlug}/library`} filters={filters} cutters={cutters} materials={materials} machineClasses={machineClasses} shop={shop} />
-      <p className="mb-3 text-sm text-stone-600" role="status"><span className="num">{sheets.length}</span> {sheets.length === 1 ? "sheet" : "sheets"}</p>
-      <SheetCards sheets={sheets} vendorSlug={vendorSlug} units={units} empty={filtered ? "No sheet matches these filters." : "No sheets are published yet."} />
+      <LibraryFilters
+        action={`/${vendorSlug}/library`}
+        filters={filters}
+        cutters={cutters}
+        materials={materials}
+        machineClasses={machineClasses}
+        shop={shop}
+      />
+      <p className="mb-3 text-sm text-stone-600" role="status">
+        <span className="num">{sheets.length}</span> {sheets.length === 1 ? "sheet" : "sheets"}
+      </p>
+      <SheetCards
+        sheets={sheets}
+        vendorSlug={vendorSlug}
+        units={units}
+        empty={filtered ? "No sheet matches these filters." : "No sheets are published yet."}
+      />
     </>
   );
 }

@@ -16,7 +16,10 @@ export function MachineClassCard({ machineClass, units }: { machineClass: Machin
           ["Max feed", formatFeed(machineClass.maxFeedMmMin, units)],
           ["Rigidity", `${machineClass.rigidity.toFixed(2)} (1 = stiffest)`],
           ["Z thrust", machineClass.zThrustN ? formatForce(machineClass.zThrustN, units) : "—"],
-          ["Spindle drive", `${spindleKindLabels[machineClass.spindleKind]}${machineClass.ratedRpm ? `, rated at ${formatSpindleSpeed(machineClass.ratedRpm)}` : ""}`],
+          [
+            "Spindle drive",
+            `${spindleKindLabels[machineClass.spindleKind]}${machineClass.ratedRpm ? `, rated at ${formatSpindleSpeed(machineClass.ratedRpm)}` : ""}`,
+          ],
         ]}
       />
     </SpecCard>

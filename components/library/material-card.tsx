@@ -18,7 +18,9 @@ export function MaterialCard({ material, units }: { material: Material; units: U
           ["vc window", `${formatCuttingSpeed(material.vcMinMpm, units)} – ${formatCuttingSpeed(material.vcMaxMpm, units)}`],
           ["Minimum fz", formatChipLoad(material.minChipLoadMm, units)],
           ["Chip load band (hex)", `${material.chipLoadMinPctD} – ${material.chipLoadMaxPctD} % of D`],
-          ...(material.kc11Nmm2 !== undefined ? [["kc1.1, mc", `${material.kc11Nmm2} N/mm², ${material.mc ?? 0.25}`] as [string, string]] : []),
+          ...(material.kc11Nmm2 !== undefined
+            ? [["kc1.1, mc", `${material.kc11Nmm2} N/mm², ${material.mc ?? 0.25}`] as [string, string]]
+            : []),
         ]}
       />
       {material.cautions.length ? (

@@ -1,8 +1,8 @@
 import { Suspense } from "react";
 
 import { AdaptPanelSlot, OperationTable } from "@/components/mdx";
-import type { SheetRenderContext } from "@/components/mdx/sheet-render-context";
 import { getCompiledSheet } from "@/components/mdx/render-sheet";
+import type { SheetRenderContext } from "@/components/mdx/sheet-render-context";
 import { AskAboutSheet } from "@/components/support/ask-about-sheet";
 import type { UnitSystem } from "@/lib/machining";
 import type { LibrarySheet } from "@/lib/sheets/get-library-sheet";
@@ -21,11 +21,27 @@ type AdaptRenderer = SheetRenderContext["renderAdaptPanel"];
 async function Prose({ data, units, renderAdaptPanel }: { data: LibrarySheet; units: UnitSystem; renderAdaptPanel?: AdaptRenderer }) {
   const cutter = { flutes: data.cutter.flutes, diameterMm: data.cutter.diameterMm };
   const { content } = await getCompiledSheet({ versionId: data.version.id, source: data.version.source, units, cutter, renderAdaptPanel });
-  return <div className="prose-sheet max-w-3xl leading-relaxed [&_h2]:mt-8 [&_h2]:text-lg [&_h2]:font-semibold [&_li]:my-1 [&_p]:my-3 [&_ul]:list-disc [&_ul]:pl-5">{content}</div>;
+  return (
+    <div className="prose-sheet max-w-3xl leading-relaxed [&_h2]:mt-8 [&_h2]:text-lg [&_h2]:font-semibold [&_li]:my-1 [&_p]:my-3 [&_ul]:list-disc [&_ul]:pl-5">
+      {content}
+    </div>
+  );
 }
 
 /** A readable sheet version laid out like a printed data sheet. */
-export function SheetView({ data, units, vendorSlug, vendorName, renderAdaptPanel }: { data: LibrarySheet; units: UnitSystem; vendorSlug: string; vendorName?: string; renderAdaptPanel?: AdaptRenderer }) {
+export function SheetView({
+  data,
+  units,
+  vendorSlug,
+  vendorName,
+  renderAdaptPanel,
+}: {
+  data: LibrarySheet;
+  units: UnitSystem;
+  vendorSlug: string;
+  vendorName?: string;
+  renderAdaptPanel?: AdaptRenderer;
+}) {
   const { version, frontMatter, current } = data;
   const href = (n: number) => `/${vendorSlug}/library/${data.sheet.slug}/v/${n}`;
   const context = { frontMatter, units, cutter: { flutes: data.cutter.flutes, diameterMm: data.cutter.diameterMm }, renderAdaptPanel };
@@ -43,7 +59,10 @@ export function SheetView({ data, units, vendorSlug, vendorName, renderAdaptPane
         </div>
         <div className="flex flex-wrap items-end gap-3">
           {version.state === "published" || version.state === "superseded" ? (
-            <a href={`${href(version.number)}/pdf`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500 print:hidden">
+            <a
+              href={`${href(version.number)}/pdf`}
+              className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500 print:hidden"
+            >
               Data sheet (PDF)
             </a>
           ) : null}
@@ -57,7 +76,9 @@ export function SheetView({ data, units, vendorSlug, vendorName, renderAdaptPane
         <MachineClassCard machineClass={data.machineClass} units={units} />
       </div>
       <section id="operations" aria-labelledby="operations-heading" className="mt-8">
-        <h2 id="operations-heading" className="text-lg font-semibold">Operations</h2>
+        <h2 id="operations-heading" className="text-lg font-semibold">
+          Operations
+        </h2>
         <OperationTable context={context} />
       </section>
       <SheetCautions cautions={frontMatter.cautions} />

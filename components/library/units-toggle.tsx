@@ -20,7 +20,12 @@ export function UnitsToggle({ units }: { units: UnitSystem }) {
     start(() => router.refresh());
   };
   return (
-    <div role="group" aria-label="Units" className="no-print inline-flex rounded border border-stone-300 bg-white p-0.5" aria-busy={pending}>
+    <div
+      role="group"
+      aria-label="Units"
+      className="no-print inline-flex rounded border border-stone-300 bg-white p-0.5"
+      aria-busy={pending}
+    >
       {(["metric", "imperial"] as const).map((system) => (
         <button
           key={system}

@@ -13,7 +13,12 @@ export function AdaptPanelSlot({ operation, context }: AdaptPanelMdxProps & { co
   if (!op) return null;
   const name = op.label ?? operationKindLabels[op.kind];
   return (
-    <section id="adapt" data-operation={index} aria-labelledby="adapt-heading" className="my-8 rounded-md border border-stone-300 bg-white p-4 print:hidden">
+    <section
+      id="adapt"
+      data-operation={index}
+      aria-labelledby="adapt-heading"
+      className="my-8 rounded-md border border-stone-300 bg-white p-4 print:hidden"
+    >
       <h2 id="adapt-heading" className="text-base font-semibold text-stone-900">
         Adapt to your machine: {name}
       </h2>

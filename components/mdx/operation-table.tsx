@@ -1,11 +1,12 @@
 import { operationTablePropsSchema } from "@/content-schema/mdx-components";
-
 import { operationCells } from "@/lib/library/operation-cells";
+
 import type { SheetRenderContext } from "./sheet-render-context";
 
 export type OperationTableMdxProps = { only?: string };
 
-const th = "border-b-2 border-stone-400 px-3 py-2 align-bottom text-xs font-semibold uppercase tracking-wide text-stone-600 print:text-black";
+const th =
+  "border-b-2 border-stone-400 px-3 py-2 align-bottom text-xs font-semibold uppercase tracking-wide text-stone-600 print:text-black";
 const td = "border-b border-stone-200 px-3 py-2 align-top";
 const num = `${td} whitespace-nowrap text-right font-mono tabular-nums`;
 
@@ -13,9 +14,7 @@ const num = `${td} whitespace-nowrap text-right font-mono tabular-nums`;
 export function OperationTable({ only, context }: OperationTableMdxProps & { context: SheetRenderContext }) {
   const parsed = operationTablePropsSchema.safeParse({ only });
   const kinds = parsed.success ? parsed.data.only : undefined;
-  const rows = context.frontMatter.operations
-    .map((op, index) => ({ op, index }))
-    .filter(({ op }) => !kinds || kinds.includes(op.kind));
+  const rows = context.frontMatter.operations.map((op, index) => ({ op, index })).filter(({ op }) => !kinds || kinds.includes(op.kind));
   if (rows.length === 0) return null;
   const withFz = Boolean(context.cutter?.flutes);
   const system = context.units === "imperial" ? "imperial units" : "metric units";
@@ -25,14 +24,32 @@ export function OperationTable({ only, context }: OperationTableMdxProps & { con
         <caption className="sr-only">Cutting data per operation, in {system}</caption>
         <thead>
           <tr>
-            <th scope="col" className={`${th} text-left`}>Operation</th>
-            <th scope="col" className={`${th} text-right`}>n</th>
-            <th scope="col" className={`${th} text-right`}>vf</th>
-            {withFz ? <th scope="col" className={`${th} text-right`}>fz</th> : null}
-            <th scope="col" className={`${th} text-right`}>ap</th>
-            <th scope="col" className={`${th} text-right`}>ae</th>
-            <th scope="col" className={`${th} text-right`}>Plunge feed</th>
-            <th scope="col" className={`${th} text-left`}>Entry</th>
+            <th scope="col" className={`${th} text-left`}>
+              Operation
+            </th>
+            <th scope="col" className={`${th} text-right`}>
+              n
+            </th>
+            <th scope="col" className={`${th} text-right`}>
+              vf
+            </th>
+            {withFz ? (
+              <th scope="col" className={`${th} text-right`}>
+                fz
+              </th>
+            ) : null}
+            <th scope="col" className={`${th} text-right`}>
+              ap
+            </th>
+            <th scope="col" className={`${th} text-right`}>
+              ae
+            </th>
+            <th scope="col" className={`${th} text-right`}>
+              Plunge feed
+            </th>
+            <th scope="col" className={`${th} text-left`}>
+              Entry
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -45,11 +62,19 @@ export function OperationTable({ only, context }: OperationTableMdxProps & { con
                   {op.label ? <span className="block text-xs font-normal text-stone-500">{cells.kind}</span> : null}
                   {op.notes ? <span className="block text-xs font-normal text-stone-600">{op.notes}</span> : null}
                 </th>
-                <td className={num} title={`as written: ${op.n.text}`}>{cells.n}</td>
-                <td className={num} title={`as written: ${op.vf.text}`}>{cells.vf}</td>
+                <td className={num} title={`as written: ${op.n.text}`}>
+                  {cells.n}
+                </td>
+                <td className={num} title={`as written: ${op.vf.text}`}>
+                  {cells.vf}
+                </td>
                 {withFz ? <td className={num}>{cells.fz}</td> : null}
-                <td className={num} title={`as written: ${op.ap.text}`}>{cells.ap}</td>
-                <td className={num} title={`as written: ${op.ae.text}`}>{cells.ae}</td>
+                <td className={num} title={`as written: ${op.ap.text}`}>
+                  {cells.ap}
+                </td>
+                <td className={num} title={`as written: ${op.ae.text}`}>
+                  {cells.ae}
+                </td>
                 <td className={num}>{cells.plungeFeed}</td>
                 <td className={td}>
                   {cells.entry}

@@ -3,7 +3,15 @@
 import { EmptyState } from "@/components/ui/empty-state";
 
 /** Nothing matched: what was understood, and looser queries to try. */
-export function SearchEmpty({ description, suggestions, onTry }: { description: string; suggestions: readonly string[]; onTry: (q: string) => void }) {
+export function SearchEmpty({
+  description,
+  suggestions,
+  onTry,
+}: {
+  description: string;
+  suggestions: readonly string[];
+  onTry: (q: string) => void;
+}) {
   return (
     <EmptyState title="No published sheet matches this search.">
       {description ? <p>Searched for {description}.</p> : null}
@@ -13,7 +21,11 @@ export function SearchEmpty({ description, suggestions, onTry }: { description: 
           <ul className="mt-2 flex flex-wrap justify-center gap-2">
             {suggestions.map((s) => (
               <li key={s}>
-                <button type="button" onClick={() => onTry(s)} className="min-h-11 rounded border border-stone-300 bg-white px-3 text-stone-800 hover:border-stone-500">
+                <button
+                  type="button"
+                  onClick={() => onTry(s)}
+                  className="min-h-11 rounded border border-stone-300 bg-white px-3 text-stone-800 hover:border-stone-500"
+                >
                   {s}
                 </button>
               </li>

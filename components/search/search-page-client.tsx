@@ -1,14 +1,14 @@
 "use client";
 
-import { type KeyboardEvent, useEffect, useRef, useState } from "react";
+import { useEffect, useRef, useState, type KeyboardEvent } from "react";
 
 import { useSearch } from "@/lib/swr/use-search";
 import { distinctTitles } from "@/lib/ui/distinct-titles";
 import { removeChip } from "@/search/parse/remove-chip";
 
-import { FacetPanel } from "./facet-panel";
 import { facetValueLabel } from "./facet-labels";
-import { type ChipView, QueryChips } from "./query-chips";
+import { FacetPanel } from "./facet-panel";
+import { QueryChips, type ChipView } from "./query-chips";
 import { SearchEmpty } from "./search-empty";
 import { SearchHitItem } from "./search-hit-item";
 import { SearchNotices } from "./search-notices";
@@ -43,7 +43,11 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
   }, [text, write]);
 
   const hits = data?.hits ?? [];
-  const distinct = distinctTitles(hits, (h) => h.title, (h) => h.machineClass?.name);
+  const distinct = distinctTitles(
+    hits,
+    (h) => h.title,
+    (h) => h.machineClass?.name,
+  );
   const titleSuffixes = hits.map((hit, i) => (distinct[i] === hit.title ? undefined : hit.machineClass?.name));
   // Arrow keys move focus between the result links (and back up into the box); Tab works as usual.
   const links = () => Array.from(results.current?.querySelectorAll<HTMLAnchorElement>("a[data-search-hit]") ?? []);
@@ -61,10 +65,20 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
   };
 
   const chips: ChipView[] = [
-    ...(data?.chips ?? []).map((c) => ({ id: `${c.kind}:${c.value}`, kind: c.kind, label: c.label, onRemove: () => pushQuery(removeChip(text, c)) })),
+    ...(data?.chips ?? []).map((c) => ({
+      id: `${c.kind}:${c.value}`,
+      kind: c.kind,
+      label: c.label,
+      onRemove: () => pushQuery(removeChip(text, c)),
+    })),
     ...(Object.keys(FILTER_FACET) as (keyof typeof FILTER_FACET)[])
       .filter((p) => state[p])
-      .map((p) => ({ id: `filter:${p}`, kind: `filter-${p}`, label: facetValueLabel(FILTER_FACET[p], state[p]!), onRemove: () => write({ [p]: undefined, page: undefined }, "push") })),
+      .map((p) => ({
+        id: `filter:${p}`,
+        kind: `filter-${p}`,
+        label: facetValueLabel(FILTER_FACET[p], state[p]!),
+        onRemove: () => write({ [p]: undefined, page: undefined }, "push"),
+      })),
   ];
 
   function onKeyDown(event: KeyboardEvent<HTMLInputElement>) {
@@ -90,7 +104,9 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
   return (
     <div className="space-y-4">
       <form role="search" onSubmit={(e) => e.preventDefault()}>
-        <label htmlFor="library-search" className="mb-1 block text-sm font-medium">Search the Library</label>
+        <label htmlFor="library-search" className="mb-1 block text-sm font-medium">
+          Search the Library
+        </label>
         <input
           id="library-search"
           type="search"
@@ -104,14 +120,29 @@ export function SearchPageClient({ vendorSlug }: { vendorSlug: string }) {
           placeholder="e.g. 1/8 acrylic slot, 6 mm MDF, NB-SF-3175"
           className="min-h-12 w-full rounded-lg border border-stone-300 bg-white px-4 text-lg shadow-sm focus:border-stone-600 focus:outline-none"
         />
-        <p id="search-keys-hint" className="mt-1 text-xs text-stone-600">Results update as you type. Tab or ↓ moves into them.</p>
+        <p id="search-keys-hint" className="mt-1 text-xs text-stone-600">
+          Results update as you type. Tab or ↓ moves into them.
+        </p>
       </form>
       <QueryChips chips={chips} />
       <SearchNotices data={data} busy={isValidating} failed={Boolean(error)} vendorSlug={vendorSlug} />
       <div className="grid gap-6 md:grid-cols-[14rem_1fr]">
-        <div>{data && data.total > 0 ? <FacetPanel facets={data.facets} selected={state} names={new Map(hits.flatMap((h) => (h.machineClass ? [[h.machineClass.slug, h.machineClass.name] as const] : [])))} onSelect={(param, value) => write({ [param]: state[param as keyof typeof state] === value ? undefined : value, page: undefined }, "push")} /> : null}</div>
         <div>
-          {data && data.total === 0 ? <SearchEmpty description={data.description} suggestions={data.suggestions} onTry={pushQuery} /> : null}
+          {data && data.total > 0 ? (
+            <FacetPanel
+              facets={data.facets}
+              selected={state}
+              names={new Map(hits.flatMap((h) => (h.machineClass ? [[h.machineClass.slug, h.machineClass.name] as const] : [])))}
+              onSelect={(param, value) =>
+                write({ [param]: state[param as keyof typeof state] === value ? undefined : value, page: undefined }, "push")
+              }
+            />
+          ) : null}
+        </div>
+        <div>
+          {data && data.total === 0 ? (
+            <SearchEmpty description={data.description} suggestions={data.suggestions} onTry={pushQuery} />
+          ) : null}
           <ol ref={results} id="search-results" aria-label="Matching sheets" className="grid gap-3 lg:grid-cols-2">
             {hits.map((hit, i) => (
               <SearchHitItem key={hit.slug} hit={hit} href={href(hit.slug)} titleSuffix={titleSuffixes[i]} onKeyDown={onResultKey(i)} />

@@ -2,7 +2,9 @@
 export function ShellSearchBox({ vendorSlug }: { vendorSlug: string }) {
   return (
     <form role="search" action={`/${vendorSlug}/library/search`} method="get" className="min-w-48 flex-1 sm:max-w-xs">
-      <label htmlFor="shell-search" className="sr-only">Search the Library</label>
+      <label htmlFor="shell-search" className="sr-only">
+        Search the Library
+      </label>
       <input
         id="shell-search"
         name="q"

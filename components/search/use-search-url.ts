@@ -15,7 +15,10 @@ export type UrlState = Partial<Record<(typeof URL_KEYS)[number], string>>;
 export function useSearchUrl() {
   const params = useSearchParams();
   const pathname = usePathname();
-  const state = useMemo<UrlState>(() => Object.fromEntries(URL_KEYS.flatMap((k) => (params.get(k) ? [[k, params.get(k)!]] : []))), [params]);
+  const state = useMemo<UrlState>(
+    () => Object.fromEntries(URL_KEYS.flatMap((k) => (params.get(k) ? [[k, params.get(k)!]] : []))),
+    [params],
+  );
   const query = searchParamsToQuery(state);
   const write = useCallback(
     (next: UrlState, mode: "push" | "replace") => {

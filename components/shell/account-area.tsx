@@ -20,7 +20,9 @@ export function AccountArea({ userName, roleLabel, signInHref, signUpHref, links
       {userName ? (
         <>
           {links.map((l) => (
-            <Link key={l.href} href={l.href} className="rounded px-3 py-2 hover:bg-black/10">{l.label}</Link>
+            <Link key={l.href} href={l.href} className="rounded px-3 py-2 hover:bg-black/10">
+              {l.label}
+            </Link>
           ))}
           <span>
             {userName}
@@ -30,8 +32,14 @@ export function AccountArea({ userName, roleLabel, signInHref, signUpHref, links
         </>
       ) : (
         <>
-          <Link className="rounded px-3 py-2 hover:bg-black/10" href={signInHref}>Sign in</Link>
-          {signUpHref ? <Link className="rounded border border-current px-3 py-2" href={signUpHref}>Create an account</Link> : null}
+          <Link className="rounded px-3 py-2 hover:bg-black/10" href={signInHref}>
+            Sign in
+          </Link>
+          {signUpHref ? (
+            <Link className="rounded border border-current px-3 py-2" href={signUpHref}>
+              Create an account
+            </Link>
+          ) : null}
         </>
       )}
     </div>

@@ -13,7 +13,9 @@ export async function SiteShell({ children, width = "max-w-5xl" }: { children: R
     <div className="flex min-h-screen flex-col">
       <header data-shell className="border-b border-stone-200 bg-white">
         <div className={`mx-auto flex ${width} flex-wrap items-center gap-4 px-4 py-3`}>
-          <Link href="/" className="text-lg font-semibold tracking-tight">Swarfbook</Link>
+          <Link href="/" className="text-lg font-semibold tracking-tight">
+            Swarfbook
+          </Link>
           <AccountArea
             userName={user ? user.name || user.email : null}
             signInHref="/sign-in"
@@ -21,7 +23,9 @@ export async function SiteShell({ children, width = "max-w-5xl" }: { children: R
           />
         </div>
       </header>
-      <main id="main" className={`mx-auto w-full ${width} flex-1 px-4 py-10`}>{children}</main>
+      <main id="main" className={`mx-auto w-full ${width} flex-1 px-4 py-10`}>
+        {children}
+      </main>
       <SafetyFooter />
     </div>
   );

@@ -1,12 +1,10 @@
 import Link from "next/link";
 
-import { AREAS, can } from "@/lib/auth/permissions";
-import type { Role } from "@/lib/auth/roles";
-import { ROLE_LABELS } from "@/lib/auth/roles";
-import { inkFor } from "@/lib/ui/contrast";
-import type { Vendor } from "@/content-schema/vendor";
-
 import { ShellSearchBox } from "@/components/search/shell-search-box";
+import type { Vendor } from "@/content-schema/vendor";
+import { AREAS, can } from "@/lib/auth/permissions";
+import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
+import { inkFor } from "@/lib/ui/contrast";
 
 import { AccountArea } from "./account-area";
 

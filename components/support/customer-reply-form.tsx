@@ -13,7 +13,15 @@ import { UploadField } from "./upload-field";
 
 const schema = z.object({ body: z.string().trim().min(1, "Write a reply.") });
 
-export function CustomerReplyForm({ vendor, ticketId, customerReplyAction }: { vendor: string; ticketId: string; customerReplyAction: FormAction }) {
+export function CustomerReplyForm({
+  vendor,
+  ticketId,
+  customerReplyAction,
+}: {
+  vendor: string;
+  ticketId: string;
+  customerReplyAction: FormAction;
+}) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(customerReplyAction, schema);
   const form = useRef<HTMLFormElement>(null);
   const [seen, setSeen] = useState(state);
@@ -30,9 +38,16 @@ export function CustomerReplyForm({ vendor, ticketId, customerReplyAction }: { v
       <input type="hidden" name="vendor" value={vendor} />
       <input type="hidden" name="ticketId" value={ticketId} />
       <IdempotencyKeyField renewOn={state.ok ? state : null} />
-      <label htmlFor="f-reply" className="text-sm font-medium">Your reply</label>
+      <label htmlFor="f-reply" className="text-sm font-medium">
+        Your reply
+      </label>
       <textarea id="f-reply" name="body" rows={4} className="w-full rounded border border-stone-300 bg-white px-3 py-2" />
-      {errors.body ? <p className="text-sm text-red-800"><span aria-hidden>⚠ </span>{errors.body.join(" ")}</p> : null}
+      {errors.body ? (
+        <p className="text-sm text-red-800">
+          <span aria-hidden>⚠ </span>
+          {errors.body.join(" ")}
+        </p>
+      ) : null}
       <UploadField key={sent} vendor={vendor} label="Add photos or files" />
       <FormMessage state={state} success={state.message} />
       <SubmitButton pendingText="Sending…">Send reply</SubmitButton>

@@ -35,14 +35,45 @@ export function NewTicketForm({ createTicketAction, vendor, idempotencyKey, mate
       ) : null}
       <Field label="Subject" name="subject" required maxLength={200} defaultValue={state.values?.subject} errors={errors.subject} />
       <div className="flex flex-col gap-1">
-        <label htmlFor="f-body" className="text-sm font-medium">What happened?</label>
-        <textarea id="f-body" name="body" required rows={6} defaultValue={state.values?.body} className="rounded border border-stone-300 bg-white px-3 py-2" aria-describedby="f-body-hint" />
-        <p id="f-body-hint" className="text-xs text-stone-600">The cut, the numbers you ran, what you saw and heard. Markdown lists and `code` work.</p>
-        {errors.body ? <p className="text-sm text-red-800"><span aria-hidden>⚠ </span>{errors.body.join(" ")}</p> : null}
+        <label htmlFor="f-body" className="text-sm font-medium">
+          What happened?
+        </label>
+        <textarea
+          id="f-body"
+          name="body"
+          required
+          rows={6}
+          defaultValue={state.values?.body}
+          className="rounded border border-stone-300 bg-white px-3 py-2"
+          aria-describedby="f-body-hint"
+        />
+        <p id="f-body-hint" className="text-xs text-stone-600">
+          The cut, the numbers you ran, what you saw and heard. Markdown lists and `code` work.
+        </p>
+        {errors.body ? (
+          <p className="text-sm text-red-800">
+            <span aria-hidden>⚠ </span>
+            {errors.body.join(" ")}
+          </p>
+        ) : null}
       </div>
       <div className="grid gap-4 sm:grid-cols-2">
-        <SelectField label="Material" name="materialId" options={materials} defaultValue={state.values?.materialId ?? sheetVersion?.materialId ?? ""} errors={errors.materialId} empty="Not sure / other" />
-        <SelectField label="Machine" name="machineId" options={machines} defaultValue={state.values?.machineId ?? machineId ?? ""} errors={errors.machineId} empty={machines.length ? "Not on a saved machine" : "No machines saved on your Bench"} />
+        <SelectField
+          label="Material"
+          name="materialId"
+          options={materials}
+          defaultValue={state.values?.materialId ?? sheetVersion?.materialId ?? ""}
+          errors={errors.materialId}
+          empty="Not sure / other"
+        />
+        <SelectField
+          label="Machine"
+          name="machineId"
+          options={machines}
+          defaultValue={state.values?.machineId ?? machineId ?? ""}
+          errors={errors.machineId}
+          empty={machines.length ? "Not on a saved machine" : "No machines saved on your Bench"}
+        />
       </div>
       <UploadField vendor={vendor} label="Photos and files" />
       <FormMessage state={state} />

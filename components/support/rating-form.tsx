@@ -8,10 +8,25 @@ import type { FormAction } from "@/lib/actions/action-state";
 
 const LABELS = ["", "1 – poor", "2", "3", "4", "5 – excellent"];
 
-export function RatingForm({ vendor, ticketId, current, rateTicketAction }: { vendor: string; ticketId: string; current: number | null; rateTicketAction: FormAction }) {
+export function RatingForm({
+  vendor,
+  ticketId,
+  current,
+  rateTicketAction,
+}: {
+  vendor: string;
+  ticketId: string;
+  current: number | null;
+  rateTicketAction: FormAction;
+}) {
   const { state, formAction, onSubmit, errors } = useValidatedAction(rateTicketAction, ticketRatingSchema);
   return (
-    <form action={formAction} onSubmit={onSubmit} className="space-y-3 rounded-lg border border-stone-300 bg-white p-4" aria-label="Rate this ticket">
+    <form
+      action={formAction}
+      onSubmit={onSubmit}
+      className="space-y-3 rounded-lg border border-stone-300 bg-white p-4"
+      aria-label="Rate this ticket"
+    >
       <input type="hidden" name="vendor" value={vendor} />
       <input type="hidden" name="ticketId" value={ticketId} />
       <fieldset>
@@ -23,9 +38,16 @@ export function RatingForm({ vendor, ticketId, current, rateTicketAction }: { ve
             </label>
           ))}
         </div>
-        {errors.satisfaction ? <p className="text-sm text-red-800"><span aria-hidden>⚠ </span>{errors.satisfaction.join(" ")}</p> : null}
+        {errors.satisfaction ? (
+          <p className="text-sm text-red-800">
+            <span aria-hidden>⚠ </span>
+            {errors.satisfaction.join(" ")}
+          </p>
+        ) : null}
       </fieldset>
-      <label htmlFor="f-comment" className="text-sm font-medium">Comment (optional)</label>
+      <label htmlFor="f-comment" className="text-sm font-medium">
+        Comment (optional)
+      </label>
       <textarea id="f-comment" name="comment" rows={2} className="w-full rounded border border-stone-300 bg-white px-3 py-2" />
       <FormMessage state={state} success={state.message} />
       <SubmitButton>Send rating</SubmitButton>

@@ -21,13 +21,23 @@ const COMPONENTS: Components = {
       <span>{children}</span>
     ),
   ul: ({ children }) => <ul className="list-disc pl-6">{children}</ul>,
-  ol: ({ children, start }) => <ol start={start} className="list-decimal pl-6">{children}</ol>,
+  ol: ({ children, start }) => (
+    <ol start={start} className="list-decimal pl-6">
+      {children}
+    </ol>
+  ),
   blockquote: ({ children }) => <blockquote className="border-l-4 border-stone-300 pl-3 text-stone-600">{children}</blockquote>,
-  pre: ({ children }) => <pre className="overflow-x-auto rounded bg-stone-900 p-3 font-mono text-sm text-stone-100 [&>code]:bg-transparent [&>code]:p-0">{children}</pre>,
+  pre: ({ children }) => (
+    <pre className="overflow-x-auto rounded bg-stone-900 p-3 font-mono text-sm text-stone-100 [&>code]:bg-transparent [&>code]:p-0">
+      {children}
+    </pre>
+  ),
   code: ({ children }) => <code className="rounded bg-stone-100 px-1 font-mono text-[0.9em]">{children}</code>,
   table: ({ children }) => (
     <div className="overflow-x-auto">
-      <table className="border-collapse text-sm [&_td]:border [&_td]:border-stone-300 [&_td]:px-2 [&_th]:border [&_th]:border-stone-300 [&_th]:px-2">{children}</table>
+      <table className="border-collapse text-sm [&_td]:border [&_td]:border-stone-300 [&_td]:px-2 [&_th]:border [&_th]:border-stone-300 [&_th]:px-2">
+        {children}
+      </table>
     </div>
   ),
 };

@@ -12,7 +12,10 @@ const STATUS_STYLE: Record<TicketStatus, { icon: string; className: string }> = 
 export function StatusBadge({ status }: { status: TicketStatus }) {
   const s = STATUS_STYLE[status];
   return (
-    <span data-status={status} className={`inline-flex items-center gap-1 rounded border px-2 py-0.5 text-xs font-medium whitespace-nowrap ${s.className}`}>
+    <span
+      data-status={status}
+      className={`inline-flex items-center gap-1 rounded border px-2 py-0.5 text-xs font-medium whitespace-nowrap ${s.className}`}
+    >
       <span aria-hidden>{s.icon}</span>
       {ticketStatusLabels[status]}
     </span>
@@ -34,6 +37,11 @@ export { formatDateTime };
 /** The first-response target: when it is due, or that it is overdue (never colour alone). */
 export function DueBadge({ dueAt, respondedAt, overdue }: { dueAt: string; respondedAt: string | null; overdue: boolean }) {
   if (respondedAt) return <span className="text-xs text-stone-600">Answered {formatDateTime(respondedAt)}</span>;
-  if (overdue) return <span data-overdue="true" className="text-xs font-semibold text-red-800"><span aria-hidden>⚠ </span>Overdue since {formatDateTime(dueAt)}</span>;
+  if (overdue)
+    return (
+      <span data-overdue="true" className="text-xs font-semibold text-red-800">
+        <span aria-hidden>⚠ </span>Overdue since {formatDateTime(dueAt)}
+      </span>
+    );
   return <span className="text-xs text-stone-700">Due {formatDateTime(dueAt)}</span>;
 }

@@ -16,7 +16,10 @@ export function AttachmentList({ vendorSlug, attachments }: { vendorSlug: string
               // eslint-disable-next-line @next/next/no-img-element -- served by our own authorised route
               <img src={href} alt={a.fileName} className="mb-1 max-h-40 max-w-60 rounded object-contain" />
             ) : null}
-            <a href={href} className="underline underline-offset-2">{a.fileName}</a> <span className="num text-stone-600">({Math.max(1, Math.round(a.sizeBytes / 1024))}&nbsp;KB)</span>
+            <a href={href} className="underline underline-offset-2">
+              {a.fileName}
+            </a>{" "}
+            <span className="num text-stone-600">({Math.max(1, Math.round(a.sizeBytes / 1024))}&nbsp;KB)</span>
           </li>
         );
       })}
@@ -25,7 +28,15 @@ export function AttachmentList({ vendorSlug, attachments }: { vendorSlug: string
 }
 
 /** The thread as a list of messages; internal notes are marked (and only ever given to staff). */
-export function TicketThreadView({ vendorSlug, messages, attachments }: { vendorSlug: string; messages: Omit<TicketMessage, "authorId">[]; attachments: TicketAttachment[] }) {
+export function TicketThreadView({
+  vendorSlug,
+  messages,
+  attachments,
+}: {
+  vendorSlug: string;
+  messages: Omit<TicketMessage, "authorId">[];
+  attachments: TicketAttachment[];
+}) {
   if (!messages.length) return <p className="text-sm text-stone-600">No replies yet.</p>;
   return (
     <ol className="space-y-4" aria-label="Thread">

@@ -46,15 +46,28 @@ export function UploadField({ vendor, label = "Attachments" }: { vendor: string;
 
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor="f-upload" className="text-sm font-medium">{label}</label>
-      <input id="f-upload" ref={input} type="file" multiple accept="image/png,image/jpeg,image/webp,application/pdf,.nc,.gcode,.ngc,.tap,.txt" onChange={(e) => onFiles(e.target.files)} className="min-h-11 text-sm" />
+      <label htmlFor="f-upload" className="text-sm font-medium">
+        {label}
+      </label>
+      <input
+        id="f-upload"
+        ref={input}
+        type="file"
+        multiple
+        accept="image/png,image/jpeg,image/webp,application/pdf,.nc,.gcode,.ngc,.tap,.txt"
+        onChange={(e) => onFiles(e.target.files)}
+        className="min-h-11 text-sm"
+      />
       <p className="text-xs text-stone-600">Photos (PNG, JPEG, WebP), PDFs or G-code text files, up to 10 MB each.</p>
       <ul className="space-y-1" aria-live="polite">
         {items.map((i) => (
           <li key={i.key} className="text-sm" data-upload-state={i.error ? "error" : i.id ? "done" : "uploading"}>
             <span className="mr-2">{i.name}</span>
             {i.error ? (
-              <span className="text-red-800"><span aria-hidden>⚠ </span>{i.error}</span>
+              <span className="text-red-800">
+                <span aria-hidden>⚠ </span>
+                {i.error}
+              </span>
             ) : (
               <>
                 <progress max={1} value={i.progress} aria-label={`Upload of ${i.name}`} className="h-2 w-40 align-middle" />
@@ -64,7 +77,13 @@ export function UploadField({ vendor, label = "Attachments" }: { vendor: string;
             )}
             {i.id ? <input type="hidden" name="attachmentIds" value={i.id} /> : null}
             {i.id || i.error ? (
-              <button type="button" className="ml-2 text-xs underline" onClick={() => setItems((all) => all.filter((x) => x.key !== i.key))}>Remove</button>
+              <button
+                type="button"
+                className="ml-2 text-xs underline"
+                onClick={() => setItems((all) => all.filter((x) => x.key !== i.key))}
+              >
+                Remove
+              </button>
             ) : null}
           </li>
         ))}

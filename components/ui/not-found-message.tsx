@@ -5,7 +5,9 @@ export function NotFoundMessage() {
     <div className="py-16 text-center">
       <h1 className="text-2xl font-semibold">Not found</h1>
       <p className="mt-2 text-stone-600">There is nothing here, or you do not have access to it.</p>
-      <Link href="/" className="mt-6 inline-block underline">Back to Swarfbook</Link>
+      <Link href="/" className="mt-6 inline-block underline">
+        Back to Swarfbook
+      </Link>
     </div>
   );
 }

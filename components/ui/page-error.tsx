@@ -37,11 +37,18 @@ export function PageError({ error, reset }: Props) {
     return () => clearTimeout(timer);
   });
 
-  if (catchingUp === null) return <div role="status" className="py-16 text-center text-stone-600">Loading…</div>;
+  if (catchingUp === null)
+    return (
+      <div role="status" className="py-16 text-center text-stone-600">
+        Loading…
+      </div>
+    );
   return (
     <div role={catchingUp ? "status" : "alert"} className="py-16 text-center">
       <h1 className="text-2xl font-semibold">{catchingUp ? "One moment" : "Something went wrong"}</h1>
-      <p className="mt-2 text-stone-600">{catchingUp ? `${CATCHING_UP} This page reloads by itself.` : "The page could not be shown. Nothing you saved is lost."}</p>
+      <p className="mt-2 text-stone-600">
+        {catchingUp ? `${CATCHING_UP} This page reloads by itself.` : "The page could not be shown. Nothing you saved is lost."}
+      </p>
       <button type="button" onClick={retry} className="mt-6 rounded bg-accent px-4 py-2 text-accent-ink">
         Try again
       </button>

@@ -6,10 +6,10 @@ import { resolveVendorAccess, type VendorAccess } from "@/lib/auth/access";
 import type { Member } from "@/lib/auth/membership";
 import type { Permission } from "@/lib/auth/permissions";
 import { getSessionUser, type SessionUser } from "@/lib/auth/session-user";
+import { pinReadsToPrimary } from "@/lib/db/read-db";
 import { CATCHING_UP, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
-import { pinReadsToPrimary } from "@/lib/db/read-db";
 
 import type { ActionState } from "./action-state";
 
@@ -34,7 +34,8 @@ async function pinAfterWrite(run: () => Promise<ActionState | void>): Promise<Ac
     return result;
   } catch (error) {
     // redirect() after a successful write also signals by throwing.
-    if (error && typeof error === "object" && "digest" in error && String(error.digest).startsWith("NEXT_REDIRECT")) await pinReadsToPrimary();
+    if (error && typeof error === "object" && "digest" in error && String(error.digest).startsWith("NEXT_REDIRECT"))
+      await pinReadsToPrimary();
     throw error;
   }
 }

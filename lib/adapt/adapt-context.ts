@@ -1,5 +1,16 @@
-import type { AdaptInput, AdaptResult, CornerForm, EntryCapability, EntryKind, MachineInput, OperationKind, OverridesInput, ToolMaterial, UnitSystem } from "@/lib/machining";
-import { adaptRecipe } from "@/lib/machining";
+import {
+  adaptRecipe,
+  type AdaptInput,
+  type AdaptResult,
+  type CornerForm,
+  type EntryCapability,
+  type EntryKind,
+  type MachineInput,
+  type OperationKind,
+  type OverridesInput,
+  type ToolMaterial,
+  type UnitSystem,
+} from "@/lib/machining";
 
 // Pure: runs in the browser (adapt panel) and on the server (saving a setup, alerts, PDFs).
 
@@ -25,7 +36,16 @@ export type AdaptContext = {
   versionState: string;
   sheetSlug: string;
   title: string;
-  cutter: { sku: string; name: string; diameterMm: number; flutes: number; cornerRadiusMm: number | null; cornerForm: CornerForm; fluteLengthMm: number | null; toolMaterial: ToolMaterial };
+  cutter: {
+    sku: string;
+    name: string;
+    diameterMm: number;
+    flutes: number;
+    cornerRadiusMm: number | null;
+    cornerForm: CornerForm;
+    fluteLengthMm: number | null;
+    toolMaterial: ToolMaterial;
+  };
   material: {
     name: string;
     vcMinMpm: number;
@@ -51,7 +71,13 @@ export type BenchMachineInput = MachineInput & { stickoutMm?: number | null };
 /** What the customer chose beside the machine: their CAM's entry capability and the units of messages. */
 export type AdaptChoices = { entryCapability?: EntryCapability; units?: UnitSystem };
 
-export function buildAdaptInput(context: AdaptContext, operationIndex: number, machine: BenchMachineInput, overrides: OverridesInput = {}, choices: AdaptChoices = {}): AdaptInput {
+export function buildAdaptInput(
+  context: AdaptContext,
+  operationIndex: number,
+  machine: BenchMachineInput,
+  overrides: OverridesInput = {},
+  choices: AdaptChoices = {},
+): AdaptInput {
   const op = context.operations[operationIndex];
   if (!op) throw new RangeError(`The sheet has no operation ${operationIndex + 1}.`);
   const { stickoutMm, ...engineMachine } = machine;
@@ -94,5 +120,10 @@ export function buildAdaptInput(context: AdaptContext, operationIndex: number, m
 }
 
 /** adaptRecipe over one operation of a context; throws MachiningInputError for impossible input. */
-export const adaptOperation = (context: AdaptContext, operationIndex: number, machine: BenchMachineInput, overrides: OverridesInput = {}, choices: AdaptChoices = {}): AdaptResult =>
-  adaptRecipe(buildAdaptInput(context, operationIndex, machine, overrides, choices));
+export const adaptOperation = (
+  context: AdaptContext,
+  operationIndex: number,
+  machine: BenchMachineInput,
+  overrides: OverridesInput = {},
+  choices: AdaptChoices = {},
+): AdaptResult => adaptRecipe(buildAdaptInput(context, operationIndex, machine, overrides, choices));

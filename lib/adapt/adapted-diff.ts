@@ -12,9 +12,17 @@ export const ADAPTED_FIELDS = [
   { field: "plungeFeedMmMin", label: "Plunge feed", kind: "feedRate" },
 ] as const satisfies readonly { field: keyof AdaptNumbers; label: string; kind: QuantityKind }[];
 
-export type AdaptedChange = { field: keyof AdaptNumbers; label: string; kind: QuantityKind; before: number | null; after: number | null; percent: number | null };
+export type AdaptedChange = {
+  field: keyof AdaptNumbers;
+  label: string;
+  kind: QuantityKind;
+  before: number | null;
+  after: number | null;
+  percent: number | null;
+};
 
-const same = (a: number | null, b: number | null) => (a === null || b === null ? a === b : Math.abs(a - b) <= 1e-6 * Math.max(Math.abs(a), Math.abs(b), 1e-9));
+const same = (a: number | null, b: number | null) =>
+  a === null || b === null ? a === b : Math.abs(a - b) <= 1e-6 * Math.max(Math.abs(a), Math.abs(b), 1e-9);
 
 /** The adapted numbers that differ, with the change as a percentage of the old value. */
 export function diffAdapted(before: AdaptNumbers, after: AdaptNumbers): AdaptedChange[] {
@@ -29,5 +37,10 @@ export function diffAdapted(before: AdaptNumbers, after: AdaptNumbers): AdaptedC
 
 export function formatAdaptedChange(change: AdaptedChange, units: UnitSystem) {
   const percent = change.percent === null ? "" : `${change.percent > 0 ? "+" : ""}${change.percent.toFixed(1)}\u00a0%`;
-  return { label: change.label, before: formatQuantity(change.before, change.kind, units), after: formatQuantity(change.after, change.kind, units), percent };
+  return {
+    label: change.label,
+    before: formatQuantity(change.before, change.kind, units),
+    after: formatQuantity(change.after, change.kind, units),
+    percent,
+  };
 }

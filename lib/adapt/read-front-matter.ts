@@ -1,6 +1,5 @@
 import { sheetOperationSchema, type SheetOperation } from "@/content-schema/sheet-front-matter";
 import { operationKindLabels } from "@/content-schema/sheet-kinds";
-
 import type { EntryKind } from "@/lib/machining";
 
 import type { ContextOperation } from "./adapt-context";

@@ -1,7 +1,7 @@
-import { type AdaptResult, type EntryCapability, isMachiningInputError, type OverridesInput, type UnitSystem } from "@/lib/machining";
+import { isMachiningInputError, type AdaptResult, type EntryCapability, type OverridesInput, type UnitSystem } from "@/lib/machining";
 
 import { adaptOperation, type AdaptContext, type BenchMachineInput } from "./adapt-context";
-import { type AdaptedChange, diffAdapted } from "./adapted-diff";
+import { diffAdapted, type AdaptedChange } from "./adapted-diff";
 
 // Pure: the one rule for carrying a setup from a sheet version to a newer one. Used by the Bench's
 // old-beside-new view (`readapt-setup.ts`) and by the change-alert e-mails (`send-change-alerts.ts`).

@@ -1,10 +1,10 @@
 import "server-only";
 
-import type { OverrideDraft } from "./compute-adaptation";
 import { getSetup } from "@/lib/bench/list-setups";
-import { loadAdaptContext } from "./load-adapt-context";
-
 import { isUuid } from "@/lib/ids/is-uuid";
+
+import type { OverrideDraft } from "./compute-adaptation";
+import { loadAdaptContext } from "./load-adapt-context";
 
 export type AdaptStart = { machineId: string; operationIndex: number; overrides: OverrideDraft };
 
@@ -14,14 +14,28 @@ const mm = (value: number | undefined) => (value === undefined ? "" : `${Number(
  * Where "Adapt version N" starts from a saved setup: the same machine, the matching operation and the
  * customer's own changes, so re-adapting never silently drops them. Another customer's setup is ignored.
  */
-export async function readaptStart({ vendorId, userId, setupId, versionId }: { vendorId: string; userId: string; setupId: string | undefined; versionId: string }): Promise<AdaptStart | null> {
+export async function readaptStart({
+  vendorId,
+  userId,
+  setupId,
+  versionId,
+}: {
+  vendorId: string;
+  userId: string;
+  setupId: string | undefined;
+  versionId: string;
+}): Promise<AdaptStart | null> {
   if (!setupId || !isUuid(setupId)) return null;
   const setup = await getSetup({ vendorId, userId, setupId });
   if (!setup) return null;
-  const [oldContext, context] = await Promise.all([loadAdaptContext({ vendorId, versionId: setup.sheetVersionId }), loadAdaptContext({ vendorId, versionId })]);
+  const [oldContext, context] = await Promise.all([
+    loadAdaptContext({ vendorId, versionId: setup.sheetVersionId }),
+    loadAdaptContext({ vendorId, versionId }),
+  ]);
   if (!oldContext || !context) return null;
   const old = oldContext.operations[setup.operationIndex];
-  const match = context.operations.find((op) => op.kind === old?.kind && op.label === old?.label) ?? context.operations[setup.operationIndex];
+  const match =
+    context.operations.find((op) => op.kind === old?.kind && op.label === old?.label) ?? context.operations[setup.operationIndex];
   return {
     machineId: setup.machineId,
     operationIndex: match?.index ?? 0,

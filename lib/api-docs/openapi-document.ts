@@ -2,10 +2,10 @@ import { apiErrorSchema } from "@/content-schema/api-responses";
 import { PERMISSIONS } from "@/lib/auth/permissions";
 import { DEFAULT_PUBLIC_RATE, DEFAULT_VENDOR_RATE } from "@/lib/http/rate-defaults";
 
+import { errorExamples } from "./api-examples";
 import type { ApiOperation } from "./api-operation";
 import { API_OPERATIONS } from "./api-operations";
-import { errorExamples } from "./api-examples";
-import { jsonSchemaOf, type JsonSchema, propertiesOf } from "./json-schema";
+import { jsonSchemaOf, propertiesOf, type JsonSchema } from "./json-schema";
 import { WEBHOOK_VERIFICATION, webhookDocs } from "./webhook-docs";
 
 const ERROR_TEXT: Record<number, string> = {
@@ -46,17 +46,43 @@ export const API_DESCRIPTION = [
 const pathParams = (path: string) => [...path.matchAll(/\{(\w+)\}/g)].map((m) => m[1]);
 
 function operationObject(op: ApiOperation): Record<string, unknown> {
-  const parameters: Record<string, unknown>[] = pathParams(op.path).map((name) => ({ name, in: "path", required: true, schema: { type: "string" } }));
+  const parameters: Record<string, unknown>[] = pathParams(op.path).map((name) => ({
+    name,
+    in: "path",
+    required: true,
+    schema: { type: "string" },
+  }));
   if (op.query) {
     const { properties, required } = propertiesOf(jsonSchemaOf(op.query, "input"));
     for (const [name, schema] of Object.entries(properties)) {
       if (parameters.some((p) => p.name === name)) continue;
-      parameters.push({ name, in: "query", required: required.has(name), schema, ...(schema.description ? { description: schema.description } : {}) });
+      parameters.push({
+        name,
+        in: "query",
+        required: required.has(name),
+        schema,
+        ...(schema.description ? { description: schema.description } : {}),
+      });
     }
   }
-  for (const q of op.extraQuery ?? []) parameters.push({ name: q.name, in: "query", required: q.required, schema: { type: "string" }, description: q.description });
-  if (op.idempotencyKey === "header") parameters.push({ name: "Idempotency-Key", in: "header", required: false, schema: { type: "string", maxLength: 100 }, description: "Repeat it on a retry: the first result comes back (200)." });
-  if (op.bodyType === "raw") parameters.push({ name: "X-File-Name", in: "header", required: false, schema: { type: "string" }, description: "The file's name, URL-encoded." });
+  for (const q of op.extraQuery ?? [])
+    parameters.push({ name: q.name, in: "query", required: q.required, schema: { type: "string" }, description: q.description });
+  if (op.idempotencyKey === "header")
+    parameters.push({
+      name: "Idempotency-Key",
+      in: "header",
+      required: false,
+      schema: { type: "string", maxLength: 100 },
+      description: "Repeat it on a retry: the first result comes back (200).",
+    });
+  if (op.bodyType === "raw")
+    parameters.push({
+      name: "X-File-Name",
+      in: "header",
+      required: false,
+      schema: { type: "string" },
+      description: "The file's name, URL-encoded.",
+    });
 
   const requestBody = op.body
     ? {
@@ -67,7 +93,10 @@ function operationObject(op: ApiOperation): Record<string, unknown> {
         },
       }
     : op.bodyType === "raw"
-      ? { required: true, content: { "application/octet-stream": { schema: { type: "string", contentMediaType: "application/octet-stream" } } } }
+      ? {
+          required: true,
+          content: { "application/octet-stream": { schema: { type: "string", contentMediaType: "application/octet-stream" } } },
+        }
       : undefined;
 
   const responses: Record<string, unknown> = {};
@@ -99,15 +128,22 @@ function operationObject(op: ApiOperation): Record<string, unknown> {
 }
 
 export function operationIdOf(op: ApiOperation): string {
-  const words = op.path.replace(/^\/api\/v1\/(vendors\/\{vendor\}\/)?/, "").split(/[/.]/).filter(Boolean).map((w) => w.replace(/[{}]/g, ""));
-  return [op.method.toLowerCase(), ...words].map((w, i) => (i === 0 ? w : w.replace(/(^|-)(\w)/g, (_m, _d, c: string) => c.toUpperCase()))).join("");
+  const words = op.path
+    .replace(/^\/api\/v1\/(vendors\/\{vendor\}\/)?/, "")
+    .split(/[/.]/)
+    .filter(Boolean)
+    .map((w) => w.replace(/[{}]/g, ""));
+  return [op.method.toLowerCase(), ...words]
+    .map((w, i) => (i === 0 ? w : w.replace(/(^|-)(\w)/g, (_m, _d, c: string) => c.toUpperCase())))
+    .join("");
 }
 
 export function buildOpenApiDocument() {
   const paths: Record<string, Record<string, unknown>> = {};
   for (const op of API_OPERATIONS) (paths[op.path] ??= {})[op.method.toLowerCase()] = operationObject(op);
   const errorSchema: JsonSchema = jsonSchemaOf(apiErrorSchema, "output");
-  const exampleFor = (status: number) => (status === 400 ? errorExamples.invalid : status === 404 ? errorExamples.notFound : status === 429 ? errorExamples.limited : null);
+  const exampleFor = (status: number) =>
+    status === 400 ? errorExamples.invalid : status === 404 ? errorExamples.notFound : status === 429 ? errorExamples.limited : null;
   return {
     openapi: "3.1.0",
     info: { title: "Swarfbook API", version: "1", description: API_DESCRIPTION },
@@ -120,12 +156,29 @@ export function buildOpenApiDocument() {
       responses: Object.fromEntries(
         Object.entries(ERROR_TEXT).map(([status, description]) => {
           const example = exampleFor(Number(status));
-          return [`E${status}`, { description, content: { "application/json": { schema: { $ref: "#/components/schemas/ApiError" }, ...(example ? { examples: { example } } : {}) } } }];
+          return [
+            `E${status}`,
+            {
+              description,
+              content: {
+                "application/json": { schema: { $ref: "#/components/schemas/ApiError" }, ...(example ? { examples: { example } } : {}) },
+              },
+            },
+          ];
         }),
       ),
       securitySchemes: {
-        personalAccessToken: { type: "http", scheme: "bearer", description: "A personal access token (sbk_…) made on the Bench; it acts as its owner within one vendor." },
-        session: { type: "apiKey", in: "cookie", name: "__Secure-next-auth.session-token", description: "The browser's session after sign-in (next-auth.session-token over plain http)." },
+        personalAccessToken: {
+          type: "http",
+          scheme: "bearer",
+          description: "A personal access token (sbk_…) made on the Bench; it acts as its owner within one vendor.",
+        },
+        session: {
+          type: "apiKey",
+          in: "cookie",
+          name: "__Secure-next-auth.session-token",
+          description: "The browser's session after sign-in (next-auth.session-token over plain http).",
+        },
       },
     },
   };

@@ -46,12 +46,14 @@ const LABELS: Record<string, string> = {
 };
 
 /** A role as a word in running text: "support staff", "vendor admin". */
-export const roleWord = (role: unknown) => (typeof role === "string" && role in ROLE_LABELS ? ROLE_LABELS[role as Role].toLowerCase() : "an unknown role");
+export const roleWord = (role: unknown) =>
+  typeof role === "string" && role in ROLE_LABELS ? ROLE_LABELS[role as Role].toLowerCase() : "an unknown role";
 
 /** An audit entry as a sentence fragment: "Sheet superseded", "Role changed: customer → support staff". */
 export function describeAuditAction(action: string, details: Record<string, unknown> = {}): string {
   const label = LABELS[action] ?? action.replace(/[._]/g, " ").replace(/^./, (c) => c.toUpperCase());
   if (action === "member.invite" && details.role) return `${label} as ${roleWord(details.role)}`;
-  if (action === "member.role" && details.to) return `${label}${details.from ? `: ${roleWord(details.from)} → ` : ": "}${roleWord(details.to)}`;
+  if (action === "member.role" && details.to)
+    return `${label}${details.from ? `: ${roleWord(details.from)} → ` : ": "}${roleWord(details.to)}`;
   return label;
 }

@@ -2,7 +2,14 @@ import "server-only";
 
 import { db } from "@/lib/db/knex";
 
-export type AuditListItem = { id: string; action: string; details: Record<string, unknown>; objectType: string; createdAt: Date; actorEmail: string | null };
+export type AuditListItem = {
+  id: string;
+  action: string;
+  details: Record<string, unknown>;
+  objectType: string;
+  createdAt: Date;
+  actorEmail: string | null;
+};
 
 export async function listRecentAudit({ vendorId, limit = 20 }: { vendorId: string; limit?: number }): Promise<AuditListItem[]> {
   const rows = await db("audit_log as a")
@@ -11,5 +18,12 @@ export async function listRecentAudit({ vendorId, limit = 20 }: { vendorId: stri
     .orderBy("a.created_at", "desc")
     .limit(limit)
     .select("a.id", "a.action", "a.details", "a.object_type", "a.created_at", "u.email");
-  return rows.map((r) => ({ id: String(r.id), action: r.action, details: r.details ?? {}, objectType: r.object_type, createdAt: new Date(r.created_at), actorEmail: r.email }));
+  return rows.map((r) => ({
+    id: String(r.id),
+    action: r.action,
+    details: r.details ?? {},
+    objectType: r.object_type,
+    createdAt: new Date(r.created_at),
+    actorEmail: r.email,
+  }));
 }

@@ -1,8 +1,8 @@
 import "server-only";
 
+import type { Vendor } from "@/content-schema/vendor";
 import { NotFound, Unauthenticated } from "@/lib/errors/domain-errors";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
-import type { Vendor } from "@/content-schema/vendor";
 
 import { findMembership, type Member } from "./membership";
 import { can, type Permission } from "./permissions";
@@ -15,11 +15,7 @@ export type VendorAccess = { vendor: Vendor; user: SessionUser | null; member: M
  * Unknown vendor, non-member or missing permission all answer NotFound, so nothing reveals
  * that another vendor's object exists; only a visitor who could sign in is told to.
  */
-export async function resolveVendorAccess(
-  vendorSlug: string,
-  user: SessionUser | null,
-  permission?: Permission,
-): Promise<VendorAccess> {
+export async function resolveVendorAccess(vendorSlug: string, user: SessionUser | null, permission?: Permission): Promise<VendorAccess> {
   const vendor = await getVendorBySlug(vendorSlug);
   if (!vendor) throw new NotFound();
   const member = user ? await findMembership(vendor.id, user.id) : null;

@@ -33,7 +33,11 @@ export async function apiTokenOwner(token: string, vendorId: string): Promise<{ 
     .whereNull("t.revoked_at")
     .whereRaw("m.created_at <= t.created_at")
     .first<{ token_id: string; id: string; email: string; name: string; is_operator: boolean } | undefined>(
-      "t.id as token_id", "u.id", "u.email", "u.name", "u.is_operator",
+      "t.id as token_id",
+      "u.id",
+      "u.email",
+      "u.name",
+      "u.is_operator",
     );
   if (!row) return null;
   await db("api_tokens").where({ id: row.token_id }).update({ last_used_at: db.fn.now() });

@@ -1,10 +1,11 @@
 import "server-only";
 
 import type { NextAuthOptions } from "next-auth";
-import { headers } from "next/headers";
 import CredentialsProvider from "next-auth/providers/credentials";
 import EmailProvider from "next-auth/providers/email";
+import { headers } from "next/headers";
 
+import { credentialsSchema } from "@/content-schema/auth";
 import { db } from "@/lib/db/knex";
 import { RateLimited } from "@/lib/errors/domain-errors";
 import { clientIp } from "@/lib/http/client-ip";
@@ -12,7 +13,6 @@ import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { consumeRateLimit, resetRateLimit } from "@/lib/rate-limit/consume-rate-limit";
 import { refundRateLimit } from "@/lib/rate-limit/refund-rate-limit";
 
-import { credentialsSchema } from "@/content-schema/auth";
 import { knexAdapter } from "./knex-adapter";
 import { isKnownSignInAddress, rememberSignInAddress } from "./known-sign-in-addresses";
 import { verifyPassword } from "./passwords";
@@ -38,7 +38,8 @@ async function countAttempt(keys: { ip: string; accountIp: string; account: stri
     await consumeRateLimit({ key: keys.ip, ...SIGN_IN_LIMITS.perIp });
     await consumeRateLimit({ key: keys.accountIp, ...SIGN_IN_LIMITS.perAccountAndIp });
     const accountHits = await consumeRateLimit({ key: keys.account, limit: Number.MAX_SAFE_INTEGER, windowSeconds: WINDOW });
-    if (accountHits > SIGN_IN_LIMITS.perAccountCeiling.limit && !(await known())) await consumeRateLimit({ key: keys.slow, ...SIGN_IN_LIMITS.slowed });
+    if (accountHits > SIGN_IN_LIMITS.perAccountCeiling.limit && !(await known()))
+      await consumeRateLimit({ key: keys.slow, ...SIGN_IN_LIMITS.slowed });
   } catch (error) {
     if (error instanceof RateLimited) throw new Error("rate_limited");
     throw error;
@@ -50,7 +51,12 @@ export async function authorizePassword(raw: unknown, headers: Record<string, st
   if (!parsed.success) return null;
   const { email, password } = parsed.data;
   const ip = clientIp(headers);
-  const keys = { ip: `sign-in:ip:${ip}`, accountIp: `sign-in:account-ip:${email}:${ip}`, account: `sign-in:account:${email}`, slow: `sign-in:slow:${email}` };
+  const keys = {
+    ip: `sign-in:ip:${ip}`,
+    accountIp: `sign-in:account-ip:${email}:${ip}`,
+    account: `sign-in:account:${email}`,
+    slow: `sign-in:slow:${email}`,
+  };
   await countAttempt(keys, () => isKnownSignInAddress(email, ip));
   const user = await db("users")
     .where({ email })
@@ -102,7 +108,11 @@ export const authOptions: NextAuthOptions = {
       const ip = clientIp(await headers());
       if (emailInfo?.verificationRequest) {
         await consumeRateLimit({ key: `magic-link:${email}:${ip}`, limit: 5, windowSeconds: 15 * 60 })
-          .then(async () => ((await isKnownSignInAddress(email, ip)) ? 0 : consumeRateLimit({ key: `magic-link:${email}`, limit: 20, windowSeconds: 60 * 60 })))
+          .then(async () =>
+            (await isKnownSignInAddress(email, ip))
+              ? 0
+              : consumeRateLimit({ key: `magic-link:${email}`, limit: 20, windowSeconds: 60 * 60 }),
+          )
           .catch(() => {
             throw new Error("rate_limited");
           });

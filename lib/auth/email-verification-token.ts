@@ -18,7 +18,9 @@ function secret(): string {
 
 type Bound = { email: string; passwordHash: string | null };
 const sign = (payload: string, { email, passwordHash }: Bound) =>
-  createHmac("sha256", secret()).update(`verify-email:${payload}:${email.toLowerCase()}:${passwordHash ?? ""}`).digest("base64url");
+  createHmac("sha256", secret())
+    .update(`verify-email:${payload}:${email.toLowerCase()}:${passwordHash ?? ""}`)
+    .digest("base64url");
 
 export function createVerificationToken({ userId, now = Date.now(), ...bound }: Bound & { userId: string; now?: number }): string {
   const payload = Buffer.from(`${userId}.${now + VERIFICATION_HOURS * 3_600_000}`).toString("base64url");
@@ -40,6 +42,8 @@ export function readVerificationToken(token: string, accountOf: (userId: string)
 
 /** The user id inside a token, before its signature is checked (to look up the address it must match). */
 export function peekVerificationUser(token: string): string | null {
-  const userId = Buffer.from(token.split(".")[0] ?? "", "base64url").toString("utf8").split(".")[0];
+  const userId = Buffer.from(token.split(".")[0] ?? "", "base64url")
+    .toString("utf8")
+    .split(".")[0];
   return userId && isUuid(userId) ? userId : null;
 }

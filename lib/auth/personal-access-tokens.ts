@@ -15,17 +15,34 @@ export async function createPersonalToken({ vendorId, userId, name }: { vendorId
   const [row] = await db("api_tokens")
     .insert({ vendor_id: vendorId, user_id: userId, name, prefix: secret.slice(0, 12), token_hash: hashToken(secret) })
     .returning("id");
-  await writeAudit({ vendorId, actorUserId: userId, action: "api_token.create", objectType: "api_token", objectId: row.id, details: { name } });
+  await writeAudit({
+    vendorId,
+    actorUserId: userId,
+    action: "api_token.create",
+    objectType: "api_token",
+    objectId: row.id,
+    details: { name },
+  });
   return { id: row.id as string, secret, prefix: secret.slice(0, 12) };
 }
 
 export async function listPersonalTokens({ vendorId, userId }: { vendorId: string; userId: string }): Promise<TokenSummary[]> {
   const rows = await db("api_tokens").where({ vendor_id: vendorId, user_id: userId }).orderBy("created_at", "desc");
-  return rows.map((r) => ({ id: r.id, name: r.name, prefix: r.prefix, createdAt: r.created_at, lastUsedAt: r.last_used_at, revokedAt: r.revoked_at }));
+  return rows.map((r) => ({
+    id: r.id,
+    name: r.name,
+    prefix: r.prefix,
+    createdAt: r.created_at,
+    lastUsedAt: r.last_used_at,
+    revokedAt: r.revoked_at,
+  }));
 }
 
 export async function revokePersonalToken({ vendorId, userId, id }: { vendorId: string; userId: string; id: string }) {
-  const count = await db("api_tokens").where({ vendor_id: vendorId, user_id: userId, id }).whereNull("revoked_at").update({ revoked_at: db.fn.now() });
+  const count = await db("api_tokens")
+    .where({ vendor_id: vendorId, user_id: userId, id })
+    .whereNull("revoked_at")
+    .update({ revoked_at: db.fn.now() });
   if (!count) throw new NotFound("No such active token.");
   await writeAudit({ vendorId, actorUserId: userId, action: "api_token.revoke", objectType: "api_token", objectId: id });
 }

@@ -6,8 +6,8 @@ import { readStoredOperations } from "@/lib/adapt/read-front-matter";
 import { readaptOperation } from "@/lib/adapt/readapt-operation";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
-import { wantsMailSql } from "@/lib/mail-preferences/mail-preferences";
 import type { EntryCapability, UnitSystem } from "@/lib/machining";
+import { wantsMailSql } from "@/lib/mail-preferences/mail-preferences";
 import { hasFrontMatter } from "@/lib/sheets/version-rows";
 
 import type { AlertSetup } from "./change-alert-mail";
@@ -16,10 +16,24 @@ import { machineToInput, rowToMachine } from "./machine-rows";
 // What a change alert needs about the setups saved from a superseded version: shared by the per-sheet alert and
 // the one-mail-per-customer alert of a family batch.
 
-export type SetupRow = { id: string; user_id: string; email: string; name: string; operation_index: number; overrides: Record<string, number>; units: UnitSystem; entry_capability: EntryCapability } & Parameters<typeof rowToMachine>[0] & { machine_name: string };
+export type SetupRow = {
+  id: string;
+  user_id: string;
+  email: string;
+  name: string;
+  operation_index: number;
+  overrides: Record<string, number>;
+  units: UnitSystem;
+  entry_capability: EntryCapability;
+} & Parameters<typeof rowToMachine>[0] & { machine_name: string };
 
 export function reAdapt(oldContext: AdaptContext, newContext: AdaptContext, row: SetupRow, setupUrl: string): AlertSetup {
-  const base = { setupName: row.name, machineName: row.machine_name, operationLabel: oldContext.operations[row.operation_index]?.label ?? "operation", setupUrl };
+  const base = {
+    setupName: row.name,
+    machineName: row.machine_name,
+    operationLabel: oldContext.operations[row.operation_index]?.label ?? "operation",
+    setupUrl,
+  };
   const machine = machineToInput(rowToMachine({ ...row, id: row.id, name: row.machine_name }));
   const setup = { overrides: row.overrides, entryCapability: row.entry_capability, units: row.units };
   const readapted = readaptOperation({ oldContext, newContext, operationIndex: row.operation_index, machine, setup });
@@ -35,7 +49,15 @@ export const frontMatterOf = async (vendorId: string, versionId: string) => {
 };
 
 /** Setups saved from a version, of customers who still take this kind of mail, ordered by person. */
-export async function listAlertSetups({ vendorId, supersededVersionId, kind = "change_alerts" }: { vendorId: string; supersededVersionId: string; kind?: "change_alerts" | "batch_changes" }): Promise<SetupRow[]> {
+export async function listAlertSetups({
+  vendorId,
+  supersededVersionId,
+  kind = "change_alerts",
+}: {
+  vendorId: string;
+  supersededVersionId: string;
+  kind?: "change_alerts" | "batch_changes";
+}): Promise<SetupRow[]> {
   return db("setups as st")
     .join("machines as m", function () {
       this.on("m.id", "st.machine_id").andOn("m.vendor_id", "st.vendor_id");
@@ -47,5 +69,26 @@ export async function listAlertSetups({ vendorId, supersededVersionId, kind = "c
     .where({ "st.vendor_id": vendorId, "st.sheet_version_id": supersededVersionId })
     .andWhere(wantsMailSql(kind, "st.user_id", "st.vendor_id"))
     .orderBy(["st.user_id", "st.created_at"])
-    .select("st.id", "st.user_id", "u.email", "st.name", "st.operation_index", "st.overrides", "st.units", "st.entry_capability", "m.name as machine_name", "m.preset", "m.rpm_min", "m.rpm_max", "m.power_kw", "m.max_feed_mm_min", "m.rigidity", "m.z_thrust_n", "m.spindle_kind", "m.rated_rpm", "m.stickout_mm", "m.updated_at");
+    .select(
+      "st.id",
+      "st.user_id",
+      "u.email",
+      "st.name",
+      "st.operation_index",
+      "st.overrides",
+      "st.units",
+      "st.entry_capability",
+      "m.name as machine_name",
+      "m.preset",
+      "m.rpm_min",
+      "m.rpm_max",
+      "m.power_kw",
+      "m.max_feed_mm_min",
+      "m.rigidity",
+      "m.z_thrust_n",
+      "m.spindle_kind",
+      "m.rated_rpm",
+      "m.stickout_mm",
+      "m.updated_at",
+    );
 }

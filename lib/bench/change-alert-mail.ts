@@ -1,12 +1,17 @@
+import { formatAdaptedChange, type AdaptedChange } from "@/lib/adapt/adapted-diff";
 import type { UnitSystem } from "@/lib/machining";
-import type { OperationDiff } from "@/lib/sheets/parameter-diff";
-import { formatParameterChange } from "@/lib/sheets/parameter-diff";
-
-import { type AdaptedChange, formatAdaptedChange } from "@/lib/adapt/adapted-diff";
+import { formatParameterChange, type OperationDiff } from "@/lib/sheets/parameter-diff";
 
 // Pure: the text and HTML of one change-alert e-mail.
 
-export type AlertSetup = { setupName: string; machineName: string; operationLabel: string; setupUrl: string; changes: AdaptedChange[]; error: string | null };
+export type AlertSetup = {
+  setupName: string;
+  machineName: string;
+  operationLabel: string;
+  setupUrl: string;
+  changes: AdaptedChange[];
+  error: string | null;
+};
 
 export type ChangeAlertMail = {
   vendorName: string;
@@ -27,14 +32,24 @@ function setupLines(s: AlertSetup, units: UnitSystem): string[] {
   const head = s.setupName.includes(s.machineName) ? s.setupName : `${s.setupName} (${s.operationLabel}, on ${s.machineName})`;
   if (s.error) return [head, `  Could not be re-adapted: ${s.error}`];
   if (!s.changes.length) return [head, "  Your adapted numbers stay the same."];
-  return [head, ...s.changes.map((c) => formatAdaptedChange(c, units)).map((c) => `  ${c.label}: ${c.before} → ${c.after}${c.percent ? ` (${c.percent})` : ""}`)];
+  return [
+    head,
+    ...s.changes
+      .map((c) => formatAdaptedChange(c, units))
+      .map((c) => `  ${c.label}: ${c.before} → ${c.after}${c.percent ? ` (${c.percent})` : ""}`),
+  ];
 }
 
 export function renderChangeAlert(m: ChangeAlertMail): { subject: string; text: string; html: string } {
   const subject = `${m.sheetTitle}: version ${m.newNumber} replaces version ${m.oldNumber}`;
   const sheetLines = m.sheetDiff
     .filter((op) => op.status !== "unchanged")
-    .flatMap((op) => [`${op.label} (${op.status})`, ...op.changes.map((c) => formatParameterChange(c, m.units)).map((c) => `  ${c.label}: ${c.before} → ${c.after}${c.percent ? ` (${c.percent})` : ""}`)]);
+    .flatMap((op) => [
+      `${op.label} (${op.status})`,
+      ...op.changes
+        .map((c) => formatParameterChange(c, m.units))
+        .map((c) => `  ${c.label}: ${c.before} → ${c.after}${c.percent ? ` (${c.percent})` : ""}`),
+    ]);
   const text = [
     `${m.vendorName} published version ${m.newNumber} of “${m.sheetTitle}”. You saved setups from version ${m.oldNumber}.`,
     m.changeNote ? `\nWhat the engineers say: ${m.changeNote}` : "",
@@ -47,7 +62,10 @@ export function renderChangeAlert(m: ChangeAlertMail): { subject: string; text: 
     `\nStop these e-mails: ${m.stopUrl}`,
   ].join("\n");
   const rows = (changes: AdaptedChange[]) =>
-    changes.map((c) => formatAdaptedChange(c, m.units)).map((c) => `<tr><td>${esc(c.label)}</td><td>${esc(c.before)}</td><td>${esc(c.after)}</td><td>${esc(c.percent)}</td></tr>`).join("");
+    changes
+      .map((c) => formatAdaptedChange(c, m.units))
+      .map((c) => `<tr><td>${esc(c.label)}</td><td>${esc(c.before)}</td><td>${esc(c.after)}</td><td>${esc(c.percent)}</td></tr>`)
+      .join("");
   const html = [
     `<p>${esc(m.vendorName)} published version ${m.newNumber} of “${esc(m.sheetTitle)}”. You saved setups from version ${m.oldNumber}.</p>`,
     m.changeNote ? `<p><strong>What the engineers say:</strong> ${esc(m.changeNote)}</p>` : "",

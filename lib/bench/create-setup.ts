@@ -1,13 +1,13 @@
 import "server-only";
 
 import type { SetupCreate } from "@/content-schema/setup-fields";
+import { adaptOperation } from "@/lib/adapt/adapt-context";
+import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 import { isMachiningInputError } from "@/lib/machining";
 
-import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { machineToInput } from "./machine-rows";
 import { getMachine } from "./machines";
 
@@ -18,17 +18,29 @@ const invalid = (field: string, message: string) => new InvalidInput("Please cor
  * The numbers are recomputed here from the stored sheet and machine: the client's are never trusted.
  */
 export async function createSetup({ vendorId, userId, input }: { vendorId: string; userId: string; input: SetupCreate }) {
-  const [context, machine] = await Promise.all([loadAdaptContext({ vendorId, versionId: input.versionId }), getMachine({ vendorId, userId, machineId: input.machineId })]);
+  const [context, machine] = await Promise.all([
+    loadAdaptContext({ vendorId, versionId: input.versionId }),
+    getMachine({ vendorId, userId, machineId: input.machineId }),
+  ]);
   if (!context || context.versionState === "withdrawn") throw invalid("versionId", "That sheet version is not available.");
   if (!machine) throw invalid("machineId", "Choose one of your machines.");
   if (!context.operations[input.operationIndex]) throw invalid("operationIndex", "The sheet has no such operation.");
   const overrides = { radialDepthMm: input.radialDepthMm, axialDepthMm: input.axialDepthMm, stickoutMm: input.stickoutMm };
   let result;
   try {
-    result = adaptOperation(context, input.operationIndex, machineToInput(machine), overrides, { entryCapability: input.entryCapability, units: input.units });
+    result = adaptOperation(context, input.operationIndex, machineToInput(machine), overrides, {
+      entryCapability: input.entryCapability,
+      units: input.units,
+    });
   } catch (error) {
     if (!isMachiningInputError(error)) throw error;
-    const field = error.field.startsWith("overrides.radial") ? "radialDepthMm" : error.field.startsWith("overrides.axial") ? "axialDepthMm" : error.field.startsWith("overrides.stick") ? "stickoutMm" : "machineId";
+    const field = error.field.startsWith("overrides.radial")
+      ? "radialDepthMm"
+      : error.field.startsWith("overrides.axial")
+        ? "axialDepthMm"
+        : error.field.startsWith("overrides.stick")
+          ? "stickoutMm"
+          : "machineId";
     throw invalid(field, error.message);
   }
   const op = context.operations[input.operationIndex];
@@ -47,6 +59,13 @@ export async function createSetup({ vendorId, userId, input }: { vendorId: strin
       entry_capability: input.entryCapability,
     })
     .returning(["id"]);
-  await writeAudit({ vendorId, actorUserId: userId, action: "setup.create", objectType: "setup", objectId: row.id, details: { sheetVersionId: context.versionId, machineId: machine.id, entryCapability: input.entryCapability } });
+  await writeAudit({
+    vendorId,
+    actorUserId: userId,
+    action: "setup.create",
+    objectType: "setup",
+    objectId: row.id,
+    details: { sheetVersionId: context.versionId, machineId: machine.id, entryCapability: input.entryCapability },
+  });
   return { id: row.id as string, result };
 }

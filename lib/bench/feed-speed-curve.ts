@@ -23,13 +23,27 @@ type Options = {
   steps?: number;
 };
 
-export function feedSpeedCurve({ machine, diameterMm, flutes, chipLoadMm, minChipLoadMm, vcWindowMpm, adapted, units, steps = 40 }: Options): FeedSpeedCurve {
+export function feedSpeedCurve({
+  machine,
+  diameterMm,
+  flutes,
+  chipLoadMm,
+  minChipLoadMm,
+  vcWindowMpm,
+  adapted,
+  units,
+  steps = 40,
+}: Options): FeedSpeedCurve {
   const show = (mmMin: number) => (units === "imperial" ? mmMinToInMin(mmMin) : mmMin);
   const span = machine.maxRpm - machine.minRpm;
   const points = Array.from({ length: span > 0 ? steps + 1 : 1 }, (_, i) => {
     const rpm = machine.minRpm + (span * i) / steps;
     // vf = fz·z·n, held at the machine's feed limit; below fz_min·z·n the cutter rubs.
-    return { rpm: Math.round(rpm), feed: show(Math.min(chipLoadMm * flutes * rpm, machine.maxFeedMmMin)), rubbing: show(minChipLoadMm * flutes * rpm) };
+    return {
+      rpm: Math.round(rpm),
+      feed: show(Math.min(chipLoadMm * flutes * rpm, machine.maxFeedMmMin)),
+      rubbing: show(minChipLoadMm * flutes * rpm),
+    };
   });
   // n = 1000·vc / (π·D)
   const rpmAt = (vc: number) => (1000 * vc) / (Math.PI * diameterMm);

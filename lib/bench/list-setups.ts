@@ -18,7 +18,15 @@ export type SetupSummary = Setup & {
 };
 
 /** A customer's setups in one vendor, newest first, each with its last outcome and any newer version. */
-export async function listSetups({ vendorId, userId, setupId }: { vendorId: string; userId: string; setupId?: string }): Promise<SetupSummary[]> {
+export async function listSetups({
+  vendorId,
+  userId,
+  setupId,
+}: {
+  vendorId: string;
+  userId: string;
+  setupId?: string;
+}): Promise<SetupSummary[]> {
   const query = db("setups as st")
     .join("machines as m", function () {
       this.on("m.id", "st.machine_id").andOn("m.vendor_id", "st.vendor_id");
@@ -36,7 +44,18 @@ export async function listSetups({ vendorId, userId, setupId }: { vendorId: stri
     )
     .where({ "st.vendor_id": vendorId, "st.user_id": userId })
     .orderBy("st.created_at", "desc")
-    .select([...SETUP_COLUMNS, "m.name as machine_name", "s.slug as sheet_slug", "v.title as sheet_title", "v.number as version_number", "v.state as version_state", "cur.number as current_number", "lo.result as lo_result", "lo.symptom as lo_symptom", "lo.created_at as lo_created_at"]);
+    .select([
+      ...SETUP_COLUMNS,
+      "m.name as machine_name",
+      "s.slug as sheet_slug",
+      "v.title as sheet_title",
+      "v.number as version_number",
+      "v.state as version_state",
+      "cur.number as current_number",
+      "lo.result as lo_result",
+      "lo.symptom as lo_symptom",
+      "lo.created_at as lo_created_at",
+    ]);
   if (setupId) query.andWhere("st.id", setupId);
   const rows = await query;
   return rows.map((row) => ({
@@ -47,7 +66,9 @@ export async function listSetups({ vendorId, userId, setupId }: { vendorId: stri
     versionNumber: row.version_number,
     versionState: row.version_state,
     newerVersionNumber: row.current_number !== null && row.current_number > row.version_number ? row.current_number : null,
-    lastOutcome: row.lo_result ? { result: row.lo_result, symptom: row.lo_symptom, createdAt: new Date(row.lo_created_at).toISOString() } : null,
+    lastOutcome: row.lo_result
+      ? { result: row.lo_result, symptom: row.lo_symptom, createdAt: new Date(row.lo_created_at).toISOString() }
+      : null,
   }));
 }
 

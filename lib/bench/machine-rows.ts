@@ -1,8 +1,6 @@
 import type { SpindleKindKey } from "@/content-schema/spindle-kind";
-import type { MachineRow } from "@/lib/db/tables";
-
 import type { BenchMachineInput } from "@/lib/adapt/adapt-context";
-
+import type { MachineRow } from "@/lib/db/tables";
 
 /** A customer's machine in metric machining units. */
 export type Machine = {
@@ -23,7 +21,22 @@ export type Machine = {
   updatedAt: string;
 };
 
-export const MACHINE_COLUMNS = ["id", "name", "preset", "rpm_min", "rpm_max", "power_kw", "max_feed_mm_min", "rigidity", "z_thrust_n", "spindle_kind", "rated_rpm", "stickout_mm", "units", "updated_at"] as const satisfies readonly (keyof MachineRow)[];
+export const MACHINE_COLUMNS = [
+  "id",
+  "name",
+  "preset",
+  "rpm_min",
+  "rpm_max",
+  "power_kw",
+  "max_feed_mm_min",
+  "rigidity",
+  "z_thrust_n",
+  "spindle_kind",
+  "rated_rpm",
+  "stickout_mm",
+  "units",
+  "updated_at",
+] as const satisfies readonly (keyof MachineRow)[];
 
 export function rowToMachine(row: Pick<MachineRow, (typeof MACHINE_COLUMNS)[number]>): Machine {
   return {
@@ -45,7 +58,9 @@ export function rowToMachine(row: Pick<MachineRow, (typeof MACHINE_COLUMNS)[numb
 }
 
 /** The engine's machine input (and the usual stick-out) from a stored machine. */
-export function machineToInput(m: Pick<Machine, "rpmMin" | "rpmMax" | "powerKw" | "maxFeedMmMin" | "rigidity" | "zThrustN" | "spindleKind" | "ratedRpm" | "stickoutMm">): BenchMachineInput {
+export function machineToInput(
+  m: Pick<Machine, "rpmMin" | "rpmMax" | "powerKw" | "maxFeedMmMin" | "rigidity" | "zThrustN" | "spindleKind" | "ratedRpm" | "stickoutMm">,
+): BenchMachineInput {
   return {
     minRpm: m.rpmMin,
     maxRpm: m.rpmMax,

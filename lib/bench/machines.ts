@@ -7,7 +7,7 @@ import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { drainUploadDeletions, queueUploadDeletions } from "@/lib/storage/cleanup-uploads";
 
-import { MACHINE_COLUMNS, type Machine, rowToMachine } from "./machine-rows";
+import { MACHINE_COLUMNS, rowToMachine, type Machine } from "./machine-rows";
 
 type Owner = { vendorId: string; userId: string };
 
@@ -15,11 +15,17 @@ type Owner = { vendorId: string; userId: string };
 const owned = ({ vendorId, userId }: Owner) => db("machines").where({ vendor_id: vendorId, user_id: userId });
 
 export async function listMachines(owner: Owner): Promise<Machine[]> {
-  return (await owned(owner).orderBy("name").select(...MACHINE_COLUMNS)).map(rowToMachine);
+  return (
+    await owned(owner)
+      .orderBy("name")
+      .select(...MACHINE_COLUMNS)
+  ).map(rowToMachine);
 }
 
 export async function getMachine(owner: Owner & { machineId: string }): Promise<Machine | null> {
-  const row = await owned(owner).andWhere({ id: owner.machineId }).first(...MACHINE_COLUMNS);
+  const row = await owned(owner)
+    .andWhere({ id: owner.machineId })
+    .first(...MACHINE_COLUMNS);
   return row ? rowToMachine(row) : null;
 }
 
@@ -39,18 +45,39 @@ const toRow = (f: MachineFields) => ({
 });
 
 export async function createMachine({ vendorId, userId, fields }: Owner & { fields: MachineFields }): Promise<Machine> {
-  const [row] = await db("machines").insert({ vendor_id: vendorId, user_id: userId, ...toRow(fields) }).returning([...MACHINE_COLUMNS]);
-  await writeAudit({ vendorId, actorUserId: userId, action: "machine.create", objectType: "machine", objectId: row.id, details: { name: fields.name } });
+  const [row] = await db("machines")
+    .insert({ vendor_id: vendorId, user_id: userId, ...toRow(fields) })
+    .returning([...MACHINE_COLUMNS]);
+  await writeAudit({
+    vendorId,
+    actorUserId: userId,
+    action: "machine.create",
+    objectType: "machine",
+    objectId: row.id,
+    details: { name: fields.name },
+  });
   return rowToMachine(row);
 }
 
-export async function updateMachine({ vendorId, userId, machineId, fields }: Owner & { machineId: string; fields: MachineFields }): Promise<Machine> {
+export async function updateMachine({
+  vendorId,
+  userId,
+  machineId,
+  fields,
+}: Owner & { machineId: string; fields: MachineFields }): Promise<Machine> {
   const [row] = await owned({ vendorId, userId })
     .andWhere({ id: machineId })
     .update({ ...toRow(fields), updated_at: db.fn.now() })
     .returning([...MACHINE_COLUMNS]);
   if (!row) throw new NotFound("That machine was not found.");
-  await writeAudit({ vendorId, actorUserId: userId, action: "machine.update", objectType: "machine", objectId: machineId, details: { name: fields.name } });
+  await writeAudit({
+    vendorId,
+    actorUserId: userId,
+    action: "machine.update",
+    objectType: "machine",
+    objectId: machineId,
+    details: { name: fields.name },
+  });
   return rowToMachine(row);
 }
 
@@ -66,9 +93,13 @@ export async function deleteMachine({ vendorId, userId, machineId }: Owner & { m
     const count = await trx("machines").where({ vendor_id: vendorId, user_id: userId, id: machineId }).delete();
     if (!count) throw new NotFound("That machine was not found.");
     await queueUploadDeletions(trx, keys);
-    await writeAudit({ vendorId, actorUserId: userId, action: "machine.delete", objectType: "machine", objectId: machineId, details: {} }, trx);
+    await writeAudit(
+      { vendorId, actorUserId: userId, action: "machine.delete", objectType: "machine", objectId: machineId, details: {} },
+      trx,
+    );
     return keys;
   });
   // Right away when storage answers; the hourly cleanup retries what it did not.
-  if (photoKeys.length) await drainUploadDeletions({ keys: photoKeys }).catch((error: unknown) => console.warn("[uploads] photo deletion deferred", error));
+  if (photoKeys.length)
+    await drainUploadDeletions({ keys: photoKeys }).catch((error: unknown) => console.warn("[uploads] photo deletion deferred", error));
 }

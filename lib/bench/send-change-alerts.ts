@@ -3,14 +3,14 @@ import "server-only";
 import { db } from "@/lib/db/knex";
 import type { SheetEvent } from "@/lib/events/sheet-events";
 import { appUrl } from "@/lib/http/app-url";
-import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { mailFooter, withFooter } from "@/lib/mail-preferences/preferences-link";
+import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 
+import { loadAdaptContext } from "../adapt/load-adapt-context";
 import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "./alert-setups";
 import { createAlertStopToken } from "./alert-token";
 import { renderChangeAlert } from "./change-alert-mail";
-import { loadAdaptContext } from "../adapt/load-adapt-context";
 
 /**
  * On a supersession, one e-mail per customer with setups on the old version, re-adapted to their machines.
@@ -35,21 +35,30 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
   let sent = 0;
   for (const [userId, setups] of byUser) {
     const units = setups[0].units;
-    const mail = withFooter(renderChangeAlert({
-      vendorName: vendor.name,
-      sheetTitle: newCtx.title,
-      oldNumber: oldCtx.versionNumber,
-      newNumber: newCtx.versionNumber,
-      changeNote: after.changeNote,
-      versionUrl: appUrl(`/${vendor.slug}/library/${newCtx.sheetSlug}/v/${newCtx.versionNumber}`),
-      stopUrl: appUrl(`/api/v1/vendors/${vendor.slug}/setups/alerts/stop?token=${createAlertStopToken({ vendorId, userId })}`),
-      units,
-      sheetDiff,
-      setups: setups.map((s) => reAdapt(oldCtx, newCtx, s, appUrl(`/${vendor.slug}/bench/setups/${s.id}`))),
-    }), mailFooter(vendor.slug, vendor.name, { vendorId, userId }));
+    const mail = withFooter(
+      renderChangeAlert({
+        vendorName: vendor.name,
+        sheetTitle: newCtx.title,
+        oldNumber: oldCtx.versionNumber,
+        newNumber: newCtx.versionNumber,
+        changeNote: after.changeNote,
+        versionUrl: appUrl(`/${vendor.slug}/library/${newCtx.sheetSlug}/v/${newCtx.versionNumber}`),
+        stopUrl: appUrl(`/api/v1/vendors/${vendor.slug}/setups/alerts/stop?token=${createAlertStopToken({ vendorId, userId })}`),
+        units,
+        sheetDiff,
+        setups: setups.map((s) => reAdapt(oldCtx, newCtx, s, appUrl(`/${vendor.slug}/bench/setups/${s.id}`))),
+      }),
+      mailFooter(vendor.slug, vendor.name, { vendorId, userId }),
+    );
     await db.transaction(async (trx) => {
       const inserted = await trx("change_alerts_sent")
-        .insert({ vendor_id: vendorId, version_id: versionId, superseded_version_id: supersededVersionId, user_id: userId, setup_count: setups.length })
+        .insert({
+          vendor_id: vendorId,
+          version_id: versionId,
+          superseded_version_id: supersededVersionId,
+          user_id: userId,
+          setup_count: setups.length,
+        })
         .onConflict(["version_id", "user_id"])
         .ignore()
         .returning("user_id");

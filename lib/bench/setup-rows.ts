@@ -15,9 +15,31 @@ export type Setup = {
   createdAt: string;
 };
 
-export const SETUP_COLUMNS = ["st.id", "st.name", "st.machine_id", "st.sheet_version_id", "st.operation_index", "st.overrides", "st.result", "st.units", "st.entry_capability", "st.created_at"];
+export const SETUP_COLUMNS = [
+  "st.id",
+  "st.name",
+  "st.machine_id",
+  "st.sheet_version_id",
+  "st.operation_index",
+  "st.overrides",
+  "st.result",
+  "st.units",
+  "st.entry_capability",
+  "st.created_at",
+];
 
-type Row = { id: string; name: string; machine_id: string; sheet_version_id: string; operation_index: number; overrides: SetupOverrides; result: AdaptResult; units: UnitSystem; entry_capability: EntryCapability; created_at: Date };
+type Row = {
+  id: string;
+  name: string;
+  machine_id: string;
+  sheet_version_id: string;
+  operation_index: number;
+  overrides: SetupOverrides;
+  result: AdaptResult;
+  units: UnitSystem;
+  entry_capability: EntryCapability;
+  created_at: Date;
+};
 
 export const rowToSetup = (row: Row): Setup => ({
   id: row.id,

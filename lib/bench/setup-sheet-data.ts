@@ -1,8 +1,6 @@
-import { type AdaptResult, formatNumber, formatQuantity, QUANTITIES, RULES, type UnitSystem, WARNING_CODES } from "@/lib/machining";
-
 import type { SetupOverrides } from "@/content-schema/setup-fields";
-
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
+import { formatNumber, formatQuantity, QUANTITIES, RULES, WARNING_CODES, type AdaptResult, type UnitSystem } from "@/lib/machining";
 
 // Pure: the numbers of one setup laid out for its PDF sheet and its CSV export, in the chosen units.
 
@@ -66,8 +64,10 @@ export function describeOverrides(overrides: SetupOverrides | undefined, units: 
 
 /** How to enter the material: the engine's ramp advice when it gave one, else the sheet's plunge feed. */
 export function entryMethod(result: AdaptResult, units: UnitSystem): string {
-  if (result.warnings.some((w) => w.code === "ramp-entry-recommended")) return "Ramp or helical entry; no straight plunge with this cutter.";
-  if (result.plungeFeedMmMin !== null) return `Straight plunge at ${formatQuantity(result.plungeFeedMmMin, "feedRate", units)}, or ramp in.`;
+  if (result.warnings.some((w) => w.code === "ramp-entry-recommended"))
+    return "Ramp or helical entry; no straight plunge with this cutter.";
+  if (result.plungeFeedMmMin !== null)
+    return `Straight plunge at ${formatQuantity(result.plungeFeedMmMin, "feedRate", units)}, or ramp in.`;
   return "The sheet gives no plunge feed: enter from outside the part or ramp in.";
 }
 
@@ -77,7 +77,16 @@ export function noStepsNote(changedCount: number, hasOverrides: boolean): string
   return "No rule changed a number: the sheet runs as written on this machine.";
 }
 
-export function setupSheetData({ context, operationIndex, result, setupName, machineName, units, overrides, machineStickoutMm }: Input): SetupSheetData {
+export function setupSheetData({
+  context,
+  operationIndex,
+  result,
+  setupName,
+  machineName,
+  units,
+  overrides,
+  machineStickoutMm,
+}: Input): SetupSheetData {
   const op = context.operations[operationIndex];
   const d = context.cutter.diameterMm;
   const row = (symbol: string, label: string, kind: keyof typeof QUANTITIES, sheet: number | null, adapted: number | null): SheetRow => ({
@@ -122,8 +131,12 @@ export function setupSheetData({ context, operationIndex, result, setupName, mac
         : `${formatQuantity(stickoutMm, "length", units)}${overrides?.stickoutMm !== undefined ? " (your change)" : " (the machine's usual)"}`,
     entryMethod: entryMethod(result, units),
     noStepsNote: noStepsNote(rows.filter((r) => r.changed).length, yourChanges.length > 0),
-    steps: result.steps.map((s) => `${title(s.rule)}: ${formatQuantity(s.before, s.quantity, units)} → ${formatQuantity(s.after, s.quantity, units)}. ${s.why}`),
-    warnings: result.warnings.filter((w) => w.code !== "standard-cautions").map((w) => `${WARNING_CODES[w.code]?.title ?? w.code}: ${w.message}`),
+    steps: result.steps.map(
+      (s) => `${title(s.rule)}: ${formatQuantity(s.before, s.quantity, units)} → ${formatQuantity(s.after, s.quantity, units)}. ${s.why}`,
+    ),
+    warnings: result.warnings
+      .filter((w) => w.code !== "standard-cautions")
+      .map((w) => `${WARNING_CODES[w.code]?.title ?? w.code}: ${w.message}`),
     cautions: [
       ...context.cautions.map((c) => c.text),
       "Starting points only. Wear eye and hearing protection, use dust extraction, never leave a cut unattended, and follow your machine maker's limits.",

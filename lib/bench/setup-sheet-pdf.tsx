@@ -9,7 +9,14 @@ import type { SetupSheetData } from "./setup-sheet-data";
 const s = {
   ...pdfBase,
   ...StyleSheet.create({
-    header: { flexDirection: "row", justifyContent: "space-between", borderBottomWidth: 2, borderBottomColor: "#292524", paddingBottom: 8, marginBottom: 10 },
+    header: {
+      flexDirection: "row",
+      justifyContent: "space-between",
+      borderBottomWidth: 2,
+      borderBottomColor: "#292524",
+      paddingBottom: 8,
+      marginBottom: 10,
+    },
     c1: { width: "40%" },
     c2: { width: "30%", textAlign: "right" },
     c3: { width: "30%", textAlign: "right", fontWeight: "bold" },
@@ -48,17 +55,41 @@ function SetupSheet({ data, qr, url, vendorName }: { data: SetupSheetData; qr: s
         <Text style={{ marginTop: 6 }}>{t(`Stick-out: ${data.stickout}`)}</Text>
         <Text>{t(`Entry: ${data.entryMethod}`)}</Text>
         <Text style={s.h2}>Your changes</Text>
-        {data.yourChanges.length ? data.yourChanges.map((line, i) => <Text key={i} style={s.li}>{t(`- ${line}`)}</Text>) : <Text>{t("None: the sheet's own depths and the machine's usual stick-out.")}</Text>}
+        {data.yourChanges.length ? (
+          data.yourChanges.map((line, i) => (
+            <Text key={i} style={s.li}>
+              {t(`- ${line}`)}
+            </Text>
+          ))
+        ) : (
+          <Text>{t("None: the sheet's own depths and the machine's usual stick-out.")}</Text>
+        )}
         <Text style={s.h2}>How the numbers were adapted</Text>
-        {data.steps.length ? data.steps.map((step, i) => <Text key={i} style={s.li}>{t(`${i + 1}. ${step}`)}</Text>) : <Text>{t(data.noStepsNote)}</Text>}
+        {data.steps.length ? (
+          data.steps.map((step, i) => (
+            <Text key={i} style={s.li}>
+              {t(`${i + 1}. ${step}`)}
+            </Text>
+          ))
+        ) : (
+          <Text>{t(data.noStepsNote)}</Text>
+        )}
         {data.warnings.length ? (
           <>
             <Text style={s.h2}>Warnings</Text>
-            {data.warnings.map((w, i) => <Text key={i} style={s.li}>{t(`! ${w}`)}</Text>)}
+            {data.warnings.map((w, i) => (
+              <Text key={i} style={s.li}>
+                {t(`! ${w}`)}
+              </Text>
+            ))}
           </>
         ) : null}
         <Text style={s.h2}>Cautions</Text>
-        {data.cautions.map((c, i) => <Text key={i} style={s.li}>{t(`- ${c}`)}</Text>)}
+        {data.cautions.map((c, i) => (
+          <Text key={i} style={s.li}>
+            {t(`- ${c}`)}
+          </Text>
+        ))}
         <Text style={[s.muted, { marginTop: 12 }]}>{t(`Sheet version: ${url}`)}</Text>
       </Page>
     </Document>
@@ -66,7 +97,15 @@ function SetupSheet({ data, qr, url, vendorName }: { data: SetupSheetData; qr: s
 }
 
 /** A one-page PDF for the machine: numbers in the setup's units, steps, cautions, QR code to the sheet version. */
-export async function renderSetupSheetPdf({ data, versionUrl, vendorName }: { data: SetupSheetData; versionUrl: string; vendorName: string }): Promise<Buffer> {
+export async function renderSetupSheetPdf({
+  data,
+  versionUrl,
+  vendorName,
+}: {
+  data: SetupSheetData;
+  versionUrl: string;
+  vendorName: string;
+}): Promise<Buffer> {
   const qr = await qrDataUrl(versionUrl);
   return renderToBuffer(<SetupSheet data={data} qr={qr} url={versionUrl} vendorName={vendorName} />);
 }

@@ -1,7 +1,6 @@
 import type { CutterFields } from "@/content-schema/catalogue-cutter";
 import type { MachineClassFields } from "@/content-schema/catalogue-machine-class";
 import type { MaterialFields } from "@/content-schema/catalogue-material";
-
 import type { CutterRow, MachineClassRow, MaterialRow } from "@/lib/db/tables";
 
 import type { Cutter, MachineClass, Material } from "./catalogue-types";

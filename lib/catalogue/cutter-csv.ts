@@ -8,7 +8,9 @@ export type CellError = { column: string; message: string };
 export type CutterCsvRow = { row: number; line: number; sku: string; fields?: CutterFields; errors: CellError[] };
 export type CutterCsvReport = { fileErrors: string[]; rows: CutterCsvRow[] };
 
-const FIELD_BY_COLUMN = new Map<string, Field>(Object.entries(cutterCsvColumns).map(([field, column]) => [column, field as Field] as const));
+const FIELD_BY_COLUMN = new Map<string, Field>(
+  Object.entries(cutterCsvColumns).map(([field, column]) => [column, field as Field] as const),
+);
 
 /** Parses and checks a cutter CSV without touching the database; shared by the preview and the import. */
 export function checkCutterCsv(text: string, existingSkus: Iterable<string> = []): CutterCsvReport {

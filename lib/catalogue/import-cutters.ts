@@ -5,13 +5,20 @@ import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 
 import { checkCutterCsv, formatCellError, type CutterCsvReport } from "./cutter-csv";
+import type { ImportMode } from "./import-cutters-types";
 import { insertCutter } from "./save-cutter";
 
 export type { ImportMode } from "./import-cutters-types";
-import type { ImportMode } from "./import-cutters-types";
+
 export type ImportResult = { imported: number; skipped: number; report: CutterCsvReport };
 
-type Options = { vendorId: string; userId: string | null; csv: string; mode: ImportMode; onProgress?: (done: number, total: number) => void };
+type Options = {
+  vendorId: string;
+  userId: string | null;
+  csv: string;
+  mode: ImportMode;
+  onProgress?: (done: number, total: number) => void;
+};
 
 /**
  * Imports cutters from CSV in one transaction. "all-or-nothing" refuses the whole file when any row
@@ -33,7 +40,16 @@ export async function importCutters({ vendorId, userId, csv, mode, onProgress }:
       await insertCutter({ vendorId, userId, fields: row.fields!, trx });
       onProgress?.(index + 1, good.length);
     }
-    await writeAudit({ vendorId, actorUserId: userId, action: "cutter.import", objectType: "cutter", details: { imported: good.length, skipped: bad.length, mode } }, trx);
+    await writeAudit(
+      {
+        vendorId,
+        actorUserId: userId,
+        action: "cutter.import",
+        objectType: "cutter",
+        details: { imported: good.length, skipped: bad.length, mode },
+      },
+      trx,
+    );
   });
   return { imported: good.length, skipped: bad.length, report };
 }

@@ -31,7 +31,8 @@ export function parseCsv(input: string): CsvResult {
       const startLine = line;
       i++;
       for (;;) {
-        if (i >= text.length) return { ok: false, error: { line: startLine, column: cells.length + 1, message: "A quoted cell is never closed." } };
+        if (i >= text.length)
+          return { ok: false, error: { line: startLine, column: cells.length + 1, message: "A quoted cell is never closed." } };
         if (text[i] === '"') {
           if (text[i + 1] === '"') {
             cell += '"';
@@ -46,13 +47,24 @@ export function parseCsv(input: string): CsvResult {
       }
       const next = text[i];
       if (next !== undefined && next !== "," && next !== "\n" && !(next === "\r" && text[i + 1] === "\n")) {
-        return { ok: false, error: { line, column: cells.length + 1, message: "Text after a closing quote; write a quote inside a quoted cell as two quotes (\"\")." } };
+        return {
+          ok: false,
+          error: {
+            line,
+            column: cells.length + 1,
+            message: 'Text after a closing quote; write a quote inside a quoted cell as two quotes ("").',
+          },
+        };
       }
       // Mark the cell as quoted-complete so a following quote is not taken as an opening one.
       if (next === undefined) break;
       continue;
     }
-    if (ch === '"') return { ok: false, error: { line, column: cells.length + 1, message: "A quote inside an unquoted cell; quote the whole cell and double the quote." } };
+    if (ch === '"')
+      return {
+        ok: false,
+        error: { line, column: cells.length + 1, message: "A quote inside an unquoted cell; quote the whole cell and double the quote." },
+      };
     if (ch === ",") {
       endCell();
       i++;

@@ -11,9 +11,21 @@ import { checkImage } from "./check-image";
 import { deleteImage, putImage } from "./image-store";
 
 /** Stores a new picture for a cutter (checked by content) and drops the old one. */
-export async function setCutterImage({ vendorId, userId, cutterId, bytes }: { vendorId: string; userId: string; cutterId: string; bytes: Uint8Array }) {
+export async function setCutterImage({
+  vendorId,
+  userId,
+  cutterId,
+  bytes,
+}: {
+  vendorId: string;
+  userId: string;
+  cutterId: string;
+  bytes: Uint8Array;
+}) {
   const contentType = await checkImage(bytes);
-  const cutter = await db("cutters").where({ vendor_id: vendorId, id: cutterId }).first<{ image_key: string | null } | undefined>("image_key");
+  const cutter = await db("cutters")
+    .where({ vendor_id: vendorId, id: cutterId })
+    .first<{ image_key: string | null } | undefined>("image_key");
   if (!cutter) throw new NotFound("No such cutter.");
   const key = `cutters/${cutterId}/${randomBytes(6).toString("hex")}`;
   await putImage({ vendorId, key, image: { contentType, bytes: Buffer.from(bytes) } });
@@ -21,6 +33,13 @@ export async function setCutterImage({ vendorId, userId, cutterId, bytes }: { ve
   // The Library shows the picture on the cutter card of its cached pages.
   invalidateLibrary({ vendorId });
   if (cutter.image_key) await deleteImage({ vendorId, key: cutter.image_key });
-  await writeAudit({ vendorId, actorUserId: userId, action: "cutter.image", objectType: "cutter", objectId: cutterId, details: { contentType, bytes: bytes.byteLength } });
+  await writeAudit({
+    vendorId,
+    actorUserId: userId,
+    action: "cutter.image",
+    objectType: "cutter",
+    objectId: cutterId,
+    details: { contentType, bytes: bytes.byteLength },
+  });
   return { key, contentType };
 }

@@ -54,7 +54,11 @@ async function measure(url: string): Promise<ReplicaState> {
 
 type Cache = { url?: string; state: ReplicaState; at: number; pending?: Promise<ReplicaState>; pools: Map<string, Knex> };
 const globalForReplica = globalThis as unknown as { swarfbookReplica?: Cache };
-const cache: Cache = (globalForReplica.swarfbookReplica ??= { state: { configured: false, usable: false, lagSeconds: null, checkedAt: null }, at: 0, pools: new Map() });
+const cache: Cache = (globalForReplica.swarfbookReplica ??= {
+  state: { configured: false, usable: false, lagSeconds: null, checkedAt: null },
+  at: 0,
+  pools: new Map(),
+});
 
 /** The replica's lag and whether reads may use it; measured at most every 1.5 s per process, never per query. */
 export async function replicaState(): Promise<ReplicaState> {
@@ -105,7 +109,8 @@ function withPrimaryFallback(replica: Knex, primary: Knex): Knex {
       return connection;
     }
   };
-  client.releaseConnection = (connection: object) => (borrowed.delete(connection) ? primary.client.releaseConnection(connection) : release(connection));
+  client.releaseConnection = (connection: object) =>
+    borrowed.delete(connection) ? primary.client.releaseConnection(connection) : release(connection);
   client.query = async (connection: object, statement: unknown) => {
     // The query step rewrites placeholders in place; keep the original for a second run.
     const original = statement && typeof statement === "object" ? { ...statement } : statement;
@@ -132,7 +137,11 @@ export function replicaDb(): Knex | null {
   let pool = cache.pools.get(url);
   if (!pool) {
     pool = withPrimaryFallback(
-      knexFactory({ ...knexConfig(url), connection: { connectionString: url, connectionTimeoutMillis: 1000 }, acquireConnectionTimeout: 2000 }),
+      knexFactory({
+        ...knexConfig(url),
+        connection: { connectionString: url, connectionTimeoutMillis: 1000 },
+        acquireConnectionTimeout: 2000,
+      }),
       db,
     );
     cache.pools.set(url, pool);

@@ -11,8 +11,8 @@ import type { SheetState } from "@/content-schema/sheet-workflow";
 import type { SpindleKindKey } from "@/content-schema/spindle-kind";
 import type { MessageVisibility, TicketPriority, TicketStatus } from "@/content-schema/ticket-status";
 import type { Role } from "@/lib/auth/roles";
-import type { MailKind } from "@/lib/mail-preferences/mail-kinds";
 import type { UnitSystem } from "@/lib/machining/quantities";
+import type { MailKind } from "@/lib/mail-preferences/mail-kinds";
 
 export interface ApiTokenRow {
   id: string;
@@ -496,7 +496,9 @@ export interface VerificationTokenRow {
 }
 
 /** The insert shape of a table keyed by a date: the day as text, defaulted columns optional. */
-type DayKeyed<Row, Day extends keyof Row, Defaulted extends keyof Row> = Omit<Row, Day | Defaulted> & Record<Day, string> & Partial<Pick<Row, Defaulted>>;
+type DayKeyed<Row, Day extends keyof Row, Defaulted extends keyof Row> = Omit<Row, Day | Defaulted> &
+  Record<Day, string> &
+  Partial<Pick<Row, Defaulted>>;
 
 declare module "knex/types/tables" {
   interface Tables {
@@ -528,7 +530,10 @@ declare module "knex/types/tables" {
     search_documents: SearchDocumentRow;
     search_words: SearchWordRow;
     setups: SetupRow;
-    sheet_version_activity: Knex.CompositeTableType<SheetVersionActivityRow, DayKeyed<SheetVersionActivityRow, "day", "views" | "adaptations">>;
+    sheet_version_activity: Knex.CompositeTableType<
+      SheetVersionActivityRow,
+      DayKeyed<SheetVersionActivityRow, "day", "views" | "adaptations">
+    >;
     sheet_versions: SheetVersionRow;
     sheets: SheetRow;
     ticket_attachments: TicketAttachmentRow;

@@ -5,8 +5,23 @@ export const DATABASE_UNAVAILABLE_DIGEST = "SWARFBOOK_DATABASE_UNAVAILABLE";
 export const RETRY_AFTER_SECONDS = 5;
 
 // Connection refused/reset/timed out; Postgres shutting down (57P01-57P03) or refusing connections (08xxx).
-const CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "ENOTFOUND", "57P01", "57P02", "57P03", "08000", "08001", "08003", "08004", "08006"]);
-const MESSAGES = /Connection terminated|Timeout acquiring a connection|the database system is (starting up|shutting down|in recovery mode)|Client has encountered a connection error|connect ECONNREFUSED/i;
+const CODES = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "ETIMEDOUT",
+  "EPIPE",
+  "ENOTFOUND",
+  "57P01",
+  "57P02",
+  "57P03",
+  "08000",
+  "08001",
+  "08003",
+  "08004",
+  "08006",
+]);
+const MESSAGES =
+  /Connection terminated|Timeout acquiring a connection|the database system is (starting up|shutting down|in recovery mode)|Client has encountered a connection error|connect ECONNREFUSED/i;
 
 /** Whether an error means "the database is not reachable right now" rather than a fault in the request. */
 export function isDatabaseUnavailable(error: unknown, depth = 0): boolean {

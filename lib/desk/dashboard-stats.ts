@@ -13,8 +13,19 @@ export type DeskDashboard = {
 /** Open counts, the median first-response time (last 90 days) and tickets per linked sheet version. */
 export async function getDeskDashboard({ vendorId }: { vendorId: string }): Promise<DeskDashboard> {
   const [byStatus, overdue, median, perVersion] = await Promise.all([
-    db("tickets").where({ vendor_id: vendorId }).whereNot("status", "closed").groupBy("status").select("status").count<{ status: string; count: string }[]>("* as count"),
-    db("tickets").where({ vendor_id: vendorId }).whereNot("status", "closed").whereNull("first_response_at").where("first_response_due_at", "<", db.fn.now()).count<{ count: string }[]>("* as count").first(),
+    db("tickets")
+      .where({ vendor_id: vendorId })
+      .whereNot("status", "closed")
+      .groupBy("status")
+      .select("status")
+      .count<{ status: string; count: string }[]>("* as count"),
+    db("tickets")
+      .where({ vendor_id: vendorId })
+      .whereNot("status", "closed")
+      .whereNull("first_response_at")
+      .where("first_response_due_at", "<", db.fn.now())
+      .count<{ count: string }[]>("* as count")
+      .first(),
     db("tickets")
       .where({ vendor_id: vendorId })
       .whereNotNull("first_response_at")
@@ -37,6 +48,10 @@ export async function getDeskDashboard({ vendorId }: { vendorId: string }): Prom
     overdue: Number(overdue?.count ?? 0),
     medianFirstResponseHours: median?.median == null ? null : Number(median.median),
     answeredCount: Number(median?.n ?? 0),
-    perSheetVersion: perVersion.map((r) => ({ sheetVersionId: r.sheet_version_id, label: `${r.title} v${r.number}`, tickets: Number(r.count) })),
+    perSheetVersion: perVersion.map((r) => ({
+      sheetVersionId: r.sheet_version_id,
+      label: `${r.title} v${r.number}`,
+      tickets: Number(r.count),
+    })),
   };
 }

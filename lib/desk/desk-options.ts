@@ -1,14 +1,18 @@
 import "server-only";
 
 import { db } from "@/lib/db/knex";
-
 import { READABLE_STATES } from "@/lib/tickets/resolve-ticket-links";
 
 export type Option = { id: string; name: string };
 
 /** Members a ticket can be assigned to (support staff and admins). */
 export async function listAssignees({ vendorId }: { vendorId: string }): Promise<Option[]> {
-  const rows = await db("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).orderBy("u.name").select("u.id", "u.name", "u.email");
+  const rows = await db("members as m")
+    .join("users as u", "u.id", "m.user_id")
+    .where("m.vendor_id", vendorId)
+    .whereIn("m.role", ["support", "admin"])
+    .orderBy("u.name")
+    .select("u.id", "u.name", "u.email");
   return rows.map((r) => ({ id: r.id, name: r.name || r.email }));
 }
 
@@ -28,5 +32,10 @@ export async function listPickerVersions({ vendorId }: { vendorId: string }): Pr
     .orderByRaw("(v.state = 'published') desc, v.title, k.name, v.number desc")
     .limit(500)
     .select("v.id", "v.title", "v.number", "v.state", "k.name as machine_class");
-  return rows.map((r) => ({ id: r.id, name: `${r.title} · ${r.machine_class} (version ${r.number})`, state: r.state, machineClass: r.machine_class }));
+  return rows.map((r) => ({
+    id: r.id,
+    name: `${r.title} · ${r.machine_class} (version ${r.number})`,
+    state: r.state,
+    machineClass: r.machine_class,
+  }));
 }

@@ -5,4 +5,12 @@ export function expandSnippet(body: string, values: SnippetValues): string {
   return body.replace(/\{\{\s*([a-z]+(?:\.[a-z]+)*)\s*\}\}/gi, (whole, key: string) => values[key] ?? whole);
 }
 
-export const SNIPPET_PLACEHOLDERS = ["customer.name", "ticket.number", "ticket.subject", "agent.name", "machine.name", "sheet.title", "vendor.name"] as const;
+export const SNIPPET_PLACEHOLDERS = [
+  "customer.name",
+  "ticket.number",
+  "ticket.subject",
+  "agent.name",
+  "machine.name",
+  "sheet.title",
+  "vendor.name",
+] as const;

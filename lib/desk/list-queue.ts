@@ -37,9 +37,22 @@ const ORDER: Record<NonNullable<QueueFilters["sort"]>, [string, "asc" | "desc"]>
 };
 
 /** The Desk queue: tickets of one vendor by filters, newest first unless another order is chosen. */
-export async function listQueue({ vendorId, userId, filters, limit = 500 }: { vendorId: string; userId: string; filters: QueueFilters; limit?: number }): Promise<TicketSummary[]> {
+export async function listQueue({
+  vendorId,
+  userId,
+  filters,
+  limit = 500,
+}: {
+  vendorId: string;
+  userId: string;
+  filters: QueueFilters;
+  limit?: number;
+}): Promise<TicketSummary[]> {
   const [column, direction] = ORDER[filters.sort ?? "newest"];
-  const q = applyQueueFilters(selectTickets(db, vendorId), filters, userId).orderBy(column, direction).orderBy("t.number", direction).limit(limit);
+  const q = applyQueueFilters(selectTickets(db, vendorId), filters, userId)
+    .orderBy(column, direction)
+    .orderBy("t.number", direction)
+    .limit(limit);
   const rows = await q;
   return rows.map((r) => {
     const { body: _body, machineName: _m, closedAt: _c, satisfaction: _s, satisfactionComment: _sc, ...summary } = toTicketDetail(r);

@@ -3,7 +3,11 @@ import { z } from "zod";
 import { ticketPrioritySchema, ticketStatusSchema } from "@/content-schema/ticket-status";
 
 export const QUEUE_SORTS = ["newest", "oldest", "target"] as const;
-export const queueSortLabels: Record<(typeof QUEUE_SORTS)[number], string> = { newest: "Newest first", oldest: "Oldest first", target: "Response target first" };
+export const queueSortLabels: Record<(typeof QUEUE_SORTS)[number], string> = {
+  newest: "Newest first",
+  oldest: "Oldest first",
+  target: "Response target first",
+};
 
 const list = <T extends z.ZodType>(item: T) =>
   z.preprocess((v) => (v === undefined || v === "" ? undefined : typeof v === "string" ? v.split(",") : v), z.array(item).optional());
@@ -13,7 +17,10 @@ export const queueFiltersSchema = z.object({
   status: list(ticketStatusSchema),
   priority: list(ticketPrioritySchema),
   // "me", "none" or a member's user id.
-  assignee: z.union([z.literal("me"), z.literal("none"), z.uuid()]).optional().catch(undefined),
+  assignee: z
+    .union([z.literal("me"), z.literal("none"), z.uuid()])
+    .optional()
+    .catch(undefined),
   tag: z.string().trim().toLowerCase().max(40).optional().catch(undefined),
   materialId: z.uuid().optional().catch(undefined),
   overdue: z.preprocess((v) => v === true || v === "true" || v === "1", z.boolean()).optional(),

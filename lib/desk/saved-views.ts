@@ -15,19 +15,34 @@ const BUILT_IN: { id: string; name: string; filters: QueueFilters }[] = [
 ];
 
 async function countFor(vendorId: string, userId: string, filters: QueueFilters): Promise<number> {
-  const row = await applyQueueFilters(db("tickets as t").where("t.vendor_id", vendorId), filters, userId).count<{ count: string }[]>("* as count").first();
+  const row = await applyQueueFilters(db("tickets as t").where("t.vendor_id", vendorId), filters, userId)
+    .count<{ count: string }[]>("* as count")
+    .first();
   return Number(row?.count ?? 0);
 }
 
 /** The built-in views and this agent's saved views, each with its ticket count. */
 export async function listDeskViews({ vendorId, userId }: { vendorId: string; userId: string }): Promise<DeskView[]> {
   const saved = await db("desk_views").where({ vendor_id: vendorId, user_id: userId }).orderBy("name").select("id", "name", "filters");
-  const all = [...BUILT_IN.map((v) => ({ ...v, builtIn: true })), ...saved.map((v) => ({ id: v.id, name: v.name, filters: parseQueueFilters(v.filters), builtIn: false }))];
+  const all = [
+    ...BUILT_IN.map((v) => ({ ...v, builtIn: true })),
+    ...saved.map((v) => ({ id: v.id, name: v.name, filters: parseQueueFilters(v.filters), builtIn: false })),
+  ];
   return Promise.all(all.map(async (v) => ({ ...v, count: await countFor(vendorId, userId, v.filters) })));
 }
 
 /** Saves (or replaces, by name) one of this agent's views. */
-export async function saveDeskView({ vendorId, userId, name, filters }: { vendorId: string; userId: string; name: string; filters: QueueFilters }): Promise<{ id: string }> {
+export async function saveDeskView({
+  vendorId,
+  userId,
+  name,
+  filters,
+}: {
+  vendorId: string;
+  userId: string;
+  name: string;
+  filters: QueueFilters;
+}): Promise<{ id: string }> {
   const [row] = await db("desk_views")
     .insert({ vendor_id: vendorId, user_id: userId, name, filters: JSON.stringify(filters) })
     .onConflict(["vendor_id", "user_id", "name"])

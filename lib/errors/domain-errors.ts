@@ -3,7 +3,15 @@ export type FieldErrors = Record<string, string[]>;
 
 export class DomainError extends Error {
   constructor(
-    readonly code: "not_found" | "forbidden" | "unauthenticated" | "conflict" | "invalid_input" | "rate_limited" | "too_large" | "unsupported_media_type",
+    readonly code:
+      | "not_found"
+      | "forbidden"
+      | "unauthenticated"
+      | "conflict"
+      | "invalid_input"
+      | "rate_limited"
+      | "too_large"
+      | "unsupported_media_type",
     message: string,
     readonly fieldErrors?: FieldErrors,
   ) {
@@ -31,7 +39,10 @@ export class Forbidden extends DomainError {
 }
 
 export class Conflict extends DomainError {
-  constructor(message: string, readonly details?: Record<string, unknown>) {
+  constructor(
+    message: string,
+    readonly details?: Record<string, unknown>,
+  ) {
     super("conflict", message);
   }
 }

@@ -1,7 +1,6 @@
 import type { z } from "zod";
 
-import type { FieldErrors } from "./domain-errors";
-import { InvalidInput } from "./domain-errors";
+import { InvalidInput, type FieldErrors } from "./domain-errors";
 
 export function fieldErrorsOf(error: z.ZodError): FieldErrors {
   const out: FieldErrors = {};

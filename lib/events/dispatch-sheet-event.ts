@@ -1,8 +1,8 @@
 import "server-only";
 
 import { db } from "@/lib/db/knex";
-import type { JobMeta } from "@/lib/jobs/job-meta";
 import { enqueue } from "@/lib/jobs/enqueue";
+import type { JobMeta } from "@/lib/jobs/job-meta";
 
 import { sheetEventSchema } from "./sheet-events";
 import { SHEET_EVENT_SUBSCRIBERS } from "./subscribers";
@@ -17,7 +17,12 @@ export async function dispatchSheetEvent(data: unknown, job?: JobMeta): Promise<
   const event = sheetEventSchema.parse(data);
   await db.transaction(async (trx) => {
     for (const subscriber of SHEET_EVENT_SUBSCRIBERS) {
-      await enqueue(trx, SHEET_EVENT_DELIVERY_QUEUE, { subscriber: subscriber.name, event }, { key: job ? `${job.id}:${subscriber.name}` : undefined });
+      await enqueue(
+        trx,
+        SHEET_EVENT_DELIVERY_QUEUE,
+        { subscriber: subscriber.name, event },
+        { key: job ? `${job.id}:${subscriber.name}` : undefined },
+      );
     }
   });
 }

@@ -5,7 +5,7 @@ import type { Knex } from "knex";
 import { enqueue } from "@/lib/jobs/enqueue";
 import { invalidateLibrary } from "@/lib/library/library-cache";
 
-import { SHEET_EVENTS_QUEUE, type SheetEvent, sheetEventSchema } from "./sheet-events";
+import { SHEET_EVENTS_QUEUE, sheetEventSchema, type SheetEvent } from "./sheet-events";
 
 /**
  * Record a sheet or catalogue event for the subscribers, inside the transaction that made the change:

@@ -8,4 +8,9 @@ import { searchIndexSubscriber } from "@/search/indexing/search-index-jobs";
 import type { SheetEventSubscriber } from "./sheet-events";
 
 // Each feature that reacts to sheet events adds one entry here.
-export const SHEET_EVENT_SUBSCRIBERS: SheetEventSubscriber[] = [searchIndexSubscriber, changeAlertSubscriber, fieldRefreshSubscriber, webhookSheetSubscriber];
+export const SHEET_EVENT_SUBSCRIBERS: SheetEventSubscriber[] = [
+  searchIndexSubscriber,
+  changeAlertSubscriber,
+  fieldRefreshSubscriber,
+  webhookSheetSubscriber,
+];

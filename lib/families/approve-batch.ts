@@ -16,12 +16,25 @@ export async function approveBatch({ vendorId, userId, slug, number }: { vendorI
   const settings = await getVendorSettings(vendorId);
   return db.transaction(async (trx) => {
     const { batch } = await lockBatch(trx, { vendorId, slug, number, state: "in_review" });
-    if (settings.requireSecondApproval && batch.createdBy === userId) throw new Forbidden("You generated this batch; an engineer other than you must review it.");
+    if (settings.requireSecondApproval && batch.createdBy === userId)
+      throw new Forbidden("You generated this batch; an engineer other than you must review it.");
     const items = await includedItems(trx, vendorId, batch.id);
     if (!items.length) throw new Conflict("Nothing in this batch to approve: every written sheet was left out, or none was written.");
     for (const item of items) await onSheet(item.slug, () => approveDraftIn(trx, { vendorId, userId, slug: item.slug, settings }));
-    await trx("family_batches").where({ vendor_id: vendorId, id: batch.id }).update({ state: "approved", approved_by: userId, approved_at: trx.fn.now(), updated_at: trx.fn.now() });
-    await writeAudit({ vendorId, actorUserId: userId, action: "family.approve", objectType: "family_batch", objectId: batch.id, details: { family: slug, batch: number, sheets: items.length } }, trx);
+    await trx("family_batches")
+      .where({ vendor_id: vendorId, id: batch.id })
+      .update({ state: "approved", approved_by: userId, approved_at: trx.fn.now(), updated_at: trx.fn.now() });
+    await writeAudit(
+      {
+        vendorId,
+        actorUserId: userId,
+        action: "family.approve",
+        objectType: "family_batch",
+        objectId: batch.id,
+        details: { family: slug, batch: number, sheets: items.length },
+      },
+      trx,
+    );
     return { approved: items.length };
   });
 }

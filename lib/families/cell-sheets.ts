@@ -19,7 +19,19 @@ export type CellSheet = {
 
 const frontMatter = (raw: unknown): SheetFrontMatter => ({ ...(raw as SheetFrontMatter), operations: readStoredOperations(raw) });
 
-export async function findCellSheets({ vendorId, cutterIds, materialIds, machineClassIds, trx = db }: { vendorId: string; cutterIds: string[]; materialIds: string[]; machineClassIds: string[]; trx?: Knex }): Promise<Map<string, CellSheet>> {
+export async function findCellSheets({
+  vendorId,
+  cutterIds,
+  materialIds,
+  machineClassIds,
+  trx = db,
+}: {
+  vendorId: string;
+  cutterIds: string[];
+  materialIds: string[];
+  machineClassIds: string[];
+  trx?: Knex;
+}): Promise<Map<string, CellSheet>> {
   const { rows } = await trx.raw(
     `select s.id, s.slug, s.cutter_id, s.material_id, s.machine_class_id,
             lv.id as latest_id, lv.number as latest_number, lv.state as latest_state, lv.front_matter as latest_fm,

@@ -8,7 +8,11 @@ import type { CellCatalogue, CellOperation } from "./derive-cell";
 export type FamilyRef = { name: string; ruleVersion: number };
 
 /** Family names are free text; in MDX prose only plain words and punctuation are kept. */
-const plain = (text: string) => text.replace(/[^\p{L}\p{N} .,'()/&+-]/gu, "").replace(/\s+/g, " ").trim();
+const plain = (text: string) =>
+  text
+    .replace(/[^\p{L}\p{N} .,'()/&+-]/gu, "")
+    .replace(/\s+/g, " ")
+    .trim();
 
 export function provenanceLines(family: FamilyRef, operations: CellOperation[]): string[] {
   return operations.map((op) => {

@@ -1,5 +1,4 @@
-import type { AdaptContext } from "@/lib/adapt/adapt-context";
-import { adaptOperation } from "@/lib/adapt/adapt-context";
+import { adaptOperation, type AdaptContext } from "@/lib/adapt/adapt-context";
 import { toContextOperation } from "@/lib/adapt/read-front-matter";
 import { isMachiningInputError } from "@/lib/machining";
 
@@ -22,15 +21,35 @@ export function cellContext({ cutter, material, machineClass }: CellCatalogue, o
     sheetSlug: "preview",
     title: "preview",
     cutter: {
-      sku: cutter.sku, name: cutter.name, diameterMm: d, flutes: cutter.flutes, cornerForm: cutter.cornerForm,
-      cornerRadiusMm: cutter.cornerForm === "ball" ? d / 2 : (cutter.cornerRadiusMm ?? null), fluteLengthMm: cutter.fluteLengthMm, toolMaterial: cutter.toolMaterial,
+      sku: cutter.sku,
+      name: cutter.name,
+      diameterMm: d,
+      flutes: cutter.flutes,
+      cornerForm: cutter.cornerForm,
+      cornerRadiusMm: cutter.cornerForm === "ball" ? d / 2 : (cutter.cornerRadiusMm ?? null),
+      fluteLengthMm: cutter.fluteLengthMm,
+      toolMaterial: cutter.toolMaterial,
     },
     material: {
-      name: material.name, vcMinMpm: material.vcMinMpm, vcMaxMpm: material.vcMaxMpm, minChipLoadMm: material.minChipLoadMm, kcNmm2: material.kcNmm2,
-      chipLoadMinPctD: material.chipLoadMinPctD, chipLoadMaxPctD: material.chipLoadMaxPctD, kc11Nmm2: material.kc11Nmm2 ?? null, mc: material.mc ?? null,
+      name: material.name,
+      vcMinMpm: material.vcMinMpm,
+      vcMaxMpm: material.vcMaxMpm,
+      minChipLoadMm: material.minChipLoadMm,
+      kcNmm2: material.kcNmm2,
+      chipLoadMinPctD: material.chipLoadMinPctD,
+      chipLoadMaxPctD: material.chipLoadMaxPctD,
+      kc11Nmm2: material.kc11Nmm2 ?? null,
+      mc: material.mc ?? null,
       meltsWhenRubbing: material.cautions.some((c) => c.kind === "melting"),
     },
-    referenceMachine: { name: machineClass.name, rigidity: machineClass.rigidity, rpmMin: machineClass.rpmMin, rpmMax: machineClass.rpmMax, maxFeedMmMin: machineClass.maxFeedMmMin, zThrustN: machineClass.zThrustN ?? null },
+    referenceMachine: {
+      name: machineClass.name,
+      rigidity: machineClass.rigidity,
+      rpmMin: machineClass.rpmMin,
+      rpmMax: machineClass.rpmMax,
+      maxFeedMmMin: machineClass.maxFeedMmMin,
+      zThrustN: machineClass.zThrustN ?? null,
+    },
     operations: operations.map((op, i) => toContextOperation(op.operation, i, d)),
     cautions: [],
   };
@@ -39,7 +58,17 @@ export function cellContext({ cutter, material, machineClass }: CellCatalogue, o
 export function cellWarnings(cell: CellCatalogue, operations: CellOperation[]): CellWarning[] {
   const context = cellContext(cell, operations);
   const { machineClass: k, cutter } = cell;
-  const machine = { minRpm: k.rpmMin, maxRpm: k.rpmMax, spindlePowerKw: k.powerKw, maxFeedMmMin: k.maxFeedMmMin, rigidity: k.rigidity, zThrustN: k.zThrustN, spindleKind: k.spindleKind, ratedRpm: k.ratedRpm, stickoutMm: cutter.fluteLengthMm };
+  const machine = {
+    minRpm: k.rpmMin,
+    maxRpm: k.rpmMax,
+    spindlePowerKw: k.powerKw,
+    maxFeedMmMin: k.maxFeedMmMin,
+    rigidity: k.rigidity,
+    zThrustN: k.zThrustN,
+    spindleKind: k.spindleKind,
+    ratedRpm: k.ratedRpm,
+    stickoutMm: cutter.fluteLengthMm,
+  };
   return context.operations.flatMap((op) => {
     try {
       const result = adaptOperation(context, op.index, machine, {}, { entryCapability: "helix" });

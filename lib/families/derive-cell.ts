@@ -27,7 +27,13 @@ export function deriveCellOperations({ cutter, material, machineClass }: CellCat
       kind,
       label: operationKindLabels[kind],
       vcFraction: rule.vcPosition,
-      rule: { chipLoadPosition: rule.chipLoadPosition, apPerD: rule.apPerD, aePerD: rule.aePerD, entry: rule.entry, rampAngleDeg: rule.rampAngleDeg },
+      rule: {
+        chipLoadPosition: rule.chipLoadPosition,
+        apPerD: rule.apPerD,
+        aePerD: rule.aePerD,
+        entry: rule.entry,
+        rampAngleDeg: rule.rampAngleDeg,
+      },
     });
     return { derived, operation: sheetOperationSchema.parse(operationFields(derived)), rules: keys };
   });

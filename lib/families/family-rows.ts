@@ -2,7 +2,15 @@ import { cutterSelectionSchema, familyRulesSchema, type CutterSelection, type Fa
 
 // Rows of the family tables as the app reads them; JSON columns parsed again with their schemas.
 
-export type Family = { id: string; slug: string; name: string; cutters: CutterSelection; materialIds: string[]; machineClassIds: string[]; updatedAt: Date };
+export type Family = {
+  id: string;
+  slug: string;
+  name: string;
+  cutters: CutterSelection;
+  materialIds: string[];
+  machineClassIds: string[];
+  updatedAt: Date;
+};
 export type RuleSet = { id: string; familyId: string; number: number; rules: FamilyRules; note: string; createdAt: Date };
 
 type Row = Record<string, unknown>;

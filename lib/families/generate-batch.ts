@@ -9,8 +9,8 @@ import type { JobMeta } from "@/lib/jobs/job-meta";
 
 import { findCellSheets } from "./cell-sheets";
 import { computeCell, eachCell } from "./compute-cells";
-import { getRuleSet } from "./get-family";
 import { rowToFamily } from "./family-rows";
+import { getRuleSet } from "./get-family";
 import { loadFamilyCatalogue } from "./load-family-catalogue";
 import { writeCells } from "./write-cells";
 
@@ -27,10 +27,24 @@ export async function generateBatch({ vendorId, batchId, chunkSize = CHUNK }: { 
   const family = rowToFamily(await db("families").where({ vendor_id: vendorId, id: batch.family_id }).first());
   const ruleSet = await getRuleSet({ vendorId, id: batch.rule_set_id });
   const catalogue = await loadFamilyCatalogue({ vendorId, family });
-  const sheets = await findCellSheets({ vendorId, cutterIds: catalogue.cutters.map((c) => c.id), materialIds: family.materialIds, machineClassIds: family.machineClassIds });
-  const doneRows = await db("family_batch_items").where({ vendor_id: vendorId, batch_id: batchId }).select("cutter_id", "material_id", "machine_class_id");
+  const sheets = await findCellSheets({
+    vendorId,
+    cutterIds: catalogue.cutters.map((c) => c.id),
+    materialIds: family.materialIds,
+    machineClassIds: family.machineClassIds,
+  });
+  const doneRows = await db("family_batch_items")
+    .where({ vendor_id: vendorId, batch_id: batchId })
+    .select("cutter_id", "material_id", "machine_class_id");
   const done = new Set(doneRows.map((r) => `${r.cutter_id}:${r.material_id}:${r.machine_class_id}`));
-  const info = { vendorId, batchId, batchNumber: batch.number, userId: batch.created_by, familyName: family.name, ruleVersion: ruleSet.number };
+  const info = {
+    vendorId,
+    batchId,
+    batchNumber: batch.number,
+    userId: batch.created_by,
+    familyName: family.name,
+    ruleVersion: ruleSet.number,
+  };
   let written = 0;
   let chunk: ReturnType<typeof computeCell>[] = [];
   const flush = async () => {
@@ -40,7 +54,9 @@ export async function generateBatch({ vendorId, batchId, chunkSize = CHUNK }: { 
     await db.transaction(async (trx) => {
       const statuses = await writeCells(trx, info, cells, sheets);
       written += statuses.filter((s) => s === "new" || s === "changed").length;
-      await trx("family_batches").where({ vendor_id: vendorId, id: batchId }).update({ done: trx.raw("done + ?", [cells.length]), updated_at: trx.fn.now() });
+      await trx("family_batches")
+        .where({ vendor_id: vendorId, id: batchId })
+        .update({ done: trx.raw("done + ?", [cells.length]), updated_at: trx.fn.now() });
     });
   };
   for (const cell of eachCell(catalogue)) {
@@ -50,9 +66,23 @@ export async function generateBatch({ vendorId, batchId, chunkSize = CHUNK }: { 
   }
   await flush();
   await db.transaction(async (trx) => {
-    const counts = await trx("family_batch_items").where({ vendor_id: vendorId, batch_id: batchId }).count<{ count: string }[]>("id as count");
-    await trx("family_batches").where({ vendor_id: vendorId, id: batchId, state: "generating" }).update({ state: "in_review", done: Number(counts[0].count), total: Number(counts[0].count), updated_at: trx.fn.now() });
-    await writeAudit({ vendorId, actorUserId: batch.created_by, action: "family.generate", objectType: "family_batch", objectId: batchId, details: { family: family.slug, batch: batch.number, ruleVersion: ruleSet.number } }, trx);
+    const counts = await trx("family_batch_items")
+      .where({ vendor_id: vendorId, batch_id: batchId })
+      .count<{ count: string }[]>("id as count");
+    await trx("family_batches")
+      .where({ vendor_id: vendorId, id: batchId, state: "generating" })
+      .update({ state: "in_review", done: Number(counts[0].count), total: Number(counts[0].count), updated_at: trx.fn.now() });
+    await writeAudit(
+      {
+        vendorId,
+        actorUserId: batch.created_by,
+        action: "family.generate",
+        objectType: "family_batch",
+        objectId: batchId,
+        details: { family: family.slug, batch: batch.number, ruleVersion: ruleSet.number },
+      },
+      trx,
+    );
   });
   return { written };
 }
@@ -65,7 +95,9 @@ export async function generateBatchJob(data: unknown, job?: JobMeta): Promise<vo
   } catch (error) {
     if (job && job.retryCount >= DEFAULT_JOB_OPTIONS.retryLimit) {
       const reason = error instanceof Error ? error.message.slice(0, 500) : "unknown error";
-      await db("family_batches").where({ vendor_id: input.vendorId, id: input.batchId, state: "generating" }).update({ state: "failed", error: reason, updated_at: db.fn.now() });
+      await db("family_batches")
+        .where({ vendor_id: input.vendorId, id: input.batchId, state: "generating" })
+        .update({ state: "failed", error: reason, updated_at: db.fn.now() });
     }
     throw error;
   }

@@ -7,13 +7,37 @@ import { NotFound } from "@/lib/errors/domain-errors";
 
 export type BatchState = "generating" | "in_review" | "approved" | "published" | "failed";
 export type Batch = {
-  id: string; familyId: string; number: number; state: BatchState; total: number; done: number; ruleVersion: number; error: string | null;
-  createdBy: string | null; createdByName: string | null; approvedByName: string | null; approvedAt: Date | null; publishedAt: Date | null; createdAt: Date;
+  id: string;
+  familyId: string;
+  number: number;
+  state: BatchState;
+  total: number;
+  done: number;
+  ruleVersion: number;
+  error: string | null;
+  createdBy: string | null;
+  createdByName: string | null;
+  approvedByName: string | null;
+  approvedAt: Date | null;
+  publishedAt: Date | null;
+  createdAt: Date;
 };
 
 const columns = [
-  "b.id", "b.family_id", "b.number", "b.state", "b.total", "b.done", "b.error", "b.created_by", "b.approved_at", "b.published_at", "b.created_at",
-  "r.number as rule_version", "cu.name as created_by_name", "au.name as approved_by_name",
+  "b.id",
+  "b.family_id",
+  "b.number",
+  "b.state",
+  "b.total",
+  "b.done",
+  "b.error",
+  "b.created_by",
+  "b.approved_at",
+  "b.published_at",
+  "b.created_at",
+  "r.number as rule_version",
+  "cu.name as created_by_name",
+  "au.name as approved_by_name",
 ];
 
 const baseQuery = (trx: Knex, vendorId: string) =>
@@ -26,17 +50,37 @@ const baseQuery = (trx: Knex, vendorId: string) =>
     .where("b.vendor_id", vendorId);
 
 const rowToBatch = (r: Record<string, unknown>): Batch => ({
-  id: String(r.id), familyId: String(r.family_id), number: Number(r.number), state: r.state as BatchState, total: Number(r.total), done: Number(r.done),
-  ruleVersion: Number(r.rule_version), error: (r.error as string | null) ?? null, createdBy: (r.created_by as string | null) ?? null,
-  createdByName: (r.created_by_name as string | null) ?? null, approvedByName: (r.approved_by_name as string | null) ?? null,
-  approvedAt: (r.approved_at as Date | null) ?? null, publishedAt: (r.published_at as Date | null) ?? null, createdAt: r.created_at as Date,
+  id: String(r.id),
+  familyId: String(r.family_id),
+  number: Number(r.number),
+  state: r.state as BatchState,
+  total: Number(r.total),
+  done: Number(r.done),
+  ruleVersion: Number(r.rule_version),
+  error: (r.error as string | null) ?? null,
+  createdBy: (r.created_by as string | null) ?? null,
+  createdByName: (r.created_by_name as string | null) ?? null,
+  approvedByName: (r.approved_by_name as string | null) ?? null,
+  approvedAt: (r.approved_at as Date | null) ?? null,
+  publishedAt: (r.published_at as Date | null) ?? null,
+  createdAt: r.created_at as Date,
 });
 
 export async function listBatches({ vendorId, familyId }: { vendorId: string; familyId: string }): Promise<Batch[]> {
   return (await baseQuery(db, vendorId).where("b.family_id", familyId).orderBy("b.number", "desc").select(columns)).map(rowToBatch);
 }
 
-export async function getBatch({ vendorId, familyId, number, trx = db }: { vendorId: string; familyId: string; number: number; trx?: Knex }): Promise<Batch> {
+export async function getBatch({
+  vendorId,
+  familyId,
+  number,
+  trx = db,
+}: {
+  vendorId: string;
+  familyId: string;
+  number: number;
+  trx?: Knex;
+}): Promise<Batch> {
   const row = await baseQuery(trx, vendorId).where({ "b.family_id": familyId, "b.number": number }).first(columns);
   if (!row) throw new NotFound("No such batch.");
   return rowToBatch(row);

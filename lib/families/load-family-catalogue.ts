@@ -10,9 +10,18 @@ import { db } from "@/lib/db/knex";
 import type { Family } from "./family-rows";
 
 /** The vendor's cutters a selection picks (all its filters together), by SKU. */
-export async function selectCutters({ vendorId, selection, trx = db }: { vendorId: string; selection: CutterSelection; trx?: Knex }): Promise<Cutter[]> {
+export async function selectCutters({
+  vendorId,
+  selection,
+  trx = db,
+}: {
+  vendorId: string;
+  selection: CutterSelection;
+  trx?: Knex;
+}): Promise<Cutter[]> {
   const q = trx("cutters").where({ vendor_id: vendorId });
-  if (selection.series) q.whereRaw("lower(sku) like ? escape '\\'", [`${selection.series.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`]);
+  if (selection.series)
+    q.whereRaw("lower(sku) like ? escape '\\'", [`${selection.series.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`]);
   if (selection.geometries.length) q.whereIn("geometry", selection.geometries);
   if (selection.diameterMinMm !== undefined) q.where("diameter_mm", ">=", selection.diameterMinMm);
   if (selection.diameterMaxMm !== undefined) q.where("diameter_mm", "<=", selection.diameterMaxMm);
@@ -22,9 +31,21 @@ export async function selectCutters({ vendorId, selection, trx = db }: { vendorI
 
 export type FamilyCatalogue = { cutters: Cutter[]; materials: Material[]; machineClasses: MachineClass[] };
 
-export async function loadFamilyCatalogue({ vendorId, family, trx = db }: { vendorId: string; family: Family; trx?: Knex }): Promise<FamilyCatalogue> {
+export async function loadFamilyCatalogue({
+  vendorId,
+  family,
+  trx = db,
+}: {
+  vendorId: string;
+  family: Family;
+  trx?: Knex;
+}): Promise<FamilyCatalogue> {
   const cutters = await selectCutters({ vendorId, selection: family.cutters, trx });
-  const materials = (await trx("materials").where({ vendor_id: vendorId }).whereIn("id", family.materialIds).orderBy("name")).map(rowToMaterial);
-  const machineClasses = (await trx("machine_classes").where({ vendor_id: vendorId }).whereIn("id", family.machineClassIds).orderBy("rpm_max")).map(rowToMachineClass);
+  const materials = (await trx("materials").where({ vendor_id: vendorId }).whereIn("id", family.materialIds).orderBy("name")).map(
+    rowToMaterial,
+  );
+  const machineClasses = (
+    await trx("machine_classes").where({ vendor_id: vendorId }).whereIn("id", family.machineClassIds).orderBy("rpm_max")
+  ).map(rowToMachineClass);
   return { cutters, materials, machineClasses };
 }

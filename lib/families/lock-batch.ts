@@ -4,15 +4,19 @@ import type { Knex } from "knex";
 
 import { Conflict, DomainError, Forbidden } from "@/lib/errors/domain-errors";
 
-import { getFamily } from "./get-family";
 import { getBatch } from "./get-batch";
+import { getFamily } from "./get-family";
 
 /** Locks a batch row (serialising review steps) and checks it is in the state the step needs. */
-export async function lockBatch(trx: Knex.Transaction, { vendorId, slug, number, state }: { vendorId: string; slug: string; number: number; state: string }) {
+export async function lockBatch(
+  trx: Knex.Transaction,
+  { vendorId, slug, number, state }: { vendorId: string; slug: string; number: number; state: string },
+) {
   const family = await getFamily({ vendorId, slug, trx });
   const batch = await getBatch({ vendorId, familyId: family.id, number, trx });
   const locked = await trx("family_batches").where({ vendor_id: vendorId, id: batch.id }).forUpdate().first("state");
-  if (locked.state !== state) throw new Conflict(`Batch ${number} is ${String(locked.state).replace("_", " ")}; this step needs it ${state.replace("_", " ")}.`);
+  if (locked.state !== state)
+    throw new Conflict(`Batch ${number} is ${String(locked.state).replace("_", " ")}; this step needs it ${state.replace("_", " ")}.`);
   return { family, batch };
 }
 

@@ -9,16 +9,37 @@ import { computeCell, eachCell, type ComputedCell } from "./compute-cells";
 import { getFamily } from "./get-family";
 import { loadFamilyCatalogue } from "./load-family-catalogue";
 
-export type PreviewCell = ComputedCell & { status: CellStatus; existing: { slug: string; number: number; state: string } | null; diff: OperationDiff[] };
+export type PreviewCell = ComputedCell & {
+  status: CellStatus;
+  existing: { slug: string; number: number; state: string } | null;
+  diff: OperationDiff[];
+};
 
 /** Most cells a preview computes at once; a larger family is previewed a page at a time. */
 export const PREVIEW_PAGE = 1000;
 
 /** Every cell of the family under `rules` (default: its newest rules), with the engine's warnings and the change against each existing sheet's current version. */
-export async function previewFamily({ vendorId, slug, rules, offset = 0, limit = PREVIEW_PAGE }: { vendorId: string; slug: string; rules: FamilyRules; offset?: number; limit?: number }) {
+export async function previewFamily({
+  vendorId,
+  slug,
+  rules,
+  offset = 0,
+  limit = PREVIEW_PAGE,
+}: {
+  vendorId: string;
+  slug: string;
+  rules: FamilyRules;
+  offset?: number;
+  limit?: number;
+}) {
   const family = await getFamily({ vendorId, slug });
   const catalogue = await loadFamilyCatalogue({ vendorId, family });
-  const sheets = await findCellSheets({ vendorId, cutterIds: catalogue.cutters.map((c) => c.id), materialIds: family.materialIds, machineClassIds: family.machineClassIds });
+  const sheets = await findCellSheets({
+    vendorId,
+    cutterIds: catalogue.cutters.map((c) => c.id),
+    materialIds: family.materialIds,
+    machineClassIds: family.machineClassIds,
+  });
   const cells: PreviewCell[] = [];
   let index = 0;
   for (const cell of eachCell(catalogue)) {
@@ -28,8 +49,15 @@ export async function previewFamily({ vendorId, slug, rules, offset = 0, limit =
     const sheet = sheets.get(computed.key);
     const status = cellStatus(computed, sheet);
     const current = sheet?.published?.frontMatter;
-    const diff = current ? diffParameters(current, { ...current, operations: computed.operations.map((op) => op.operation) }, cell.cutter) : [];
-    cells.push({ ...computed, status, existing: sheet ? { slug: sheet.slug, number: sheet.latest.number, state: sheet.latest.state } : null, diff });
+    const diff = current
+      ? diffParameters(current, { ...current, operations: computed.operations.map((op) => op.operation) }, cell.cutter)
+      : [];
+    cells.push({
+      ...computed,
+      status,
+      existing: sheet ? { slug: sheet.slug, number: sheet.latest.number, state: sheet.latest.state } : null,
+      diff,
+    });
   }
   const total = catalogue.cutters.length * catalogue.materials.length * catalogue.machineClasses.length;
   return { family, catalogue, cells, total };

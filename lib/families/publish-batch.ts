@@ -23,7 +23,9 @@ export async function publishBatch({ vendorId, userId, slug, number }: { vendorI
     const { batch } = await lockBatch(trx, { vendorId, slug, number, state: "approved" });
     const items = await includedItems(trx, vendorId, batch.id);
     for (const item of items) {
-      const published = await onSheet(item.slug, () => publishDraftIn(trx, { vendorId, userId, slug: item.slug, settings, batchId: batch.id }));
+      const published = await onSheet(item.slug, () =>
+        publishDraftIn(trx, { vendorId, userId, slug: item.slug, settings, batchId: batch.id }),
+      );
       if (published.versionId !== item.version_id) throw new Conflict(`${item.slug}: its open version is not the one this batch wrote.`);
     }
     const excluded = await trx("family_batch_items as i")
@@ -37,8 +39,20 @@ export async function publishBatch({ vendorId, userId, slug, number }: { vendorI
       .whereNotNull("i.excluded_reason")
       .select<{ slug: string; excluded_reason: string }[]>("s.slug", "i.excluded_reason");
     for (const item of excluded) await returnToDraftIn(trx, { vendorId, userId, slug: item.slug, reason: item.excluded_reason });
-    await trx("family_batches").where({ vendor_id: vendorId, id: batch.id }).update({ state: "published", published_by: userId, published_at: trx.fn.now(), updated_at: trx.fn.now() });
-    await writeAudit({ vendorId, actorUserId: userId, action: "family.publish", objectType: "family_batch", objectId: batch.id, details: { family: slug, batch: number, sheets: items.length, excluded: excluded.length } }, trx);
+    await trx("family_batches")
+      .where({ vendor_id: vendorId, id: batch.id })
+      .update({ state: "published", published_by: userId, published_at: trx.fn.now(), updated_at: trx.fn.now() });
+    await writeAudit(
+      {
+        vendorId,
+        actorUserId: userId,
+        action: "family.publish",
+        objectType: "family_batch",
+        objectId: batch.id,
+        details: { family: slug, batch: number, sheets: items.length, excluded: excluded.length },
+      },
+      trx,
+    );
     await enqueue(trx, FAMILY_ALERTS_QUEUE, { vendorId, batchId: batch.id }, { key: `family-alerts:${batch.id}`, expireInSeconds: 3600 });
     return { published: items.length, returned: excluded.length };
   });

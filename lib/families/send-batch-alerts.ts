@@ -3,19 +3,27 @@ import "server-only";
 import { z } from "zod";
 
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
-import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "@/lib/bench/alert-setups";
 import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "@/lib/bench/alert-setups";
 import { db } from "@/lib/db/knex";
 import { appUrl } from "@/lib/http/app-url";
-import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { mailFooter, preferencesUrl, withFooter } from "@/lib/mail-preferences/preferences-link";
+import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 
-import { type BatchAlertSheet, renderBatchChangeAlert } from "./batch-alert-mail";
+import { renderBatchChangeAlert, type BatchAlertSheet } from "./batch-alert-mail";
 
 const jobSchema = z.object({ vendorId: z.uuid(), batchId: z.uuid() });
 
-type Changed = { versionId: string; previousId: string; oldCtx: AdaptContext; newCtx: AdaptContext; sheet: Omit<BatchAlertSheet, "setups">; changeNote: string; rows: SetupRow[] };
+type Changed = {
+  versionId: string;
+  previousId: string;
+  oldCtx: AdaptContext;
+  newCtx: AdaptContext;
+  sheet: Omit<BatchAlertSheet, "setups">;
+  changeNote: string;
+  rows: SetupRow[];
+};
 
 async function changedSheets(vendorId: string, batchId: string, vendorSlug: string): Promise<Changed[]> {
   const items = await db("family_batch_items")
@@ -35,8 +43,22 @@ async function changedSheets(vendorId: string, batchId: string, vendorSlug: stri
     ]);
     if (!newCtx || !oldCtx) continue;
     const versionUrl = appUrl(`/${vendorSlug}/library/${newCtx.sheetSlug}/v/${newCtx.versionNumber}`);
-    const sheet = { title: newCtx.title, oldNumber: oldCtx.versionNumber, newNumber: newCtx.versionNumber, versionUrl, sheetDiff: diffParameters(before.frontMatter, after.frontMatter, newCtx.cutter) };
-    changed.push({ versionId: item.version_id, previousId: item.previous_version_id, oldCtx, newCtx, sheet, changeNote: after.changeNote, rows });
+    const sheet = {
+      title: newCtx.title,
+      oldNumber: oldCtx.versionNumber,
+      newNumber: newCtx.versionNumber,
+      versionUrl,
+      sheetDiff: diffParameters(before.frontMatter, after.frontMatter, newCtx.cutter),
+    };
+    changed.push({
+      versionId: item.version_id,
+      previousId: item.previous_version_id,
+      oldCtx,
+      newCtx,
+      sheet,
+      changeNote: after.changeNote,
+      rows,
+    });
   }
   return changed;
 }
@@ -69,19 +91,35 @@ export async function sendBatchAlerts({ vendorId, batchId }: { vendorId: string;
   for (const [userId, entry] of byUser) {
     // Batch mails are their own kind of mail: the stop link opens the preferences page with it picked out.
     const stop = preferencesUrl(batch.vendor_slug, { vendorId, userId }, "batch_changes");
-    const mail = withFooter(renderBatchChangeAlert({
-      vendorName: batch.vendor_name,
-      familyName: batch.family_name,
-      changeNote: entry.sheets[0].changed.changeNote,
-      stopUrl: stop,
-      units: entry.units,
-      sheets: entry.sheets.map(({ changed: c, rows }) => ({ ...c.sheet, setups: rows.map((r) => reAdapt(c.oldCtx, c.newCtx, r, appUrl(`/${batch.vendor_slug}/bench/setups/${r.id}`))) })),
-    }), mailFooter(batch.vendor_slug, batch.vendor_name, { vendorId, userId }));
+    const mail = withFooter(
+      renderBatchChangeAlert({
+        vendorName: batch.vendor_name,
+        familyName: batch.family_name,
+        changeNote: entry.sheets[0].changed.changeNote,
+        stopUrl: stop,
+        units: entry.units,
+        sheets: entry.sheets.map(({ changed: c, rows }) => ({
+          ...c.sheet,
+          setups: rows.map((r) => reAdapt(c.oldCtx, c.newCtx, r, appUrl(`/${batch.vendor_slug}/bench/setups/${r.id}`))),
+        })),
+      }),
+      mailFooter(batch.vendor_slug, batch.vendor_name, { vendorId, userId }),
+    );
     await db.transaction(async (trx) => {
-      const rows = entry.sheets.map(({ changed: c, rows: setups }) => ({ vendor_id: vendorId, version_id: c.versionId, superseded_version_id: c.previousId, user_id: userId, setup_count: setups.length }));
+      const rows = entry.sheets.map(({ changed: c, rows: setups }) => ({
+        vendor_id: vendorId,
+        version_id: c.versionId,
+        superseded_version_id: c.previousId,
+        user_id: userId,
+        setup_count: setups.length,
+      }));
       const inserted = await trx("change_alerts_sent").insert(rows).onConflict(["version_id", "user_id"]).ignore().returning("user_id");
       if (!inserted.length) return;
-      await enqueueMail(trx, { to: entry.email, ...mail, headers: { "List-Unsubscribe": `<${stop}>` } }, { key: `family-alert:${batchId}:${userId}` });
+      await enqueueMail(
+        trx,
+        { to: entry.email, ...mail, headers: { "List-Unsubscribe": `<${stop}>` } },
+        { key: `family-alert:${batchId}:${userId}` },
+      );
       sent += 1;
     });
   }

@@ -20,13 +20,29 @@ export async function startGeneration({ vendorId, userId, slug }: { vendorId: st
     const ruleSet = await getLatestRuleSet({ vendorId, familyId: family.id, trx });
     const total = cellCount(await loadFamilyCatalogue({ vendorId, family, trx }));
     if (!total) throw new Conflict("The family has no cells: its cutter selection picks no cutter.");
-    const last = await trx("family_batches").where({ vendor_id: vendorId, family_id: family.id }).max<{ max: number | null }>("number as max").first();
+    const last = await trx("family_batches")
+      .where({ vendor_id: vendorId, family_id: family.id })
+      .max<{ max: number | null }>("number as max")
+      .first();
     const number = (last?.max ?? 0) + 1;
     const [batch] = await trx("family_batches")
-      .insert({ vendor_id: vendorId, family_id: family.id, number, rule_set_id: ruleSet.id, state: "generating", total, created_by: userId })
+      .insert({
+        vendor_id: vendorId,
+        family_id: family.id,
+        number,
+        rule_set_id: ruleSet.id,
+        state: "generating",
+        total,
+        created_by: userId,
+      })
       .returning(["id", "number"]);
     // The job commits with the batch; a long family may take minutes.
-    await enqueue(trx, FAMILY_GENERATE_QUEUE, { vendorId, batchId: batch.id }, { key: `family-generate:${batch.id}`, expireInSeconds: 3600 });
+    await enqueue(
+      trx,
+      FAMILY_GENERATE_QUEUE,
+      { vendorId, batchId: batch.id },
+      { key: `family-generate:${batch.id}`, expireInSeconds: 3600 },
+    );
     return { id: batch.id as string, number: batch.number as number, total };
   });
 }

@@ -24,7 +24,14 @@ export function validateGeneratedSource(source: string): SheetValidation {
   const split = splitFrontMatter(source);
   if (!split.ok) return { ok: false, issues: [{ line: split.line, message: split.message, severity: "error" }] };
   const { frontMatter, issues: headIssues } = checkFrontMatter(split.frontMatter, split.frontMatterLine);
-  const issues = [...headIssues, ...checkBody(split.body, split.bodyLine, frontMatter?.operations.map((op) => op.kind))];
+  const issues = [
+    ...headIssues,
+    ...checkBody(
+      split.body,
+      split.bodyLine,
+      frontMatter?.operations.map((op) => op.kind),
+    ),
+  ];
   if (frontMatter && !hasErrors(issues)) return { ok: true, frontMatter, body: split.body, bodyLine: split.bodyLine, issues };
   return { ok: false, frontMatter, body: split.body, bodyLine: split.bodyLine, issues };
 }

@@ -48,11 +48,13 @@ export function missesFor(m: MachineSpec, c: MachineSpec): Miss[] {
   if (power < COVERAGE_BANDS.powerRatio[0]) misses.push({ dimension: "power", direction: "below" });
   else if (power > COVERAGE_BANDS.powerRatio[1]) misses.push({ dimension: "power", direction: "above" });
   const stiffness = m.rigidity - c.rigidity;
-  if (Math.abs(stiffness) > COVERAGE_BANDS.rigidityDelta + 1e-9) misses.push({ dimension: "rigidity", direction: stiffness < 0 ? "below" : "above" });
+  if (Math.abs(stiffness) > COVERAGE_BANDS.rigidityDelta + 1e-9)
+    misses.push({ dimension: "rigidity", direction: stiffness < 0 ? "below" : "above" });
   return misses;
 }
 
-const distance = (m: MachineSpec, c: MachineSpec) => Math.abs(Math.log(m.rpmMax / c.rpmMax)) + Math.abs(Math.log(m.powerKw / c.powerKw)) + 2 * Math.abs(m.rigidity - c.rigidity);
+const distance = (m: MachineSpec, c: MachineSpec) =>
+  Math.abs(Math.log(m.rpmMax / c.rpmMax)) + Math.abs(Math.log(m.powerKw / c.powerKw)) + 2 * Math.abs(m.rigidity - c.rigidity);
 
 function nearest(m: MachineSpec, classes: readonly ClassSpec[]) {
   let best: { klass: ClassSpec; misses: Miss[]; score: number } | null = null;
@@ -77,7 +79,12 @@ function powerBandLabel(band: number): string {
   return `${POWER_EDGES[band - 1]}–${POWER_EDGES[band]} kW`;
 }
 
-const RIGIDITY_WORDS: Record<string, string> = { light: "a light frame", moderate: "a moderately stiff frame", stiff: "a stiff frame", "very-rigid": "a very rigid frame" };
+const RIGIDITY_WORDS: Record<string, string> = {
+  light: "a light frame",
+  moderate: "a moderately stiff frame",
+  stiff: "a stiff frame",
+  "very-rigid": "a very rigid frame",
+};
 const DIRECTION_WORDS: Record<Dimension, Record<"below" | "above", string>> = {
   spindle: { below: "top speed too low", above: "spindle faster or with a higher minimum speed" },
   power: { below: "less spindle power", above: "much more spindle power" },
@@ -104,7 +111,10 @@ function rangeOf(values: { value: number; count: number }[]) {
 /** Groups the machines that no class covers by top speed, power and rigidity; biggest clusters first. */
 export function findCoverageGaps(machines: readonly MachineGroup[], classes: readonly ClassSpec[]): CoverageReport {
   const total = machines.reduce((s, m) => s + m.count, 0);
-  const clusters = new Map<string, { groups: (MachineGroup & { near: ReturnType<typeof nearest> })[]; rpmBand: number; powerBand: number; rigidityKey: string }>();
+  const clusters = new Map<
+    string,
+    { groups: (MachineGroup & { near: ReturnType<typeof nearest> })[]; rpmBand: number; powerBand: number; rigidityKey: string }
+  >();
   let covered = 0;
   for (const m of machines) {
     const near = nearest(m, classes);
@@ -112,7 +122,9 @@ export function findCoverageGaps(machines: readonly MachineGroup[], classes: rea
       covered += m.count;
       continue;
     }
-    const rpmBand = bandOf(m.rpmMax, RPM_EDGES), powerBand = bandOf(m.powerKw, POWER_EDGES), rigidityKey = rigidityClassOf(m.rigidity).key;
+    const rpmBand = bandOf(m.rpmMax, RPM_EDGES),
+      powerBand = bandOf(m.powerKw, POWER_EDGES),
+      rigidityKey = rigidityClassOf(m.rigidity).key;
     const key = `${rpmBand}:${powerBand}:${rigidityKey}`;
     const cluster = clusters.get(key) ?? { groups: [], rpmBand, powerBand, rigidityKey };
     cluster.groups.push({ ...m, near });
@@ -139,7 +151,9 @@ export function findCoverageGaps(machines: readonly MachineGroup[], classes: rea
     const top = [...nearCounts.values()].sort((a, b) => b.count - a.count)[0]?.klass ?? null;
     const misses = [...missCounts.values()].sort((a, b) => b.machines - a.machines);
     const speed = rpmMax.min === rpmMax.max ? `max ${fmt(rpmMax.median)} rpm` : `max ${fmt(rpmMax.min)}–${fmt(rpmMax.max)} rpm`;
-    const why = top ? ` Nearest class: ${top.name} (${misses.map((m) => DIRECTION_WORDS[m.dimension][m.direction]).join(", ")}).` : " The vendor publishes for no machine class yet.";
+    const why = top
+      ? ` Nearest class: ${top.name} (${misses.map((m) => DIRECTION_WORDS[m.dimension][m.direction]).join(", ")}).`
+      : " The vendor publishes for no machine class yet.";
     return {
       key,
       machines: count,

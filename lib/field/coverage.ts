@@ -2,7 +2,7 @@ import "server-only";
 
 import { readDb } from "@/lib/db/read-db";
 
-import { type CoverageReport, findCoverageGaps } from "./coverage-gaps";
+import { findCoverageGaps, type CoverageReport } from "./coverage-gaps";
 
 /**
  * Customers' registered machines against the machine classes the vendor publishes sheets for.
@@ -14,9 +14,14 @@ export async function loadCoverageGaps({ vendorId }: { vendorId: string }): Prom
     db("machine_classes as mc")
       .where("mc.vendor_id", vendorId)
       .whereExists((q) =>
-        q.select(db.raw("1")).from("sheets as s").join("sheet_versions as v", function () {
-          this.on("v.sheet_id", "s.id").andOn("v.vendor_id", "s.vendor_id");
-        }).whereRaw("s.machine_class_id = mc.id and s.vendor_id = mc.vendor_id").where("v.state", "published"),
+        q
+          .select(db.raw("1"))
+          .from("sheets as s")
+          .join("sheet_versions as v", function () {
+            this.on("v.sheet_id", "s.id").andOn("v.vendor_id", "s.vendor_id");
+          })
+          .whereRaw("s.machine_class_id = mc.id and s.vendor_id = mc.vendor_id")
+          .where("v.state", "published"),
       )
       .orderBy("mc.name")
       .select("mc.slug", "mc.name", "mc.rpm_min", "mc.rpm_max", "mc.power_kw", "mc.rigidity"),
@@ -29,7 +34,20 @@ export async function loadCoverageGaps({ vendorId }: { vendorId: string }): Prom
       .select("m.rpm_min", "m.rpm_max", "m.power_kw", "m.rigidity", db.raw("count(*)::int as count")),
   ]);
   return findCoverageGaps(
-    machines.map((m) => ({ rpmMin: Number(m.rpm_min), rpmMax: Number(m.rpm_max), powerKw: Number(m.power_kw), rigidity: Number(m.rigidity), count: Number(m.count) })),
-    classes.map((c) => ({ slug: c.slug, name: c.name, rpmMin: Number(c.rpm_min), rpmMax: Number(c.rpm_max), powerKw: Number(c.power_kw), rigidity: Number(c.rigidity) })),
+    machines.map((m) => ({
+      rpmMin: Number(m.rpm_min),
+      rpmMax: Number(m.rpm_max),
+      powerKw: Number(m.power_kw),
+      rigidity: Number(m.rigidity),
+      count: Number(m.count),
+    })),
+    classes.map((c) => ({
+      slug: c.slug,
+      name: c.name,
+      rpmMin: Number(c.rpm_min),
+      rpmMax: Number(c.rpm_max),
+      powerKw: Number(c.power_kw),
+      rigidity: Number(c.rigidity),
+    })),
   );
 }

@@ -54,7 +54,12 @@ const base = (db: Knex, vendorId: string) =>
     })
     .where("c.vendor_id", vendorId)
     .select(
-      "c.*", "v.title", "v.number", "v.state", "s.slug as sheet_slug", "mc.name as machine_class",
+      "c.*",
+      "v.title",
+      "v.number",
+      "v.state",
+      "s.slug as sheet_slug",
+      "mc.name as machine_class",
       db.raw("v.front_matter->'operations'->c.operation_index->>'label' as op_label"),
       db.raw("v.front_matter->'operations'->c.operation_index->>'kind' as op_kind"),
     );
@@ -63,13 +68,32 @@ const base = (db: Knex, vendorId: string) =>
  * Across the published versions: the parameters customers changed most often, as suggestions for the next version.
  * One report is an anecdote, so the vendor-wide list starts at two.
  */
-export async function listCustomerChanges({ vendorId, limit = 25, minReports = 2 }: { vendorId: string; limit?: number; minReports?: number }): Promise<ChangeItem[]> {
-  const rows = await base(await readDb(), vendorId).where("v.state", "published").where("c.reports", ">=", minReports).orderBy([{ column: "c.reports", order: "desc" }, { column: "s.slug" }, { column: "c.operation_index" }, { column: "c.param" }]).limit(limit);
+export async function listCustomerChanges({
+  vendorId,
+  limit = 25,
+  minReports = 2,
+}: {
+  vendorId: string;
+  limit?: number;
+  minReports?: number;
+}): Promise<ChangeItem[]> {
+  const rows = await base(await readDb(), vendorId)
+    .where("v.state", "published")
+    .where("c.reports", ">=", minReports)
+    .orderBy([{ column: "c.reports", order: "desc" }, { column: "s.slug" }, { column: "c.operation_index" }, { column: "c.param" }])
+    .limit(limit);
   return rows.map(read);
 }
 
 /** Every version of one sheet. */
 export async function listSheetChanges({ vendorId, sheetId }: { vendorId: string; sheetId: string }): Promise<ChangeItem[]> {
-  const rows = await base(await readDb(), vendorId).where("v.sheet_id", sheetId).orderBy([{ column: "v.number", order: "desc" }, { column: "c.reports", order: "desc" }, { column: "c.operation_index" }, { column: "c.param" }]);
+  const rows = await base(await readDb(), vendorId)
+    .where("v.sheet_id", sheetId)
+    .orderBy([
+      { column: "v.number", order: "desc" },
+      { column: "c.reports", order: "desc" },
+      { column: "c.operation_index" },
+      { column: "c.param" },
+    ]);
   return rows.map(read);
 }

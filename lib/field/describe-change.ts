@@ -1,7 +1,15 @@
-import { type ChangeableParam, changeableParamLabels } from "@/content-schema/outcome-fields";
+import { changeableParamLabels, type ChangeableParam } from "@/content-schema/outcome-fields";
 
 // Pure: what customers changed, as one sentence an engineer can act on.
-export type ChangeRollup = { param: string; reports: number; medianPct: number; q1Pct: number; q3Pct: number; lowered: number; raised: number };
+export type ChangeRollup = {
+  param: string;
+  reports: number;
+  medianPct: number;
+  q1Pct: number;
+  q3Pct: number;
+  lowered: number;
+  raised: number;
+};
 
 const pct = (n: number) => `${Math.abs(n).toLocaleString("en-GB", { maximumFractionDigits: Math.abs(n) < 10 ? 1 : 0 })} %`;
 const labelOf = (param: string) => changeableParamLabels[param as ChangeableParam] ?? param;

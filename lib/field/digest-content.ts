@@ -39,10 +39,23 @@ export async function buildDigestContent(vendor: Vendor, weekOf: string): Promis
     fieldUrl: appUrl(`/${vendor.slug}/drafting/field`),
     attention: attention.map((a) => {
       const symptom = topSymptom(a.symptoms);
-      return { title: `${a.title} (${a.machineClass})`, number: a.number, failed: a.failed, outcomes: a.outcomes, lowerPct: percent(a.failure.lower), upperPct: percent(a.failure.upper), symptom: symptom && outcomeSymptomLabels[symptom], url: appUrl(`/${vendor.slug}/drafting/field/${a.sheetSlug}`) };
+      return {
+        title: `${a.title} (${a.machineClass})`,
+        number: a.number,
+        failed: a.failed,
+        outcomes: a.outcomes,
+        lowerPct: percent(a.failure.lower),
+        upperPct: percent(a.failure.upper),
+        symptom: symptom && outcomeSymptomLabels[symptom],
+        url: appUrl(`/${vendor.slug}/drafting/field/${a.sheetSlug}`),
+      };
     }),
     attentionTotal,
-    changes: changes.map((c) => ({ title: `${c.title} (${c.machineClass})`, number: c.number, sentence: `${c.operationLabel}: ${describeChange(c)}` })),
+    changes: changes.map((c) => ({
+      title: `${c.title} (${c.machineClass})`,
+      number: c.number,
+      sentence: `${c.operationLabel}: ${describeChange(c)}`,
+    })),
     gaps: coverage.clusters.slice(0, TOP).map((c) => c.summary),
     moreGaps: Math.max(0, coverage.clusters.length - TOP),
     machines: coverage.machines,

@@ -2,8 +2,29 @@ import "server-only";
 
 import { readDb } from "@/lib/db/read-db";
 
-export type FieldSummary = { versionsWithReports: number; outcomes: number; failed: number; workedAfterChanges: number; setups: number; views: number; adaptations: number; tickets: number; openHandoffs: number };
-type SummaryRow = Record<"versions_with_reports" | "outcomes" | "failed" | "worked_after_changes" | "setups" | "views" | "adaptations" | "tickets" | "open_handoffs", number>;
+export type FieldSummary = {
+  versionsWithReports: number;
+  outcomes: number;
+  failed: number;
+  workedAfterChanges: number;
+  setups: number;
+  views: number;
+  adaptations: number;
+  tickets: number;
+  openHandoffs: number;
+};
+type SummaryRow = Record<
+  | "versions_with_reports"
+  | "outcomes"
+  | "failed"
+  | "worked_after_changes"
+  | "setups"
+  | "views"
+  | "adaptations"
+  | "tickets"
+  | "open_handoffs",
+  number
+>;
 
 /** The vendor's totals, from the rollup (one row per version), never from raw outcomes. */
 export async function loadFieldSummary({ vendorId }: { vendorId: string }): Promise<FieldSummary> {

@@ -24,7 +24,17 @@ export type AttentionItem = VersionRollup & { sheetSlug: string; title: string; 
 /** Outcome reports of the weeks that touch from–to (YYYY-MM-DD, inclusive), and one machine class (its slug). */
 export type AttentionFilters = { from?: string; to?: string; machineClass?: string };
 
-const OUTCOME_COLUMNS = ["outcomes", "worked_as_written", "worked_after_changes", "failed", "chatter", "melting_welding", "poor_finish", "broken_tool", "stalled_lost_steps"];
+const OUTCOME_COLUMNS = [
+  "outcomes",
+  "worked_as_written",
+  "worked_after_changes",
+  "failed",
+  "chatter",
+  "melting_welding",
+  "poor_finish",
+  "broken_tool",
+  "stalled_lost_steps",
+];
 
 // The version rollup with its outcome counts summed over the weekly rollup's weeks instead: still rollups, never
 // a scan of raw outcome reports. Tickets and hand-offs stay whole-life counts.
@@ -46,7 +56,17 @@ const WEEKS_SOURCE = `
  * 30 in 100 (0.22). Superseded or withdrawn since the last refresh: left out (the live state decides).
  * With a date range, only the reports of the weeks (Monday to Sunday, UTC) that touch it count.
  */
-export async function listNeedsAttention({ vendorId, z, limit = 25, filters = {} }: { vendorId: string; z: number; limit?: number; filters?: AttentionFilters }): Promise<AttentionItem[]> {
+export async function listNeedsAttention({
+  vendorId,
+  z,
+  limit = 25,
+  filters = {},
+}: {
+  vendorId: string;
+  z: number;
+  limit?: number;
+  filters?: AttentionFilters;
+}): Promise<AttentionItem[]> {
   const db = await readDb();
   const dated = Boolean(filters.from || filters.to);
   const source = dated ? WEEKS_SOURCE : "select * from field_version_rollups where vendor_id = ?";
@@ -65,5 +85,11 @@ export async function listNeedsAttention({ vendorId, z, limit = 25, filters = {}
      limit ?`,
     [...sourceBindings, z, vendorId, ...(filters.machineClass ? [filters.machineClass] : []), limit],
   );
-  return rows.map((r: Record<string, unknown>) => ({ ...readRollup(r, z), sheetSlug: String(r.sheet_slug), title: String(r.title), machineClass: String(r.machine_class), lowerBound: Number(r.lower_bound) }));
+  return rows.map((r: Record<string, unknown>) => ({
+    ...readRollup(r, z),
+    sheetSlug: String(r.sheet_slug),
+    title: String(r.title),
+    machineClass: String(r.machine_class),
+    lowerBound: Number(r.lower_bound),
+  }));
 }

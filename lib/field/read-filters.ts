@@ -1,4 +1,10 @@
-import { type AttentionFilter, attentionFilterSchema, MAX_RANGE_DAYS, type TrendRange, trendRangeSchema } from "@/content-schema/field-filters";
+import {
+  attentionFilterSchema,
+  MAX_RANGE_DAYS,
+  trendRangeSchema,
+  type AttentionFilter,
+  type TrendRange,
+} from "@/content-schema/field-filters";
 
 import { defaultTrendRange } from "./week-series";
 
@@ -16,9 +22,11 @@ export function readAttentionFilter(raw: Raw): { filter: AttentionFilter; error:
 export function readTrendRange(raw: Raw, today: Date): { range: Required<TrendRange>; chosen: TrendRange; error: string | null } {
   const fallback = defaultTrendRange(today);
   const parsed = trendRangeSchema.safeParse(raw);
-  if (!parsed.success) return { range: fallback, chosen: {}, error: `${parsed.error.issues.map((i) => i.message).join(" ")} Showing the last 26 weeks.` };
+  if (!parsed.success)
+    return { range: fallback, chosen: {}, error: `${parsed.error.issues.map((i) => i.message).join(" ")} Showing the last 26 weeks.` };
   const to = parsed.data.to ?? (parsed.data.from && parsed.data.from > fallback.to ? parsed.data.from : fallback.to);
   const from = parsed.data.from ?? (to < fallback.from ? to : fallback.from);
-  if ((Date.parse(to) - Date.parse(from)) / 86_400_000 > MAX_RANGE_DAYS) return { range: fallback, chosen: {}, error: "Choose a range of at most three years. Showing the last 26 weeks." };
+  if ((Date.parse(to) - Date.parse(from)) / 86_400_000 > MAX_RANGE_DAYS)
+    return { range: fallback, chosen: {}, error: "Choose a range of at most three years. Showing the last 26 weeks." };
   return { range: { from, to }, chosen: parsed.data, error: null };
 }

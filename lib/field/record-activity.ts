@@ -13,9 +13,20 @@ const UPSERT: Record<ActivityKind, string> = {
 };
 
 /** One more view or adaptation of a sheet version today: a counter, never who it was. */
-export async function recordSheetActivity({ vendorId, versionId, kind }: { vendorId: string; versionId: string; kind: ActivityKind }): Promise<void> {
+export async function recordSheetActivity({
+  vendorId,
+  versionId,
+  kind,
+}: {
+  vendorId: string;
+  versionId: string;
+  kind: ActivityKind;
+}): Promise<void> {
   // The version must be this vendor's and readable; anything else is dropped without a trace.
-  const version = await db("sheet_versions").where({ id: versionId, vendor_id: vendorId }).whereIn("state", ["published", "superseded", "withdrawn"]).first("id");
+  const version = await db("sheet_versions")
+    .where({ id: versionId, vendor_id: vendorId })
+    .whereIn("state", ["published", "superseded", "withdrawn"])
+    .first("id");
   if (!version) return;
   await db.raw(UPSERT[kind], [vendorId, versionId]);
 }

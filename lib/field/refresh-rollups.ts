@@ -18,14 +18,20 @@ const BATCH = 2_000;
  * changed, not the total. Each batch is one transaction: a reader never sees a version's new counts beside
  * its old changes. `rebuild` recomputes every version (after a bulk load with triggers off).
  */
-export async function refreshFieldRollups(knex: Knex = db, { rebuild = false }: { rebuild?: boolean } = {}): Promise<{ durationMs: number; versions: number }> {
+export async function refreshFieldRollups(
+  knex: Knex = db,
+  { rebuild = false }: { rebuild?: boolean } = {},
+): Promise<{ durationMs: number; versions: number }> {
   const started = performance.now();
   let versions = 0;
   for (;;) {
     const done = await knex.transaction(async (trx) => {
       const sql = rebuild ? "select field_rollups_rebuild() as n" : "select field_rollups_refresh_pending(?) as n";
       const { rows } = await trx.raw<{ rows: { n: number }[] }>(sql, rebuild ? [] : [BATCH]);
-      await trx("field_rollup_refreshes").insert({ name: "field", refreshed_at: trx.fn.now(), duration_ms: Math.round(performance.now() - started) }).onConflict("name").merge();
+      await trx("field_rollup_refreshes")
+        .insert({ name: "field", refreshed_at: trx.fn.now(), duration_ms: Math.round(performance.now() - started) })
+        .onConflict("name")
+        .merge();
       return rows[0].n;
     });
     versions += done;
@@ -44,7 +50,9 @@ export async function refreshFieldRollupsJob(): Promise<void> {
  */
 export async function scheduleFieldRefresh(trx: Knex | Knex.Transaction): Promise<void> {
   await ensureQueue(FIELD_REFRESH_QUEUE);
-  await inTransaction(trx, (t) => jobWriter().sendDebounced(FIELD_REFRESH_QUEUE, {}, { ...DEFAULT_JOB_OPTIONS, retryLimit: 3, db: knexExecutor(t) }, 20, "field"));
+  await inTransaction(trx, (t) =>
+    jobWriter().sendDebounced(FIELD_REFRESH_QUEUE, {}, { ...DEFAULT_JOB_OPTIONS, retryLimit: 3, db: knexExecutor(t) }, 20, "field"),
+  );
 }
 
 export async function lastFieldRefresh(): Promise<Date | null> {

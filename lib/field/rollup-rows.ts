@@ -1,6 +1,6 @@
 import { OUTCOME_SYMPTOMS, type OutcomeSymptom } from "@/content-schema/outcome-fields";
 
-import { type Interval, wilsonInterval } from "./wilson";
+import { wilsonInterval, type Interval } from "./wilson";
 
 // One row of field_version_rollups, read into the shape every Field-results list uses.
 export type VersionRollup = {
@@ -30,7 +30,8 @@ const int = (v: unknown) => Number(v ?? 0);
 const iso = (v: unknown) => (v ? new Date(v as string).toISOString() : null);
 
 export function readRollup(r: RollupRow, z: number): VersionRollup {
-  const outcomes = int(r.outcomes), failed = int(r.failed);
+  const outcomes = int(r.outcomes),
+    failed = int(r.failed);
   return {
     versionId: String(r.sheet_version_id),
     sheetId: String(r.sheet_id),

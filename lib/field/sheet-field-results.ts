@@ -3,7 +3,7 @@ import "server-only";
 import { readDb } from "@/lib/db/read-db";
 import { listProblemReports, type ProblemReport } from "@/lib/tickets/problem-reports";
 
-import { type ChangeItem, listSheetChanges } from "./customer-changes";
+import { listSheetChanges, type ChangeItem } from "./customer-changes";
 import { readRollup, type VersionRollup } from "./rollup-rows";
 
 export type LinkedTicket = { id: string; number: number; subject: string; status: string; versionNumber: number; createdAt: string };
@@ -27,14 +27,33 @@ export async function findFieldSheet({ vendorId, slug }: { vendorId: string; slu
     })
     .where({ "s.vendor_id": vendorId, "s.slug": slug })
     .first(
-      "s.id", "s.slug", "mc.name as machine_class",
-      db.raw("(select v.title from sheet_versions v where v.sheet_id = s.id and v.vendor_id = s.vendor_id and v.state in ('published', 'superseded', 'withdrawn') order by v.number desc limit 1) as title"),
+      "s.id",
+      "s.slug",
+      "mc.name as machine_class",
+      db.raw(
+        "(select v.title from sheet_versions v where v.sheet_id = s.id and v.vendor_id = s.vendor_id and v.state in ('published', 'superseded', 'withdrawn') order by v.number desc limit 1) as title",
+      ),
     );
-  return row ? { id: String(row.id), slug: String(row.slug), title: row.title ? String(row.title) : String(row.slug), machineClass: String(row.machine_class) } : null;
+  return row
+    ? {
+        id: String(row.id),
+        slug: String(row.slug),
+        title: row.title ? String(row.title) : String(row.slug),
+        machineClass: String(row.machine_class),
+      }
+    : null;
 }
 
 /** Everything Field results knows about one sheet, version by version (oldest first). */
-export async function loadSheetFieldResults({ vendorId, sheetId, z }: { vendorId: string; sheetId: string; z: number }): Promise<SheetFieldResults | null> {
+export async function loadSheetFieldResults({
+  vendorId,
+  sheetId,
+  z,
+}: {
+  vendorId: string;
+  sheetId: string;
+  z: number;
+}): Promise<SheetFieldResults | null> {
   const db = await readDb();
   const sheet = await db("sheets as s")
     .join("machine_classes as mc", function () {
@@ -71,7 +90,16 @@ export async function loadSheetFieldResults({ vendorId, sheetId, z }: { vendorId
     sheet: { id: sheet.id, slug: sheet.slug, title: latest ? String(latest.title) : sheet.slug, machineClass: sheet.machine_class },
     versions: rollups.map((r) => ({ ...readRollup(r, z), title: String(r.title), changeNote: String(r.change_note ?? "") })),
     changes,
-    tickets: tickets.map((t) => ({ id: t.id, number: t.number, subject: t.subject, status: t.status, versionNumber: Number(t.version_number), createdAt: new Date(t.created_at).toISOString() })),
-    handoffs: handoffs.filter((h) => numberOf.has(h.sheetVersionId)).map((h) => ({ ...h, versionNumber: numberOf.get(h.sheetVersionId) ?? null })),
+    tickets: tickets.map((t) => ({
+      id: t.id,
+      number: t.number,
+      subject: t.subject,
+      status: t.status,
+      versionNumber: Number(t.version_number),
+      createdAt: new Date(t.created_at).toISOString(),
+    })),
+    handoffs: handoffs
+      .filter((h) => numberOf.has(h.sheetVersionId))
+      .map((h) => ({ ...h, versionNumber: numberOf.get(h.sheetVersionId) ?? null })),
   };
 }

@@ -2,12 +2,24 @@ import "server-only";
 
 import { readDb } from "@/lib/db/read-db";
 
-import { type Publication, type TrendWeek, weekSeries, weekStartOf } from "./week-series";
+import { weekSeries, weekStartOf, type Publication, type TrendWeek } from "./week-series";
 
 export type SheetTrends = { range: { from: string; to: string }; weeks: TrendWeek[]; publications: Publication[] };
 
 /** One sheet's reports and failures week by week (all its versions together), from the weekly rollup. */
-export async function loadSheetTrends({ vendorId, sheetId, from, to, z }: { vendorId: string; sheetId: string; from: string; to: string; z: number }): Promise<SheetTrends> {
+export async function loadSheetTrends({
+  vendorId,
+  sheetId,
+  from,
+  to,
+  z,
+}: {
+  vendorId: string;
+  sheetId: string;
+  from: string;
+  to: string;
+  z: number;
+}): Promise<SheetTrends> {
   const db = await readDb();
   const [rows, published] = await Promise.all([
     db("field_week_rollups")
@@ -16,7 +28,11 @@ export async function loadSheetTrends({ vendorId, sheetId, from, to, z }: { vend
       .where("week", "<=", to)
       .groupBy("week")
       .orderBy("week")
-      .select(db.raw("to_char(week, 'YYYY-MM-DD') as week"), db.raw("sum(outcomes)::int as outcomes"), db.raw("sum(failed)::int as failed")),
+      .select(
+        db.raw("to_char(week, 'YYYY-MM-DD') as week"),
+        db.raw("sum(outcomes)::int as outcomes"),
+        db.raw("sum(failed)::int as failed"),
+      ),
     db("sheet_versions")
       .where({ vendor_id: vendorId, sheet_id: sheetId })
       .whereIn("state", ["published", "superseded", "withdrawn"])

@@ -32,7 +32,15 @@ export type DraftFromChange = { slug: string; number: number; existing: boolean 
  * from the rollups and the stored version, never from the request. Clicked again while that draft is open, it
  * answers the same draft; any other open draft is a conflict (one open draft per sheet, as in the editor).
  */
-export async function startDraftFromChange({ vendorId, userId, versionId, operationIndex, param, z, confidenceLabel }: Options): Promise<DraftFromChange> {
+export async function startDraftFromChange({
+  vendorId,
+  userId,
+  versionId,
+  operationIndex,
+  param,
+  z,
+  confidenceLabel,
+}: Options): Promise<DraftFromChange> {
   return db.transaction(async (trx) => {
     const version = await trx("sheet_versions as v")
       .join("sheets as s", function () {
@@ -51,21 +59,30 @@ export async function startDraftFromChange({ vendorId, userId, versionId, operat
         .whereRaw("details @> ?::jsonb", [JSON.stringify(origin)])
         .first("id");
       if (same) return { slug: sheet.slug, number: open.number, existing: true };
-      throw new Conflict(`This sheet already has an open draft (version ${open.number}). Apply the change there by hand, or start from this suggestion once that draft is published.`);
+      throw new Conflict(
+        `This sheet already has an open draft (version ${open.number}). Apply the change there by hand, or start from this suggestion once that draft is published.`,
+      );
     }
-    if (version.state !== "published") throw new Conflict(`Version ${version.number} is no longer the published version; suggestions apply to the published version only.`);
+    if (version.state !== "published")
+      throw new Conflict(`Version ${version.number} is no longer the published version; suggestions apply to the published version only.`);
 
-    const change = await trx("field_change_rollups").where({ vendor_id: vendorId, sheet_version_id: versionId, operation_index: operationIndex, param }).first();
+    const change = await trx("field_change_rollups")
+      .where({ vendor_id: vendorId, sheet_version_id: versionId, operation_index: operationIndex, param })
+      .first();
     if (!change) throw new NotFound("No report changed that number of that operation.");
     const medianPct = Number(change.median_pct);
     if (Math.abs(medianPct) < 0.05) throw new Conflict("Customers' median change is zero: there is nothing to apply.");
-    const rollup = await trx("field_version_rollups").where({ vendor_id: vendorId, sheet_version_id: versionId }).first("outcomes", "failed");
+    const rollup = await trx("field_version_rollups")
+      .where({ vendor_id: vendorId, sheet_version_id: versionId })
+      .first("outcomes", "failed");
 
     const op = readStoredOperations(version.front_matter)[operationIndex];
     if (!op) throw new NotFound(`Version ${version.number} has no operation ${operationIndex + 1}.`);
     const value = scaleOperationValue(op, param, 1 + medianPct / 100);
-    if (!value) throw new Conflict(`“${op.label ?? operationKindLabels[op.kind]}” has no value for that number on version ${version.number}.`);
-    if (value.toValue === value.fromValue) throw new Conflict("The median change rounds to the sheet's own value: there is nothing to apply.");
+    if (!value)
+      throw new Conflict(`“${op.label ?? operationKindLabels[op.kind]}” has no value for that number on version ${version.number}.`);
+    if (value.toValue === value.fromValue)
+      throw new Conflict("The median change rounds to the sheet's own value: there is nothing to apply.");
     const source = replaceOperationValue(version.source, operationIndex, value.key, value.toText);
 
     // The engine judges the new numbers of that operation as the sheet would state them.

@@ -1,6 +1,6 @@
 import { parseDocument } from "yaml";
 
-import { type ChangeableParam, changeableParamLabels } from "@/content-schema/outcome-fields";
+import { changeableParamLabels, type ChangeableParam } from "@/content-schema/outcome-fields";
 import type { SheetOperation } from "@/content-schema/sheet-front-matter";
 import { inMinToMmMin, inToMm } from "@/lib/machining";
 import { splitFrontMatter } from "@/lib/mdx/split-front-matter";
@@ -9,9 +9,21 @@ import { splitFrontMatter } from "@/lib/mdx/split-front-matter";
 // that cites the reports behind it. No customer is named anywhere: only counts, shares and intervals.
 
 /** The front-matter key of an operation that holds each parameter customers report changing. */
-export const OPERATION_KEY = { rpm: "n", feedMmMin: "vf", axialDepthMm: "ap", radialDepthMm: "ae", plungeFeedMmMin: "plungeFeed" } as const satisfies Record<ChangeableParam, keyof SheetOperation>;
+export const OPERATION_KEY = {
+  rpm: "n",
+  feedMmMin: "vf",
+  axialDepthMm: "ap",
+  radialDepthMm: "ae",
+  plungeFeedMmMin: "plungeFeed",
+} as const satisfies Record<ChangeableParam, keyof SheetOperation>;
 
-export type ScaledValue = { key: (typeof OPERATION_KEY)[ChangeableParam]; fromText: string; toText: string; fromValue: number; toValue: number };
+export type ScaledValue = {
+  key: (typeof OPERATION_KEY)[ChangeableParam];
+  fromText: string;
+  toText: string;
+  fromValue: number;
+  toValue: number;
+};
 
 const IMPERIAL = /\bin\b|inch|["″”]/i;
 const trim = (value: number, decimals: number) => String(Number(value.toFixed(decimals)));
@@ -38,10 +50,22 @@ export function scaleOperationValue(op: SheetOperation, param: ChangeableParam, 
   const scaled = quantity.value * factor;
   if (IMPERIAL.test(quantity.text)) {
     const inches = isFeed ? Number((scaled / 25.4).toFixed(1)) : Number((scaled / 25.4).toFixed(3));
-    return { key, fromText: quantity.text, toText: `${inches} ${isFeed ? "in/min" : "in"}`, fromValue: quantity.value, toValue: isFeed ? inMinToMmMin(inches) : inToMm(inches) };
+    return {
+      key,
+      fromText: quantity.text,
+      toText: `${inches} ${isFeed ? "in/min" : "in"}`,
+      fromValue: quantity.value,
+      toValue: isFeed ? inMinToMmMin(inches) : inToMm(inches),
+    };
   }
   const metric = isFeed ? Math.round(scaled) : Number(scaled.toFixed(2));
-  return { key, fromText: quantity.text, toText: `${trim(metric, 2)} ${isFeed ? "mm/min" : "mm"}`, fromValue: quantity.value, toValue: metric };
+  return {
+    key,
+    fromText: quantity.text,
+    toText: `${trim(metric, 2)} ${isFeed ? "mm/min" : "mm"}`,
+    fromValue: quantity.value,
+    toValue: metric,
+  };
 }
 
 /** The source with one operation's value replaced; the rest of the front matter and the body are kept. */
@@ -49,7 +73,8 @@ export function replaceOperationValue(source: string, operationIndex: number, ke
   const split = splitFrontMatter(source);
   if (!split.ok) throw new RangeError(split.message);
   const doc = parseDocument(split.frontMatter);
-  if (doc.errors.length || !doc.hasIn(["operations", operationIndex])) throw new RangeError(`The sheet has no operation ${operationIndex + 1}.`);
+  if (doc.errors.length || !doc.hasIn(["operations", operationIndex]))
+    throw new RangeError(`The sheet has no operation ${operationIndex + 1}.`);
   doc.setIn(["operations", operationIndex, key], text);
   return `---\n${String(doc).replace(/\n$/, "")}\n---\n${split.body}`;
 }

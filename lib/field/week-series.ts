@@ -1,4 +1,4 @@
-import { type Interval, wilsonInterval } from "./wilson";
+import { wilsonInterval, type Interval } from "./wilson";
 
 // Pure: week-by-week series for Field-results trends. Weeks start on Monday, in UTC, as in the weekly rollup.
 
@@ -15,7 +15,8 @@ export function weekStartOf(at: Date): string {
 export function weeksBetween(from: string, to: string): string[] {
   const weeks: string[] = [];
   const last = Date.parse(weekStartOf(new Date(`${to}T00:00:00Z`)));
-  for (let t = Date.parse(weekStartOf(new Date(`${from}T00:00:00Z`))); t <= last; t += 7 * DAY_MS) weeks.push(new Date(t).toISOString().slice(0, 10));
+  for (let t = Date.parse(weekStartOf(new Date(`${from}T00:00:00Z`))); t <= last; t += 7 * DAY_MS)
+    weeks.push(new Date(t).toISOString().slice(0, 10));
   return weeks;
 }
 

@@ -6,7 +6,8 @@ export type Interval = { lower: number; upper: number; share: number };
 
 /** Two-sided interval at the z of the chosen confidence; n = 0 gives the uninformative 0–1. */
 export function wilsonInterval(k: number, n: number, z: number): Interval {
-  if (!Number.isInteger(k) || !Number.isInteger(n) || k < 0 || n < 0 || k > n) throw new RangeError(`Counts must satisfy 0 ≤ k ≤ n (got k=${k}, n=${n}).`);
+  if (!Number.isInteger(k) || !Number.isInteger(n) || k < 0 || n < 0 || k > n)
+    throw new RangeError(`Counts must satisfy 0 ≤ k ≤ n (got k=${k}, n=${n}).`);
   if (!(z > 0)) throw new RangeError("z must be positive.");
   if (n === 0) return { lower: 0, upper: 1, share: 0 };
   const p = k / n;
@@ -34,7 +35,10 @@ export function normalQuantile(p: number): number {
   if (p > 1 - low) return -normalQuantile(1 - p);
   const q = p - 0.5;
   const r = q * q;
-  return ((((((A[0] * r + A[1]) * r + A[2]) * r + A[3]) * r + A[4]) * r + A[5]) * q) / (((((B[0] * r + B[1]) * r + B[2]) * r + B[3]) * r + B[4]) * r + 1);
+  return (
+    ((((((A[0] * r + A[1]) * r + A[2]) * r + A[3]) * r + A[4]) * r + A[5]) * q) /
+    (((((B[0] * r + B[1]) * r + B[2]) * r + B[3]) * r + B[4]) * r + 1)
+  );
 }
 
 /** z for a two-sided interval at `confidence` (0.95 → 1.95996). */

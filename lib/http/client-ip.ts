@@ -20,7 +20,10 @@ function rateLimitKeyOf(address: string): string {
   const left = groups(head);
   const right = address.includes("::") ? groups(tail) : [];
   const full = [...left, ...Array(Math.max(0, 8 - left.length - right.length)).fill("0"), ...right];
-  return `${full.slice(0, 4).map((g) => g.replace(/^0+(?=.)/, "")).join(":")}::/64`;
+  return `${full
+    .slice(0, 4)
+    .map((g) => g.replace(/^0+(?=.)/, ""))
+    .join(":")}::/64`;
 }
 
 let cached: { source: string; list: BlockList } | null = null;
@@ -29,7 +32,10 @@ let cached: { source: string; list: BlockList } | null = null;
 export function trustedProxies(source = process.env.TRUSTED_PROXIES ?? ""): BlockList {
   if (cached?.source === source) return cached.list;
   const list = new BlockList();
-  for (const entry of source.split(",").map((e) => e.trim()).filter(Boolean)) {
+  for (const entry of source
+    .split(",")
+    .map((e) => e.trim())
+    .filter(Boolean)) {
     const [address, bits, extra] = entry.split("/");
     const family = isIP(normalise(address));
     if (!family || extra !== undefined || (bits !== undefined && !/^\d{1,3}$/.test(bits))) {

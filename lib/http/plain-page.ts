@@ -15,6 +15,13 @@ export function plainPage(title: string, text: string, options: Options = {}): N
   const link = options.link ? `<p><a href="${esc(options.link.href)}">${esc(options.link.label)}</a></p>` : "";
   return new NextResponse(
     `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width"><title>${esc(title)}</title></head><body style="font-family:system-ui,sans-serif;max-width:36rem;margin:3rem auto;padding:0 1rem;color:#1c1917"><main><h1 style="font-size:1.4rem">${esc(title)}</h1><p>${esc(text)}</p>${form}${link}</main></body></html>`,
-    { status: options.status ?? 200, headers: { "content-type": "text/html; charset=utf-8", "content-security-policy": "default-src 'none'; style-src 'unsafe-inline'; form-action 'self'", "cache-control": "no-store" } },
+    {
+      status: options.status ?? 200,
+      headers: {
+        "content-type": "text/html; charset=utf-8",
+        "content-security-policy": "default-src 'none'; style-src 'unsafe-inline'; form-action 'self'",
+        "cache-control": "no-store",
+      },
+    },
   );
 }

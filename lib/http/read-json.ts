@@ -10,7 +10,11 @@ const JSON_TYPE = /^application\/(?:[\w.+-]+\+)?json\s*(?:;|$)/i;
  * The body's bytes, read from the stream with a cap: past `maxBytes` the read stops and answers 413, whether or
  * not the client declared a Content-Length.
  */
-export async function readBodyBytes(request: Request, maxBytes: number, tooLargeMessage = `The body is larger than ${maxBytes} bytes.`): Promise<Uint8Array<ArrayBuffer>> {
+export async function readBodyBytes(
+  request: Request,
+  maxBytes: number,
+  tooLargeMessage = `The body is larger than ${maxBytes} bytes.`,
+): Promise<Uint8Array<ArrayBuffer>> {
   const tooLarge = () => new TooLarge(tooLargeMessage);
   if (Number(request.headers.get("content-length") ?? "0") > maxBytes) throw tooLarge();
   if (!request.body) return new Uint8Array();

@@ -1,5 +1,4 @@
-import type { IncomingMessage } from "node:http";
-import http from "node:http";
+import http, { type IncomingMessage } from "node:http";
 import https from "node:https";
 
 import { FORWARDED_HEADER, PEER_HEADER } from "./peer-address-headers";

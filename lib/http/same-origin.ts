@@ -19,6 +19,8 @@ export function isSameOriginChange({ method, origin, allowed }: { method: string
 export function requireSameOrigin(request: Request): void {
   const allowed = [new URL(appUrl("/")).origin, new URL(request.url).origin];
   if (!isSameOriginChange({ method: request.method, origin: request.headers.get("origin"), allowed })) {
-    throw new Forbidden("This change must come from a Swarfbook page of this site (the Origin header is missing or names another site). Scripts sign in with a personal access token instead.");
+    throw new Forbidden(
+      "This change must come from a Swarfbook page of this site (the Origin header is missing or names another site). Scripts sign in with a personal access token instead.",
+    );
   }
 }

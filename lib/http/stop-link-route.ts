@@ -2,10 +2,10 @@ import "server-only";
 
 import { NextResponse, type NextRequest } from "next/server";
 
-import { readStopToken, type StopPurpose } from "@/lib/mail/stop-token";
 import type { MailKind } from "@/lib/mail-preferences/mail-kinds";
 import { setMailPreference } from "@/lib/mail-preferences/mail-preferences";
 import { preferencesUrl } from "@/lib/mail-preferences/preferences-link";
+import { readStopToken, type StopPurpose } from "@/lib/mail/stop-token";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { plainPage } from "./plain-page";
@@ -30,7 +30,10 @@ export function stopLinkRoute(purpose: StopPurpose, kind: MailKind, texts: Texts
   const broken = () => plainPage("This link does not work", texts.broken, { status: 400 });
   const rate = { limit: 30, windowSeconds: 60 };
   return {
-    GET: withPublic(async (request) => ((await resolve(request)) ? plainPage(texts.ask, texts.askText, { button: texts.button }) : broken()), rate),
+    GET: withPublic(
+      async (request) => ((await resolve(request)) ? plainPage(texts.ask, texts.askText, { button: texts.button }) : broken()),
+      rate,
+    ),
     POST: withPublic(async (request) => {
       const found = await resolve(request);
       if (!found) return broken();

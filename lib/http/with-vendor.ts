@@ -8,8 +8,8 @@ import type { Permission } from "@/lib/auth/permissions";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { pinCookieHeader } from "@/lib/db/read-db";
 import { NotFound } from "@/lib/errors/domain-errors";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
+import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { clientIp } from "./client-ip";
 import { errorResponse } from "./error-response";
@@ -18,18 +18,17 @@ import { requireSameOrigin } from "./same-origin";
 
 type Params = Record<string, string | string[] | undefined>;
 type Ctx<P extends Params> = { params: Promise<P> };
-export type VendorHandler<P extends Params> = (
-  request: NextRequest,
-  context: { access: VendorAccess; params: P },
-) => Promise<Response>;
+export type VendorHandler<P extends Params> = (request: NextRequest, context: { access: VendorAccess; params: P }) => Promise<Response>;
 
 export type WithVendorOptions = { permission?: Permission; rateLimit?: { limit: number; windowSeconds: number } };
-
 
 // Operators (and the test run, whose browsers share one address) can raise every API limit at once.
 function scaled(rate: { limit: number; windowSeconds: number }) {
   const multiplier = Number(process.env.API_RATE_LIMIT_MULTIPLIER ?? "1");
-  return { limit: Math.ceil(rate.limit * (Number.isFinite(multiplier) && multiplier > 0 ? multiplier : 1)), windowSeconds: rate.windowSeconds };
+  return {
+    limit: Math.ceil(rate.limit * (Number.isFinite(multiplier) && multiplier > 0 ? multiplier : 1)),
+    windowSeconds: rate.windowSeconds,
+  };
 }
 
 /**

@@ -35,14 +35,20 @@ function parse(header: string): { server: string; results: Result[] } {
     const [head, ...rest] = part.trim().split(/\s+/);
     const [method, result] = (head ?? "").split("=");
     if (!method || !result) return [];
-    const props = new Map(rest.map((p) => p.split("=")).filter((kv) => kv.length === 2).map(([k, v]) => [k.toLowerCase(), v.toLowerCase().replace(/^"|"$/g, "")]));
+    const props = new Map(
+      rest
+        .map((p) => p.split("="))
+        .filter((kv) => kv.length === 2)
+        .map(([k, v]) => [k.toLowerCase(), v.toLowerCase().replace(/^"|"$/g, "")]),
+    );
     return [{ method: method.toLowerCase(), result: result.toLowerCase(), props }];
   });
   return { server: server.trim().split(/\s+/)[0]?.toLowerCase() ?? "", results };
 }
 
 /** Relaxed alignment: the signing domain is the From domain or one of its parent domains (never a bare TLD). */
-const aligned = (signer: string, fromDomain: string) => signer.includes(".") && (fromDomain === signer || fromDomain.endsWith(`.${signer}`));
+const aligned = (signer: string, fromDomain: string) =>
+  signer.includes(".") && (fromDomain === signer || fromDomain.endsWith(`.${signer}`));
 
 /**
  * Whether the receiving server vouches for the From domain: a DKIM pass by that domain (or a parent) or a DMARC

@@ -23,9 +23,22 @@ export type InboundMail = {
   /** Authentication-Results headers added by the receiving mail server. */
   authenticationResults?: string[];
 };
-export type InboundOutcome = { outcome: "accepted" | "duplicate" | "dropped"; reason: string; ticketId?: string; messageId?: string; vendorId?: string };
+export type InboundOutcome = {
+  outcome: "accepted" | "duplicate" | "dropped";
+  reason: string;
+  ticketId?: string;
+  messageId?: string;
+  vendorId?: string;
+};
 
-async function log(entry: { vendorId?: string | null; ticketId?: string | null; from: string; to: string; outcome: string; reason: string }) {
+async function log(entry: {
+  vendorId?: string | null;
+  ticketId?: string | null;
+  from: string;
+  to: string;
+  outcome: string;
+  reason: string;
+}) {
   await db("inbound_mail_log").insert({
     vendor_id: entry.vendorId ?? null,
     ticket_id: entry.ticketId ?? null,
@@ -59,7 +72,12 @@ async function currentRecipient(ticketId: string, userId: string): Promise<Recip
     .join("users as u", db.raw("u.id = ?", [userId]))
     .leftJoin("members as m", (j) => j.on("m.vendor_id", "t.vendor_id").andOn("m.user_id", "u.id"))
     .where("t.id", ticketId)
-    .first<{ vendor_id: string; customer_id: string; email: string; role: Role | null } | undefined>("t.vendor_id", "t.customer_id", "u.email", "m.role");
+    .first<{ vendor_id: string; customer_id: string; email: string; role: Role | null } | undefined>(
+      "t.vendor_id",
+      "t.customer_id",
+      "u.email",
+      "m.role",
+    );
   if (!row) return "ticket or person no longer exists";
   if (!row.role) return "the person the address was sent to is no longer a member";
   if (row.customer_id === userId) return { ticketId, vendorId: row.vendor_id, userId, email: row.email, asCustomer: true };
@@ -88,7 +106,11 @@ async function handleOne(to: string, mail: InboundMail): Promise<InboundOutcome>
   const failed = failedAuthentication(mail.authenticationResults ?? []);
   if (failed) return { outcome: "dropped", reason: `receiving server reports ${failed}`, ticketId: target.ticketId };
   if (inboundAuthRequired() && !senderAuthenticated(mail.authenticationResults ?? [], mail.from)) {
-    return { outcome: "dropped", reason: "receiving server does not vouch for the From domain (no aligned DKIM or DMARC pass)", ticketId: target.ticketId };
+    return {
+      outcome: "dropped",
+      reason: "receiving server does not vouch for the From domain (no aligned DKIM or DMARC pass)",
+      ticketId: target.ticketId,
+    };
   }
   const recipient = await currentRecipient(target.ticketId, target.userId);
   if (typeof recipient === "string") return { outcome: "dropped", reason: recipient, ticketId: target.ticketId };
@@ -140,8 +162,17 @@ export async function handleInboundMail(mail: InboundMail): Promise<InboundOutco
     }
     stored ||= result.outcome === "accepted" || result.outcome === "duplicate";
     try {
-      const ticket = result.ticketId ? await db("tickets").where({ id: result.ticketId }).first<{ id: string; vendor_id: string } | undefined>("id", "vendor_id") : undefined;
-      await log({ vendorId: ticket?.vendor_id ?? null, ticketId: ticket?.id ?? null, from: mail.from, to, outcome: result.outcome, reason: result.reason });
+      const ticket = result.ticketId
+        ? await db("tickets").where({ id: result.ticketId }).first<{ id: string; vendor_id: string } | undefined>("id", "vendor_id")
+        : undefined;
+      await log({
+        vendorId: ticket?.vendor_id ?? null,
+        ticketId: ticket?.id ?? null,
+        from: mail.from,
+        to,
+        outcome: result.outcome,
+        reason: result.reason,
+      });
     } catch (error) {
       if (!stored) throw new InboundTemporaryFailure("could not log the inbound mail", { cause: error });
       console.error("[inbound-mail] could not log an inbound mail", error);

@@ -17,16 +17,22 @@ export function replyAddressDays(): number {
 export const inboundMailDomain = () => process.env.INBOUND_MAIL_DOMAIN ?? "swarfbook.localhost";
 
 function secret(): string {
-  const value = process.env.REPLY_SECRET ?? process.env.NEXTAUTH_SECRET ?? (process.env.NODE_ENV === "production" ? undefined : "swarfbook-dev-reply-secret");
+  const value =
+    process.env.REPLY_SECRET ??
+    process.env.NEXTAUTH_SECRET ??
+    (process.env.NODE_ENV === "production" ? undefined : "swarfbook-dev-reply-secret");
   if (!value) throw new Error("REPLY_SECRET or NEXTAUTH_SECRET must be set to sign reply addresses.");
   return value;
 }
 
 const compact = (uuid: string) => uuid.replace(/-/g, "").toLowerCase();
-const expand = (hex: string) => `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`.toLowerCase();
+const expand = (hex: string) =>
+  `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`.toLowerCase();
 const sign = (ticketHex: string, userHex: string, expiryHex?: string) =>
   createHmac("sha256", secret())
-    .update(`ticket-reply:${ticketHex.toLowerCase()}:${userHex.toLowerCase()}${expiryHex === undefined ? "" : `:until:${expiryHex.toLowerCase()}`}`)
+    .update(
+      `ticket-reply:${ticketHex.toLowerCase()}:${userHex.toLowerCase()}${expiryHex === undefined ? "" : `:until:${expiryHex.toLowerCase()}`}`,
+    )
     .digest("hex")
     .slice(0, 32);
 

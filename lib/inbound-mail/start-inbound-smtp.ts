@@ -8,7 +8,10 @@ import { handleInboundMail } from "./handle-inbound-mail";
 const MAX_BYTES = 12 * 1024 * 1024;
 
 /** The loopback SMTP listener that receives replies to ticket notifications. */
-export async function startInboundSmtp({ host = "127.0.0.1", port = Number(process.env.INBOUND_SMTP_PORT ?? 2525) } = {}): Promise<SMTPServer> {
+export async function startInboundSmtp({
+  host = "127.0.0.1",
+  port = Number(process.env.INBOUND_SMTP_PORT ?? 2525),
+} = {}): Promise<SMTPServer> {
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ["AUTH", "STARTTLS"],
@@ -24,7 +27,9 @@ export async function startInboundSmtp({ host = "127.0.0.1", port = Number(proce
             const parsed = await simpleParser(Buffer.concat(chunks));
             const from = parsed.from?.value[0]?.address || (session.envelope.mailFrom ? session.envelope.mailFrom.address : "");
             const attachments = parsed.attachments.map((a) => ({ fileName: a.filename ?? "attachment", content: a.content }));
-            const authenticationResults = parsed.headerLines.filter((h) => h.key === "authentication-results").map((h) => h.line.replace(/^[^:]*:/, ""));
+            const authenticationResults = parsed.headerLines
+              .filter((h) => h.key === "authentication-results")
+              .map((h) => h.line.replace(/^[^:]*:/, ""));
             await handleInboundMail({
               rcptTo: session.envelope.rcptTo.map((r) => r.address),
               from,

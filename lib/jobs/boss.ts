@@ -11,7 +11,9 @@ export type QueueState = { state: "idle" | "starting" | "ready" | "failing"; att
 
 type Slot = { pool?: pg.Pool; writer?: PgBoss; boss?: PgBoss; starting?: Promise<PgBoss>; status: QueueState };
 const globalForBoss = globalThis as unknown as { swarfbookBoss?: Slot };
-const slot: Slot = (globalForBoss.swarfbookBoss ??= { status: { state: "idle", attempts: 0, lastError: null, since: new Date().toISOString() } });
+const slot: Slot = (globalForBoss.swarfbookBoss ??= {
+  status: { state: "idle", attempts: 0, lastError: null, since: new Date().toISOString() },
+});
 
 function setStatus(state: QueueState["state"], patch: Partial<QueueState> = {}) {
   slot.status = { ...slot.status, state, since: new Date().toISOString(), ...patch };

@@ -1,7 +1,6 @@
 import "server-only";
 
 import { createHash } from "node:crypto";
-
 import type { Knex } from "knex";
 import type PgBoss from "pg-boss";
 
@@ -9,7 +8,12 @@ import { getBoss, jobWriter } from "./boss";
 import { inTransaction, knexExecutor } from "./knex-executor";
 
 // Retries with backoff: a job outlives a search engine that is down for a while. Mail has its own, longer schedule.
-export const DEFAULT_JOB_OPTIONS = { retryLimit: 12, retryDelay: Math.max(1, Number(process.env.JOBS_RETRY_DELAY_SECONDS ?? 5)), retryBackoff: true, expireInSeconds: 300 };
+export const DEFAULT_JOB_OPTIONS = {
+  retryLimit: 12,
+  retryDelay: Math.max(1, Number(process.env.JOBS_RETRY_DELAY_SECONDS ?? 5)),
+  retryBackoff: true,
+  expireInSeconds: 300,
+};
 
 export type EnqueueOptions = Omit<PgBoss.SendOptions, "db" | "id"> & {
   /** The job's identity for its purpose (say "reply:<message>:<recipient>"): the same key is queued once. */
@@ -24,7 +28,12 @@ let creating: Promise<unknown> = Promise.resolve();
 async function createQueueOnce(name: string, options: Omit<PgBoss.Queue, "name">): Promise<void> {
   for (let attempt = 0; ; attempt++) {
     try {
-      if (await jobWriter().getQueue(name).catch(() => null)) return;
+      if (
+        await jobWriter()
+          .getQueue(name)
+          .catch(() => null)
+      )
+        return;
       // No queue, or no pg-boss schema yet: a started pg-boss installs the schema, then the queue is made.
       const boss = await getBoss();
       await boss.createQueue(name, { name, ...options });
@@ -54,7 +63,12 @@ export function jobIdFor(name: string, key: string): string {
  * Queue a job inside the caller's transaction: it commits with the write that implies it, or not at all.
  * Returns the job id, or null when a job with the same key was already queued.
  */
-export async function enqueue(trx: Knex | Knex.Transaction, name: string, data: object, options: EnqueueOptions = {}): Promise<string | null> {
+export async function enqueue(
+  trx: Knex | Knex.Transaction,
+  name: string,
+  data: object,
+  options: EnqueueOptions = {},
+): Promise<string | null> {
   await ensureQueue(name);
   const { key, ...rest } = options;
   return inTransaction(trx, (t) =>

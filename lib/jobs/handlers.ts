@@ -1,13 +1,13 @@
 import "server-only";
 
-import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/field/digest-job";
+import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
+import { SHEET_EVENTS_QUEUE } from "@/lib/events/sheet-events";
 import { generateBatchJob } from "@/lib/families/generate-batch";
 import { FAMILY_ALERTS_QUEUE } from "@/lib/families/publish-batch";
 import { sendBatchAlertsJob } from "@/lib/families/send-batch-alerts";
 import { FAMILY_GENERATE_QUEUE } from "@/lib/families/start-generation";
+import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/field/digest-job";
 import { FIELD_REFRESH_QUEUE, refreshFieldRollupsJob } from "@/lib/field/refresh-rollups";
-import { deliverSheetEvent, dispatchSheetEvent, SHEET_EVENT_DELIVERY_QUEUE } from "@/lib/events/dispatch-sheet-event";
-import { SHEET_EVENTS_QUEUE } from "@/lib/events/sheet-events";
 import { MAIL_QUEUE, mailRetrySchedule } from "@/lib/mail/enqueue-mail";
 import { DEAD_LETTER_CHECK_CRON, DEAD_LETTER_CHECK_QUEUE, deadLetterCheckJob } from "@/lib/mail/notify-dead-letters";
 import { sendMailJob } from "@/lib/mail/send-mail-job";

@@ -21,7 +21,11 @@ export function knexExecutor(trx: Knex.Transaction): SqlExecutor {
   return {
     async executeSql(text, values = []) {
       const connection = await client.acquireConnection();
-      const result = await client.query(connection, { sql: text, bindings: values.map((v) => (v === undefined ? null : v)), method: "raw" });
+      const result = await client.query(connection, {
+        sql: text,
+        bindings: values.map((v) => (v === undefined ? null : v)),
+        method: "raw",
+      });
       return { rows: result.response?.rows ?? [] };
     },
   };

@@ -5,7 +5,7 @@ import type PgBoss from "pg-boss";
 import { backoffSeconds } from "./backoff";
 import { getBoss, jobWriter } from "./boss";
 import { DEFAULT_JOB_OPTIONS, ensureQueue } from "./enqueue";
-import { type JobHandler, JOB_HANDLERS, JOB_RETRY_SCHEDULES, JOB_SCHEDULES } from "./handlers";
+import { JOB_HANDLERS, JOB_RETRY_SCHEDULES, JOB_SCHEDULES, type JobHandler } from "./handlers";
 
 const globalForWorker = globalThis as unknown as { swarfbookWorker?: Promise<void> };
 
@@ -66,7 +66,11 @@ async function registerWorkers(): Promise<void> {
   for (const [name, handler] of Object.entries(JOB_HANDLERS)) {
     if (registered.has(name)) continue;
     await ensureQueue(name);
-    await boss.work(name, { pollingIntervalSeconds, batchSize, includeMetadata: true }, runBatch(boss, name, handler, JOB_RETRY_SCHEDULES[name]?.()));
+    await boss.work(
+      name,
+      { pollingIntervalSeconds, batchSize, includeMetadata: true },
+      runBatch(boss, name, handler, JOB_RETRY_SCHEDULES[name]?.()),
+    );
     registered.add(name);
   }
   for (const [name, cron] of Object.entries(JOB_SCHEDULES)) await boss.schedule(name, cron, {}, { ...DEFAULT_JOB_OPTIONS, tz: "UTC" });

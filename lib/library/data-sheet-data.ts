@@ -1,18 +1,29 @@
 import { cornerFormLabels, geometryLabels } from "@/content-schema/catalogue-cutter";
 import { materialGroupLabels } from "@/content-schema/catalogue-material";
 import { cautionKindLabels } from "@/content-schema/sheet-kinds";
-import { operationCells } from "./operation-cells";
 import type { Cutter, MachineClass, Material } from "@/lib/catalogue/catalogue-types";
 import { formatChipLoad, formatCuttingSpeed, formatFeed, formatLength, formatPower, formatSpindleSpeed } from "@/lib/machining";
 import type { LibrarySheet } from "@/lib/sheets/get-library-sheet";
 import { formatDate } from "@/lib/ui/dates";
 
+import { operationCells } from "./operation-cells";
 import { STANDARD_CAUTIONS } from "./standard-cautions";
 
 // Pure: a readable sheet version laid out for print, every length, feed and speed in both unit systems.
 
 export type BothUnits = { metric: string; imperial: string };
-export type DataSheetOperation = { label: string; kind: string; notes: string | null; n: string; vf: BothUnits; fz: BothUnits | null; ap: BothUnits; ae: BothUnits; plunge: BothUnits; entry: string };
+export type DataSheetOperation = {
+  label: string;
+  kind: string;
+  notes: string | null;
+  n: string;
+  vf: BothUnits;
+  fz: BothUnits | null;
+  ap: BothUnits;
+  ae: BothUnits;
+  plunge: BothUnits;
+  entry: string;
+};
 export type DataSheetData = {
   title: string;
   summary: string;
@@ -36,7 +47,15 @@ export function cutterSpecs(cutter: Cutter): DataSheetData["cutter"] {
   return {
     sku: cutter.sku,
     name: cutter.name,
-    kind: [geometryLabels[cutter.geometry], cornerFormLabels[cutter.cornerForm], cutter.toolMaterial === "hss" ? "HSS" : "Carbide", cutter.coating, cutter.helixDeg !== undefined ? `helix ${cutter.helixDeg}°` : null].filter(Boolean).join(" · "),
+    kind: [
+      geometryLabels[cutter.geometry],
+      cornerFormLabels[cutter.cornerForm],
+      cutter.toolMaterial === "hss" ? "HSS" : "Carbide",
+      cutter.coating,
+      cutter.helixDeg !== undefined ? `helix ${cutter.helixDeg}°` : null,
+    ]
+      .filter(Boolean)
+      .join(" · "),
     specs: [
       { symbol: "DC", name: "cutting diameter", value: len(cutter.diameterMm) },
       { symbol: "APMX", name: "flute length", value: len(cutter.fluteLengthMm) },
@@ -57,7 +76,10 @@ function materialLines(m: Material): string[] {
 }
 
 function classLines(k: MachineClass): string[] {
-  return [`Spindle ${formatSpindleSpeed(k.rpmMin)} – ${formatSpindleSpeed(k.rpmMax)}, ${pair(both((u) => formatPower(k.powerKw, u)))}`, `Max feed ${pair(both((u) => formatFeed(k.maxFeedMmMin, u)))}; rigidity ${k.rigidity.toFixed(2)} (1 = stiffest)`];
+  return [
+    `Spindle ${formatSpindleSpeed(k.rpmMin)} – ${formatSpindleSpeed(k.rpmMax)}, ${pair(both((u) => formatPower(k.powerKw, u)))}`,
+    `Max feed ${pair(both((u) => formatFeed(k.maxFeedMmMin, u)))}; rigidity ${k.rigidity.toFixed(2)} (1 = stiffest)`,
+  ];
 }
 
 export function dataSheetOperations(data: Pick<LibrarySheet, "frontMatter" | "cutter">): DataSheetOperation[] {
@@ -81,10 +103,14 @@ export function dataSheetOperations(data: Pick<LibrarySheet, "frontMatter" | "cu
 }
 
 /** The sheet's own cautions, each with its kind. */
-export const ownCautions = (data: Pick<LibrarySheet, "frontMatter">): string[] => data.frontMatter.cautions.map((c) => `${cautionKindLabels[c.kind]}: ${c.text}`);
+export const ownCautions = (data: Pick<LibrarySheet, "frontMatter">): string[] =>
+  data.frontMatter.cautions.map((c) => `${cautionKindLabels[c.kind]}: ${c.text}`);
 
 /** The sheet's own cautions first, then the ones every sheet carries. */
-export const dataSheetCautions = (data: Pick<LibrarySheet, "frontMatter">): string[] => [...ownCautions(data), ...STANDARD_CAUTIONS.map((c) => c.text)];
+export const dataSheetCautions = (data: Pick<LibrarySheet, "frontMatter">): string[] => [
+  ...ownCautions(data),
+  ...STANDARD_CAUTIONS.map((c) => c.text),
+];
 
 export function dataSheetData(data: LibrarySheet, url: string): DataSheetData {
   const { version, current } = data;

@@ -15,7 +15,10 @@ export function operationCells(op: SheetOperation, units: UnitSystem, cutter: Cu
     vf: formatFeed(op.vf.value, units),
     fz: fz === undefined ? undefined : formatChipLoad(fz, units),
     ap: formatLength(op.ap.value, units),
-    ae: aePercent && aeLength !== undefined ? `${aePercent} (${formatLength(aeLength, units)})` : (aePercent ?? formatLength(op.ae.value, units)),
+    ae:
+      aePercent && aeLength !== undefined
+        ? `${aePercent} (${formatLength(aeLength, units)})`
+        : (aePercent ?? formatLength(op.ae.value, units)),
     plungeFeed: op.plungeFeed ? formatFeed(op.plungeFeed.value, units) : "—",
     entry: entryMethodLabels[op.entry],
     rampAngle: op.rampAngleDeg !== undefined ? `${op.rampAngleDeg}°` : undefined,

@@ -1,5 +1,6 @@
 import "server-only";
 
+import type { Vendor } from "@/content-schema/vendor";
 import { cutterShortUrl } from "@/lib/bench/cutter-links";
 import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
 import { NotFound } from "@/lib/errors/domain-errors";
@@ -11,7 +12,6 @@ import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 import { formatDate } from "@/lib/ui/dates";
 import { getVendorLogo } from "@/lib/vendors/get-vendor-logo";
-import type { Vendor } from "@/content-schema/vendor";
 
 import { cutterSpecs, dataSheetData, dataSheetOperations, ownCautions } from "./data-sheet-data";
 import { STANDARD_CAUTIONS } from "./standard-cautions";
@@ -26,16 +26,32 @@ async function brandingOf(vendor: Vendor): Promise<Branding> {
   return { vendorName: vendor.name, accentColor: vendor.accentColor, logo: logo && format ? { data: logo.bytes, format } : null };
 }
 
-export const versionUrl = (vendorSlug: string, sheetSlug: string, number: number) => appUrl(`/${vendorSlug}/library/${sheetSlug}/v/${number}`);
+export const versionUrl = (vendorSlug: string, sheetSlug: string, number: number) =>
+  appUrl(`/${vendorSlug}/library/${sheetSlug}/v/${number}`);
 
 /**
  * The data sheet of one published or superseded version. Drafts and versions in review are not found in the
  * Library at all; a withdrawn version is read online with its reason, never printed for the shop floor.
  */
-export async function printVersionDataSheet({ vendor, slug, number, now = new Date() }: { vendor: Vendor; slug: string; number: number; now?: Date }) {
+export async function printVersionDataSheet({
+  vendor,
+  slug,
+  number,
+  now = new Date(),
+}: {
+  vendor: Vendor;
+  slug: string;
+  number: number;
+  now?: Date;
+}) {
   const data = await getLibrarySheet({ vendorId: vendor.id, slug, number });
-  if (!data || (data.version.state !== "published" && data.version.state !== "superseded")) throw new NotFound("No printable version of that sheet was found.");
-  const pdf = await renderDataSheetPdf({ data: dataSheetData(data, versionUrl(vendor.slug, data.sheet.slug, data.version.number)), branding: await brandingOf(vendor), printedOn: formatDate(now) });
+  if (!data || (data.version.state !== "published" && data.version.state !== "superseded"))
+    throw new NotFound("No printable version of that sheet was found.");
+  const pdf = await renderDataSheetPdf({
+    data: dataSheetData(data, versionUrl(vendor.slug, data.sheet.slug, data.version.number)),
+    branding: await brandingOf(vendor),
+    printedOn: formatDate(now),
+  });
   return { pdf, fileName: `${data.sheet.slug}-v${data.version.number}` };
 }
 
@@ -60,7 +76,12 @@ export async function printCutterDataSheet({ vendor, sku, now = new Date() }: { 
     });
   }
   const pdf = await renderCutterDataSheetPdf({
-    data: { cutter: cutterSpecs(cutter), shortUrl: cutterShortUrl(cutter.shortCode), sheets, standardCautions: STANDARD_CAUTIONS.map((c) => c.text) },
+    data: {
+      cutter: cutterSpecs(cutter),
+      shortUrl: cutterShortUrl(cutter.shortCode),
+      sheets,
+      standardCautions: STANDARD_CAUTIONS.map((c) => c.text),
+    },
     branding: await brandingOf(vendor),
     printedOn: formatDate(now),
   });

@@ -9,5 +9,4 @@ export class MachiningInputError extends Error {
   }
 }
 
-export const isMachiningInputError = (error: unknown): error is MachiningInputError =>
-  error instanceof MachiningInputError;
+export const isMachiningInputError = (error: unknown): error is MachiningInputError => error instanceof MachiningInputError;

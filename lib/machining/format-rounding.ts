@@ -3,7 +3,8 @@ import type { QuantityKind, UnitSystem } from "./quantities";
 // Round half away from zero on the decimal digits, after shedding binary noise (4.762499999… is 4.7625).
 const roundTo = (value: number, decimals: number) => {
   const clean = Number(value.toPrecision(12));
-  const shifted = Math.abs(clean) >= 1e-6 && Math.abs(clean) < 1e15 ? Number(`${Math.abs(clean)}e${decimals}`) : Math.abs(clean) * 10 ** decimals;
+  const shifted =
+    Math.abs(clean) >= 1e-6 && Math.abs(clean) < 1e15 ? Number(`${Math.abs(clean)}e${decimals}`) : Math.abs(clean) * 10 ** decimals;
   return (Math.sign(clean) * Math.round(shifted)) / 10 ** decimals;
 };
 

@@ -44,7 +44,10 @@ export function splitQuantity<U extends string>(
   if (typeof text !== "string" || text.trim() === "") {
     throw new MachiningInputError(field, `Enter a ${expected}.`);
   }
-  const s = text.trim().toLowerCase().replace(/[\u00a0\u2009\u202f]/g, " ");
+  const s = text
+    .trim()
+    .toLowerCase()
+    .replace(/[\u00a0\u2009\u202f]/g, " ");
   for (const { alias, unit } of aliases) {
     if (s.endsWith(alias)) {
       const number = readNumber(s.slice(0, s.length - alias.length));
@@ -57,5 +60,4 @@ export function splitQuantity<U extends string>(
 }
 
 /** Sorts aliases longest first so `mm/min` wins over `m/min`. */
-export const byLength = <U extends string>(list: UnitAlias<U>[]) =>
-  [...list].sort((a, b) => b.alias.length - a.alias.length);
+export const byLength = <U extends string>(list: UnitAlias<U>[]) => [...list].sort((a, b) => b.alias.length - a.alias.length);

@@ -9,7 +9,7 @@ import {
   type LengthUnit,
 } from "./parse-aliases";
 import { splitQuantity } from "./parse-number";
-import { MM_PER_INCH, M_PER_FOOT } from "./units";
+import { M_PER_FOOT, MM_PER_INCH } from "./units";
 
 const finite = (value: number, field: string, text: string) => {
   if (!Number.isFinite(value)) throw new MachiningInputError(field, `“${text}” is out of range.`);

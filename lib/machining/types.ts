@@ -1,8 +1,7 @@
-import type { QuantityKind, UnitSystem } from "./quantities";
 import type { RuleId } from "./adapt/rules-meta";
 import type { WarningCode } from "./adapt/warning-codes";
-
 import type { OperationKind } from "./operation-kinds";
+import type { QuantityKind, UnitSystem } from "./quantities";
 
 export { isOperationKind, LEGACY_OPERATION_KINDS, normalizeOperationKind, OPERATION_KINDS, type OperationKind } from "./operation-kinds";
 

@@ -1,11 +1,11 @@
 import "server-only";
 
+import type { Vendor } from "@/content-schema/vendor";
 import { findMembership } from "@/lib/auth/membership";
 import type { Role } from "@/lib/auth/roles";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { db } from "@/lib/db/knex";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
-import type { Vendor } from "@/content-schema/vendor";
 
 import { readPreferencesToken } from "./preferences-link";
 
@@ -16,7 +16,13 @@ export type PreferencesPerson = { vendor: Vendor; userId: string; email: string;
  * sign-in needed, and only under the vendor it was made for), else the signed-in member. Nobody otherwise, and
  * never a person who is no longer a member of this vendor.
  */
-export async function findPreferencesPerson({ vendorSlug, token }: { vendorSlug: string; token?: string | null }): Promise<PreferencesPerson | null> {
+export async function findPreferencesPerson({
+  vendorSlug,
+  token,
+}: {
+  vendorSlug: string;
+  token?: string | null;
+}): Promise<PreferencesPerson | null> {
   const vendor = await getVendorBySlug(vendorSlug);
   if (!vendor) return null;
   const fromLink = token ? readPreferencesToken(token) : null;

@@ -9,10 +9,22 @@ export const mailKindSchema = z.enum(MAIL_KINDS);
 export type MailKind = z.infer<typeof mailKindSchema>;
 
 export const MAIL_KIND_TEXTS: Record<MailKind, { label: string; description: string }> = {
-  change_alerts: { label: "Change alerts", description: "When a sheet you saved a setup from gets a new version: what changed, re-adapted to your machines." },
-  batch_changes: { label: "Batch mails", description: "When the vendor publishes a batch of sheet changes at once: one mail for the whole batch." },
-  ticket_notifications: { label: "Ticket notifications", description: "Replies on your tickets; for support staff, new tickets and customer replies." },
-  weekly_digest: { label: "Weekly digest", description: "Monday's Field-results summary: versions that need attention, customer changes, machines no class covers." },
+  change_alerts: {
+    label: "Change alerts",
+    description: "When a sheet you saved a setup from gets a new version: what changed, re-adapted to your machines.",
+  },
+  batch_changes: {
+    label: "Batch mails",
+    description: "When the vendor publishes a batch of sheet changes at once: one mail for the whole batch.",
+  },
+  ticket_notifications: {
+    label: "Ticket notifications",
+    description: "Replies on your tickets; for support staff, new tickets and customer replies.",
+  },
+  weekly_digest: {
+    label: "Weekly digest",
+    description: "Monday's Field-results summary: versions that need attention, customer changes, machines no class covers.",
+  },
 };
 
 /** The kinds that reach a person with this role, in the order the preferences page lists them. */

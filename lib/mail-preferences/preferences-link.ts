@@ -1,8 +1,8 @@
 import "server-only";
 
 import { appUrl } from "@/lib/http/app-url";
-import { escapeHtml } from "@/lib/markdown/render-mail-markdown";
 import { createStopToken, readStopToken } from "@/lib/mail/stop-token";
+import { escapeHtml } from "@/lib/markdown/render-mail-markdown";
 
 import type { MailKind } from "./mail-kinds";
 
@@ -30,5 +30,9 @@ export function mailFooter(vendorSlug: string, vendorName: string, who: Who): { 
 
 /** A mail with the footer added to its text part and, when it has one, its HTML part. */
 export function withFooter<M extends { text: string; html?: string }>(mail: M, footer: { text: string; html: string }): M {
-  return { ...mail, text: `${mail.text.replace(/\n*$/, "\n")}${footer.text}`, ...(mail.html !== undefined ? { html: `${mail.html}\n${footer.html}` } : {}) };
+  return {
+    ...mail,
+    text: `${mail.text.replace(/\n*$/, "\n")}${footer.text}`,
+    ...(mail.html !== undefined ? { html: `${mail.html}\n${footer.html}` } : {}),
+  };
 }

@@ -1,9 +1,9 @@
 import "server-only";
 
+import { mailMessageSchema } from "@/content-schema/mail";
 import { db } from "@/lib/db/knex";
 
 import { enqueueMail, MAIL_DEAD_LETTER_QUEUE } from "./enqueue-mail";
-import { mailMessageSchema } from "@/content-schema/mail";
 
 export type DeadLetter = { id: string; to: string; subject: string; failedAt: Date; error: string | null };
 export type DeadLetterSummary = { count: number; oldest: Date | null; lastError: string | null };

@@ -2,10 +2,9 @@ import "server-only";
 
 import type { Knex } from "knex";
 
+import { mailMessageSchema, type MailMessage } from "@/content-schema/mail";
 import { retriesToCover } from "@/lib/jobs/backoff";
 import { enqueue, ensureQueue } from "@/lib/jobs/enqueue";
-
-import { type MailMessage, mailMessageSchema } from "@/content-schema/mail";
 
 export const MAIL_QUEUE = "mail.send";
 /** Mail that failed for the whole retry window waits here for the operator (/operator). */

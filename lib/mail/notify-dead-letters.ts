@@ -17,9 +17,13 @@ export async function notifyDeadLetters(): Promise<boolean> {
   const summary = await summariseDeadLetters();
   return db.transaction(async (trx) => {
     await trx("dead_letter_notices").insert({ queue: MAIL_DEAD_LETTER_QUEUE, notified_count: 0 }).onConflict("queue").ignore();
-    const notice = await trx("dead_letter_notices").where({ queue: MAIL_DEAD_LETTER_QUEUE }).forUpdate().first<{ notified_count: number }>("notified_count");
+    const notice = await trx("dead_letter_notices")
+      .where({ queue: MAIL_DEAD_LETTER_QUEUE })
+      .forUpdate()
+      .first<{ notified_count: number }>("notified_count");
     if (summary.count <= notice.notified_count) {
-      if (summary.count < notice.notified_count) await trx("dead_letter_notices").where({ queue: MAIL_DEAD_LETTER_QUEUE }).update({ notified_count: summary.count });
+      if (summary.count < notice.notified_count)
+        await trx("dead_letter_notices").where({ queue: MAIL_DEAD_LETTER_QUEUE }).update({ notified_count: summary.count });
       return false;
     }
     const operators: { email: string }[] = await trx("users").where({ is_operator: true }).select("email");
@@ -31,9 +35,15 @@ export async function notifyDeadLetters(): Promise<boolean> {
       `Retry or discard them on the operator page: ${appUrl("/operator")}`,
     ].join("\n");
     for (const { email } of operators) {
-      await enqueueMail(trx, { to: email, subject: `Swarfbook: ${summary.count} undelivered e-mail(s)`, text }, { key: `dead-letters:${summary.count}:${summary.oldest?.toISOString()}` });
+      await enqueueMail(
+        trx,
+        { to: email, subject: `Swarfbook: ${summary.count} undelivered e-mail(s)`, text },
+        { key: `dead-letters:${summary.count}:${summary.oldest?.toISOString()}` },
+      );
     }
-    await trx("dead_letter_notices").where({ queue: MAIL_DEAD_LETTER_QUEUE }).update({ notified_count: summary.count, notified_at: trx.fn.now() });
+    await trx("dead_letter_notices")
+      .where({ queue: MAIL_DEAD_LETTER_QUEUE })
+      .update({ notified_count: summary.count, notified_at: trx.fn.now() });
     return true;
   });
 }

@@ -1,6 +1,7 @@
 import "server-only";
 
 import { mailMessageSchema } from "@/content-schema/mail";
+
 import { MAIL_FROM, mailTransport } from "./transport";
 
 export async function sendMailJob(data: unknown): Promise<void> {

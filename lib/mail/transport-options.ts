@@ -1,5 +1,4 @@
 import { isIP } from "node:net";
-
 import type SMTPTransport from "nodemailer/lib/smtp-transport";
 
 // Pure: how outgoing mail reaches the relay. STARTTLS is used whenever the relay offers it (nodemailer's default once

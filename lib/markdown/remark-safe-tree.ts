@@ -29,9 +29,16 @@ function asText(parent: Parents, value: string): RootContent {
 /** Raw HTML shows as the text it is; images become links (no remote image loads when a message is opened). */
 function safeNode(parent: Parents, node: RootContent): RootContent {
   if (node.type === "html") return asText(parent, node.value);
-  if (node.type === "image") return { type: "link", url: node.url, title: node.title, children: [{ type: "text", value: node.alt || node.url }] };
+  if (node.type === "image")
+    return { type: "link", url: node.url, title: node.title, children: [{ type: "text", value: node.alt || node.url }] };
   if (node.type === "imageReference") {
-    return { type: "linkReference", identifier: node.identifier, label: node.label, referenceType: node.referenceType, children: [{ type: "text", value: node.alt || node.label || node.identifier }] };
+    return {
+      type: "linkReference",
+      identifier: node.identifier,
+      label: node.label,
+      referenceType: node.referenceType,
+      children: [{ type: "text", value: node.alt || node.label || node.identifier }],
+    };
   }
   return node;
 }

@@ -1,4 +1,4 @@
-import type { Element, Root as HastRoot, RootContent as HastContent } from "hast";
+import type { Element, RootContent as HastContent, Root as HastRoot } from "hast";
 import type { ListItem, Nodes, Root } from "mdast";
 import rehypeSanitize, { defaultSchema, type Options as SanitizeSchema } from "rehype-sanitize";
 import rehypeStringify from "rehype-stringify";

@@ -3,10 +3,10 @@ import type { Node } from "unist";
 
 import {
   isMdxComponentName,
-  type MdxComponentName,
   mdxComponentNames,
   mdxComponentSchemas,
   mdxComponentsWithChildren,
+  type MdxComponentName,
 } from "@/content-schema/mdx-components";
 
 import type { SheetIssueSeverity } from "./sheet-issue";
@@ -42,7 +42,7 @@ function readProps(element: JsxElement, report: Report): Record<string, string> 
   for (const attribute of element.attributes) {
     const at: Node = attribute.position ? attribute : element;
     if (attribute.type === "mdxJsxExpressionAttribute") {
-      report(at, "Spread attributes `{…}` are not allowed; write each attribute as name=\"value\".");
+      report(at, 'Spread attributes `{…}` are not allowed; write each attribute as name="value".');
       clean = false;
       continue;
     }

@@ -10,7 +10,10 @@ export const sourceHash = (source: string) => createHash("sha256").update(source
 type Compile = (source: string) => Promise<CompiledSheet>;
 
 /** A per-process cache of compiled sheets; the promise is stored so concurrent requests compile once. */
-export function createCompiledSheetCache({ maxEntries = 200, compile = compileSheetContent }: { maxEntries?: number; compile?: Compile } = {}) {
+export function createCompiledSheetCache({
+  maxEntries = 200,
+  compile = compileSheetContent,
+}: { maxEntries?: number; compile?: Compile } = {}) {
   const cache = new LruCache<string, Promise<CompiledSheet>>(maxEntries);
 
   async function getCompiled(versionId: string, source: string): Promise<CompiledSheet> {
@@ -36,6 +39,7 @@ export function createCompiledSheetCache({ maxEntries = 200, compile = compileSh
 const defaultCache = createCompiledSheetCache();
 
 /** A published version compiled once per server process (rendered by `components/mdx/render-sheet.tsx`). */
-export const getCachedCompiledSheet = (versionId: string, source: string): Promise<CompiledSheet> => defaultCache.getCompiled(versionId, source);
+export const getCachedCompiledSheet = (versionId: string, source: string): Promise<CompiledSheet> =>
+  defaultCache.getCompiled(versionId, source);
 
 export const clearCompiledSheetCache = () => defaultCache.clear();

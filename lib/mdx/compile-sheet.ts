@@ -19,7 +19,11 @@ export type CompiledSheet = { Content: SheetContent; frontMatter: SheetFrontMatt
 export async function compileSheetContent(source: string): Promise<CompiledSheet> {
   const checked = validateSheetSource(source);
   if (!checked.ok) throw new SheetSourceError(checked.issues);
-  const guard = { mode: "throw" as const, lineOffset: checked.bodyLine - 1, operationKinds: checked.frontMatter.operations.map((op) => op.kind) };
+  const guard = {
+    mode: "throw" as const,
+    lineOffset: checked.bodyLine - 1,
+    operationKinds: checked.frontMatter.operations.map((op) => op.kind),
+  };
   const { content } = await compileMDX({
     source: checked.body,
     // No components here: they are bound per render, so one compile serves every unit system.

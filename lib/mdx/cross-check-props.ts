@@ -13,7 +13,10 @@ export function crossCheckProps(element: JsxElement, kinds: readonly string[], r
   if (element.name === "AdaptPanel") {
     const parsed = adaptPanelPropsSchema.safeParse(propsOf(element));
     if (parsed.success && parsed.data.operation >= kinds.length) {
-      report(element, `<AdaptPanel operation="${parsed.data.operation}"> points past the ${kinds.length} operation(s) in the front matter (counting from 0).`);
+      report(
+        element,
+        `<AdaptPanel operation="${parsed.data.operation}"> points past the ${kinds.length} operation(s) in the front matter (counting from 0).`,
+      );
     }
   }
   if (element.name === "OperationTable") {

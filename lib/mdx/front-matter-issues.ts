@@ -10,7 +10,10 @@ import { yamlPathOffset } from "./yaml-path-position";
 export type FrontMatterResult = { frontMatter?: SheetFrontMatter; issues: SheetIssue[] };
 
 export function formatPath(path: readonly PropertyKey[]): string {
-  return path.reduce<string>((out, step) => (typeof step === "number" ? `${out}[${step}]` : out ? `${out}.${String(step)}` : String(step)), "");
+  return path.reduce<string>(
+    (out, step) => (typeof step === "number" ? `${out}[${step}]` : out ? `${out}.${String(step)}` : String(step)),
+    "",
+  );
 }
 
 function zodMessage(issue: z.core.$ZodIssue, path: string, unknownKey?: string): string {
@@ -21,7 +24,6 @@ function zodMessage(issue: z.core.$ZodIssue, path: string, unknownKey?: string):
   if (issue.code === "invalid_type" && issue.input === undefined) return `${path} is required.`;
   return path ? `${path}: ${issue.message}` : issue.message;
 }
-
 
 /**
  * Parses and validates the YAML front matter. `firstLine` is the file line where the YAML
@@ -47,7 +49,12 @@ export function checkFrontMatter(yamlText: string, firstLine: number): FrontMatt
     value = doc.toJS({ maxAliasCount: 50 });
   } catch {
     // yaml refuses to expand aliases past the count (an "alias bomb"): a problem with the sheet, not a crash.
-    return { issues: [...yamlIssues, { line: firstLine, message: "YAML: too many aliases (*name) to expand. Write the values out.", severity: "error" }] };
+    return {
+      issues: [
+        ...yamlIssues,
+        { line: firstLine, message: "YAML: too many aliases (*name) to expand. Write the values out.", severity: "error" },
+      ],
+    };
   }
   const parsed = sheetFrontMatterSchema.safeParse(value ?? {}, { reportInput: true });
   if (parsed.success) return { frontMatter: parsed.data, issues: yamlIssues };

@@ -1,7 +1,7 @@
 import type { SheetFrontMatter } from "@/content-schema/sheet-front-matter";
 
-import { checkFrontMatter } from "./front-matter-issues";
 import { checkMdxBody } from "./check-mdx-body";
+import { checkFrontMatter } from "./front-matter-issues";
 import { hasErrors, type SheetIssue } from "./sheet-issue";
 import { splitFrontMatter } from "./split-front-matter";
 

@@ -1,9 +1,9 @@
 import "server-only";
 
+import { writeAudit } from "@/lib/audit/write-audit";
 import { hashToken } from "@/lib/auth/api-tokens";
 import { hashPassword } from "@/lib/auth/passwords";
 import type { Role } from "@/lib/auth/roles";
-import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput, NotFound, Unauthenticated } from "@/lib/errors/domain-errors";
 import { endSessions } from "@/lib/users/end-sessions";
@@ -29,7 +29,13 @@ export async function findOpenInvitation({ vendorId, token }: { vendorId: string
  *   a never-confirmed one (perhaps made by someone else with this address) gets the invitee's password in place
  *   of the unproven one.
  */
-export async function acceptInvitation(opts: { vendorId: string; token: string; name?: string; password?: string; sessionUserId: string | null }) {
+export async function acceptInvitation(opts: {
+  vendorId: string;
+  token: string;
+  name?: string;
+  password?: string;
+  sessionUserId: string | null;
+}) {
   const passwordHash = opts.password ? await hashPassword(opts.password) : null;
   return db.transaction(async (trx) => {
     const invitation = await findOpenInvitation(opts);
@@ -54,7 +60,9 @@ export async function acceptInvitation(opts: { vendorId: string; token: string; 
         await endSessions(existing.id, trx);
         userId = existing.id;
       } else {
-        [{ id: userId }] = await trx("users").insert({ email: invitation.email, ...account }).returning<{ id: string }[]>("id");
+        [{ id: userId }] = await trx("users")
+          .insert({ email: invitation.email, ...account })
+          .returning<{ id: string }[]>("id");
       }
       created = true;
     }
@@ -63,7 +71,14 @@ export async function acceptInvitation(opts: { vendorId: string; token: string; 
       .onConflict(["vendor_id", "user_id"])
       .merge({ role: invitation.role, updated_at: trx.fn.now() });
     await writeAudit(
-      { vendorId: opts.vendorId, actorUserId: userId, action: "member.join", objectType: "invitation", objectId: invitation.id, details: { role: invitation.role } },
+      {
+        vendorId: opts.vendorId,
+        actorUserId: userId,
+        action: "member.join",
+        objectType: "invitation",
+        objectId: invitation.id,
+        details: { role: invitation.role },
+      },
       trx,
     );
     return { userId, email: invitation.email, role: invitation.role, created };

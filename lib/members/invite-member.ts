@@ -2,14 +2,14 @@ import "server-only";
 
 import { randomBytes } from "node:crypto";
 
+import { roleWord } from "@/lib/audit/action-labels";
+import { writeAudit } from "@/lib/audit/write-audit";
 import { hashToken } from "@/lib/auth/api-tokens";
 import type { Role } from "@/lib/auth/roles";
-import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { Conflict } from "@/lib/errors/domain-errors";
-import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { appUrl } from "@/lib/http/app-url";
-import { roleWord } from "@/lib/audit/action-labels";
+import { enqueueMail } from "@/lib/mail/enqueue-mail";
 
 export const INVITATION_DAYS = 7;
 
@@ -46,7 +46,14 @@ export async function inviteMember(opts: {
       })
       .returning("id");
     await writeAudit(
-      { vendorId: opts.vendorId, actorUserId: opts.actorUserId, action: "member.invite", objectType: "invitation", objectId: row.id, details: { email: opts.email, role: opts.role } },
+      {
+        vendorId: opts.vendorId,
+        actorUserId: opts.actorUserId,
+        action: "member.invite",
+        objectType: "invitation",
+        objectId: row.id,
+        details: { email: opts.email, role: opts.role },
+      },
       trx,
     );
     const link = appUrl(`/${opts.vendorSlug}/join/${token}`);

@@ -18,7 +18,14 @@ export async function listMyCutters(owner: Owner): Promise<MyCutter[]> {
     .where({ "cc.vendor_id": owner.vendorId, "cc.user_id": owner.userId })
     .orderBy([{ column: "c.diameter_mm" }, { column: "c.sku" }])
     .select("c.id", "c.sku", "c.name", "c.diameter_mm", "c.flutes", "cc.created_at");
-  return rows.map((r) => ({ id: r.id, sku: r.sku, name: r.name, diameterMm: Number(r.diameter_mm), flutes: Number(r.flutes), addedAt: r.created_at }));
+  return rows.map((r) => ({
+    id: r.id,
+    sku: r.sku,
+    name: r.name,
+    diameterMm: Number(r.diameter_mm),
+    flutes: Number(r.flutes),
+    addedAt: r.created_at,
+  }));
 }
 
 export async function hasMyCutter(owner: Owner & { cutterId: string }): Promise<boolean> {
@@ -26,10 +33,18 @@ export async function hasMyCutter(owner: Owner & { cutterId: string }): Promise<
 }
 
 /** Adds the vendor's cutter with this SKU (any case) to the customer's cutters; adding it again changes nothing. */
-export async function addMyCutter({ vendorId, userId, sku }: Owner & { sku: string }): Promise<{ id: string; sku: string; added: boolean }> {
+export async function addMyCutter({
+  vendorId,
+  userId,
+  sku,
+}: Owner & { sku: string }): Promise<{ id: string; sku: string; added: boolean }> {
   const cutter = await getCutterBySku({ vendorId, sku: sku.trim() });
   if (!cutter) throw new NotFound(`No cutter has the SKU ${sku.trim()}.`);
-  const inserted = await db("customer_cutters").insert({ vendor_id: vendorId, user_id: userId, cutter_id: cutter.id }).onConflict(["vendor_id", "user_id", "cutter_id"]).ignore().returning("cutter_id");
+  const inserted = await db("customer_cutters")
+    .insert({ vendor_id: vendorId, user_id: userId, cutter_id: cutter.id })
+    .onConflict(["vendor_id", "user_id", "cutter_id"])
+    .ignore()
+    .returning("cutter_id");
   return { id: cutter.id, sku: cutter.sku, added: inserted.length > 0 };
 }
 

@@ -14,7 +14,15 @@ export type Branding = { vendorName: string; accentColor: string; logo: { data: 
 export const ds = {
   ...pdfBase,
   ...StyleSheet.create({
-    band: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", paddingHorizontal: 10, paddingVertical: 6, marginBottom: 10, borderRadius: 3 },
+    band: {
+      flexDirection: "row",
+      alignItems: "center",
+      justifyContent: "space-between",
+      paddingHorizontal: 10,
+      paddingVertical: 6,
+      marginBottom: 10,
+      borderRadius: 3,
+    },
     brand: { flexDirection: "row", alignItems: "center" },
     logo: { width: 24, height: 24, marginRight: 8, backgroundColor: "#ffffff", borderRadius: 2 },
     card: { borderWidth: 0.5, borderColor: "#a8a29e", borderRadius: 3, padding: 6 },
@@ -22,7 +30,16 @@ export const ds = {
     bold: { fontWeight: "bold" },
     small: { fontSize: 7.5 },
     alt: { fontSize: 7, color: "#57534e" },
-    footer: { position: "absolute", bottom: 16, left: 32, right: 32, fontSize: 7, color: "#57534e", flexDirection: "row", justifyContent: "space-between" },
+    footer: {
+      position: "absolute",
+      bottom: 16,
+      left: 32,
+      right: 32,
+      fontSize: 7,
+      color: "#57534e",
+      flexDirection: "row",
+      justifyContent: "space-between",
+    },
   }),
 };
 
@@ -83,7 +100,9 @@ export function OperationsTable({ operations }: { operations: DataSheetOperation
     <View style={{ fontSize: 8 }}>
       <View style={[ds.row, ds.th, { borderBottomWidth: 1, borderBottomColor: "#57534e" }]}>
         {COLUMNS.map((c) => (
-          <Text key={c.key} style={{ width: c.width, paddingRight: 3 }}>{c.label}</Text>
+          <Text key={c.key} style={{ width: c.width, paddingRight: 3 }}>
+            {c.label}
+          </Text>
         ))}
       </View>
       {operations.map((op, index) => (
@@ -112,7 +131,9 @@ export function Cautions({ cautions, title = "Cautions" }: { cautions: string[];
     <View wrap={false}>
       <Text style={ds.h2}>{title}</Text>
       {cautions.map((c, i) => (
-        <Text key={i} style={[ds.li, ds.small]}>{t(`⚠ ${c}`)}</Text>
+        <Text key={i} style={[ds.li, ds.small]}>
+          {t(`⚠ ${c}`)}
+        </Text>
       ))}
     </View>
   );

@@ -4,8 +4,8 @@ import { Document, Image, Page, renderToBuffer, Text, View } from "@react-pdf/re
 
 import type { DataSheetData } from "@/lib/library/data-sheet-data";
 
-import { BrandBand, type Branding, Cautions, CutterSpecs, ds, OperationsTable, PageFooter } from "./data-sheet-parts";
-import { pdfText as t, qrDataUrl } from "./pdf-kit";
+import { BrandBand, Cautions, CutterSpecs, ds, OperationsTable, PageFooter, type Branding } from "./data-sheet-parts";
+import { qrDataUrl, pdfText as t } from "./pdf-kit";
 
 function Card({ title, children }: { title: string; children: React.ReactNode }) {
   return (
@@ -39,11 +39,19 @@ function DataSheet({ data, branding, qr, printedOn }: { data: DataSheetData; bra
           </Card>
           <Card title="Material">
             <Text style={ds.bold}>{t(data.material.name)}</Text>
-            {data.material.lines.map((l, i) => <Text key={i} style={ds.small}>{t(l)}</Text>)}
+            {data.material.lines.map((l, i) => (
+              <Text key={i} style={ds.small}>
+                {t(l)}
+              </Text>
+            ))}
           </Card>
           <Card title="Reference machine class">
             <Text style={ds.bold}>{t(data.machineClass.name)}</Text>
-            {data.machineClass.lines.map((l, i) => <Text key={i} style={ds.small}>{t(l)}</Text>)}
+            {data.machineClass.lines.map((l, i) => (
+              <Text key={i} style={ds.small}>
+                {t(l)}
+              </Text>
+            ))}
           </Card>
         </View>
         <Text style={ds.h2}>Operations (metric, imperial below)</Text>
@@ -56,6 +64,14 @@ function DataSheet({ data, branding, qr, printedOn }: { data: DataSheetData; bra
 }
 
 /** One sheet version on paper: branding, cutter card, operations in both unit systems, cautions, QR code to the version. */
-export async function renderDataSheetPdf({ data, branding, printedOn }: { data: DataSheetData; branding: Branding; printedOn: string }): Promise<Buffer> {
+export async function renderDataSheetPdf({
+  data,
+  branding,
+  printedOn,
+}: {
+  data: DataSheetData;
+  branding: Branding;
+  printedOn: string;
+}): Promise<Buffer> {
   return renderToBuffer(<DataSheet data={data} branding={branding} qr={await qrDataUrl(data.url)} printedOn={printedOn} />);
 }

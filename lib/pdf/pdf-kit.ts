@@ -1,7 +1,6 @@
 import "server-only";
 
 import { existsSync } from "node:fs";
-
 import { Font, StyleSheet } from "@react-pdf/renderer";
 import QRCode from "qrcode";
 
@@ -19,7 +18,15 @@ export const pdfFamily = hasDejaVu ? "DejaVu" : "Helvetica";
 
 /** Text safe for the font in use: with Helvetica the few symbols outside Latin-1 are spelt out. */
 export const pdfText = (text: string) =>
-  hasDejaVu ? text : text.replace(/→/g, "->").replace(/[\u00a0\u202f]/g, " ").replace(/·/g, "x").replace(/³/g, "3").replace(/≥/g, ">=").replace(/≤/g, "<=");
+  hasDejaVu
+    ? text
+    : text
+        .replace(/→/g, "->")
+        .replace(/[\u00a0\u202f]/g, " ")
+        .replace(/·/g, "x")
+        .replace(/³/g, "3")
+        .replace(/≥/g, ">=")
+        .replace(/≤/g, "<=");
 
 export const pdfBase = StyleSheet.create({
   page: { padding: 32, fontSize: 9, fontFamily: pdfFamily, color: "#1c1917" },

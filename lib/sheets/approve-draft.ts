@@ -18,14 +18,29 @@ export async function approveDraft(options: ApproveOptions) {
 }
 
 /** The approval inside the caller's transaction (a family batch approves all its sheets in one). */
-export async function approveDraftIn(trx: Knex.Transaction, { vendorId, userId, slug, settings }: ApproveOptions & { settings: Awaited<ReturnType<typeof getVendorSettings>> }) {
+export async function approveDraftIn(
+  trx: Knex.Transaction,
+  { vendorId, userId, slug, settings }: ApproveOptions & { settings: Awaited<ReturnType<typeof getVendorSettings>> },
+) {
   const { draft } = await lockOpenDraft({ vendorId, slug, trx });
   if (draft.state !== "in_review") throw new Conflict("Only a version in review can be approved. Submit the draft first.");
   if (draft.approvedBy) throw new Conflict(`This version is already approved by ${draft.approvedByName ?? "another engineer"}.`);
   if (settings.requireSecondApproval && (draft.authorId === userId || draft.updatedBy === userId)) {
     throw new Forbidden("You wrote or last edited this version; an engineer other than the author must approve it.");
   }
-  await trx("sheet_versions").where({ vendor_id: vendorId, id: draft.id }).update({ approved_by: userId, approved_at: trx.fn.now(), updated_at: trx.fn.now() });
-  await writeAudit({ vendorId, actorUserId: userId, action: "sheet.approve", objectType: "sheet_version", objectId: draft.id, details: { slug, number: draft.number } }, trx);
+  await trx("sheet_versions")
+    .where({ vendor_id: vendorId, id: draft.id })
+    .update({ approved_by: userId, approved_at: trx.fn.now(), updated_at: trx.fn.now() });
+  await writeAudit(
+    {
+      vendorId,
+      actorUserId: userId,
+      action: "sheet.approve",
+      objectType: "sheet_version",
+      objectId: draft.id,
+      details: { slug, number: draft.number },
+    },
+    trx,
+  );
   return { number: draft.number, approved: true };
 }

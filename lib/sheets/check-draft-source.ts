@@ -19,7 +19,17 @@ const lineOfKey = (source: string, key: string) => {
  * Validates a sheet source and checks that its front matter names catalogue entries of this vendor
  * (and, for an existing sheet, the sheet's own cutter, material and machine class).
  */
-export async function checkDraftSource({ vendorId, source, expected, trx = db }: { vendorId: string; source: string; expected?: Refs; trx?: Knex }): Promise<DraftCheck> {
+export async function checkDraftSource({
+  vendorId,
+  source,
+  expected,
+  trx = db,
+}: {
+  vendorId: string;
+  source: string;
+  expected?: Refs;
+  trx?: Knex;
+}): Promise<DraftCheck> {
   const checked = validateSheetSource(source);
   const fm = checked.frontMatter ?? null;
   if (!fm) return { ok: false, frontMatter: null, issues: checked.issues, refs: null };
@@ -29,13 +39,21 @@ export async function checkDraftSource({ vendorId, source, expected, trx = db }:
   const material = await trx("materials").where({ vendor_id: vendorId, slug: fm.material }).first("id");
   const machineClass = await trx("machine_classes").where({ vendor_id: vendorId, slug: fm.machineClass }).first("id");
   const refCheck = (key: string, found: { id: string } | undefined, want: string | undefined, what: string, value: string) => {
-    if (!found) issues.push({ line: lineOfKey(source, key), path: key, severity: "error", message: `No ${what} “${value}” in the catalogue.` });
-    else if (want && found.id !== want) issues.push({ line: lineOfKey(source, key), path: key, severity: "error", message: `This sheet is for another ${what}; “${value}” cannot change it. Start a new sheet instead.` });
+    if (!found)
+      issues.push({ line: lineOfKey(source, key), path: key, severity: "error", message: `No ${what} “${value}” in the catalogue.` });
+    else if (want && found.id !== want)
+      issues.push({
+        line: lineOfKey(source, key),
+        path: key,
+        severity: "error",
+        message: `This sheet is for another ${what}; “${value}” cannot change it. Start a new sheet instead.`,
+      });
   };
   refCheck("cutter", cutter, expected?.cutterId, "cutter", fm.cutter);
   refCheck("material", material, expected?.materialId, "material", fm.material);
   refCheck("machineClass", machineClass, expected?.machineClassId, "machine class", fm.machineClass);
   issues.sort((a, b) => a.line - b.line);
-  const refs = cutter && material && machineClass ? { cutterId: cutter.id, materialId: material.id, machineClassId: machineClass.id } : null;
+  const refs =
+    cutter && material && machineClass ? { cutterId: cutter.id, materialId: material.id, machineClassId: machineClass.id } : null;
   return { ok: checked.ok && !hasErrors(issues), frontMatter: fm, issues, refs };
 }

@@ -1,9 +1,9 @@
 import "server-only";
 
 import { writeAudit } from "@/lib/audit/write-audit";
+import { isUniqueViolation } from "@/lib/catalogue/unique-violation";
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
-import { isUniqueViolation } from "@/lib/catalogue/unique-violation";
 
 import { checkDraftSource, type Refs } from "./check-draft-source";
 
@@ -23,7 +23,14 @@ export async function createSheet({ vendorId, userId, slug, source, refs }: Opti
   try {
     return await db.transaction(async (trx) => {
       const [sheet] = await trx("sheets")
-        .insert({ vendor_id: vendorId, slug, cutter_id: sheetRefs.cutterId, material_id: sheetRefs.materialId, machine_class_id: sheetRefs.machineClassId, created_by: userId })
+        .insert({
+          vendor_id: vendorId,
+          slug,
+          cutter_id: sheetRefs.cutterId,
+          material_id: sheetRefs.materialId,
+          machine_class_id: sheetRefs.machineClassId,
+          created_by: userId,
+        })
         .returning("id");
       const [version] = await trx("sheet_versions")
         .insert({
@@ -38,11 +45,22 @@ export async function createSheet({ vendorId, userId, slug, source, refs }: Opti
           updated_by: userId,
         })
         .returning(["id", "number", "revision"]);
-      await writeAudit({ vendorId, actorUserId: userId, action: "sheet.create", objectType: "sheet", objectId: sheet.id, details: { slug } }, trx);
-      return { sheetId: sheet.id as string, slug, versionId: version.id as string, number: version.number as number, revision: version.revision as number, issues: check.issues };
+      await writeAudit(
+        { vendorId, actorUserId: userId, action: "sheet.create", objectType: "sheet", objectId: sheet.id, details: { slug } },
+        trx,
+      );
+      return {
+        sheetId: sheet.id as string,
+        slug,
+        versionId: version.id as string,
+        number: version.number as number,
+        revision: version.revision as number,
+        issues: check.issues,
+      };
     });
   } catch (error) {
-    if (isUniqueViolation(error)) throw new InvalidInput(`A sheet with slug ${slug} already exists.`, { slug: [`A sheet with slug ${slug} already exists.`] });
+    if (isUniqueViolation(error))
+      throw new InvalidInput(`A sheet with slug ${slug} already exists.`, { slug: [`A sheet with slug ${slug} already exists.`] });
     throw error;
   }
 }

@@ -68,7 +68,17 @@ export type DerivedOperation = {
   entry: "plunge" | "ramp" | "helical" | "pre-drilled" | "none";
   rampAngleDeg?: number;
   /** Numbers behind the strings, for tests and notes. */
-  derived: { vcMpm: number; fzMm: number; hexMm: number; rpm: number; feedMmMin: number; apMm: number; aeMm: number; effectiveDiameterMm: number; plungeFeedMmMin: number | null };
+  derived: {
+    vcMpm: number;
+    fzMm: number;
+    hexMm: number;
+    rpm: number;
+    feedMmMin: number;
+    apMm: number;
+    aeMm: number;
+    effectiveDiameterMm: number;
+    plungeFeedMmMin: number | null;
+  };
 };
 
 /** Share of the machine's max feed a derived feed may use (the rest is headroom for the customer's machine). */
@@ -85,7 +95,9 @@ const VC_POSITION: Record<string, number> = { plastics: 0.4 };
 const METAL = new Set(["non-ferrous", "ferrous"]);
 
 // Axial and radial depth per operation, as multiples of D (metals get half the axial depth, a ball nose less).
-const DEPTHS: Partial<Record<OperationKind, { ap: number; ballAp: number; ae: number | "full"; entry: DerivedOperation["entry"]; angle?: number }>> = {
+const DEPTHS: Partial<
+  Record<OperationKind, { ap: number; ballAp: number; ae: number | "full"; entry: DerivedOperation["entry"]; angle?: number }>
+> = {
   slotting: { ap: 0.35, ballAp: 0.15, ae: "full", entry: "ramp", angle: 3 },
   pocket: { ap: 0.5, ballAp: 0.2, ae: 0.45, entry: "helical", angle: 2 },
   "constant-engagement": { ap: 1.5, ballAp: 0.3, ae: 0.1, entry: "helical", angle: 2 },
@@ -105,7 +117,14 @@ export function chipTargets(material: DeriveMaterial, diameterMm: number, chipLo
   const pct = { min: (material.chipLoadMinPctD ?? typical.min) / 100, max: (material.chipLoadMaxPctD ?? typical.max) / 100 };
   const band = chipLoadBand({ minChipLoadMm: material.minChipLoadMm, chipLoadPctOfD: pct }, diameterMm);
   // A cutter whose ceiling is under the floor: stay under the ceiling (a rubbing cutter is better than a broken one).
-  if (band.impossible) return { band, lo: band.maxMm * CEILING_MARGIN, hi: band.maxMm * CEILING_MARGIN, pocket: band.maxMm * CEILING_MARGIN, slot: band.maxMm * CEILING_MARGIN };
+  if (band.impossible)
+    return {
+      band,
+      lo: band.maxMm * CEILING_MARGIN,
+      hi: band.maxMm * CEILING_MARGIN,
+      pocket: band.maxMm * CEILING_MARGIN,
+      slot: band.maxMm * CEILING_MARGIN,
+    };
   // A narrow band (a high absolute floor on a small cutter) shrinks the margins toward its middle.
   const middle = (band.minMm + band.maxMm) / 2;
   const lo = Math.min(band.minMm * FLOOR_MARGIN, middle);
@@ -125,22 +144,63 @@ const thrustKc = (material: DeriveMaterial) => material.kc11Nmm2 ?? material.kcN
 const LIMIT_SHARE = 0.8;
 
 /** ap lowered until the peak-force deflection at a stick-out of the flute length and the power at n fit, with margin. */
-function limitDepth({ cutter, material, machine, ap, aeMm, fz, rpm, vf }: { cutter: DeriveCutter; material: DeriveMaterial; machine: DeriveMachine; ap: number; aeMm: number; fz: number; rpm: number; vf: number }) {
+function limitDepth({
+  cutter,
+  material,
+  machine,
+  ap,
+  aeMm,
+  fz,
+  rpm,
+  vf,
+}: {
+  cutter: DeriveCutter;
+  material: DeriveMaterial;
+  machine: DeriveMachine;
+  ap: number;
+  aeMm: number;
+  fz: number;
+  rpm: number;
+  vf: number;
+}) {
   const kc11 = material.kc11Nmm2 ?? material.kcNmm2;
   if (!kc11) return ap;
   const mc = material.kc11Nmm2 ? (material.mc ?? DEFAULT_KIENZLE_MC) : 0;
   const D = cutter.diameterMm;
   let depth = ap;
   if (cutter.fluteLengthMm) {
-    const force = peakToothForce({ diameterMm: D, radialDepthMm: aeMm, axialDepthMm: depth, chipLoadMm: fz, flutes: cutter.flutes, kc11Nmm2: kc11, mc });
-    const deflection = toolDeflection({ forceN: force, stickoutMm: cutter.fluteLengthMm, diameterMm: D, youngsModulusGPa: YOUNGS_MODULUS_GPA.carbide });
+    const force = peakToothForce({
+      diameterMm: D,
+      radialDepthMm: aeMm,
+      axialDepthMm: depth,
+      chipLoadMm: fz,
+      flutes: cutter.flutes,
+      kc11Nmm2: kc11,
+      mc,
+    });
+    const deflection = toolDeflection({
+      forceN: force,
+      stickoutMm: cutter.fluteLengthMm,
+      diameterMm: D,
+      youngsModulusGPa: YOUNGS_MODULUS_GPA.carbide,
+    });
     const allowed = LIMIT_SHARE * ADAPT_DEFAULTS.deflectionLimitMm;
     if (deflection > allowed) depth = (depth * allowed) / deflection;
   }
   if (machine.powerKw) {
     const hm = meanChipThickness({ diameterMm: D, radialDepthMm: aeMm, chipLoadMm: fz });
-    const power = cuttingPower({ axialDepthMm: depth, radialDepthMm: aeMm, feedMmMin: vf, specificCuttingForceNmm2: kienzleKc({ kc11Nmm2: kc11, mc, chipThicknessMm: hm }) });
-    const available = spindlePowerAt({ ratedPowerKw: machine.powerKw, rpm, ratedRpm: machine.ratedRpm ?? machine.rpmMax, spindleKind: machine.spindleKind });
+    const power = cuttingPower({
+      axialDepthMm: depth,
+      radialDepthMm: aeMm,
+      feedMmMin: vf,
+      specificCuttingForceNmm2: kienzleKc({ kc11Nmm2: kc11, mc, chipThicknessMm: hm }),
+    });
+    const available = spindlePowerAt({
+      ratedPowerKw: machine.powerKw,
+      rpm,
+      ratedRpm: machine.ratedRpm ?? machine.rpmMax,
+      spindleKind: machine.spindleKind,
+    });
     const allowed = LIMIT_SHARE * ADAPT_DEFAULTS.usablePowerFraction * available;
     if (power > allowed) depth = (depth * allowed) / power;
   }
@@ -163,14 +223,35 @@ export type DeriveOptions = {
 };
 
 /** What a family rule may set; absent fields keep the defaults above. */
-export type DeriveRule = { chipLoadPosition?: number; apPerD?: number; aePerD?: number; entry?: DerivedOperation["entry"]; rampAngleDeg?: number };
+export type DeriveRule = {
+  chipLoadPosition?: number;
+  apPerD?: number;
+  aePerD?: number;
+  entry?: DerivedOperation["entry"];
+  rampAngleDeg?: number;
+};
 
-export function deriveOperation({ cutter, material, machine, kind, vcFraction, chipLoadScale = 1, depthScale = 1, label, rule = {} }: DeriveOptions): DerivedOperation {
+export function deriveOperation({
+  cutter,
+  material,
+  machine,
+  kind,
+  vcFraction,
+  chipLoadScale = 1,
+  depthScale = 1,
+  label,
+  rule = {},
+}: DeriveOptions): DerivedOperation {
   const D = cutter.diameterMm;
   const z = cutter.flutes;
   const ball = cutter.cornerForm === "ball";
   const base = DEPTHS[kind] ?? DEPTHS.profile!;
-  const depth = { ...base, ae: base.ae === "full" ? base.ae : (rule.aePerD ?? base.ae), entry: rule.entry ?? base.entry, angle: rule.rampAngleDeg ?? base.angle };
+  const depth = {
+    ...base,
+    ae: base.ae === "full" ? base.ae : (rule.aePerD ?? base.ae),
+    entry: rule.entry ?? base.entry,
+    angle: rule.rampAngleDeg ?? base.angle,
+  };
   const vcLo = material.vcMinMpm * 1.05;
   const vcHi = material.vcMaxMpm * 0.95;
   const vfCap = FEED_SHARE_OF_MAX * machine.maxFeedMmMin;

@@ -8,7 +8,17 @@ import { Conflict, NotFound } from "@/lib/errors/domain-errors";
 import type { SheetRecord, SheetVersion } from "./sheet-types";
 import { rowToSheet, rowToVersion, versionQuery } from "./version-rows";
 
-export async function findSheet({ vendorId, slug, trx = db, lock = false }: { vendorId: string; slug: string; trx?: Knex; lock?: boolean }): Promise<SheetRecord | null> {
+export async function findSheet({
+  vendorId,
+  slug,
+  trx = db,
+  lock = false,
+}: {
+  vendorId: string;
+  slug: string;
+  trx?: Knex;
+  lock?: boolean;
+}): Promise<SheetRecord | null> {
   const query = trx("sheets").where({ vendor_id: vendorId, slug });
   const row = await (lock ? query.forUpdate() : query).first();
   return row ? rowToSheet(row) : null;
@@ -20,7 +30,15 @@ export async function getSheet(options: { vendorId: string; slug: string; trx?: 
   return sheet;
 }
 
-export async function findOpenDraft({ vendorId, sheetId, trx = db }: { vendorId: string; sheetId: string; trx?: Knex }): Promise<SheetVersion | null> {
+export async function findOpenDraft({
+  vendorId,
+  sheetId,
+  trx = db,
+}: {
+  vendorId: string;
+  sheetId: string;
+  trx?: Knex;
+}): Promise<SheetVersion | null> {
   const row = await versionQuery(vendorId, trx).where("v.sheet_id", sheetId).whereIn("v.state", ["draft", "in_review"]).first();
   return row ? rowToVersion(row) : null;
 }
@@ -33,11 +51,29 @@ export async function lockOpenDraft({ vendorId, slug, trx }: { vendorId: string;
   return { sheet, draft };
 }
 
-export async function listVersions({ vendorId, sheetId, trx = db }: { vendorId: string; sheetId: string; trx?: Knex }): Promise<SheetVersion[]> {
+export async function listVersions({
+  vendorId,
+  sheetId,
+  trx = db,
+}: {
+  vendorId: string;
+  sheetId: string;
+  trx?: Knex;
+}): Promise<SheetVersion[]> {
   return (await versionQuery(vendorId, trx).where("v.sheet_id", sheetId).orderBy("v.number", "desc")).map(rowToVersion);
 }
 
-export async function findVersion({ vendorId, sheetId, number, trx = db }: { vendorId: string; sheetId: string; number: number; trx?: Knex }): Promise<SheetVersion | null> {
+export async function findVersion({
+  vendorId,
+  sheetId,
+  number,
+  trx = db,
+}: {
+  vendorId: string;
+  sheetId: string;
+  number: number;
+  trx?: Knex;
+}): Promise<SheetVersion | null> {
   const row = await versionQuery(vendorId, trx).where({ "v.sheet_id": sheetId, "v.number": number }).first();
   return row ? rowToVersion(row) : null;
 }

@@ -27,7 +27,17 @@ export async function listDraftingSheets({ vendorId }: { vendorId: string }): Pr
     .joinRaw(`left join sheet_versions pv on pv.sheet_id = s.id and pv.vendor_id = s.vendor_id and pv.state = 'published'`)
     .where("s.vendor_id", vendorId)
     .orderBy("lv.updated_at", "desc")
-    .select("s.slug", "lv.title", "c.sku", "m.name as material_name", "k.name as class_name", "lv.number", "lv.state", "pv.number as published_number", "lv.updated_at");
+    .select(
+      "s.slug",
+      "lv.title",
+      "c.sku",
+      "m.name as material_name",
+      "k.name as class_name",
+      "lv.number",
+      "lv.state",
+      "pv.number as published_number",
+      "lv.updated_at",
+    );
   return rows.map((r) => ({
     slug: r.slug,
     title: r.title,

@@ -25,13 +25,29 @@ export type PublishedSheetSummary = {
 };
 
 /** `cutterIds` and `machineClassIds` narrow to those ids (an empty list finds nothing): "fits my shop". */
-export type LibraryFilters = { cutter?: string; material?: string; machineClass?: string; cutterIds?: string[]; machineClassIds?: string[] };
+export type LibraryFilters = {
+  cutter?: string;
+  material?: string;
+  machineClass?: string;
+  cutterIds?: string[];
+  machineClassIds?: string[];
+};
 
 /**
  * Current published versions, optionally narrowed to one cutter (SKU), material or machine class (slugs).
  * `from`: the connection to read (default readDb(); the Library's cache entries read the primary).
  */
-export async function listPublishedSheets({ vendorId, limit = 500, filters = {}, from }: { vendorId: string; limit?: number; filters?: LibraryFilters; from?: Knex }): Promise<PublishedSheetSummary[]> {
+export async function listPublishedSheets({
+  vendorId,
+  limit = 500,
+  filters = {},
+  from,
+}: {
+  vendorId: string;
+  limit?: number;
+  filters?: LibraryFilters;
+  from?: Knex;
+}): Promise<PublishedSheetSummary[]> {
   const db = from ?? (await readDb());
   const query = db("sheet_versions as v")
     .join("sheets as s", function () {
@@ -50,8 +66,22 @@ export async function listPublishedSheets({ vendorId, limit = 500, filters = {},
     .orderBy([{ column: "m.name" }, { column: "c.diameter_mm" }, { column: "s.slug" }])
     .limit(limit)
     .select(
-      "s.slug", "v.id as version_id", "c.id as cutter_id", "k.id as class_id", "v.title", "v.front_matter", "v.number", "v.published_at", "c.sku", "c.name as cutter_name", "c.diameter_mm", "c.flutes",
-      "m.slug as material_slug", "m.name as material_name", "k.slug as class_slug", "k.name as class_name",
+      "s.slug",
+      "v.id as version_id",
+      "c.id as cutter_id",
+      "k.id as class_id",
+      "v.title",
+      "v.front_matter",
+      "v.number",
+      "v.published_at",
+      "c.sku",
+      "c.name as cutter_name",
+      "c.diameter_mm",
+      "c.flutes",
+      "m.slug as material_slug",
+      "m.name as material_name",
+      "k.slug as class_slug",
+      "k.name as class_name",
     );
   return rows.map((r) => ({
     slug: r.slug,

@@ -6,7 +6,12 @@ import { buildSheetSourceText } from "./sheet-template";
 type Named<T> = T & { name: string };
 
 /** A first draft for a new sheet: derived starting numbers the engineer then replaces with tested ones. */
-export function newSheetSource({ cutter, material, machineClass, kinds = ["slotting", "profile"] }: {
+export function newSheetSource({
+  cutter,
+  material,
+  machineClass,
+  kinds = ["slotting", "profile"],
+}: {
   cutter: Named<DeriveCutter> & { sku: string };
   material: Named<DeriveMaterial> & { slug: string };
   machineClass: Named<DeriveMachine> & { slug: string };

@@ -1,4 +1,10 @@
-import { entryMethodLabels, operationKindLabels, type OperationKind, type SheetFrontMatter, type SheetOperation } from "@/content-schema/sheet-front-matter";
+import {
+  entryMethodLabels,
+  operationKindLabels,
+  type OperationKind,
+  type SheetFrontMatter,
+  type SheetOperation,
+} from "@/content-schema/sheet-front-matter";
 import { chipLoad, formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/machining";
 
 // Pure: no I/O. Shared by the Drafting diff page and the change-alert e-mails.
@@ -39,7 +45,16 @@ export type OperationDiff = {
 export type CutterGeometry = { flutes: number; diameterMm: number };
 
 type Values = Record<ParameterKey, number | string | null>;
-const KINDS: Record<ParameterKey, Kind> = { n: "spindleSpeed", vf: "feedRate", fz: "chipLoad", ap: "length", ae: "length", plungeFeed: "feedRate", entry: "text", rampAngleDeg: "angle" };
+const KINDS: Record<ParameterKey, Kind> = {
+  n: "spindleSpeed",
+  vf: "feedRate",
+  fz: "chipLoad",
+  ap: "length",
+  ae: "length",
+  plungeFeed: "feedRate",
+  entry: "text",
+  rampAngleDeg: "angle",
+};
 const ORDER = Object.keys(KINDS) as ParameterKey[];
 
 function valuesOf(op: SheetOperation, cutter: CutterGeometry): Values {
@@ -99,7 +114,8 @@ export function diffParameters(before: SheetFrontMatter, after: SheetFrontMatter
 export function formatParameterChange(change: ParameterChange, units: UnitSystem) {
   const show = (value: number | string | null): string => {
     if (value === null) return "—";
-    if (typeof value === "string") return change.parameter === "entry" ? (entryMethodLabels[value as keyof typeof entryMethodLabels] ?? value) : value;
+    if (typeof value === "string")
+      return change.parameter === "entry" ? (entryMethodLabels[value as keyof typeof entryMethodLabels] ?? value) : value;
     if (change.kind === "angle") return `${value}\u00a0°`;
     return formatQuantity(value, change.kind as QuantityKind, units);
   };

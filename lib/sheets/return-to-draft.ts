@@ -21,7 +21,24 @@ export async function returnToDraftIn(trx: Knex.Transaction, { vendorId, userId,
   if (draft.state !== "in_review") throw new Conflict("This version is not in review.");
   await trx("sheet_versions")
     .where({ vendor_id: vendorId, id: draft.id })
-    .update({ state: "draft", submitted_at: null, approved_by: null, approved_at: null, revision: trx.raw("revision + 1"), updated_at: trx.fn.now() });
-  await writeAudit({ vendorId, actorUserId: userId, action: "sheet.return_to_draft", objectType: "sheet_version", objectId: draft.id, details: { slug, number: draft.number, reason } }, trx);
+    .update({
+      state: "draft",
+      submitted_at: null,
+      approved_by: null,
+      approved_at: null,
+      revision: trx.raw("revision + 1"),
+      updated_at: trx.fn.now(),
+    });
+  await writeAudit(
+    {
+      vendorId,
+      actorUserId: userId,
+      action: "sheet.return_to_draft",
+      objectType: "sheet_version",
+      objectId: draft.id,
+      details: { slug, number: draft.number, reason },
+    },
+    trx,
+  );
   return { number: draft.number, state: "draft" as const };
 }

@@ -9,7 +9,9 @@ import { findOpenDraft, getSheet } from "./find-sheet";
 /** The newer text that a stale save ran into; the caller keeps both. */
 export class DraftConflict extends Conflict {
   constructor(readonly current: { source: string; revision: number; updatedByName: string | null; updatedAt: Date }) {
-    super(`Someone else saved this draft (revision ${current.revision}${current.updatedByName ? `, by ${current.updatedByName}` : ""}) after you opened it. Nothing was overwritten.`);
+    super(
+      `Someone else saved this draft (revision ${current.revision}${current.updatedByName ? `, by ${current.updatedByName}` : ""}) after you opened it. Nothing was overwritten.`,
+    );
   }
 }
 
@@ -36,7 +38,12 @@ export async function saveDraft({ vendorId, userId, slug, source, revision }: Op
   if (!row) {
     const fresh = await findOpenDraft({ vendorId, sheetId: sheet.id });
     if (!fresh || fresh.state !== "draft") throw new Conflict("This version is no longer a draft. Reload to see it.");
-    throw new DraftConflict({ source: fresh.source, revision: fresh.revision, updatedByName: fresh.updatedByName, updatedAt: fresh.updatedAt });
+    throw new DraftConflict({
+      source: fresh.source,
+      revision: fresh.revision,
+      updatedByName: fresh.updatedByName,
+      updatedAt: fresh.updatedAt,
+    });
   }
   return { revision: row.revision as number, savedAt: row.updated_at as Date, issues: check.issues, valid: check.ok };
 }

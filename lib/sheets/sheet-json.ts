@@ -2,7 +2,15 @@ import type { Cutter, MachineClass, Material } from "@/lib/catalogue/catalogue-t
 
 import type { SheetVersion } from "./sheet-types";
 
-type Parts = { slug: string; version: SheetVersion; current: SheetVersion | null; history: SheetVersion[]; cutter: Cutter; material: Material; machineClass: MachineClass };
+type Parts = {
+  slug: string;
+  version: SheetVersion;
+  current: SheetVersion | null;
+  history: SheetVersion[];
+  cutter: Cutter;
+  material: Material;
+  machineClass: MachineClass;
+};
 
 const iso = (d: Date | null) => (d ? new Date(d).toISOString() : null);
 
@@ -22,13 +30,44 @@ export function sheetVersionJson({ slug, version, current, history, cutter, mate
     withdrawnAt: iso(version.withdrawnAt),
     withdrawnReason: version.withdrawnReason,
     cutter: {
-      sku: cutter.sku, name: cutter.name, DC_mm: cutter.diameterMm, ZEFP: cutter.flutes, APMX_mm: cutter.fluteLengthMm, OAL_mm: cutter.overallLengthMm,
-      DMM_mm: cutter.shankMm, RE_mm: cutter.cornerRadiusMm ?? null, cornerForm: cutter.cornerForm, geometry: cutter.geometry, toolMaterial: cutter.toolMaterial, coating: cutter.coating ?? null,
+      sku: cutter.sku,
+      name: cutter.name,
+      DC_mm: cutter.diameterMm,
+      ZEFP: cutter.flutes,
+      APMX_mm: cutter.fluteLengthMm,
+      OAL_mm: cutter.overallLengthMm,
+      DMM_mm: cutter.shankMm,
+      RE_mm: cutter.cornerRadiusMm ?? null,
+      cornerForm: cutter.cornerForm,
+      geometry: cutter.geometry,
+      toolMaterial: cutter.toolMaterial,
+      coating: cutter.coating ?? null,
     },
-    material: { slug: material.slug, name: material.name, group: material.materialGroup, vcMinMpm: material.vcMinMpm, vcMaxMpm: material.vcMaxMpm, minChipLoadMm: material.minChipLoadMm,
-      chipLoadBand: { minPctOfD: material.chipLoadMinPctD, maxPctOfD: material.chipLoadMaxPctD }, kcNmm2: material.kcNmm2, kc11Nmm2: material.kc11Nmm2 ?? null, mc: material.mc ?? null, cautions: material.cautions },
-    machineClass: { slug: machineClass.slug, name: machineClass.name, rpmMin: machineClass.rpmMin, rpmMax: machineClass.rpmMax, powerKw: machineClass.powerKw, maxFeedMmMin: machineClass.maxFeedMmMin, rigidity: machineClass.rigidity, zThrustN: machineClass.zThrustN ?? null,
-      spindleKind: machineClass.spindleKind, ratedRpm: machineClass.ratedRpm ?? null },
+    material: {
+      slug: material.slug,
+      name: material.name,
+      group: material.materialGroup,
+      vcMinMpm: material.vcMinMpm,
+      vcMaxMpm: material.vcMaxMpm,
+      minChipLoadMm: material.minChipLoadMm,
+      chipLoadBand: { minPctOfD: material.chipLoadMinPctD, maxPctOfD: material.chipLoadMaxPctD },
+      kcNmm2: material.kcNmm2,
+      kc11Nmm2: material.kc11Nmm2 ?? null,
+      mc: material.mc ?? null,
+      cautions: material.cautions,
+    },
+    machineClass: {
+      slug: machineClass.slug,
+      name: machineClass.name,
+      rpmMin: machineClass.rpmMin,
+      rpmMax: machineClass.rpmMax,
+      powerKw: machineClass.powerKw,
+      maxFeedMmMin: machineClass.maxFeedMmMin,
+      rigidity: machineClass.rigidity,
+      zThrustN: machineClass.zThrustN ?? null,
+      spindleKind: machineClass.spindleKind,
+      ratedRpm: machineClass.ratedRpm ?? null,
+    },
     operations: fm?.operations ?? [],
     cautions: fm?.cautions ?? [],
     tags: fm?.tags ?? [],

@@ -17,8 +17,21 @@ export type TemplateInput = {
 };
 
 /** A whole sheet source (YAML front matter between `---` lines, then MDX) from structured parts. */
-export function buildSheetSourceText({ title, summary, cutterSku, materialSlug, machineClassSlug, operations, cautions = [], tags = [], body }: TemplateInput): string {
+export function buildSheetSourceText({
+  title,
+  summary,
+  cutterSku,
+  materialSlug,
+  machineClassSlug,
+  operations,
+  cautions = [],
+  tags = [],
+  body,
+}: TemplateInput): string {
   const ops = operations.map(({ derived: _derived, ...op }) => Object.fromEntries(Object.entries(op).filter(([, v]) => v !== undefined)));
-  const yaml = stringify({ title, summary, cutter: cutterSku, material: materialSlug, machineClass: machineClassSlug, operations: ops, cautions, tags }, { lineWidth: 0 });
+  const yaml = stringify(
+    { title, summary, cutter: cutterSku, material: materialSlug, machineClass: machineClassSlug, operations: ops, cautions, tags },
+    { lineWidth: 0 },
+  );
   return `---\n${yaml.trimEnd()}\n---\n${body.trimEnd()}\n`;
 }

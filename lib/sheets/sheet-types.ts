@@ -1,7 +1,14 @@
 import type { SheetFrontMatter } from "@/content-schema/sheet-front-matter";
 import type { SheetState } from "@/content-schema/sheet-workflow";
 
-export type SheetRecord = { id: string; slug: string; cutterId: string; materialId: string; machineClassId: string; createdBy: string | null };
+export type SheetRecord = {
+  id: string;
+  slug: string;
+  cutterId: string;
+  materialId: string;
+  machineClassId: string;
+  createdBy: string | null;
+};
 
 export type SheetVersion = {
   id: string;

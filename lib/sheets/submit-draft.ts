@@ -9,7 +9,17 @@ import { checkDraftSource } from "./check-draft-source";
 import { lockOpenDraft } from "./find-sheet";
 
 /** draft → in_review: the source must validate and the change note say what changed. */
-export async function submitDraft({ vendorId, userId, slug, changeNote }: { vendorId: string; userId: string; slug: string; changeNote: string }) {
+export async function submitDraft({
+  vendorId,
+  userId,
+  slug,
+  changeNote,
+}: {
+  vendorId: string;
+  userId: string;
+  slug: string;
+  changeNote: string;
+}) {
   const note = changeNote.trim();
   if (note.length < 3) throw new InvalidInput("A change note is required to submit.", { changeNote: ["Say what changed and why."] });
   return db.transaction(async (trx) => {
@@ -22,8 +32,26 @@ export async function submitDraft({ vendorId, userId, slug, changeNote }: { vend
     }
     await trx("sheet_versions")
       .where({ vendor_id: vendorId, id: draft.id })
-      .update({ state: "in_review", change_note: note, submitted_at: trx.fn.now(), front_matter: JSON.stringify(check.frontMatter), approved_by: null, approved_at: null, updated_at: trx.fn.now() });
-    await writeAudit({ vendorId, actorUserId: userId, action: "sheet.submit", objectType: "sheet_version", objectId: draft.id, details: { slug, number: draft.number, changeNote: note } }, trx);
+      .update({
+        state: "in_review",
+        change_note: note,
+        submitted_at: trx.fn.now(),
+        front_matter: JSON.stringify(check.frontMatter),
+        approved_by: null,
+        approved_at: null,
+        updated_at: trx.fn.now(),
+      });
+    await writeAudit(
+      {
+        vendorId,
+        actorUserId: userId,
+        action: "sheet.submit",
+        objectType: "sheet_version",
+        objectId: draft.id,
+        details: { slug, number: draft.number, changeNote: note },
+      },
+      trx,
+    );
     return { number: draft.number, state: "in_review" as const };
   });
 }

@@ -9,7 +9,11 @@ import type { SheetRow, SheetVersionRow } from "@/lib/db/tables";
 import type { SheetRecord, SheetVersion } from "./sheet-types";
 
 /** A sheet_versions row with the names of the people on it (see `versionQuery`). */
-export type VersionWithNamesRow = SheetVersionRow & { author_name: string | null; updated_by_name: string | null; approved_by_name: string | null };
+export type VersionWithNamesRow = SheetVersionRow & {
+  author_name: string | null;
+  updated_by_name: string | null;
+  approved_by_name: string | null;
+};
 
 export const rowToSheet = (r: SheetRow): SheetRecord => ({
   id: r.id,

@@ -42,7 +42,10 @@ export async function cleanupUploads(): Promise<{ unattached: number; deleted: n
       .where("created_at", "<", trx.raw(`now() - interval '${UNATTACHED_HOURS} hours'`))
       .delete()
       .returning("storage_key");
-    await queueUploadDeletions(trx, gone.map((g) => g.storage_key));
+    await queueUploadDeletions(
+      trx,
+      gone.map((g) => g.storage_key),
+    );
     return gone.length;
   });
   return { unattached, deleted: await drainUploadDeletions() };

@@ -30,7 +30,9 @@ function assertSaneDimensions(bytes: Buffer): void {
   }
   const { width = 0, height = 0 } = size;
   if (!width || !height || width > MAX_IMAGE_SIDE || height > MAX_IMAGE_SIDE || width * height > MAX_IMAGE_PIXELS) {
-    throw new InvalidInput(`This image claims to be ${width} × ${height} pixels, larger than any photo we accept (at most ${MAX_IMAGE_SIDE} pixels a side).`);
+    throw new InvalidInput(
+      `This image claims to be ${width} × ${height} pixels, larger than any photo we accept (at most ${MAX_IMAGE_SIDE} pixels a side).`,
+    );
   }
 }
 
@@ -67,5 +69,7 @@ export async function sniffUpload(bytes: Buffer, fileName = ""): Promise<Sniffed
   if (TEXT_EXTENSIONS.has(extensionOf(fileName)) && isPlainText(bytes)) {
     return { kind: "text", contentType: "text/plain; charset=utf-8", extension: "txt" };
   }
-  throw new InvalidInput("This file is not accepted: send a photo (PNG, JPEG, WebP), a PDF or a G-code text file (.nc, .gcode, .tap, .txt).");
+  throw new InvalidInput(
+    "This file is not accepted: send a photo (PNG, JPEG, WebP), a PDF or a G-code text file (.nc, .gcode, .tap, .txt).",
+  );
 }

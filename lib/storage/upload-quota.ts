@@ -14,7 +14,10 @@ export function uploadQuotaBytes(): number {
 export class UploadQuotaExceeded extends DomainError {
   constructor(quotaBytes: number) {
     const mb = Math.round(quotaBytes / (1024 * 1024));
-    super("too_large", `Your files use up your ${mb} MB of upload space. Remove files you no longer need from your tickets, or ask the support team.`);
+    super(
+      "too_large",
+      `Your files use up your ${mb} MB of upload space. Remove files you no longer need from your tickets, or ask the support team.`,
+    );
   }
 }
 
@@ -31,7 +34,15 @@ async function usedBytes(trx: Knex | Knex.Transaction, userId: string): Promise<
  * Refuses an upload that would take the person past their quota. Inside a transaction it also takes a per-person
  * lock, so parallel uploads are checked one after another against the same total.
  */
-export async function assertUploadQuota({ userId, addBytes, trx = db }: { userId: string; addBytes: number; trx?: Knex | Knex.Transaction }): Promise<void> {
+export async function assertUploadQuota({
+  userId,
+  addBytes,
+  trx = db,
+}: {
+  userId: string;
+  addBytes: number;
+  trx?: Knex | Knex.Transaction;
+}): Promise<void> {
   if (trx !== db) await trx.raw("select pg_advisory_xact_lock(hashtext(?))", [`upload-quota:${userId}`]);
   const quota = uploadQuotaBytes();
   if ((await usedBytes(trx, userId)) + addBytes > quota) throw new UploadQuotaExceeded(quota);

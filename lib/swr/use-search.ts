@@ -4,8 +4,8 @@ import useSWR from "swr";
 
 import type { SearchResponse } from "@/search/run/search-response";
 
-import { searchApiUrl } from "./search-url";
 import { onErrorRetry } from "./retry";
+import { searchApiUrl } from "./search-url";
 import { fetchJson } from "./use-api-json";
 
 /** Search results for a URL query string; the previous results stay on screen while the next ones load. */

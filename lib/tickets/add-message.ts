@@ -29,7 +29,9 @@ type Added = { id: string; created: boolean };
 /** The message this author already posted with this key, if any (the caller holds the ticket's row lock). */
 async function alreadyPosted(trx: Knex.Transaction, o: Base): Promise<string | null> {
   if (!o.idempotencyKey) return null;
-  const row = await trx("ticket_messages").where({ vendor_id: o.vendorId, author_id: o.authorId, idempotency_key: o.idempotencyKey }).first<{ id: string } | undefined>("id");
+  const row = await trx("ticket_messages")
+    .where({ vendor_id: o.vendorId, author_id: o.authorId, idempotency_key: o.idempotencyKey })
+    .first<{ id: string } | undefined>("id");
   return row?.id ?? null;
 }
 
@@ -81,14 +83,32 @@ export async function addCustomerMessage(o: Base): Promise<Added> {
     await trx("tickets")
       .where({ id: o.ticketId, vendor_id: o.vendorId })
       .update({ last_activity_at: trx.fn.now(), updated_at: trx.fn.now(), ...(reopen ? { status: "in_progress", closed_at: null } : {}) });
-    if (reopen) await auditTicketChange(trx, { vendorId: o.vendorId, actorUserId: o.authorId, ticketId: o.ticketId, field: "status", from: ticket.status, to: "in_progress", via: "customer reply" });
-    await notifyStaffOfCustomerReply(trx, { vendorId: o.vendorId, ticketId: o.ticketId, messageId, authorName: await authorName(trx, o.authorId), body: o.body, hasCard: false });
+    if (reopen)
+      await auditTicketChange(trx, {
+        vendorId: o.vendorId,
+        actorUserId: o.authorId,
+        ticketId: o.ticketId,
+        field: "status",
+        from: ticket.status,
+        to: "in_progress",
+        via: "customer reply",
+      });
+    await notifyStaffOfCustomerReply(trx, {
+      vendorId: o.vendorId,
+      ticketId: o.ticketId,
+      messageId,
+      authorName: await authorName(trx, o.authorId),
+      body: o.body,
+      hasCard: false,
+    });
     return { id: messageId, created: true };
   });
 }
 
 /** A staff reply (public, the first one stops the response clock; sets "Answered") or an internal note. */
-export async function addStaffMessage(o: Base & { visibility: MessageVisibility; card?: TicketCard | null; machineId?: string }): Promise<Added> {
+export async function addStaffMessage(
+  o: Base & { visibility: MessageVisibility; card?: TicketCard | null; machineId?: string },
+): Promise<Added> {
   return db.transaction(async (trx) => {
     const ticket = await trx("tickets")
       .where({ id: o.ticketId, vendor_id: o.vendorId })
@@ -109,12 +129,27 @@ export async function addStaffMessage(o: Base & { visibility: MessageVisibility;
       if (!ticket.first_response_at) patch.first_response_at = trx.fn.now();
       if (ticket.status !== "answered" && ticket.status !== "closed") {
         patch.status = "answered";
-        await auditTicketChange(trx, { vendorId: o.vendorId, actorUserId: o.authorId, ticketId: o.ticketId, field: "status", from: ticket.status, to: "answered", via: "staff reply" });
+        await auditTicketChange(trx, {
+          vendorId: o.vendorId,
+          actorUserId: o.authorId,
+          ticketId: o.ticketId,
+          field: "status",
+          from: ticket.status,
+          to: "answered",
+          via: "staff reply",
+        });
       }
     }
     await trx("tickets").where({ id: o.ticketId, vendor_id: o.vendorId }).update(patch);
     if (o.visibility === "public") {
-      await notifyCustomerOfReply(trx, { vendorId: o.vendorId, ticketId: o.ticketId, messageId, authorName: await authorName(trx, o.authorId), body: o.body, hasCard: Boolean(o.card) });
+      await notifyCustomerOfReply(trx, {
+        vendorId: o.vendorId,
+        ticketId: o.ticketId,
+        messageId,
+        authorName: await authorName(trx, o.authorId),
+        body: o.body,
+        hasCard: Boolean(o.card),
+      });
       await queueTicketAnswered(trx, { vendorId: o.vendorId, ticketId: o.ticketId, messageId });
     }
     return { id: messageId, created: true };

@@ -6,7 +6,7 @@ import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 import { adaptRecipe, isMachiningInputError, RULES, WARNING_CODES } from "@/lib/machining";
 
-import { type CutterRow, type MachineClassRow, type MachineRow, type MaterialRow, readOperations, toAdaptInput } from "./card-input";
+import { readOperations, toAdaptInput, type CutterRow, type MachineClassRow, type MachineRow, type MaterialRow } from "./card-input";
 import { READABLE_STATES } from "./resolve-ticket-links";
 
 type Options = { vendorId: string; sheetVersionId: string; machineId: string; customerId: string };
@@ -18,8 +18,11 @@ export async function buildCard({ vendorId, sheetVersionId, machineId, customerI
     .where({ "v.id": sheetVersionId, "v.vendor_id": vendorId, "s.vendor_id": vendorId })
     .whereIn("v.state", READABLE_STATES)
     .first("v.id", "v.number", "v.title", "v.front_matter", "s.slug", "s.cutter_id", "s.material_id", "s.machine_class_id");
-  if (!version) throw new InvalidInput("Please correct the marked fields.", { cardSheetVersionId: ["That sheet version is not available."] });
-  const machine = await db("machines").where({ id: machineId, vendor_id: vendorId, user_id: customerId }).first<(MachineRow & { id: string; name: string; units: "metric" | "imperial" }) | undefined>();
+  if (!version)
+    throw new InvalidInput("Please correct the marked fields.", { cardSheetVersionId: ["That sheet version is not available."] });
+  const machine = await db("machines")
+    .where({ id: machineId, vendor_id: vendorId, user_id: customerId })
+    .first<(MachineRow & { id: string; name: string; units: "metric" | "imperial" }) | undefined>();
   if (!machine) throw new InvalidInput("Please correct the marked fields.", { cardMachineId: ["Choose one of the customer's machines."] });
   const [cutter, material, machineClass] = await Promise.all([
     db("cutters").where({ id: version.cutter_id, vendor_id: vendorId }).first<CutterRow>(),

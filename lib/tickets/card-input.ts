@@ -1,7 +1,14 @@
 import type { SheetOperation } from "@/content-schema/sheet-front-matter";
 import type { AdaptInput, CornerForm, EntryKind, SpindleKind, UnitSystem } from "@/lib/machining";
 
-export type CutterRow = { diameter_mm: number; flutes: number; corner_form: string; corner_radius_mm: number | null; flute_length_mm: number | null; tool_material: "carbide" | "hss" };
+export type CutterRow = {
+  diameter_mm: number;
+  flutes: number;
+  corner_form: string;
+  corner_radius_mm: number | null;
+  flute_length_mm: number | null;
+  tool_material: "carbide" | "hss";
+};
 export type MaterialRow = {
   vc_min_mpm: number;
   vc_max_mpm: number;
@@ -13,7 +20,18 @@ export type MaterialRow = {
   mc: number | null;
   cautions: unknown;
 };
-export type MachineRow = { rpm_min: number; rpm_max: number; power_kw: number; max_feed_mm_min: number; rigidity: number; z_thrust_n: number | null; spindle_kind: SpindleKind; rated_rpm: number | null; stickout_mm: number | null; units?: UnitSystem };
+export type MachineRow = {
+  rpm_min: number;
+  rpm_max: number;
+  power_kw: number;
+  max_feed_mm_min: number;
+  rigidity: number;
+  z_thrust_n: number | null;
+  spindle_kind: SpindleKind;
+  rated_rpm: number | null;
+  stickout_mm: number | null;
+  units?: UnitSystem;
+};
 export type MachineClassRow = { rigidity: number; rpm_max: number; max_feed_mm_min: number; z_thrust_n: number | null };
 
 // One reader of stored front matter for the whole app (Bench owns it).
@@ -24,7 +42,13 @@ const num = (v: number | null | undefined) => (v === null || v === undefined ? u
 const melts = (cautions: unknown) => Array.isArray(cautions) && cautions.some((c) => (c as { kind?: unknown })?.kind === "melting");
 
 /** The engine input for one operation of a sheet on a customer's machine (metric units throughout). */
-export function toAdaptInput(op: SheetOperation, cutter: CutterRow, material: MaterialRow, reference: MachineClassRow, machine: MachineRow): AdaptInput {
+export function toAdaptInput(
+  op: SheetOperation,
+  cutter: CutterRow,
+  material: MaterialRow,
+  reference: MachineClassRow,
+  machine: MachineRow,
+): AdaptInput {
   const d = Number(cutter.diameter_mm);
   return {
     operation: {
@@ -51,7 +75,12 @@ export function toAdaptInput(op: SheetOperation, cutter: CutterRow, material: Ma
       mc: num(material.mc),
       meltsWhenRubbing: melts(material.cautions),
     },
-    referenceMachine: { rigidity: Number(reference.rigidity), maxRpm: Number(reference.rpm_max), maxFeedMmMin: Number(reference.max_feed_mm_min), zThrustN: num(reference.z_thrust_n) },
+    referenceMachine: {
+      rigidity: Number(reference.rigidity),
+      maxRpm: Number(reference.rpm_max),
+      maxFeedMmMin: Number(reference.max_feed_mm_min),
+      zThrustN: num(reference.z_thrust_n),
+    },
     machine: {
       minRpm: Number(machine.rpm_min),
       maxRpm: Number(machine.rpm_max),

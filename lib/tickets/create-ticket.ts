@@ -1,9 +1,9 @@
 import "server-only";
 
 import type { CreateTicketInput } from "@/content-schema/ticket-create";
+import type { Vendor } from "@/content-schema/vendor";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
-import type { Vendor } from "@/content-schema/vendor";
 import { appUrl } from "@/lib/http/app-url";
 import { queueWebhookEvent } from "@/lib/webhooks/queue-webhook-event";
 
@@ -28,7 +28,9 @@ export async function createTicket({ vendor, customerId, input }: Options): Prom
 
     const links = await resolveTicketLinks(trx, vendor.id, customerId, input);
     const now = new Date();
-    const { next } = await trx("tickets").where({ vendor_id: vendor.id }).first<{ next: number }>(trx.raw("coalesce(max(number), 0) + 1 as next"));
+    const { next } = await trx("tickets")
+      .where({ vendor_id: vendor.id })
+      .first<{ next: number }>(trx.raw("coalesce(max(number), 0) + 1 as next"));
     const [row] = await trx("tickets")
       .insert({
         vendor_id: vendor.id,
@@ -46,7 +48,12 @@ export async function createTicket({ vendor, customerId, input }: Options): Prom
       })
       .returning<{ id: string; number: number }[]>(["id", "number"]);
     if (input.sheetVersionId) {
-      await trx("ticket_sheet_links").insert({ vendor_id: vendor.id, ticket_id: row.id, sheet_version_id: input.sheetVersionId, machine_id: input.machineId ?? null });
+      await trx("ticket_sheet_links").insert({
+        vendor_id: vendor.id,
+        ticket_id: row.id,
+        sheet_version_id: input.sheetVersionId,
+        machine_id: input.machineId ?? null,
+      });
     }
     if (input.attachmentIds.length) {
       await trx("ticket_attachments")
@@ -56,7 +63,14 @@ export async function createTicket({ vendor, customerId, input }: Options): Prom
         .update({ ticket_id: row.id });
     }
     await writeAudit(
-      { vendorId: vendor.id, actorUserId: customerId, action: "ticket.create", objectType: "ticket", objectId: row.id, details: { number: row.number } },
+      {
+        vendorId: vendor.id,
+        actorUserId: customerId,
+        action: "ticket.create",
+        objectType: "ticket",
+        objectId: row.id,
+        details: { number: row.number },
+      },
       trx,
     );
     await notifyNewTicket(trx, { vendor, ticketId: row.id });

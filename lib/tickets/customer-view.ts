@@ -53,7 +53,16 @@ export function toCustomerTicket(t: TicketDetail): CustomerTicket {
 export function toCustomerMessage(m: TicketMessage): CustomerMessage {
   // A staff member without a name would otherwise be shown by their e-mail address.
   const authorName = m.authorIsStaff && EMAIL.test(m.authorName) ? "Support team" : m.authorName;
-  return { id: m.id, authorName, authorIsStaff: m.authorIsStaff, visibility: m.visibility, source: m.source, body: m.body, card: m.card, createdAt: m.createdAt };
+  return {
+    id: m.id,
+    authorName,
+    authorIsStaff: m.authorIsStaff,
+    visibility: m.visibility,
+    source: m.source,
+    body: m.body,
+    card: m.card,
+    createdAt: m.createdAt,
+  };
 }
 
 export function toCustomerThread(thread: TicketThread): CustomerTicketThread {

@@ -15,7 +15,15 @@ const iso = (v: unknown) => (v instanceof Date ? v.toISOString() : String(v));
  * One ticket with its thread. A customer reads only their own tickets, and internal notes
  * (and files attached to notes) are filtered out in the query itself, never after loading.
  */
-export async function getTicketThread({ vendorId, ticketId, viewer }: { vendorId: string; ticketId: string; viewer: Viewer }): Promise<TicketThread> {
+export async function getTicketThread({
+  vendorId,
+  ticketId,
+  viewer,
+}: {
+  vendorId: string;
+  ticketId: string;
+  viewer: Viewer;
+}): Promise<TicketThread> {
   const query = selectTickets(db, vendorId).where("t.id", ticketId);
   if (viewer.kind === "customer") query.where("t.customer_id", viewer.userId);
   const row = await query.first();
@@ -50,32 +58,33 @@ export async function getTicketThread({ vendorId, ticketId, viewer }: { vendorId
   const [messages, attachments, links] = await Promise.all([messagesQuery, attachmentsQuery, linksQuery]);
   return {
     ticket,
-    messages: messages.map(
-      (m): TicketMessage => ({
-        id: m.id,
-        authorId: m.author_id,
-        authorName: m.author_name || m.author_email || "Former member",
-        authorIsStaff: m.author_role != null && m.author_role !== "customer",
-        visibility: m.visibility,
-        source: m.source,
-        body: m.body,
-        card: m.card ? (ticketCardSchema.safeParse(m.card).data ?? null) : null,
-        createdAt: iso(m.created_at),
-      }),
-    ),
-    attachments: attachments.map(
-      (a): TicketAttachment => ({ id: a.id, messageId: a.message_id, fileName: a.file_name, contentType: a.content_type, kind: a.kind, sizeBytes: a.size_bytes }),
-    ),
-    links: links.map(
-      (l): LinkedSheet => ({
-        sheetVersionId: l.sheet_version_id,
-        sheetSlug: l.slug,
-        versionNumber: l.number,
-        title: l.title,
-        state: l.state,
-        machineId: l.machine_id,
-        machineName: l.machine_name,
-      }),
-    ),
+    messages: messages.map((m): TicketMessage => ({
+      id: m.id,
+      authorId: m.author_id,
+      authorName: m.author_name || m.author_email || "Former member",
+      authorIsStaff: m.author_role != null && m.author_role !== "customer",
+      visibility: m.visibility,
+      source: m.source,
+      body: m.body,
+      card: m.card ? (ticketCardSchema.safeParse(m.card).data ?? null) : null,
+      createdAt: iso(m.created_at),
+    })),
+    attachments: attachments.map((a): TicketAttachment => ({
+      id: a.id,
+      messageId: a.message_id,
+      fileName: a.file_name,
+      contentType: a.content_type,
+      kind: a.kind,
+      sizeBytes: a.size_bytes,
+    })),
+    links: links.map((l): LinkedSheet => ({
+      sheetVersionId: l.sheet_version_id,
+      sheetSlug: l.slug,
+      versionNumber: l.number,
+      title: l.title,
+      state: l.state,
+      machineId: l.machine_id,
+      machineName: l.machine_name,
+    })),
   };
 }

@@ -6,7 +6,10 @@ import { db } from "@/lib/db/knex";
 
 import { READABLE_STATES } from "./resolve-ticket-links";
 
-export type TicketPrefill = { sheetVersion: { id: string; title: string; number: number; materialId: string } | null; machine: { id: string; name: string } | null };
+export type TicketPrefill = {
+  sheetVersion: { id: string; title: string; number: number; materialId: string } | null;
+  machine: { id: string; name: string } | null;
+};
 
 const id = z.uuid();
 
@@ -17,11 +20,20 @@ const id = z.uuid();
 async function likelyMachine({ vendorId, customerId, sheetVersionId }: { vendorId: string; customerId: string; sheetVersionId: string }) {
   const fromSetup = await db("setups as st")
     .join("machines as m", "m.id", "st.machine_id")
-    .where({ "st.vendor_id": vendorId, "st.user_id": customerId, "st.sheet_version_id": sheetVersionId, "m.vendor_id": vendorId, "m.user_id": customerId })
+    .where({
+      "st.vendor_id": vendorId,
+      "st.user_id": customerId,
+      "st.sheet_version_id": sheetVersionId,
+      "m.vendor_id": vendorId,
+      "m.user_id": customerId,
+    })
     .orderBy("st.updated_at", "desc")
     .first<{ id: string; name: string } | undefined>("m.id", "m.name");
   if (fromSetup) return fromSetup;
-  const machines = await db("machines").where({ vendor_id: vendorId, user_id: customerId }).limit(2).select<{ id: string; name: string }[]>("id", "name");
+  const machines = await db("machines")
+    .where({ vendor_id: vendorId, user_id: customerId })
+    .limit(2)
+    .select<{ id: string; name: string }[]>("id", "name");
   return machines.length === 1 ? machines[0] : undefined;
 }
 
@@ -30,7 +42,17 @@ async function likelyMachine({ vendorId, customerId, sheetVersionId }: { vendorI
  * (for machines) of another customer are ignored, as if they were not given. A sheet without a
  * machine gets the customer's likely machine.
  */
-export async function prefillLinks({ vendorId, customerId, sheetVersion, machine }: { vendorId: string; customerId: string; sheetVersion?: string; machine?: string }): Promise<TicketPrefill> {
+export async function prefillLinks({
+  vendorId,
+  customerId,
+  sheetVersion,
+  machine,
+}: {
+  vendorId: string;
+  customerId: string;
+  sheetVersion?: string;
+  machine?: string;
+}): Promise<TicketPrefill> {
   const svId = id.safeParse(sheetVersion).data;
   const mId = id.safeParse(machine).data;
   const [sv, m] = await Promise.all([

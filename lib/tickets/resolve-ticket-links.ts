@@ -13,7 +13,12 @@ type Links = { sheetVersionId?: string; machineId?: string; materialId?: string 
  * Checks that the linked sheet version, machine and material belong to this vendor, and the machine
  * to this customer. An id of someone else reads as a field error, not as a hint that it exists.
  */
-export async function resolveTicketLinks(trx: Knex, vendorId: string, customerId: string, links: Links): Promise<Links & { sheetMaterialId?: string }> {
+export async function resolveTicketLinks(
+  trx: Knex,
+  vendorId: string,
+  customerId: string,
+  links: Links,
+): Promise<Links & { sheetMaterialId?: string }> {
   const errors: Record<string, string[]> = {};
   let sheetMaterialId: string | undefined;
   if (links.sheetVersionId) {

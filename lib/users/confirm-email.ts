@@ -1,8 +1,8 @@
 import "server-only";
 
 import { peekVerificationUser, readVerificationToken } from "@/lib/auth/email-verification-token";
-import { db } from "@/lib/db/knex";
 import { verifyPassword } from "@/lib/auth/passwords";
+import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 
 /**
@@ -17,7 +17,9 @@ export async function confirmEmail({ token, password }: { token: string; passwor
   const user = await db("users")
     .where({ id: candidate })
     .first<{ id: string; email: string; password_hash: string | null } | undefined>("id", "email", "password_hash");
-  const userId = readVerificationToken(token, (id) => (user && user.id === id ? { email: user.email, passwordHash: user.password_hash } : undefined));
+  const userId = readVerificationToken(token, (id) =>
+    user && user.id === id ? { email: user.email, passwordHash: user.password_hash } : undefined,
+  );
   if (!user || !userId) throw invalid;
   if (!(await verifyPassword(user.password_hash, password))) {
     const wrong = "That is not the password this account was created with. If you did not create it, do not confirm.";

@@ -27,5 +27,6 @@ export async function resendVerification(opts: { email: string; ip: string; vend
     .whereNull("email_verified")
     .whereNotNull("password_hash")
     .first<{ id: string; email: string; password_hash: string } | undefined>("id", "email", "password_hash");
-  if (user) await sendVerificationMail(db, { userId: user.id, email: user.email, passwordHash: user.password_hash, vendorSlug: opts.vendorSlug });
+  if (user)
+    await sendVerificationMail(db, { userId: user.id, email: user.email, passwordHash: user.password_hash, vendorSlug: opts.vendorSlug });
 }

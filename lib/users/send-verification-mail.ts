@@ -9,7 +9,10 @@ import { enqueueMail } from "@/lib/mail/enqueue-mail";
 const SLUG = /^[a-z0-9-]{1,60}$/;
 
 /** Mail the link that proves the person owns the address (queued in the caller's transaction); until then the password does not sign in. */
-export async function sendVerificationMail(trx: Knex | Knex.Transaction, opts: { userId: string; email: string; passwordHash: string | null; vendorSlug?: string }): Promise<void> {
+export async function sendVerificationMail(
+  trx: Knex | Knex.Transaction,
+  opts: { userId: string; email: string; passwordHash: string | null; vendorSlug?: string },
+): Promise<void> {
   const token = createVerificationToken({ userId: opts.userId, email: opts.email, passwordHash: opts.passwordHash });
   const vendor = opts.vendorSlug && SLUG.test(opts.vendorSlug) ? `&vendor=${opts.vendorSlug}` : "";
   const link = appUrl(`/verify-email?token=${token}${vendor}`);

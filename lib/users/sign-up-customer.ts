@@ -1,7 +1,7 @@
 import "server-only";
 
-import { hashPassword } from "@/lib/auth/passwords";
 import { writeAudit } from "@/lib/audit/write-audit";
+import { hashPassword } from "@/lib/auth/passwords";
 import { db } from "@/lib/db/knex";
 import { Conflict } from "@/lib/errors/domain-errors";
 
@@ -20,13 +20,18 @@ export async function signUpCustomer(opts: { vendorId: string; vendorSlug?: stri
   await consumeAccountMailLimit(opts.email);
   const passwordHash = await hashPassword(opts.password);
   const userId = await db.transaction(async (trx) => {
-    const existing = await trx("users").where({ email: opts.email }).forUpdate().first<{ id: string; email_verified: Date | null } | undefined>("id", "email_verified");
+    const existing = await trx("users")
+      .where({ email: opts.email })
+      .forUpdate()
+      .first<{ id: string; email_verified: Date | null } | undefined>("id", "email_verified");
     if (existing?.email_verified) throw new Conflict("An account with this e-mail exists. Sign in, then join this vendor from its page.");
     let id = existing?.id;
     if (id) {
       await trx("users").where({ id }).update({ name: opts.name, password_hash: passwordHash, updated_at: trx.fn.now() });
     } else {
-      [{ id }] = await trx("users").insert({ email: opts.email, name: opts.name, password_hash: passwordHash }).returning<{ id: string }[]>("id");
+      [{ id }] = await trx("users")
+        .insert({ email: opts.email, name: opts.name, password_hash: passwordHash })
+        .returning<{ id: string }[]>("id");
     }
     await trx("members").insert({ vendor_id: opts.vendorId, user_id: id, role: "customer" }).onConflict(["vendor_id", "user_id"]).ignore();
     await writeAudit({ vendorId: opts.vendorId, actorUserId: id, action: "member.sign-up", objectType: "user", objectId: id }, trx);
@@ -38,6 +43,15 @@ export async function signUpCustomer(opts: { vendorId: string; vendorSlug?: stri
 
 /** A signed-in person becomes a customer of one more vendor. */
 export async function joinAsCustomer(opts: { vendorId: string; userId: string }) {
-  await db("members").insert({ vendor_id: opts.vendorId, user_id: opts.userId, role: "customer" }).onConflict(["vendor_id", "user_id"]).ignore();
-  await writeAudit({ vendorId: opts.vendorId, actorUserId: opts.userId, action: "member.join-customer", objectType: "user", objectId: opts.userId });
+  await db("members")
+    .insert({ vendor_id: opts.vendorId, user_id: opts.userId, role: "customer" })
+    .onConflict(["vendor_id", "user_id"])
+    .ignore();
+  await writeAudit({
+    vendorId: opts.vendorId,
+    actorUserId: opts.userId,
+    action: "member.join-customer",
+    objectType: "user",
+    objectId: opts.userId,
+  });
 }

@@ -9,8 +9,17 @@ import { inviteMember } from "@/lib/members/invite-member";
 export async function createVendor(opts: { actorUserId: string; slug: string; name: string; accentColor: string; adminEmail: string }) {
   const clash = await db("vendors").where({ slug: opts.slug }).first("id");
   if (clash) throw new Conflict("That address is taken.");
-  const [vendor] = await db("vendors").insert({ slug: opts.slug, name: opts.name, accent_color: opts.accentColor }).returning(["id", "slug", "name"]);
-  await writeAudit({ vendorId: vendor.id, actorUserId: opts.actorUserId, action: "vendor.create", objectType: "vendor", objectId: vendor.id, details: { slug: opts.slug } });
+  const [vendor] = await db("vendors")
+    .insert({ slug: opts.slug, name: opts.name, accent_color: opts.accentColor })
+    .returning(["id", "slug", "name"]);
+  await writeAudit({
+    vendorId: vendor.id,
+    actorUserId: opts.actorUserId,
+    action: "vendor.create",
+    objectType: "vendor",
+    objectId: vendor.id,
+    details: { slug: opts.slug },
+  });
   const { token } = await inviteMember({
     vendorId: vendor.id,
     vendorSlug: vendor.slug,

@@ -3,11 +3,11 @@ import "server-only";
 import type { Knex } from "knex";
 import { cache } from "react";
 
+import { vendorSettingsSchema, type Vendor } from "@/content-schema/vendor";
 import { db } from "@/lib/db/knex";
 import { safeDecode } from "@/lib/http/safe-decode";
 
 import { vendorSlugSchema } from "./reserved-slugs";
-import { type Vendor, vendorSettingsSchema } from "@/content-schema/vendor";
 
 type VendorRow = { id: string; slug: string; name: string; accent_color: string; has_logo: boolean; settings: unknown };
 

@@ -2,9 +2,35 @@ import { z } from "zod";
 
 // Top-level path segments that belong to the platform, never to a vendor.
 export const RESERVED_SLUGS = new Set([
-  "api", "operator", "sign-in", "sign-out", "sign-up", "auth", "admin", "_next", "static", "public",
-  "favicon.ico", "robots.txt", "sitemap.xml", "c", "help", "about", "settings", "account", "profile",
-  "www", "mail", "status", "health", "login", "logout", "new", "vendors", "swarfbook", "developers",
+  "api",
+  "operator",
+  "sign-in",
+  "sign-out",
+  "sign-up",
+  "auth",
+  "admin",
+  "_next",
+  "static",
+  "public",
+  "favicon.ico",
+  "robots.txt",
+  "sitemap.xml",
+  "c",
+  "help",
+  "about",
+  "settings",
+  "account",
+  "profile",
+  "www",
+  "mail",
+  "status",
+  "health",
+  "login",
+  "logout",
+  "new",
+  "vendors",
+  "swarfbook",
+  "developers",
 ]);
 
 export const vendorSlugSchema = z

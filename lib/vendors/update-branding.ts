@@ -2,16 +2,16 @@ import "server-only";
 
 import { fileTypeFromBuffer } from "file-type";
 
+import { LOGO_MAX_BYTES, LOGO_TYPES, type BrandingInput } from "@/content-schema/vendor-branding";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 import { invalidateLibrary } from "@/lib/library/library-cache";
 
-import { type BrandingInput, LOGO_MAX_BYTES, LOGO_TYPES } from "@/content-schema/vendor-branding";
-
 /** Decide a logo's type by its bytes, never by its name or the browser's word. */
 export async function checkLogo(bytes: Buffer): Promise<{ bytes: Buffer; type: string }> {
-  if (bytes.byteLength > LOGO_MAX_BYTES) throw new InvalidInput("The logo is too large.", { logo: [`At most ${LOGO_MAX_BYTES / 1024} KB.`] });
+  if (bytes.byteLength > LOGO_MAX_BYTES)
+    throw new InvalidInput("The logo is too large.", { logo: [`At most ${LOGO_MAX_BYTES / 1024} KB.`] });
   const sniffed = await fileTypeFromBuffer(bytes);
   if (!sniffed || !(LOGO_TYPES as readonly string[]).includes(sniffed.mime)) {
     throw new InvalidInput("The logo must be a PNG, JPEG or WebP image.", { logo: ["Upload a PNG, JPEG or WebP image."] });
@@ -39,7 +39,21 @@ export async function updateBranding(opts: { vendorId: string; actorUserId: stri
         updated_at: trx.fn.now(),
       });
     await writeAudit(
-      { vendorId: opts.vendorId, actorUserId: opts.actorUserId, action: "vendor.branding", objectType: "vendor", objectId: opts.vendorId, details: { name: opts.input.name, accentColor: opts.input.accentColor, logo: Boolean(logo), libraryPublic: opts.input.libraryPublic, requireSecondApproval: opts.input.requireSecondApproval, wilsonConfidence: opts.input.wilsonConfidence } },
+      {
+        vendorId: opts.vendorId,
+        actorUserId: opts.actorUserId,
+        action: "vendor.branding",
+        objectType: "vendor",
+        objectId: opts.vendorId,
+        details: {
+          name: opts.input.name,
+          accentColor: opts.input.accentColor,
+          logo: Boolean(logo),
+          libraryPublic: opts.input.libraryPublic,
+          requireSecondApproval: opts.input.requireSecondApproval,
+          wilsonConfidence: opts.input.wilsonConfidence,
+        },
+      },
       trx,
     );
   });

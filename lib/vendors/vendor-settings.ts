@@ -1,8 +1,8 @@
 import "server-only";
 
+import { vendorSettingsSchema, type VendorSettings } from "@/content-schema/vendor";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
-import { vendorSettingsSchema, type VendorSettings } from "@/content-schema/vendor";
 
 /** A vendor's settings by id (the use cases get ids, not slugs). */
 export async function getVendorSettings(vendorId: string): Promise<VendorSettings> {

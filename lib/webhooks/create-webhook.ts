@@ -12,7 +12,15 @@ import { webhookSettings } from "./webhook-settings";
 export const MAX_WEBHOOKS_PER_VENDOR = 20;
 
 /** A new webhook; the signing secret is returned this once and stored encrypted. */
-export async function createWebhook({ vendorId, userId, input }: { vendorId: string; userId: string; input: WebhookForm }): Promise<{ id: string; secret: string }> {
+export async function createWebhook({
+  vendorId,
+  userId,
+  input,
+}: {
+  vendorId: string;
+  userId: string;
+  input: WebhookForm;
+}): Promise<{ id: string; secret: string }> {
   try {
     await resolveTarget(input.url, webhookSettings());
   } catch (error) {
@@ -23,7 +31,8 @@ export async function createWebhook({ vendorId, userId, input }: { vendorId: str
   return db.transaction(async (trx) => {
     await trx.raw("select pg_advisory_xact_lock(hashtextextended(?, 11))", [vendorId]);
     const { count } = await trx("webhooks").where({ vendor_id: vendorId }).first<{ count: string }>(trx.raw("count(*) as count"));
-    if (Number(count) >= MAX_WEBHOOKS_PER_VENDOR) throw new InvalidInput(`A workspace can have at most ${MAX_WEBHOOKS_PER_VENDOR} webhooks.`);
+    if (Number(count) >= MAX_WEBHOOKS_PER_VENDOR)
+      throw new InvalidInput(`A workspace can have at most ${MAX_WEBHOOKS_PER_VENDOR} webhooks.`);
     const [row] = await trx("webhooks")
       .insert({
         vendor_id: vendorId,
@@ -35,7 +44,17 @@ export async function createWebhook({ vendorId, userId, input }: { vendorId: str
         created_by: userId,
       })
       .returning<{ id: string }[]>("id");
-    await writeAudit({ vendorId, actorUserId: userId, action: "webhook.create", objectType: "webhook", objectId: row.id, details: { url: input.url, events: input.events } }, trx);
+    await writeAudit(
+      {
+        vendorId,
+        actorUserId: userId,
+        action: "webhook.create",
+        objectType: "webhook",
+        objectId: row.id,
+        details: { url: input.url, events: input.events },
+      },
+      trx,
+    );
     return { id: row.id, secret };
   });
 }

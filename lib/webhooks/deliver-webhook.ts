@@ -5,7 +5,7 @@ import { z } from "zod";
 import { db } from "@/lib/db/knex";
 
 import { pauseWebhook } from "./pause-webhook";
-import { type PostResult, postWebhook } from "./post-webhook";
+import { postWebhook, type PostResult } from "./post-webhook";
 import { enqueueDeliveryAttempt } from "./queue-webhook-event";
 import { RefusedTarget, resolveTarget } from "./resolve-target";
 import { openSecret } from "./secret-box";
@@ -15,8 +15,17 @@ import { retryDelaySeconds, webhookSettings } from "./webhook-settings";
 const jobSchema = z.object({ deliveryId: z.uuid(), attempt: z.int().min(1) });
 
 type Row = {
-  id: string; vendor_id: string; webhook_id: string; event_id: string; event_type: string; body: string; state: string; attempts: number;
-  url: string; secret_encrypted: string; webhook_state: "active" | "paused";
+  id: string;
+  vendor_id: string;
+  webhook_id: string;
+  event_id: string;
+  event_type: string;
+  body: string;
+  state: string;
+  attempts: number;
+  url: string;
+  secret_encrypted: string;
+  webhook_state: "active" | "paused";
 };
 
 /** Job: one attempt of one delivery. HTTP failures are recorded and retried by a new job with a wait, never thrown. */
@@ -36,7 +45,10 @@ export async function deliverWebhookJob(data: unknown): Promise<void> {
   const result = await sendAttempt(row, settings);
   const ok = result.status !== null && result.status >= 200 && result.status < 300;
   await db.transaction(async (trx) => {
-    const hook = await trx("webhooks").where({ id: row.webhook_id, vendor_id: row.vendor_id }).forUpdate().first<{ state: string; consecutive_failures: number } | undefined>("state", "consecutive_failures");
+    const hook = await trx("webhooks")
+      .where({ id: row.webhook_id, vendor_id: row.vendor_id })
+      .forUpdate()
+      .first<{ state: string; consecutive_failures: number } | undefined>("state", "consecutive_failures");
     if (!hook) return;
     const retry = !ok && attempt < settings.maxAttempts;
     const wait = retry ? retryDelaySeconds(attempt + 1, settings) : 0;
@@ -59,8 +71,10 @@ export async function deliverWebhookJob(data: unknown): Promise<void> {
     }
     const failures = hook.consecutive_failures + 1;
     await trx("webhooks").where({ id: row.webhook_id, vendor_id: row.vendor_id }).update({ consecutive_failures: failures });
-    if (retry) await enqueueDeliveryAttempt(trx, { deliveryId: row.id, attempt: attempt + 1, key: `${row.id}:${attempt + 1}`, afterSeconds: wait });
-    if (hook.state === "active" && failures >= settings.pauseAfterFailures) await pauseWebhook(trx, { vendorId: row.vendor_id, webhookId: row.webhook_id, failures });
+    if (retry)
+      await enqueueDeliveryAttempt(trx, { deliveryId: row.id, attempt: attempt + 1, key: `${row.id}:${attempt + 1}`, afterSeconds: wait });
+    if (hook.state === "active" && failures >= settings.pauseAfterFailures)
+      await pauseWebhook(trx, { vendorId: row.vendor_id, webhookId: row.webhook_id, failures });
   });
 }
 

@@ -3,7 +3,7 @@ import "server-only";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
 
-import { DELIVERY_COLUMNS, type Webhook, WEBHOOK_COLUMNS, type WebhookDelivery } from "./webhook-rows";
+import { DELIVERY_COLUMNS, WEBHOOK_COLUMNS, type Webhook, type WebhookDelivery } from "./webhook-rows";
 
 export async function listWebhooks({ vendorId }: { vendorId: string }): Promise<Webhook[]> {
   return db("webhooks").where({ vendor_id: vendorId }).orderBy("created_at").select<Webhook[]>(WEBHOOK_COLUMNS);
@@ -22,7 +22,10 @@ export const DELIVERY_LOG_SIZE = 50;
 export async function listDeliveries({ vendorId, webhookId }: { vendorId: string; webhookId: string }): Promise<WebhookDelivery[]> {
   return db("webhook_deliveries")
     .where({ vendor_id: vendorId, webhook_id: webhookId })
-    .orderBy([{ column: "created_at", order: "desc" }, { column: "id", order: "desc" }])
+    .orderBy([
+      { column: "created_at", order: "desc" },
+      { column: "id", order: "desc" },
+    ])
     .limit(DELIVERY_LOG_SIZE)
     .select<WebhookDelivery[]>(DELIVERY_COLUMNS);
 }

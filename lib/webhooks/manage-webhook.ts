@@ -9,7 +9,11 @@ import { enqueueDeliveryAttempt } from "./queue-webhook-event";
 type Target = { vendorId: string; userId: string; webhookId: string };
 
 /** Send one delivery again (same event id and body, a new timestamp and signature). */
-export async function redeliverWebhook({ vendorId, webhookId, deliveryId }: Omit<Target, "userId"> & { deliveryId: string }): Promise<void> {
+export async function redeliverWebhook({
+  vendorId,
+  webhookId,
+  deliveryId,
+}: Omit<Target, "userId"> & { deliveryId: string }): Promise<void> {
   await db.transaction(async (trx) => {
     const row = await trx("webhook_deliveries as d")
       .join("webhooks as w", (j) => j.on("w.id", "d.webhook_id").andOn("w.vendor_id", "d.vendor_id"))
@@ -28,10 +32,15 @@ export async function redeliverWebhook({ vendorId, webhookId, deliveryId }: Omit
 /** Resume a paused webhook; what was held while it was paused is sent now. */
 export async function resumeWebhook({ vendorId, userId, webhookId }: Target): Promise<void> {
   await db.transaction(async (trx) => {
-    const hook = await trx("webhooks").where({ vendor_id: vendorId, id: webhookId }).forUpdate().first<{ state: string; paused_at: Date | null } | undefined>("state", "paused_at");
+    const hook = await trx("webhooks")
+      .where({ vendor_id: vendorId, id: webhookId })
+      .forUpdate()
+      .first<{ state: string; paused_at: Date | null } | undefined>("state", "paused_at");
     if (!hook) throw new NotFound("No such webhook.");
     if (hook.state === "active") return;
-    await trx("webhooks").where({ vendor_id: vendorId, id: webhookId }).update({ state: "active", consecutive_failures: 0, paused_at: null });
+    await trx("webhooks")
+      .where({ vendor_id: vendorId, id: webhookId })
+      .update({ state: "active", consecutive_failures: 0, paused_at: null });
     const held = await trx("webhook_deliveries")
       .where({ vendor_id: vendorId, webhook_id: webhookId })
       .whereIn("state", ["held", "retrying", "pending"])
@@ -43,7 +52,17 @@ export async function resumeWebhook({ vendorId, userId, webhookId }: Target): Pr
       await trx("webhook_deliveries").where({ id: d.id, vendor_id: vendorId }).update({ state: "pending", next_attempt_at: null });
       await enqueueDeliveryAttempt(trx, { deliveryId: d.id, attempt: d.attempts + 1, key: `${d.id}:resume:${since}:${d.attempts}` });
     }
-    await writeAudit({ vendorId, actorUserId: userId, action: "webhook.resume", objectType: "webhook", objectId: webhookId, details: { held: held.length } }, trx);
+    await writeAudit(
+      {
+        vendorId,
+        actorUserId: userId,
+        action: "webhook.resume",
+        objectType: "webhook",
+        objectId: webhookId,
+        details: { held: held.length },
+      },
+      trx,
+    );
   });
 }
 
@@ -51,6 +70,9 @@ export async function deleteWebhook({ vendorId, userId, webhookId }: Target): Pr
   await db.transaction(async (trx) => {
     const [row] = await trx("webhooks").where({ vendor_id: vendorId, id: webhookId }).delete().returning<{ url: string }[]>("url");
     if (!row) throw new NotFound("No such webhook.");
-    await writeAudit({ vendorId, actorUserId: userId, action: "webhook.delete", objectType: "webhook", objectId: webhookId, details: { url: row.url } }, trx);
+    await writeAudit(
+      { vendorId, actorUserId: userId, action: "webhook.delete", objectType: "webhook", objectId: webhookId, details: { url: row.url } },
+      trx,
+    );
   });
 }

@@ -6,7 +6,10 @@ import { appUrl } from "@/lib/http/app-url";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 
 /** Pause a failing webhook and tell the vendor's admins, in the transaction that counted the last failure. */
-export async function pauseWebhook(trx: Knex.Transaction, { vendorId, webhookId, failures }: { vendorId: string; webhookId: string; failures: number }) {
+export async function pauseWebhook(
+  trx: Knex.Transaction,
+  { vendorId, webhookId, failures }: { vendorId: string; webhookId: string; failures: number },
+) {
   const pausedAt = new Date();
   await trx("webhooks").where({ id: webhookId, vendor_id: vendorId }).update({ state: "paused", paused_at: pausedAt });
   const hook = await trx("webhooks").where({ id: webhookId, vendor_id: vendorId }).first<{ url: string }>("url");

@@ -18,7 +18,10 @@ const MAX_READ_BYTES = 4096;
 export function postWebhook(target: ResolvedTarget, body: string, headers: Record<string, string>, timeoutMs: number): Promise<PostResult> {
   const started = Date.now();
   const pinned: LookupFunction = (_hostname, options, callback) => {
-    if (options?.all) (callback as unknown as (e: null, a: { address: string; family: number }[]) => void)(null, [{ address: target.address, family: target.family }]);
+    if (options?.all)
+      (callback as unknown as (e: null, a: { address: string; family: number }[]) => void)(null, [
+        { address: target.address, family: target.family },
+      ]);
     else callback(null, target.address, target.family);
   };
   const client = target.url.protocol === "https:" ? https : http;
@@ -35,7 +38,12 @@ export function postWebhook(target: ResolvedTarget, body: string, headers: Recor
       {
         method: "POST",
         lookup: pinned,
-        headers: { "content-type": "application/json", "user-agent": "Swarfbook-Webhooks/1", "content-length": String(Buffer.byteLength(body)), ...headers },
+        headers: {
+          "content-type": "application/json",
+          "user-agent": "Swarfbook-Webhooks/1",
+          "content-length": String(Buffer.byteLength(body)),
+          ...headers,
+        },
         ...(target.url.protocol === "https:" ? { servername: target.url.hostname } : {}),
       },
       (response) => {
@@ -64,7 +72,10 @@ export function postWebhook(target: ResolvedTarget, body: string, headers: Recor
 function excerptOf(bytes: Buffer): string | null {
   if (bytes.length === 0) return null;
   // Control characters out, length capped: the log shows a hint of the answer, not the answer.
-  return bytes.toString("utf8").replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/g, "").slice(0, RESPONSE_EXCERPT_CHARS);
+  return bytes
+    .toString("utf8")
+    .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/g, "")
+    .slice(0, RESPONSE_EXCERPT_CHARS);
 }
 
 function describe(error: Error & { code?: string }): string {

@@ -7,10 +7,14 @@ import { appUrl } from "@/lib/http/app-url";
 
 import { queueWebhookEvent } from "./queue-webhook-event";
 
-const hasWebhooks = async (trx: Knex.Transaction, vendorId: string) => Boolean(await trx("webhooks").where({ vendor_id: vendorId }).first("id"));
+const hasWebhooks = async (trx: Knex.Transaction, vendorId: string) =>
+  Boolean(await trx("webhooks").where({ vendor_id: vendorId }).first("id"));
 
 /** ticket.answered, inside the transaction of the staff reply. */
-export async function queueTicketAnswered(trx: Knex.Transaction, { vendorId, ticketId, messageId }: { vendorId: string; ticketId: string; messageId: string }) {
+export async function queueTicketAnswered(
+  trx: Knex.Transaction,
+  { vendorId, ticketId, messageId }: { vendorId: string; ticketId: string; messageId: string },
+) {
   if (!(await hasWebhooks(trx, vendorId))) return;
   const ticket = await trx("tickets as t")
     .join("vendors as v", "v.id", "t.vendor_id")

@@ -1,10 +1,9 @@
 import "server-only";
 
 import { randomUUID } from "node:crypto";
-
 import type { Knex } from "knex";
 
-import { type WebhookEventData, type WebhookEventType, webhookEnvelopeSchema } from "@/content-schema/webhook-events";
+import { webhookEnvelopeSchema, type WebhookEventData, type WebhookEventType } from "@/content-schema/webhook-events";
 import { enqueue } from "@/lib/jobs/enqueue";
 
 export const WEBHOOK_DELIVERY_QUEUE = "webhooks.deliver";
@@ -39,7 +38,14 @@ export async function queueWebhookEvent<T extends WebhookEventType>(trx: Knex.Tr
   const body = JSON.stringify(envelope);
   for (const hook of hooks) {
     const [row] = await trx("webhook_deliveries")
-      .insert({ vendor_id: event.vendorId, webhook_id: hook.id, event_id: envelope.id, event_type: event.type, body, state: hook.state === "active" ? "pending" : "held" })
+      .insert({
+        vendor_id: event.vendorId,
+        webhook_id: hook.id,
+        event_id: envelope.id,
+        event_type: event.type,
+        body,
+        state: hook.state === "active" ? "pending" : "held",
+      })
       .onConflict(["webhook_id", "event_id"])
       .ignore()
       .returning<{ id: string }[]>("id");
@@ -47,6 +53,14 @@ export async function queueWebhookEvent<T extends WebhookEventType>(trx: Knex.Tr
   }
 }
 
-export async function enqueueDeliveryAttempt(trx: Knex.Transaction, o: { deliveryId: string; attempt: number; key: string; afterSeconds?: number }) {
-  await enqueue(trx, WEBHOOK_DELIVERY_QUEUE, { deliveryId: o.deliveryId, attempt: o.attempt }, { key: o.key, ...(o.afterSeconds ? { startAfter: o.afterSeconds } : {}) });
+export async function enqueueDeliveryAttempt(
+  trx: Knex.Transaction,
+  o: { deliveryId: string; attempt: number; key: string; afterSeconds?: number },
+) {
+  await enqueue(
+    trx,
+    WEBHOOK_DELIVERY_QUEUE,
+    { deliveryId: o.deliveryId, attempt: o.attempt },
+    { key: o.key, ...(o.afterSeconds ? { startAfter: o.afterSeconds } : {}) },
+  );
 }

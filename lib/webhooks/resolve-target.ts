@@ -30,6 +30,9 @@ export async function resolveTarget(raw: string, options: { allowLoopback: boole
   }
   if (answers.length === 0) throw new RefusedTarget(`The name ${host} does not resolve.`);
   const refused = answers.find((a) => !isAllowedAddress(a.address, options));
-  if (refused) throw new RefusedTarget(`${host} points to ${refused.address}, a private, loopback or reserved address; webhooks go to public addresses only.`);
+  if (refused)
+    throw new RefusedTarget(
+      `${host} points to ${refused.address}, a private, loopback or reserved address; webhooks go to public addresses only.`,
+    );
   return { url, address: answers[0].address, family: answers[0].family === 6 ? 6 : 4 };
 }

@@ -13,7 +13,13 @@ export function signPayload(secret: string, timestamp: number, body: string): st
 }
 
 /** What a receiver does, in code: the documented check (also used by the tests' receiver). */
-export function verifySignature(o: { secret: string; timestamp: string | null; signature: string | null; body: string; now?: number }): boolean {
+export function verifySignature(o: {
+  secret: string;
+  timestamp: string | null;
+  signature: string | null;
+  body: string;
+  now?: number;
+}): boolean {
   if (!o.timestamp || !o.signature || !/^\d{1,12}$/.test(o.timestamp)) return false;
   const now = o.now ?? Math.floor(Date.now() / 1000);
   if (Math.abs(now - Number(o.timestamp)) > REPLAY_WINDOW_SECONDS) return false;

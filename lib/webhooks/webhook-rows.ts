@@ -28,11 +28,28 @@ export type WebhookDelivery = {
 };
 
 export const WEBHOOK_COLUMNS = {
-  id: "id", url: "url", description: "description", events: "events", secretHint: "secret_hint", state: "state",
-  consecutiveFailures: "consecutive_failures", pausedAt: "paused_at", createdAt: "created_at",
+  id: "id",
+  url: "url",
+  description: "description",
+  events: "events",
+  secretHint: "secret_hint",
+  state: "state",
+  consecutiveFailures: "consecutive_failures",
+  pausedAt: "paused_at",
+  createdAt: "created_at",
 } as const;
 
 export const DELIVERY_COLUMNS = {
-  id: "id", eventId: "event_id", eventType: "event_type", state: "state", attempts: "attempts", lastStatus: "last_status", lastError: "last_error",
-  responseExcerpt: "response_excerpt", durationMs: "duration_ms", lastAttemptAt: "last_attempt_at", nextAttemptAt: "next_attempt_at", createdAt: "created_at",
+  id: "id",
+  eventId: "event_id",
+  eventType: "event_type",
+  state: "state",
+  attempts: "attempts",
+  lastStatus: "last_status",
+  lastError: "last_error",
+  responseExcerpt: "response_excerpt",
+  durationMs: "duration_ms",
+  lastAttemptAt: "last_attempt_at",
+  nextAttemptAt: "next_attempt_at",
+  createdAt: "created_at",
 } as const;

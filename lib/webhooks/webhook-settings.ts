@@ -24,7 +24,10 @@ export function webhookSettings() {
 }
 
 /** Seconds before attempt `next` (2 = the first retry). */
-export function retryDelaySeconds(next: number, { retryBaseSeconds, retryCapSeconds }: { retryBaseSeconds: number; retryCapSeconds: number }): number {
+export function retryDelaySeconds(
+  next: number,
+  { retryBaseSeconds, retryCapSeconds }: { retryBaseSeconds: number; retryCapSeconds: number },
+): number {
   return Math.min(retryCapSeconds, retryBaseSeconds * 2 ** Math.max(0, next - 2));
 }
 

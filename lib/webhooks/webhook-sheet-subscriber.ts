@@ -7,7 +7,14 @@ import { jobIdFor } from "@/lib/jobs/enqueue";
 
 import { queueWebhookEvent } from "./queue-webhook-event";
 
-type VersionRow = { number: number; title: string; published_at: Date | null; withdrawn_reason: string | null; slug: string; vendor_slug: string };
+type VersionRow = {
+  number: number;
+  title: string;
+  published_at: Date | null;
+  withdrawn_reason: string | null;
+  slug: string;
+  vendor_slug: string;
+};
 
 async function version(vendorId: string, versionId: string): Promise<VersionRow | undefined> {
   return db("sheet_versions as v")
@@ -17,7 +24,12 @@ async function version(vendorId: string, versionId: string): Promise<VersionRow 
     .first<VersionRow | undefined>("v.number", "v.title", "v.published_at", "v.withdrawn_reason", "s.slug", "vd.slug as vendor_slug");
 }
 
-const ref = (v: VersionRow) => ({ sheet: v.slug, version: v.number, title: v.title, url: appUrl(`/${v.vendor_slug}/library/${v.slug}/v/${v.number}`) });
+const ref = (v: VersionRow) => ({
+  sheet: v.slug,
+  version: v.number,
+  title: v.title,
+  url: appUrl(`/${v.vendor_slug}/library/${v.slug}/v/${v.number}`),
+});
 // A retried subscriber job must not make a second event: the id follows from what happened.
 const eventId = (type: string, versionId: string) => jobIdFor("webhook-event", `${type}:${versionId}`);
 
@@ -32,7 +44,12 @@ export const webhookSheetSubscriber: SheetEventSubscriber = {
     if (!current) return;
     await db.transaction(async (trx) => {
       if (event.type === "version.withdrawn") {
-        await queueWebhookEvent(trx, { vendorId: event.vendorId, type: "sheet.withdrawn", eventId: eventId("sheet.withdrawn", event.versionId), data: { ...ref(current), reason: current.withdrawn_reason } });
+        await queueWebhookEvent(trx, {
+          vendorId: event.vendorId,
+          type: "sheet.withdrawn",
+          eventId: eventId("sheet.withdrawn", event.versionId),
+          data: { ...ref(current), reason: current.withdrawn_reason },
+        });
         return;
       }
       const previous = event.supersededVersionId ? await version(event.vendorId, event.supersededVersionId) : undefined;

@@ -1,6 +1,6 @@
 // The production build of the app for scripts/bench-pages.ts: built into its own folder, started on loopback
 // against the benchmark's throwaway database, stopped at the end.
-import { type ChildProcess, spawn } from "node:child_process";
+import { spawn, type ChildProcess } from "node:child_process";
 import { openSync } from "node:fs";
 import { mkdir } from "node:fs/promises";
 import path from "node:path";
@@ -19,7 +19,12 @@ function run(command: string, args: string[], env: NodeJS.ProcessEnv, log: strin
 export async function buildApp(logDir: string) {
   await mkdir(logDir, { recursive: true });
   const t = performance.now();
-  await run(path.join(root, "node_modules/.bin/next"), ["build"], { ...process.env, NEXT_DIST_DIR: BENCH_DIST_DIR }, path.join(logDir, "build.log"));
+  await run(
+    path.join(root, "node_modules/.bin/next"),
+    ["build"],
+    { ...process.env, NEXT_DIST_DIR: BENCH_DIST_DIR },
+    path.join(logDir, "build.log"),
+  );
   console.log(`built into ${BENCH_DIST_DIR} in ${Math.round((performance.now() - t) / 1000)} s`);
 }
 

@@ -35,7 +35,9 @@ export async function seedPagesData(knex: Knex, { versions, tickets, messages }:
     .first<{ slug: string }>("s.slug");
 
   t = performance.now();
-  const { rows } = await knex.raw<{ rows: { n: number }[] }>("select coalesce(max(number), 0)::int as n from tickets where vendor_id = ?", [vendor.id]);
+  const { rows } = await knex.raw<{ rows: { n: number }[] }>("select coalesce(max(number), 0)::int as n from tickets where vendor_id = ?", [
+    vendor.id,
+  ]);
   const first = rows[0].n + 1;
   await knex.raw(
     `insert into tickets (vendor_id, number, customer_id, subject, body, status, priority, idempotency_key, first_response_due_at, created_at, last_activity_at)

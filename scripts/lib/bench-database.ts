@@ -2,13 +2,13 @@
 // migrated, handed to the benchmark and always dropped at the end.
 import { randomBytes } from "node:crypto";
 import path from "node:path";
-
 import knexFactory, { type Knex } from "knex";
 
 const DEFAULT_ADMIN_URL = "postgres://postgres@127.0.0.1:54329/postgres";
 
 function assertLocal(url: string) {
-  if (!["127.0.0.1", "localhost", "::1", "[::1]"].includes(new URL(url).hostname)) throw new Error("The benchmark only runs against a local cluster.");
+  if (!["127.0.0.1", "localhost", "::1", "[::1]"].includes(new URL(url).hostname))
+    throw new Error("The benchmark only runs against a local cluster.");
 }
 
 export type BenchDatabaseOptions = {

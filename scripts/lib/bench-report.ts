@@ -26,7 +26,9 @@ export function reportRatio(label: string, subject: Summary, baseline: Summary, 
   const throughput = subject.perSecond / baseline.perSecond;
   console.log(`\n${label}`);
   for (const s of [subject, baseline]) {
-    console.log(`  ${s.name.padEnd(28)} ${String(s.count).padStart(6)} ok ${String(s.failures).padStart(4)} failed  p50 ${ms(s.p50).padStart(9)}  p95 ${ms(s.p95).padStart(9)}  ${s.perSecond.toFixed(0).padStart(6)}/s`);
+    console.log(
+      `  ${s.name.padEnd(28)} ${String(s.count).padStart(6)} ok ${String(s.failures).padStart(4)} failed  p50 ${ms(s.p50).padStart(9)}  p95 ${ms(s.p95).padStart(9)}  ${s.perSecond.toFixed(0).padStart(6)}/s`,
+    );
   }
   const verdict = (value: number, limit: number | undefined, atMost: boolean) =>
     limit === undefined ? "" : ` (goal ${atMost ? "≤" : "≥"} ${limit}: ${(atMost ? value <= limit : value >= limit) ? "met" : "not met"})`;

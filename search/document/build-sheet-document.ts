@@ -3,10 +3,19 @@ import { classifyMaterial } from "@/search/parse/classify-material";
 import { materialByKey } from "@/search/vocabulary/lookup";
 import { CORNER_FORMS, MATERIAL_GROUPS, type CornerForm, type MaterialGroup } from "@/search/vocabulary/types";
 
-import { type SearchDocument, cutterDocId, sheetDocId } from "./document-schema";
+import { cutterDocId, sheetDocId, type SearchDocument } from "./document-schema";
 import { mdxToPlainText } from "./plain-text";
 
-export type CutterRow = { id: string; sku: string; name: string; diameterMm: number; flutes: number; cornerForm: string; geometry: string; notes?: string };
+export type CutterRow = {
+  id: string;
+  sku: string;
+  name: string;
+  diameterMm: number;
+  flutes: number;
+  cornerForm: string;
+  geometry: string;
+  notes?: string;
+};
 export type MaterialRow = { slug: string; name: string; group: string; synonyms: readonly string[] };
 export type SheetDocumentSource = {
   vendorId: string;

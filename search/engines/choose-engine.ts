@@ -15,7 +15,11 @@ export function getSearchEngine(): SearchEngine {
   if (chosen) return chosen;
   const host = process.env.MEILISEARCH_HOST?.trim();
   const engine = host
-    ? createMeilisearchEngine({ host, apiKey: process.env.MEILISEARCH_API_KEY || undefined, indexUid: process.env.MEILISEARCH_INDEX || undefined })
+    ? createMeilisearchEngine({
+        host,
+        apiKey: process.env.MEILISEARCH_API_KEY || undefined,
+        indexUid: process.env.MEILISEARCH_INDEX || undefined,
+      })
     : createPostgresEngine(db, readDb);
   chosen = engine;
   return engine;

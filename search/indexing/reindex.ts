@@ -1,7 +1,7 @@
 import type { Knex } from "knex";
 
-import { loadCutterDocuments, loadSheetDocuments, sheetIdsUsing } from "@/search/document/load-documents";
 import { cutterDocId, sheetDocId } from "@/search/document/document-schema";
+import { loadCutterDocuments, loadSheetDocuments, sheetIdsUsing } from "@/search/document/load-documents";
 import type { SearchEngine } from "@/search/engines/engine-types";
 
 type Ctx = { engine: SearchEngine; knex?: Knex };
@@ -25,7 +25,13 @@ export async function reindexCutters({ engine, knex, vendorId, cutterIds }: Ctx 
 }
 
 /** After a catalogue edit: the sheets using the entry, and the cutter itself. */
-export async function reindexCatalogueEntry({ engine, knex, vendorId, entity, entityId }: Ctx & { vendorId: string; entity: "cutter" | "material" | "machine_class"; entityId: string }) {
+export async function reindexCatalogueEntry({
+  engine,
+  knex,
+  vendorId,
+  entity,
+  entityId,
+}: Ctx & { vendorId: string; entity: "cutter" | "material" | "machine_class"; entityId: string }) {
   const sheetIds = await sheetIdsUsing({ vendorId, entity, entityId, knex });
   await reindexSheets({ engine, knex, vendorId, sheetIds });
   if (entity === "cutter") await reindexCutters({ engine, knex, vendorId, cutterIds: [entityId] });

@@ -29,4 +29,5 @@ export async function reindexVendorJob(data: unknown): Promise<void> {
   await reindexVendor({ engine: getSearchEngine(), vendorId: vendorJob.parse(data).vendorId });
 }
 
-export const enqueueVendorReindex = (trx: Knex | Knex.Transaction, vendorId: string) => enqueue(trx, SEARCH_REINDEX_VENDOR_QUEUE, { vendorId });
+export const enqueueVendorReindex = (trx: Knex | Knex.Transaction, vendorId: string) =>
+  enqueue(trx, SEARCH_REINDEX_VENDOR_QUEUE, { vendorId });

@@ -18,7 +18,12 @@ export function looserQueries(parsed: ParsedQuery): string[] {
   const out: string[] = [];
   for (const kind of DROP_ORDER) {
     for (const chip of parsed.chips.filter((c) => c.kind === kind)) {
-      out.push(spliceSpans(query, spans.filter((s) => s.chip.kind === kind && s.chip.value === chip.value)));
+      out.push(
+        spliceSpans(
+          query,
+          spans.filter((s) => s.chip.kind === kind && s.chip.value === chip.value),
+        ),
+      );
     }
   }
   for (const chip of parsed.chips.filter((c) => c.kind === "material")) {
@@ -35,7 +40,10 @@ export function looserQueries(parsed: ParsedQuery): string[] {
 export function describeQuery(parsed: ParsedQuery): string {
   const parts = parsed.chips.map((c) => c.label);
   const skus = new Set(parsed.skus.map((sku) => sku.toLowerCase()));
-  const text = parsed.text.split(" ").filter((word) => word && !skus.has(word)).join(" ");
+  const text = parsed.text
+    .split(" ")
+    .filter((word) => word && !skus.has(word))
+    .join(" ");
   if (text) parts.push(`“${text}”`);
   return parts.join(", ");
 }

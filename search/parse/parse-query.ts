@@ -5,7 +5,6 @@ import { parseSpans } from "./parse-spans";
 import { isStopWord } from "./stop-words";
 import type { ParsedQuery, QueryChip } from "./types";
 
-
 const unique = <T>(values: T[]) => [...new Set(values)];
 
 /**
@@ -40,4 +39,3 @@ export function parseQuery(input: string): ParsedQuery {
     truncated,
   };
 }
-

@@ -40,7 +40,7 @@ export function parseSpans(input: unknown): QuerySpans {
     return count;
   };
   const sameAsFirst = (kind: ChipKind, value: string) => spans.find((s) => s.chip.kind === kind)?.chip.value === value;
-  for (let i = 0; i < tokens.length; ) {
+  for (let i = 0; i < tokens.length;) {
     // A second diameter or flute count is recognised only when it repeats the first.
     const diameter = matchDiameter(tokens, i);
     if (diameter && (!seen.has("diameter") || sameAsFirst("diameter", String(diameter.mm)))) {

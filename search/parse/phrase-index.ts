@@ -40,7 +40,12 @@ add("geometry", geometries);
 /** The longest vocabulary phrase starting at token `i`, so `cast acrylic` wins over `cast` + `acrylic`. */
 export function matchPhrase(tokens: readonly Token[], i: number): { count: number; hit: PhraseHit } | null {
   for (let w = Math.min(widest, tokens.length - i); w >= 1; w--) {
-    const hit = index.get(tokens.slice(i, i + w).map((t) => termKey(t.text)).join(""));
+    const hit = index.get(
+      tokens
+        .slice(i, i + w)
+        .map((t) => termKey(t.text))
+        .join(""),
+    );
     if (hit) return { count: w, hit };
   }
   return null;

@@ -20,5 +20,8 @@ export function spliceSpans(query: string, spans: readonly Span[], by = ""): str
  */
 export function removeChip(input: string, chip: Pick<QueryChip, "kind" | "value">): string {
   const { query, spans } = parseSpans(input);
-  return spliceSpans(query, spans.filter((s) => sameChip(s.chip, chip)));
+  return spliceSpans(
+    query,
+    spans.filter((s) => sameChip(s.chip, chip)),
+  );
 }

@@ -15,7 +15,10 @@ export function sanitiseQuery(input: unknown): { query: string; truncated: boole
   let s = input.slice(0, RAW_LIMIT);
   // Before NFKD, which would turn "1¼" into "11⁄4".
   s = s.replace(/(\d?)([¼½¾⅛⅜⅝⅞])/g, (_, whole: string, f: string) => ` ${whole} ${VULGAR[f]}`);
-  s = s.normalize("NFKD").replace(/[\u0300-\u036f]/g, "").normalize("NFC");
+  s = s
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .normalize("NFC");
   s = s
     .replace(/[\u2044\u2215]/g, "/")
     .replace(/\u2032\u2032|''|[\u2033\u201c\u201d\u201e]/g, '"')

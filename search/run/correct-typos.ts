@@ -5,10 +5,21 @@ import { vocabularyEntries } from "@/search/vocabulary/synonyms";
 
 import { editDistance } from "./edit-distance";
 
-const fold = (s: string) => s.normalize("NFKD").replace(/[\u0300-\u036f]/g, "").toLowerCase();
+const fold = (s: string) =>
+  s
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase();
 
 // Single-word vocabulary terms: the words a typo is most likely aimed at (`alumnium`, `acrilic`).
-const DICTIONARY = [...new Set(vocabularyEntries.flatMap((e) => [...e.terms, ...(e.looseTerms ?? [])]).map(fold).filter((t) => /^[a-z]+$/.test(t)))];
+const DICTIONARY = [
+  ...new Set(
+    vocabularyEntries
+      .flatMap((e) => [...e.terms, ...(e.looseTerms ?? [])])
+      .map(fold)
+      .filter((t) => /^[a-z]+$/.test(t)),
+  ),
+];
 const KNOWN = new Set(DICTIONARY);
 
 export type Correction = { from: string; to: string };

@@ -7,7 +7,13 @@ import type { QueryParts } from "../engines/engine-types";
 import { dropSets, materialWidths } from "./relax-steps";
 
 /** Facet selections sent beside the query (`material=`, `operation=` …): hard filters, never relaxed. */
-export type ExplicitFilters = { material?: string; materialGroup?: MaterialGroup; operation?: OperationKind; diameterMm?: number; flutes?: number };
+export type ExplicitFilters = {
+  material?: string;
+  materialGroup?: MaterialGroup;
+  operation?: OperationKind;
+  diameterMm?: number;
+  flutes?: number;
+};
 
 // Loosened first when nothing matches all parts: flute counts are misremembered most, the material least.
 const RELAX_ORDER: ChipKind[] = ["flutes", "geometry", "cornerForm", "operation", "diameter", "materialGroup", "material"];

@@ -30,9 +30,9 @@ export function dropSets(present: readonly ChipKind[]): ChipKind[][] {
   const rank = (set: ChipKind[]) => set.map((k) => present.indexOf(k));
   return sets.sort((a, b) => {
     if (a.length !== b.length) return a.length - b.length;
-    const ra = rank(a), rb = rank(b);
+    const ra = rank(a),
+      rb = rank(b);
     for (let i = 0; i < ra.length; i++) if (ra[i] !== rb[i]) return ra[i] - rb[i];
     return 0;
   });
 }
-

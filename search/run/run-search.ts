@@ -5,12 +5,11 @@ import type { ParsedQuery } from "@/search/parse/types";
 import { oneWaySynonyms, synonymGroups } from "@/search/vocabulary/synonyms";
 
 import type { EngineQuery, EngineResult, SearchEngine } from "../engines/engine-types";
-import { type Correction, correctTypos } from "./correct-typos";
-import type { HighlightRange } from "./highlight";
-import { type ExplicitFilters, planSearch } from "./plan-search";
+import { correctTypos, type Correction } from "./correct-typos";
+import { highlighter, type HighlightRange } from "./highlight";
+import { planSearch, type ExplicitFilters } from "./plan-search";
 import type { SearchResponse } from "./search-response";
 import { highlightTerms, toHit } from "./to-hit";
-import { highlighter } from "./highlight";
 
 export type SearchRequest = { vendorId: string; q: string; filters?: ExplicitFilters; page?: number; perPage?: number };
 
@@ -81,7 +80,13 @@ function textPlan(req: SearchRequest): SearchPlanOfText {
 /** The engine queries of a search, strictest first (exported for the benchmark's query plan). */
 export function engineQueriesFor(req: SearchRequest) {
   const { parsed, corrections, page, perPage, steps } = textPlan(req);
-  return { parsed, corrections, page, perPage, steps: steps.map((s) => ({ query: { ...s.query, vendorId: req.vendorId } satisfies EngineQuery, dropped: s.dropped })) };
+  return {
+    parsed,
+    corrections,
+    page,
+    perPage,
+    steps: steps.map((s) => ({ query: { ...s.query, vendorId: req.vendorId } satisfies EngineQuery, dropped: s.dropped })),
+  };
 }
 
 /** Parse → plan → engine (relaxing filters while nothing matches) → hits with highlight ranges and facets. */
@@ -92,7 +97,10 @@ export async function runSearch(engine: SearchEngine, req: SearchRequest): Promi
   let result: EngineResult = { total: 0, hits: [], facets: {}, cutters: [] };
   let relaxed: SearchResponse["relaxed"] = [];
   if (engine.searchSteps) {
-    const found = await engine.searchSteps(steps.map((s) => s.query), plan.key);
+    const found = await engine.searchSteps(
+      steps.map((s) => s.query),
+      plan.key,
+    );
     result = found.result;
     relaxed = steps[found.step].dropped;
   } else {

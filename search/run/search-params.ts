@@ -19,7 +19,12 @@ export const searchParamsSchema = z.object({
     .string()
     .default("")
     .transform((q) => q.slice(0, 2000)),
-  material: optionalText.pipe(z.string().regex(/^[a-z0-9-]+$/).optional()),
+  material: optionalText.pipe(
+    z
+      .string()
+      .regex(/^[a-z0-9-]+$/)
+      .optional(),
+  ),
   materialGroup: z.enum(MATERIAL_GROUPS).optional(),
   operation: z.enum(OPERATION_KINDS).optional(),
   diameterMm: optionalNumber(z.number().positive().max(100)),

@@ -4,7 +4,11 @@ import type { VocabularyEntry } from "./types";
 
 /** Trade words for each operation kind; keys are the engine's and the sheet schema's kinds. */
 export const operations: readonly VocabularyEntry<OperationKind>[] = [
-  { key: "slotting", label: "slotting", terms: ["slotting", "slot", "slots", "full slot", "full width slot", "groove", "grooves", "grooving"] },
+  {
+    key: "slotting",
+    label: "slotting",
+    terms: ["slotting", "slot", "slots", "full slot", "full width slot", "groove", "grooves", "grooving"],
+  },
   { key: "pocket", label: "pocket clearing", terms: ["pocket", "pockets", "pocketing", "clearing", "pocket clearing", "area clearing"] },
   {
     key: "constant-engagement",

@@ -6,7 +6,13 @@ import { operations } from "./operations";
 import type { VocabularyEntry } from "./types";
 
 /** Every vocabulary entry, in the order the parser reports them. */
-export const vocabularyEntries: readonly VocabularyEntry[] = [...materials, ...materialGroups, ...operations, ...cornerForms, ...geometries];
+export const vocabularyEntries: readonly VocabularyEntry[] = [
+  ...materials,
+  ...materialGroups,
+  ...operations,
+  ...cornerForms,
+  ...geometries,
+];
 
 const lower = (terms: readonly string[]) => [...new Set(terms.map((term) => term.toLowerCase()))];
 

@@ -11,20 +11,33 @@ import { buildSheetSourceText } from "@/lib/sheets/sheet-template";
 import type { PlannedSheet, PlannedVersion } from "./demo-sheet-plan";
 import { firstEditionOperation } from "./first-edition-numbers";
 
-type Parts = { cutter: CutterFieldsInput & { sku: string }; material: MaterialFieldsInput; machineClass: MachineClassFieldsInput; sheet: PlannedSheet; version: PlannedVersion };
+type Parts = {
+  cutter: CutterFieldsInput & { sku: string };
+  material: MaterialFieldsInput;
+  machineClass: MachineClassFieldsInput;
+  sheet: PlannedSheet;
+  version: PlannedVersion;
+};
 
 /** The catalogue rows as the derivation reads them, parsed by the catalogue schemas (the band in % of D, the Z thrust). */
 export function deriveParts({ cutter, material, machineClass }: Pick<Parts, "cutter" | "material" | "machineClass">) {
   const m = materialFieldsSchema.parse(material);
   const k = machineClassFieldsSchema.parse(machineClass);
-  const c = { diameterMm: Number(cutter.diameterMm), flutes: Number(cutter.flutes), cornerForm: cutter.cornerForm ?? "square", fluteLengthMm: Number(cutter.fluteLengthMm) };
+  const c = {
+    diameterMm: Number(cutter.diameterMm),
+    flutes: Number(cutter.flutes),
+    cornerForm: cutter.cornerForm ?? "square",
+    fluteLengthMm: Number(cutter.fluteLengthMm),
+  };
   return { c, m, k };
 }
 
 export function demoSheetSource({ cutter, material, machineClass, sheet, version }: Parts): string {
   const { c, m, k } = deriveParts({ cutter, material, machineClass });
   const derive = version.derivation === "first-edition" ? firstEditionOperation : deriveOperation;
-  const operations = sheet.kinds.map((kind) => derive({ cutter: c, material: m, machine: k, kind, chipLoadScale: version.chipLoadScale, depthScale: version.depthScale }));
+  const operations = sheet.kinds.map((kind) =>
+    derive({ cutter: c, material: m, machine: k, kind, chipLoadScale: version.chipLoadScale, depthScale: version.depthScale }),
+  );
   const first = operations[0];
   const current = version.derivation !== "first-edition";
   const isPlastic = material.materialGroup === "plastics";
@@ -46,7 +59,9 @@ export function demoSheetSource({ cutter, material, machineClass, sheet, version
     `Hold the ${material.name.toLowerCase()} flat: vacuum table, screws outside the cut, or double-sided tape for thin sheet.`,
     "",
     isPlastic ? '<Caution kind="melting" title="Keep the chips moving">' : '<Caution kind="dust" title="Extraction on">',
-    isPlastic ? "Use air blast and keep the feed up. A cutter that dwells melts the plastic and welds the chips." : "Run the dust extraction for the whole cut, and for a minute after.",
+    isPlastic
+      ? "Use air blast and keep the feed up. A cutter that dwells melts the plastic and welds the chips."
+      : "Run the dust extraction for the whole cut, and for a minute after.",
     "</Caution>",
     "",
     "## Operations",
@@ -61,7 +76,9 @@ export function demoSheetSource({ cutter, material, machineClass, sheet, version
     materialSlug: material.slug,
     machineClassSlug: machineClass.slug,
     operations,
-    cautions: isPlastic ? [{ kind: "melting", text: `Stay above ${material.minChipLoadMm} mm per tooth: below it the cutter rubs and melts the cut.` }] : [],
+    cautions: isPlastic
+      ? [{ kind: "melting", text: `Stay above ${material.minChipLoadMm} mm per tooth: below it the cutter rubs and melts the cut.` }]
+      : [],
     tags: ["demo", material.materialGroup],
     body,
   });

@@ -6,7 +6,13 @@ import type { OperationKind } from "@/content-schema/sheet-kinds";
 import { chipLoad, feedRate, spindleSpeed } from "@/lib/machining";
 import type { DeriveCutter, DerivedOperation, DeriveMachine, DeriveMaterial } from "@/lib/sheets/derive-starting-data";
 
-const CHIP_LOAD_PER_DIAMETER: Record<string, number> = { plastics: 0.02, wood: 0.016, "non-ferrous": 0.006, composites: 0.008, ferrous: 0.004 };
+const CHIP_LOAD_PER_DIAMETER: Record<string, number> = {
+  plastics: 0.02,
+  wood: 0.016,
+  "non-ferrous": 0.006,
+  composites: 0.008,
+  ferrous: 0.004,
+};
 const METAL = new Set(["non-ferrous", "ferrous"]);
 
 const round = (value: number, step: number) => Math.round(value / step) * step;
@@ -20,7 +26,14 @@ const DEPTHS: Partial<Record<OperationKind, { ap: number; ae: number | "full"; e
   finishing: { ap: 1, ae: 0.05, entry: "none" },
 };
 
-type Options = { cutter: DeriveCutter; material: DeriveMaterial; machine: DeriveMachine; kind: OperationKind; chipLoadScale?: number; depthScale?: number };
+type Options = {
+  cutter: DeriveCutter;
+  material: DeriveMaterial;
+  machine: DeriveMachine;
+  kind: OperationKind;
+  chipLoadScale?: number;
+  depthScale?: number;
+};
 
 export function firstEditionOperation({ cutter, material, machine, kind, chipLoadScale = 1, depthScale = 1 }: Options): DerivedOperation {
   const D = cutter.diameterMm;
@@ -47,8 +60,15 @@ export function firstEditionOperation({ cutter, material, machine, kind, chipLoa
     entry: depth.entry,
     rampAngleDeg: depth.angle,
     derived: {
-      vcMpm: vc, fzMm: chipLoad({ feedMmMin: vf, rpm, flutes: z }), hexMm: chipLoad({ feedMmMin: vf, rpm, flutes: z }), rpm, feedMmMin: vf,
-      apMm: ap, aeMm: depth.ae === "full" ? D : round(D * depth.ae, 0.05), effectiveDiameterMm: D, plungeFeedMmMin: plunge,
+      vcMpm: vc,
+      fzMm: chipLoad({ feedMmMin: vf, rpm, flutes: z }),
+      hexMm: chipLoad({ feedMmMin: vf, rpm, flutes: z }),
+      rpm,
+      feedMmMin: vf,
+      apMm: ap,
+      aeMm: depth.ae === "full" ? D : round(D * depth.ae, 0.05),
+      effectiveDiameterMm: D,
+      plungeFeedMmMin: plunge,
     },
   };
 }

@@ -25,12 +25,30 @@ export async function createCatalogue(vendorId: string, userId: string | null = 
   const material = await saveMaterial({
     vendorId,
     userId,
-    fields: materialFieldsSchema.parse({ slug: "cast-acrylic", name: "Cast acrylic", materialGroup: "plastics", vcMinMpm: 150, vcMaxMpm: 300, minChipLoadMm: 0.05, kcNmm2: 120, chipLoadMaxPctD: 3.5, cautions: "melting: Keep the feed up." }),
+    fields: materialFieldsSchema.parse({
+      slug: "cast-acrylic",
+      name: "Cast acrylic",
+      materialGroup: "plastics",
+      vcMinMpm: 150,
+      vcMaxMpm: 300,
+      minChipLoadMm: 0.05,
+      kcNmm2: 120,
+      chipLoadMaxPctD: 3.5,
+      cautions: "melting: Keep the feed up.",
+    }),
   });
   const machineClass = await saveMachineClass({
     vendorId,
     userId,
-    fields: machineClassFieldsSchema.parse({ slug: "light-router", name: "Light router", rpmMin: 8000, rpmMax: 24000, powerKw: 0.8, maxFeedMmMin: 5000, rigidity: 0.4 }),
+    fields: machineClassFieldsSchema.parse({
+      slug: "light-router",
+      name: "Light router",
+      rpmMin: 8000,
+      rpmMax: 24000,
+      powerKw: 0.8,
+      maxFeedMmMin: 5000,
+      rigidity: 0.4,
+    }),
   });
   return { cutter, material, machineClass };
 }

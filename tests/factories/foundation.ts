@@ -1,5 +1,4 @@
 import { randomBytes } from "node:crypto";
-
 import { hash } from "@node-rs/argon2";
 
 import type { Role } from "@/lib/auth/roles";

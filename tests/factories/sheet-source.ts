@@ -26,7 +26,10 @@ export function frontMatterInput(overrides: Fields = {}): Fields {
     cutter: "SF-125-O",
     material: "cast-acrylic",
     machineClass: "light-router",
-    operations: [operationInput(), operationInput({ kind: "profile", label: "Outside profile", ae: "0.5 mm", ap: "3 mm", entry: "none", rampAngleDeg: undefined })],
+    operations: [
+      operationInput(),
+      operationInput({ kind: "profile", label: "Outside profile", ae: "0.5 mm", ap: "3 mm", entry: "none", rampAngleDeg: undefined }),
+    ],
     cautions: [{ kind: "melting", text: "Keep the feed up: a rubbing cutter melts acrylic." }],
     tags: ["acrylic", "single-flute"],
     ...overrides,

@@ -21,7 +21,10 @@ export async function createDraftingScenario(settings: Record<string, unknown> =
 }
 
 /** Submits, approves (by engineer2) and publishes the open draft. */
-export async function publishOpenDraft(s: Awaited<ReturnType<typeof createDraftingScenario>>, changeNote = "Tested on the reference router.") {
+export async function publishOpenDraft(
+  s: Awaited<ReturnType<typeof createDraftingScenario>>,
+  changeNote = "Tested on the reference router.",
+) {
   await submitDraft({ ...s.as(s.engineer.user.id), changeNote });
   await approveDraft(s.as(s.engineer2.user.id));
   return publishDraft(s.as(s.engineer2.user.id));

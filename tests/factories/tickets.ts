@@ -1,10 +1,10 @@
 import { randomUUID } from "node:crypto";
 
 import { sheetFrontMatterSchema } from "@/content-schema/sheet-front-matter";
+import type { Vendor } from "@/content-schema/vendor";
 import { db } from "@/lib/db/knex";
 import { createTicket } from "@/lib/tickets/create-ticket";
 import { toVendor, vendorQuery } from "@/lib/vendors/get-vendor";
-import type { Vendor } from "@/content-schema/vendor";
 
 import { insertSheetCatalogue } from "./sheet-catalogue";
 import { buildSheetSource, frontMatterInput } from "./sheet-source";
@@ -20,15 +20,42 @@ export async function createPublishedSheet(vendorId: string, authorId: string | 
   const { cutter, materialId, sheet } = await insertSheetCatalogue(vendorId, authorId);
   const frontMatter = sheetFrontMatterSchema.parse(frontMatterInput());
   const [version] = await db("sheet_versions")
-    .insert({ vendor_id: vendorId, sheet_id: sheet.id, number: 1, state: "published", title: frontMatter.title, source: buildSheetSource(), front_matter: JSON.stringify(frontMatter), published_at: db.fn.now() })
+    .insert({
+      vendor_id: vendorId,
+      sheet_id: sheet.id,
+      number: 1,
+      state: "published",
+      title: frontMatter.title,
+      source: buildSheetSource(),
+      front_matter: JSON.stringify(frontMatter),
+      published_at: db.fn.now(),
+    })
     .returning(["id", "title"]);
-  return { cutterId: cutter.id, materialId, sheetId: sheet.id, sheetSlug: sheet.slug, versionId: version.id as string, title: version.title as string };
+  return {
+    cutterId: cutter.id,
+    materialId,
+    sheetId: sheet.id,
+    sheetSlug: sheet.slug,
+    versionId: version.id as string,
+    title: version.title as string,
+  };
 }
 
 /** A light router of one customer (slower spindle and less rigid than the sheet's class). Invented demo data. */
 export async function createMachine(vendorId: string, userId: string, overrides: Record<string, unknown> = {}) {
   const [row] = await db("machines")
-    .insert({ vendor_id: vendorId, user_id: userId, name: "Desk router", rpm_min: 10000, rpm_max: 16000, power_kw: 0.8, max_feed_mm_min: 3000, rigidity: 0.4, stickout_mm: 15, ...overrides })
+    .insert({
+      vendor_id: vendorId,
+      user_id: userId,
+      name: "Desk router",
+      rpm_min: 10000,
+      rpm_max: 16000,
+      power_kw: 0.8,
+      max_feed_mm_min: 3000,
+      rigidity: 0.4,
+      stickout_mm: 15,
+      ...overrides,
+    })
     .returning(["id", "name"]);
   return row as { id: string; name: string };
 }
@@ -38,6 +65,12 @@ export async function openTicket(vendorId: string, customerId: string, overrides
   return createTicket({
     vendor,
     customerId,
-    input: { subject: "Chips weld in the slot", body: "The cutter melts the acrylic.", idempotencyKey: randomUUID(), attachmentIds: [], ...overrides },
+    input: {
+      subject: "Chips weld in the slot",
+      body: "The cutter melts the acrylic.",
+      idempotencyKey: randomUUID(),
+      attachmentIds: [],
+      ...overrides,
+    },
   });
 }

@@ -1,7 +1,6 @@
 import { execFileSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import path from "node:path";
-
 import knexFactory from "knex";
 import type { TestProject } from "vitest/node";
 

@@ -1,7 +1,6 @@
 import { randomBytes } from "node:crypto";
 import { readdirSync } from "node:fs";
 import path from "node:path";
-
 import knexFactory, { type Knex } from "knex";
 import { afterAll, beforeAll } from "vitest";
 
@@ -28,7 +27,9 @@ export function migrationDatabase(migration: string): { knex: () => Knex } {
     const url = new URL(adminUrl);
     url.pathname = `/${name}`;
     knex = knexFactory({ client: "pg", connection: url.toString(), pool: { min: 0, max: 2 } });
-    const files = readdirSync(path.join(root, "migrations")).filter((f) => f.endsWith(".ts")).sort();
+    const files = readdirSync(path.join(root, "migrations"))
+      .filter((f) => f.endsWith(".ts"))
+      .sort();
     for (const file of files.slice(0, files.indexOf(migration))) await (await loadMigration(file)).up(knex);
   }, 120_000);
   afterAll(async () => {

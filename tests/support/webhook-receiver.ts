@@ -8,7 +8,9 @@ export type Received = { headers: IncomingHttpHeaders; body: string; at: number 
  * A webhook receiver on 127.0.0.1 and a port the system picks. `answer` decides each reply (status and body);
  * "hang" never answers (for the timeout).
  */
-export async function startReceiver(answer: (n: number) => { status: number; body?: string } | "hang" = () => ({ status: 200, body: "ok" })) {
+export async function startReceiver(
+  answer: (n: number) => { status: number; body?: string } | "hang" = () => ({ status: 200, body: "ok" }),
+) {
   const received: Received[] = [];
   const server: Server = createServer((request, response) => {
     const chunks: Buffer[] = [];
@@ -25,7 +27,11 @@ export async function startReceiver(answer: (n: number) => { status: number; bod
   return {
     url: `http://127.0.0.1:${port}/hooks/swarfbook`,
     received,
-    close: () => new Promise<void>((resolve) => { server.closeAllConnections(); server.close(() => resolve()); }),
+    close: () =>
+      new Promise<void>((resolve) => {
+        server.closeAllConnections();
+        server.close(() => resolve());
+      }),
   };
 }
 

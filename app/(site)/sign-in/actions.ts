@@ -3,8 +3,8 @@
 import { headers } from "next/headers";
 import { z } from "zod";
 
-import type { ActionState } from "@/lib/actions/action-state";
 import { emailSchema } from "@/content-schema/auth";
+import type { ActionState } from "@/lib/actions/action-state";
 import { RateLimited } from "@/lib/errors/domain-errors";
 import { clientIp } from "@/lib/http/client-ip";
 import { resendVerification } from "@/lib/users/resend-verification";

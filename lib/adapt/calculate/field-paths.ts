@@ -38,6 +38,12 @@ export const bodyPathOf = (engineField: string) => PATHS[engineField] ?? engineF
 
 /** API name of an engine output or warning value: the unit suffix is dropped (`feedMmMin` → `feed`). */
 export function apiName(engineName: string): string {
-  const renamed: Record<string, string> = { rpm: "spindleSpeed", mrrCm3Min: "removalRate", feedMmMin: "feed", plungeFeedMmMin: "plungeFeed", maxFeedMmMin: "maxFeed" };
+  const renamed: Record<string, string> = {
+    rpm: "spindleSpeed",
+    mrrCm3Min: "removalRate",
+    feedMmMin: "feed",
+    plungeFeedMmMin: "plungeFeed",
+    maxFeedMmMin: "maxFeed",
+  };
   return renamed[engineName] ?? engineName.replace(/(MmMin|Mpm|Cm3Min|Mm|Kw|Nm|N)$/, "");
 }

@@ -6,8 +6,7 @@ import { presentResult, type CalculationResult } from "./present-result";
 import { toEngineInput } from "./to-engine-input";
 
 export type CalculationOutcome =
-  | { ok: true; result: CalculationResult }
-  | { ok: false; status: 400; errors: Record<string, string[]>; message: string };
+  { ok: true; result: CalculationResult } | { ok: false; status: 400; errors: Record<string, string[]>; message: string };
 
 const INVALID = "The calculation input is invalid; see errors for each field.";
 

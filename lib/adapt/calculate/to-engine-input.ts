@@ -1,13 +1,5 @@
 import type { CalculateBody } from "@/content-schema/calculate";
-import {
-  hpToKw,
-  inMinToMmMin,
-  inToMm,
-  lbfToN,
-  psiToNmm2,
-  sfmToMpm,
-  type AdaptInput,
-} from "@/lib/machining";
+import { hpToKw, inMinToMmMin, inToMm, lbfToN, psiToNmm2, sfmToMpm, type AdaptInput } from "@/lib/machining";
 
 type Q<U extends string> = { value: number; unit: U };
 
@@ -43,7 +35,11 @@ export function toEngineInput(body: CalculateBody): AdaptInput {
     },
     material: {
       cuttingSpeedWindowMpm: window ? [mpm(window.min, window.unit), mpm(window.max, window.unit)] : undefined,
-      minChipLoadMm: mat.minChipLoad ? (mat.minChipLoad.unit === "in/tooth" ? inToMm(mat.minChipLoad.value) : mat.minChipLoad.value) : undefined,
+      minChipLoadMm: mat.minChipLoad
+        ? mat.minChipLoad.unit === "in/tooth"
+          ? inToMm(mat.minChipLoad.value)
+          : mat.minChipLoad.value
+        : undefined,
       specificCuttingForceNmm2: mat.specificCuttingForce ? nmm2(mat.specificCuttingForce) : undefined,
       chipLoadPctOfD: mat.chipLoadBand ? { min: mat.chipLoadBand.min / 100, max: mat.chipLoadBand.max / 100 } : undefined,
       kc11Nmm2: mat.kc11 ? nmm2(mat.kc11) : undefined,

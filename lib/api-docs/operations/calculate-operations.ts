@@ -1,8 +1,8 @@
 import { calculateResultSchema } from "@/content-schema/api-responses";
 import { calculateBodySchema } from "@/content-schema/calculate";
 
-import type { ApiOperation } from "../api-operation";
 import { calculateAnswer, calculateImperialExample, calculateMetricExample } from "../api-examples";
+import type { ApiOperation } from "../api-operation";
 
 export const calculateOperations: ApiOperation[] = [
   {
@@ -10,7 +10,8 @@ export const calculateOperations: ApiOperation[] = [
     path: "/api/v1/calculate",
     tag: "Calculate",
     summary: "Adapt one operation to a machine",
-    description: "Every length, feed, speed, power and force names its unit, so a caller may mix systems. The answer carries both systems, the warnings and each step with its reason and source.",
+    description:
+      "Every length, feed, speed, power and force names its unit, so a caller may mix systems. The answer carries both systems, the warnings and each step with its reason and source.",
     access: "public",
     rateLimit: { limit: 120, windowSeconds: 60 },
     body: calculateBodySchema,

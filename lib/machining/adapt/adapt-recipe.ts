@@ -37,11 +37,25 @@ const finite = (v: number | null) => v === null || Number.isFinite(v);
 
 // Written out rather than looped over keys: this runs on every call and stays monomorphic.
 const allFinite = (r: AdaptResult) =>
-  finite(r.rpm) && finite(r.feedMmMin) && finite(r.chipLoadMm) && finite(r.maxChipThicknessMm) &&
-  finite(r.cuttingSpeedMpm) && finite(r.axialDepthMm) && finite(r.radialDepthMm) && finite(r.plungeFeedMmMin) &&
-  finite(r.mrrCm3Min) && finite(r.powerKw) && finite(r.torqueNm) && finite(r.forceN) && finite(r.deflectionMm) &&
-  finite(r.meanChipThicknessMm) && finite(r.effectiveDiameterMm) && finite(r.peakForceN) && finite(r.availablePowerKw) &&
-  finite(r.plungeThrustN) && finite(r.plungeFeedPerRevMm) &&
+  finite(r.rpm) &&
+  finite(r.feedMmMin) &&
+  finite(r.chipLoadMm) &&
+  finite(r.maxChipThicknessMm) &&
+  finite(r.cuttingSpeedMpm) &&
+  finite(r.axialDepthMm) &&
+  finite(r.radialDepthMm) &&
+  finite(r.plungeFeedMmMin) &&
+  finite(r.mrrCm3Min) &&
+  finite(r.powerKw) &&
+  finite(r.torqueNm) &&
+  finite(r.forceN) &&
+  finite(r.deflectionMm) &&
+  finite(r.meanChipThicknessMm) &&
+  finite(r.effectiveDiameterMm) &&
+  finite(r.peakForceN) &&
+  finite(r.availablePowerKw) &&
+  finite(r.plungeThrustN) &&
+  finite(r.plungeFeedPerRevMm) &&
   stepsFinite(r.steps);
 
 function stepsFinite(steps: AdaptResult["steps"]): boolean {

@@ -1,6 +1,5 @@
 import { toOperationKind } from "../operation-kinds";
-import type { AdaptInput } from "../types";
-import { CORNER_FORMS, ENTRY_CAPABILITIES, ENTRY_KINDS, RIGIDITY_CLASS_KEYS, SPINDLE_KINDS } from "../types";
+import { CORNER_FORMS, ENTRY_CAPABILITIES, ENTRY_KINDS, RIGIDITY_CLASS_KEYS, SPINDLE_KINDS, type AdaptInput } from "../types";
 import { MAX } from "./check-input";
 import { DIAMETER_RANGE_MM, MAX_STICKOUT_DIAMETERS } from "./defaults";
 
@@ -38,7 +37,7 @@ export function passesInputChecks(input: AdaptInput): boolean {
   if (!optOneOf(op.cornerForm, CORNER_FORMS) || !optOneOf(op.entry, ENTRY_KINDS)) return false;
   if (!optInRange(op.rampAngleDeg, 90)) return false;
   const r = op.cornerRadiusMm;
-  if (r !== undefined && (!nonNegativeFinite(r) || !(r <= d / 2 * (1 + 1e-9)))) return false;
+  if (r !== undefined && (!nonNegativeFinite(r) || !(r <= (d / 2) * (1 + 1e-9)))) return false;
   if (flute !== undefined && ap > flute * (1 + 1e-9)) return false;
   const window = material.cuttingSpeedWindowMpm;
   if (window !== undefined) {
@@ -54,7 +53,8 @@ export function passesInputChecks(input: AdaptInput): boolean {
   const band = material.chipLoadPctOfD;
   if (band !== undefined && (!isSection(band) || !inRange(band.min, 1) || !inRange(band.max, 1) || band.min > band.max)) return false;
   if (!inRange(ref.rigidity, 1) || !optOneOf(ref.rigidityClass, RIGIDITY_CLASS_KEYS)) return false;
-  if (!optInRange(ref.zThrustN, MAX.forceN) || !optInRange(ref.maxFeedMmMin, MAX.feedMmMin) || !optInRange(ref.maxRpm, MAX.rpm)) return false;
+  if (!optInRange(ref.zThrustN, MAX.forceN) || !optInRange(ref.maxFeedMmMin, MAX.feedMmMin) || !optInRange(ref.maxRpm, MAX.rpm))
+    return false;
   if (!inRange(machine.minRpm, MAX.rpm) || !inRange(machine.maxRpm, MAX.rpm) || machine.minRpm > machine.maxRpm) return false;
   if (!optInRange(machine.ratedRpm, MAX.rpm)) return false;
   if (!optOneOf(machine.spindleKind, SPINDLE_KINDS) || !optOneOf(machine.rigidityClass, RIGIDITY_CLASS_KEYS)) return false;

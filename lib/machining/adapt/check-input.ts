@@ -1,14 +1,21 @@
 import { MachiningInputError } from "../errors";
 import { OPERATION_KINDS, toOperationKind } from "../operation-kinds";
 import type { UnitSystem } from "../quantities";
-import type { AdaptInput } from "../types";
-import { CORNER_FORMS, ENTRY_CAPABILITIES, ENTRY_KINDS, RIGIDITY_CLASS_KEYS, SPINDLE_KINDS } from "../types";
+import { CORNER_FORMS, ENTRY_CAPABILITIES, ENTRY_KINDS, RIGIDITY_CLASS_KEYS, SPINDLE_KINDS, type AdaptInput } from "../types";
 import { bounded, count, fraction, nonNegative, ordered, positive, show } from "../validate";
 import { DIAMETER_RANGE_MM, MAX_STICKOUT_DIAMETERS } from "./defaults";
 import { say } from "./message-units";
 
 // Generous ceilings: far beyond any cutter or machine, low enough that no product overflows.
-export const MAX = { lengthMm: 10_000, rpm: 1_000_000, feedMmMin: 10_000_000, kcNmm2: 100_000, powerKw: 10_000, forceN: 10_000_000, mpm: 100_000 };
+export const MAX = {
+  lengthMm: 10_000,
+  rpm: 1_000_000,
+  feedMmMin: 10_000_000,
+  kcNmm2: 100_000,
+  powerKw: 10_000,
+  forceN: 10_000_000,
+  mpm: 100_000,
+};
 
 const optionalBounded = (value: number | undefined, field: string, max: number) =>
   value === undefined ? undefined : bounded(value, field, max);
@@ -25,7 +32,10 @@ const oneOf = (value: string | undefined, list: readonly string[], field: string
 function radialDepthIn(ae: number, d: number, field: string, units: UnitSystem): void {
   positive(ae, field);
   if (ae > d * (1 + 1e-12)) {
-    throw new MachiningInputError(field, `${field} (${say(units, ae, "length")}) cannot exceed the cutter diameter (${say(units, d, "length")}).`);
+    throw new MachiningInputError(
+      field,
+      `${field} (${say(units, ae, "length")}) cannot exceed the cutter diameter (${say(units, d, "length")}).`,
+    );
   }
 }
 
@@ -62,11 +72,17 @@ export function checkInput(input: AdaptInput, units: UnitSystem): void {
   oneOf(op.cornerForm, CORNER_FORMS, "operation.cornerForm");
   oneOf(op.entry, ENTRY_KINDS, "operation.entry");
   if (op.rampAngleDeg !== undefined) fraction(op.rampAngleDeg, "operation.rampAngleDeg", 90);
-  if (op.cornerRadiusMm !== undefined && !(nonNegative(op.cornerRadiusMm, "operation.cornerRadiusMm") <= d / 2 * (1 + 1e-9))) {
-    throw new MachiningInputError("operation.cornerRadiusMm", `operation.cornerRadiusMm (${say(units, op.cornerRadiusMm, "length")}) must be between 0 and half the diameter (${say(units, d / 2, "length")}).`);
+  if (op.cornerRadiusMm !== undefined && !(nonNegative(op.cornerRadiusMm, "operation.cornerRadiusMm") <= (d / 2) * (1 + 1e-9))) {
+    throw new MachiningInputError(
+      "operation.cornerRadiusMm",
+      `operation.cornerRadiusMm (${say(units, op.cornerRadiusMm, "length")}) must be between 0 and half the diameter (${say(units, d / 2, "length")}).`,
+    );
   }
   if (flute !== undefined && ap > flute * (1 + 1e-9)) {
-    throw new MachiningInputError("operation.axialDepthMm", `operation.axialDepthMm (${say(units, ap, "length")}) is deeper than the flute length (${say(units, flute, "length")}): the shank would rub.`);
+    throw new MachiningInputError(
+      "operation.axialDepthMm",
+      `operation.axialDepthMm (${say(units, ap, "length")}) is deeper than the flute length (${say(units, flute, "length")}): the shank would rub.`,
+    );
   }
   const window = material.cuttingSpeedWindowMpm;
   if (window !== undefined) {
@@ -107,12 +123,18 @@ export function checkInput(input: AdaptInput, units: UnitSystem): void {
   if (overrides.radialDepthMm !== undefined) radialDepthIn(overrides.radialDepthMm, d, "overrides.radialDepthMm", units);
   const apOverride = optionalBounded(overrides.axialDepthMm, "overrides.axialDepthMm", MAX.lengthMm);
   if (flute !== undefined && apOverride !== undefined && apOverride > flute * (1 + 1e-9)) {
-    throw new MachiningInputError("overrides.axialDepthMm", `overrides.axialDepthMm (${say(units, apOverride, "length")}) is deeper than the flute length (${say(units, flute, "length")}): the shank would rub.`);
+    throw new MachiningInputError(
+      "overrides.axialDepthMm",
+      `overrides.axialDepthMm (${say(units, apOverride, "length")}) is deeper than the flute length (${say(units, flute, "length")}): the shank would rub.`,
+    );
   }
   optionalBounded(overrides.stickoutMm, "overrides.stickoutMm", MAX.lengthMm);
   const stickout = overrides.stickoutMm ?? op.stickoutMm;
   if (stickout !== undefined && stickout > MAX_STICKOUT_DIAMETERS * d) {
     const field = overrides.stickoutMm === undefined ? "operation.stickoutMm" : "overrides.stickoutMm";
-    throw new MachiningInputError(field, `${field} (${say(units, stickout, "length")}) is more than ${MAX_STICKOUT_DIAMETERS} times the cutter diameter; no cutting data holds at that stick-out.`);
+    throw new MachiningInputError(
+      field,
+      `${field} (${say(units, stickout, "length")}) is more than ${MAX_STICKOUT_DIAMETERS} times the cutter diameter; no cutting data holds at that stick-out.`,
+    );
   }
 }

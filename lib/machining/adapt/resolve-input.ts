@@ -78,7 +78,10 @@ export function resolveInput(input: AdaptInput): ResolvedInput {
   }
   const kind = toOperationKind(op.kind);
   if (kind === undefined) throw new MachiningInputError("operation.kind", `operation.kind must be one of ${OPERATION_KINDS.join(", ")}.`);
-  const radialForceRatio = options.radialForceRatio === undefined ? ADAPT_DEFAULTS.radialForceRatio : nonNegative(options.radialForceRatio, "options.radialForceRatio");
+  const radialForceRatio =
+    options.radialForceRatio === undefined
+      ? ADAPT_DEFAULTS.radialForceRatio
+      : nonNegative(options.radialForceRatio, "options.radialForceRatio");
   if (radialForceRatio > 10) throw new MachiningInputError("options.radialForceRatio", "options.radialForceRatio must be at most 10.");
   const d = op.diameterMm;
   // The rigidity was checked above (a fraction), so the class follows from its bands directly.
@@ -105,12 +108,28 @@ export function resolveInput(input: AdaptInput): ResolvedInput {
     overrides,
     entryCapability: input.entryCapability ?? ADAPT_DEFAULTS.entryCapability,
     stickoutMm: overrides.stickoutMm ?? op.stickoutMm,
-    usablePowerFraction: options.usablePowerFraction === undefined ? ADAPT_DEFAULTS.usablePowerFraction : fraction(options.usablePowerFraction, "options.usablePowerFraction"),
-    deflectionLimitMm: options.deflectionLimitMm === undefined ? ADAPT_DEFAULTS.deflectionLimitMm : bounded(options.deflectionLimitMm, "options.deflectionLimitMm", MAX.lengthMm),
-    spindleEfficiency: options.spindleEfficiency === undefined ? ADAPT_DEFAULTS.spindleEfficiency : fraction(options.spindleEfficiency, "options.spindleEfficiency"),
-    youngsModulusGPa: options.youngsModulusGPa === undefined ? YOUNGS_MODULUS_GPA[toolMaterial] : bounded(options.youngsModulusGPa, "options.youngsModulusGPa", 10_000),
-    rampThresholdDiameterMm: options.rampThresholdDiameterMm === undefined ? ADAPT_DEFAULTS.rampThresholdDiameterMm : bounded(options.rampThresholdDiameterMm, "options.rampThresholdDiameterMm", MAX.lengthMm),
-    slottingFactor: options.slottingFactor === undefined ? ADAPT_DEFAULTS.slottingFactor : fraction(options.slottingFactor, "options.slottingFactor"),
+    usablePowerFraction:
+      options.usablePowerFraction === undefined
+        ? ADAPT_DEFAULTS.usablePowerFraction
+        : fraction(options.usablePowerFraction, "options.usablePowerFraction"),
+    deflectionLimitMm:
+      options.deflectionLimitMm === undefined
+        ? ADAPT_DEFAULTS.deflectionLimitMm
+        : bounded(options.deflectionLimitMm, "options.deflectionLimitMm", MAX.lengthMm),
+    spindleEfficiency:
+      options.spindleEfficiency === undefined
+        ? ADAPT_DEFAULTS.spindleEfficiency
+        : fraction(options.spindleEfficiency, "options.spindleEfficiency"),
+    youngsModulusGPa:
+      options.youngsModulusGPa === undefined
+        ? YOUNGS_MODULUS_GPA[toolMaterial]
+        : bounded(options.youngsModulusGPa, "options.youngsModulusGPa", 10_000),
+    rampThresholdDiameterMm:
+      options.rampThresholdDiameterMm === undefined
+        ? ADAPT_DEFAULTS.rampThresholdDiameterMm
+        : bounded(options.rampThresholdDiameterMm, "options.rampThresholdDiameterMm", MAX.lengthMm),
+    slottingFactor:
+      options.slottingFactor === undefined ? ADAPT_DEFAULTS.slottingFactor : fraction(options.slottingFactor, "options.slottingFactor"),
     radialForceRatio,
     units,
   };

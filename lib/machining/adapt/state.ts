@@ -31,7 +31,15 @@ type NumericField = { [K in keyof AdaptNumbers]: AdaptNumbers[K] extends number 
 const SAME = 1e-9;
 
 /** Records a step when `after` really differs from `before`. */
-export function record(s: AdaptState, rule: RuleId, field: keyof AdaptNumbers, quantity: QuantityKind, before: number, after: number, why: string): void {
+export function record(
+  s: AdaptState,
+  rule: RuleId,
+  field: keyof AdaptNumbers,
+  quantity: QuantityKind,
+  before: number,
+  after: number,
+  why: string,
+): void {
   if (Math.abs(after - before) > SAME * Math.max(Math.abs(before), Math.abs(after))) {
     s.steps.push({ rule, quantity, field, before, after, why, source: ruleSource(rule) });
   }

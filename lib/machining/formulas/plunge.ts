@@ -24,7 +24,15 @@ export function plungeThrustN({ diameterMm, kcNmm2, feedPerRevMm }: { diameterMm
 }
 
 /** fn (mm/rev) whose thrust equals zThrustN; null when the centre term alone exceeds it. */
-export function plungeFeedPerRevForThrust({ diameterMm, kcNmm2, zThrustN }: { diameterMm: number; kcNmm2: number; zThrustN: number }): number | null {
+export function plungeFeedPerRevForThrust({
+  diameterMm,
+  kcNmm2,
+  zThrustN,
+}: {
+  diameterMm: number;
+  kcNmm2: number;
+  zThrustN: number;
+}): number | null {
   const d = positive(diameterMm, "diameterMm");
   const kc = positive(kcNmm2, "kcNmm2");
   const lip = positive(zThrustN, "zThrustN") - plungeCentreThrustN(d, kc);

@@ -21,7 +21,15 @@ export function cuttingPower(input: Cut & { specificCuttingForceNmm2: number; ef
 }
 
 /** Kienzle (1952): kc = kc1.1 · h^(−mc), with h in mm and kc1.1 in N/mm² at h = 1 mm. */
-export function kienzleSpecificCuttingForce({ kc11Nmm2, chipThicknessMm, mc }: { kc11Nmm2: number; chipThicknessMm: number; mc: number }): number {
+export function kienzleSpecificCuttingForce({
+  kc11Nmm2,
+  chipThicknessMm,
+  mc,
+}: {
+  kc11Nmm2: number;
+  chipThicknessMm: number;
+  mc: number;
+}): number {
   return positive(kc11Nmm2, "kc11Nmm2") * positive(chipThicknessMm, "chipThicknessMm") ** -fraction(mc, "mc");
 }
 

@@ -7,7 +7,17 @@ import { positive } from "../validate";
 export type SpindleKindName = "constant-torque" | "constant-power";
 
 /** P(n) = P_rated · min(1, n / n_rated) for a constant-torque spindle; P_rated for constant-power. */
-export function spindlePowerAt({ ratedPowerKw, rpm, ratedRpm, spindleKind = "constant-torque" }: { ratedPowerKw: number; rpm: number; ratedRpm: number; spindleKind?: SpindleKindName }): number {
+export function spindlePowerAt({
+  ratedPowerKw,
+  rpm,
+  ratedRpm,
+  spindleKind = "constant-torque",
+}: {
+  ratedPowerKw: number;
+  rpm: number;
+  ratedRpm: number;
+  spindleKind?: SpindleKindName;
+}): number {
   const p = positive(ratedPowerKw, "ratedPowerKw");
   if (spindleKind === "constant-power") return p;
   return p * Math.min(1, positive(rpm, "rpm") / positive(ratedRpm, "ratedRpm"));

@@ -24,9 +24,17 @@ export async function readAttachment({ vendorId, attachmentId, userId, role }: O
     .where((w) => {
       w.where((pending) => pending.whereNull("a.ticket_id").andWhere("a.uploaded_by", userId));
       if (staff) w.orWhereNotNull("t.id");
-      else w.orWhere((own) => own.where("t.customer_id", userId).andWhere((v) => v.whereNull("a.message_id").orWhere("m.visibility", "public")));
+      else
+        w.orWhere((own) =>
+          own.where("t.customer_id", userId).andWhere((v) => v.whereNull("a.message_id").orWhere("m.visibility", "public")),
+        );
     })
-    .first<{ storage_key: string; file_name: string; content_type: string; kind: AttachmentFile["kind"] } | undefined>("a.storage_key", "a.file_name", "a.content_type", "a.kind");
+    .first<{ storage_key: string; file_name: string; content_type: string; kind: AttachmentFile["kind"] } | undefined>(
+      "a.storage_key",
+      "a.file_name",
+      "a.content_type",
+      "a.kind",
+    );
   if (!row) throw new NotFound();
   const bytes = await getStorage().get(row.storage_key);
   if (!bytes) throw new NotFound();

@@ -2,12 +2,12 @@ import "server-only";
 
 import type { Knex } from "knex";
 
+import type { Vendor } from "@/content-schema/vendor";
 import { appUrl } from "@/lib/http/app-url";
 import { replyAddress } from "@/lib/inbound-mail/reply-address";
-import { enqueueMail } from "@/lib/mail/enqueue-mail";
-import type { Vendor } from "@/content-schema/vendor";
 import { filterWantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { mailFooter } from "@/lib/mail-preferences/preferences-link";
+import { enqueueMail } from "@/lib/mail/enqueue-mail";
 
 import { loadTicketMailContext, supportTeam } from "./ticket-mail-context";
 

@@ -21,7 +21,19 @@ export async function loadTicketMailContext(trx: Knex.Transaction, vendorId: str
     .join("users as c", "c.id", "t.customer_id")
     .leftJoin("users as a", "a.id", "t.assignee_id")
     .where({ "t.id": ticketId, "t.vendor_id": vendorId })
-    .first("t.id", "t.number", "t.subject", "v.slug", "v.name as vendor_name", "c.id as c_id", "c.email", "c.name", "a.id as a_id", "a.email as a_email", "a.name as a_name");
+    .first(
+      "t.id",
+      "t.number",
+      "t.subject",
+      "v.slug",
+      "v.name as vendor_name",
+      "c.id as c_id",
+      "c.email",
+      "c.name",
+      "a.id as a_id",
+      "a.email as a_email",
+      "a.name as a_name",
+    );
   if (!row) return null;
   return {
     ticketId: row.id,
@@ -36,7 +48,11 @@ export async function loadTicketMailContext(trx: Knex.Transaction, vendorId: str
 
 /** The vendor's support team (support staff; admins when there are none), each with the id their reply address is bound to. */
 export async function supportTeam(trx: Knex.Transaction, vendorId: string): Promise<{ id: string; email: string }[]> {
-  const rows = await trx("members as m").join("users as u", "u.id", "m.user_id").where("m.vendor_id", vendorId).whereIn("m.role", ["support", "admin"]).select("u.id", "u.email", "m.role");
+  const rows = await trx("members as m")
+    .join("users as u", "u.id", "m.user_id")
+    .where("m.vendor_id", vendorId)
+    .whereIn("m.role", ["support", "admin"])
+    .select("u.id", "u.email", "m.role");
   const support = rows.filter((r) => r.role === "support");
   return (support.length ? support : rows).map((r) => ({ id: r.id as string, email: r.email as string }));
 }

@@ -1,7 +1,8 @@
 // Measuring: the Field-results code under test loaded against the bench database, timed per query and per page.
 import type { Knex } from "knex";
+
 import { prng } from "../prng";
-import { fmt, PHASE_BUDGET_MS, type Samples, type SheetPick, Z } from "./shape";
+import { fmt, PHASE_BUDGET_MS, Z, type Samples, type SheetPick } from "./shape";
 
 /** lib/db/knex reads DATABASE_URL when it is first imported, so set it before importing anything that uses it. */
 export async function loadFieldModules(databaseUrl: string) {
@@ -70,7 +71,9 @@ export async function measure(field: Field, vendorIds: string[], sheets: SheetPi
   });
   await phase(iterations, async (i) => {
     const vendorId = vendorIds[i % vendorIds.length];
-    await timeIt(samples, "page    overview (all four in parallel)", () => Promise.all(names.map((n) => timeIt(samples, `in page ${n}`, () => field.overview[n](vendorId)))));
+    await timeIt(samples, "page    overview (all four in parallel)", () =>
+      Promise.all(names.map((n) => timeIt(samples, `in page ${n}`, () => field.overview[n](vendorId)))),
+    );
   });
   await phase(iterations, async (i) => {
     await timeIt(samples, "page    drill-in loadSheetFieldResults", () => field.drillIn(sheets[i % sheets.length]));

@@ -1,6 +1,7 @@
 // Reporting: the data shape, the latency table and the query plans.
 import type { Knex } from "knex";
 import pg from "pg";
+
 import { percentile } from "../bench-args";
 import type { Field } from "./measure";
 import type { Samples, SheetPick } from "./shape";
@@ -15,8 +16,10 @@ export async function printDataShape(knex: Knex) {
       (select count(*) from field_change_rollups)::int as change_rollups,
       (select count(distinct (rpm_min, rpm_max, power_kw, rigidity)) from machines)::int as machine_groups`);
   const r = rows[0];
-  console.log(`data: ${r.published} published + ${r.superseded} superseded versions; ${r.versions_with_reports} with reports, ${r.published_with_failures} published with failures; ` +
-    `${r.failed_pct} % of reports failed; ${r.change_rollups} change rollup rows; ${r.machine_groups} distinct machine specs`);
+  console.log(
+    `data: ${r.published} published + ${r.superseded} superseded versions; ${r.versions_with_reports} with reports, ${r.published_with_failures} published with failures; ` +
+      `${r.failed_pct} % of reports failed; ${r.change_rollups} change rollup rows; ${r.machine_groups} distinct machine specs`,
+  );
 }
 
 export function printTable(samples: Samples) {
@@ -26,7 +29,9 @@ export function printTable(samples: Samples) {
     const sorted = [...ms].sort((a, b) => a - b);
     const [p50, p95, p99] = [50, 95, 99].map((p) => percentile(sorted, p));
     stats.set(name, p95);
-    console.log(`${name.padEnd(48)}${String(sorted.length).padStart(8)}${[p50, p95, p99, sorted.at(-1)!].map((v) => v.toFixed(1).padStart(8)).join("")}`);
+    console.log(
+      `${name.padEnd(48)}${String(sorted.length).padStart(8)}${[p50, p95, p99, sorted.at(-1)!].map((v) => v.toFixed(1).padStart(8)).join("")}`,
+    );
   }
   return stats;
 }
@@ -70,7 +75,9 @@ export async function printPlans(url: string, field: Field, vendorId: string, sh
       for (const q of await captureQueries(field.db, run)) {
         const plan = await explain(client, q);
         const ms = (label: string) => plan.find((line) => line.startsWith(label))?.replace(/[^\d.]/g, "") ?? "?";
-        console.log(`  exec ${ms("Execution Time").padStart(8)} ms  plan ${ms("Planning Time").padStart(6)} ms  ${name}: ${q.sql.replace(/\s+/g, " ").slice(0, 90)}…`);
+        console.log(
+          `  exec ${ms("Execution Time").padStart(8)} ms  plan ${ms("Planning Time").padStart(6)} ms  ${name}: ${q.sql.replace(/\s+/g, " ").slice(0, 90)}…`,
+        );
       }
     }
   } finally {

@@ -1,8 +1,26 @@
 // Seeding the throwaway database set-based: catalogue and versions, then the field data in one transaction.
 import type { Knex } from "knex";
+
 import { CHANGEABLE_PARAMS, OUTCOME_SYMPTOMS } from "../../../content-schema/outcome-fields";
 import { createBenchVendor } from "../../bench-search-data";
-import { SECOND_VERSION_SHARE, SETUPS_PER_OUTCOME, MACHINES_PER_CUSTOMER, REPORTED_SHARE, ACTIVITY_DAYS, TICKETS_PER_VENDOR, CLASS_SPECS, MACHINE_ARCHETYPES, CHANGE_PARAMS, type Options, fmt, valuesList, split, step, rowCount, countRows } from "./shape";
+import {
+  ACTIVITY_DAYS,
+  CHANGE_PARAMS,
+  CLASS_SPECS,
+  countRows,
+  fmt,
+  MACHINE_ARCHETYPES,
+  MACHINES_PER_CUSTOMER,
+  REPORTED_SHARE,
+  rowCount,
+  SECOND_VERSION_SHARE,
+  SETUPS_PER_OUTCOME,
+  split,
+  step,
+  TICKETS_PER_VENDOR,
+  valuesList,
+  type Options,
+} from "./shape";
 
 /** Supersedes `count` random published v1s of a vendor and publishes a v2 for each (the guard trigger allows published → superseded). */
 export async function addSecondVersions(knex: Knex, vendorId: string, count: number) {
@@ -51,8 +69,10 @@ export async function seedCustomers(trx: Knex.Transaction, o: Options) {
   await trx.raw("analyze bench_customer");
   await trx.raw(`insert into users (id, email, name, email_verified)
     select user_id, 'bench-customer-' || g || '@example.test', 'Bench customer ' || g, now() from bench_customer`);
-  return rowCount(trx.raw(`insert into members (vendor_id, user_id, role)
-    select v.id, c.user_id, 'customer' from bench_customer c join bench_vendor v on v.idx = c.vendor_idx`));
+  return rowCount(
+    trx.raw(`insert into members (vendor_id, user_id, role)
+    select v.id, c.user_id, 'customer' from bench_customer c join bench_vendor v on v.idx = c.vendor_idx`),
+  );
 }
 
 /** Machines: an archetype each (by share), with jitter, rounded: rpm to 1000, kW to 0.1, rigidity to 0.05. */
@@ -81,9 +101,11 @@ export async function seedMachines(trx: Knex.Transaction, o: Options) {
     [o.vendors, o.vendors, o.machines, ...archetypes.bindings],
   );
   await trx.raw("analyze bench_machine");
-  return rowCount(trx.raw(`insert into machines (id, vendor_id, user_id, name, preset, rpm_min, rpm_max, power_kw, max_feed_mm_min, rigidity)
+  return rowCount(
+    trx.raw(`insert into machines (id, vendor_id, user_id, name, preset, rpm_min, rpm_max, power_kw, max_feed_mm_min, rigidity)
     select m.id, v.id, m.user_id, 'Bench machine ' || m.k, m.preset, m.rpm_min, m.rpm_max, m.power_kw, m.max_feed_mm_min, m.rigidity
-    from bench_machine m join bench_vendor v on v.idx = m.vendor_idx`));
+    from bench_machine m join bench_vendor v on v.idx = m.vendor_idx`),
+  );
 }
 
 /**
@@ -135,8 +157,10 @@ export async function seedSetups(trx: Knex.Transaction, o: Options) {
     [o.vendors, setups, REPORTED_SHARE],
   );
   await trx.raw("analyze bench_setup");
-  return rowCount(trx.raw(`insert into setups (id, vendor_id, user_id, machine_id, sheet_version_id, result, created_at, updated_at)
-    select id, vendor_id, user_id, machine_id, version_id, '{}'::jsonb, created_at, created_at from bench_setup order by id`));
+  return rowCount(
+    trx.raw(`insert into setups (id, vendor_id, user_id, machine_id, sheet_version_id, result, created_at, updated_at)
+    select id, vendor_id, user_id, machine_id, version_id, '{}'::jsonb, created_at, created_at from bench_setup order by id`),
+  );
 }
 
 /**
@@ -150,7 +174,8 @@ export async function seedOutcomes(trx: Knex.Transaction, o: Options) {
   const change = (idx: string, from: string, to: string) =>
     `jsonb_build_object(k.params[${idx} + 1], jsonb_build_object(
        'from', ${from}, 'to', greatest(k.steps[${idx} + 1], round(${to} / k.steps[${idx} + 1]) * k.steps[${idx} + 1])))`;
-  const fromValue = (idx: string, u: string) => `greatest(k.steps[${idx} + 1], round((k.bases[${idx} + 1] * (0.6 + 0.8 * ${u}))::numeric / k.steps[${idx} + 1]) * k.steps[${idx} + 1])`;
+  const fromValue = (idx: string, u: string) =>
+    `greatest(k.steps[${idx} + 1], round((k.bases[${idx} + 1] * (0.6 + 0.8 * ${u}))::numeric / k.steps[${idx} + 1]) * k.steps[${idx} + 1])`;
   return rowCount(
     trx.raw(
       `insert into outcomes (vendor_id, setup_id, sheet_version_id, user_id, machine_id, result, symptom, changes, created_at)
@@ -220,7 +245,9 @@ export async function seedTickets(trx: Knex.Transaction) {
         now() + interval '1 day', now() - interval '1 day' * (number % 60), now() - interval '1 day' * (number % 60)
       from bench_ticket`),
   );
-  await trx.raw("insert into ticket_sheet_links (vendor_id, ticket_id, sheet_version_id) select vendor_id, id, version_id from bench_ticket");
+  await trx.raw(
+    "insert into ticket_sheet_links (vendor_id, ticket_id, sheet_version_id) select vendor_id, id, version_id from bench_ticket",
+  );
   await trx.raw(`insert into problem_reports (vendor_id, sheet_version_id, ticket_id, summary, status)
     select vendor_id, version_id, id, 'Bench hand-off for ticket ' || number, case when number % 2 = 0 then 'open' else 'resolved' end
     from bench_ticket where number % 3 = 0`);
@@ -249,7 +276,9 @@ export async function withIndexesRebuiltAfter<T>(trx: Knex.Transaction, table: s
  * transaction only). Safe here: every seeded row is built by joining rows that exist, so no reference can dangle.
  */
 export async function skipTriggersIfAllowed(trx: Knex.Transaction) {
-  const { rows } = await trx.raw<{ rows: { superuser: boolean }[] }>("select rolsuper as superuser from pg_roles where rolname = current_user");
+  const { rows } = await trx.raw<{ rows: { superuser: boolean }[] }>(
+    "select rolsuper as superuser from pg_roles where rolname = current_user",
+  );
   if (rows[0]?.superuser) await trx.raw("set local session_replication_role = replica");
   else console.log("  (not a superuser: foreign-key checks stay on, seeding is slower)");
 }

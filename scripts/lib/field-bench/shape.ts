@@ -1,5 +1,6 @@
 // The benchmark's scale and data shape (see scripts/bench-field.ts), its types and small helpers.
 import type { Knex } from "knex";
+
 import type { ChangeableParam } from "../../../content-schema/outcome-fields";
 
 /** z for a two-sided 95 % interval, the vendors' default confidence. */
@@ -65,14 +66,18 @@ export function valuesList(rows: readonly (readonly (string | number)[])[], type
 }
 
 /** Splits `total` into `parts` counts that differ by at most one. */
-export const split = (total: number, parts: number) => Array.from({ length: parts }, (_, i) => Math.floor(total / parts) + (i < total % parts ? 1 : 0));
+export const split = (total: number, parts: number) =>
+  Array.from({ length: parts }, (_, i) => Math.floor(total / parts) + (i < total % parts ? 1 : 0));
 
 export async function step(label: string, run: () => Promise<number | null | void>) {
   const started = performance.now();
   const rows = await run();
-  console.log(`  ${label.padEnd(44)} ${(typeof rows === "number" ? rows.toLocaleString("en-GB") : "").padStart(10)}  ${fmt(performance.now() - started).padStart(8)}`);
+  console.log(
+    `  ${label.padEnd(44)} ${(typeof rows === "number" ? rows.toLocaleString("en-GB") : "").padStart(10)}  ${fmt(performance.now() - started).padStart(8)}`,
+  );
 }
 
 export const rowCount = async (query: Promise<{ rowCount: number | null }>) => (await query).rowCount;
 
-export const countRows = async (knex: Knex, table: string) => (await knex.raw<{ rows: { n: number }[] }>(`select count(*)::int as n from ${table}`)).rows[0].n;
+export const countRows = async (knex: Knex, table: string) =>
+  (await knex.raw<{ rows: { n: number }[] }>(`select count(*)::int as n from ${table}`)).rows[0].n;

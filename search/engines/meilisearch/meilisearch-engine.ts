@@ -1,10 +1,10 @@
 import { Meilisearch, type Task } from "meilisearch";
 
-import { type SearchDocument, searchDocumentSchema } from "@/search/document/document-schema";
+import { searchDocumentSchema, type SearchDocument } from "@/search/document/document-schema";
 import { searchSettings } from "@/search/settings";
 
-import { compareFacetValues } from "../facet-order";
 import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
+import { compareFacetValues } from "../facet-order";
 import { buildMeiliFilter, quote, vendorFilter } from "./meili-filter";
 import { meiliSettings } from "./meili-settings";
 
@@ -53,7 +53,8 @@ export function createMeilisearchEngine({ host, apiKey, indexUid = "swarfbook_se
     const owned = docs.map((d) => ({ ...d, vendorId }));
     assertSucceeded(await index.addDocuments(owned, { primaryKey: "id" }).waitTask(wait), "document update");
   };
-  const deleteWhere = async (filter: string) => assertSucceeded(await index.deleteDocuments({ filter }).waitTask(wait), "document deletion");
+  const deleteWhere = async (filter: string) =>
+    assertSucceeded(await index.deleteDocuments({ filter }).waitTask(wait), "document deletion");
 
   return {
     name: "meilisearch",
@@ -87,7 +88,9 @@ export function createMeilisearchEngine({ host, apiKey, indexUid = "swarfbook_se
             attributesToRetrieve: RETRIEVE,
             showRankingScore: true,
           },
-          ...(skus.length ? [{ indexUid, q: "", filter: buildMeiliFilter(q.vendorId, "cutter", { skus }), limit: 5, attributesToRetrieve: RETRIEVE }] : []),
+          ...(skus.length
+            ? [{ indexUid, q: "", filter: buildMeiliFilter(q.vendorId, "cutter", { skus }), limit: 5, attributesToRetrieve: RETRIEVE }]
+            : []),
         ],
       });
       const [sheets, cutters] = results;

@@ -1,10 +1,10 @@
 import { searchSettings } from "@/search/settings";
 
 import type { EngineQuery, QueryParts } from "../engine-types";
-import { partConditions } from "./pg-conditions";
 import { DOC_COLUMNS } from "./pg-columns";
+import { partConditions } from "./pg-conditions";
 import { widestConditions } from "./pg-widest";
-import { type Fragment, compose, frag, joinFrags } from "./sql-fragment";
+import { compose, frag, joinFrags, type Fragment } from "./sql-fragment";
 import { buildTsQuery, typoWords } from "./ts-query";
 
 const TEXT_WEIGHT = 6;
@@ -43,7 +43,9 @@ function searchParts(q: EngineQuery) {
   for (const b of boosts) score.push(compose(`(case when $1 then ${b.weight} else 0 end)`, b.cond));
   anyMatch.push(...boosts.map((b) => b.cond));
 
-  const skus = [...new Set([...(q.boosts.skus ?? []), ...q.words.filter((w) => /\d/.test(w) && w.length >= 3)].map((s) => s.toUpperCase()))];
+  const skus = [
+    ...new Set([...(q.boosts.skus ?? []), ...q.words.filter((w) => /\d/.test(w) && w.length >= 3)].map((s) => s.toUpperCase())),
+  ];
   const near = typos.length
     ? frag(
         `(select to_tsquery('simple', string_agg(quote_literal(n.word), ' | ')) from unnest(?::text[]) as t(typo)
@@ -55,7 +57,11 @@ function searchParts(q: EngineQuery) {
     : frag("null::tsquery");
   return {
     /** The `q` CTE: the full-text query and the index words near each long typed word. */
-    queryCte: compose("q as (select to_tsquery('simple', sb_unaccent($1)) as tsq, coalesce($2, ''::tsquery) as near)", frag("?::text", tsq ?? ""), near),
+    queryCte: compose(
+      "q as (select to_tsquery('simple', sb_unaccent($1)) as tsq, coalesce($2, ''::tsquery) as near)",
+      frag("?::text", tsq ?? ""),
+      near,
+    ),
     score: joinFrags(score, " + "),
     /** Without a filter, a document must match something typed: a word, a near word, or a parsed part. */
     anyMatch: anyMatch.length > 0 ? compose("($1)", joinFrags(anyMatch, " or ")) : undefined,
@@ -146,7 +152,11 @@ export function buildSearchStepsSql(queries: readonly EngineQuery[]): Fragment {
     laterConds.map((c, i) => compose(`when $1 then ${i + 1}`, c ?? frag("true"))),
     " ",
   );
-  const bound = laterBound(later.map((s) => s.filters), laterConds, parts);
+  const bound = laterBound(
+    later.map((s) => s.filters),
+    laterConds,
+    parts,
+  );
   return compose(
     `with $1,
 m0 as (select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from search_documents d cross join q where $3),

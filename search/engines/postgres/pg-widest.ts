@@ -1,7 +1,7 @@
 import { searchSettings } from "@/search/settings";
 
 import type { QueryParts } from "../engine-types";
-import { type Fragment, frag } from "./sql-fragment";
+import { frag, type Fragment } from "./sql-fragment";
 
 const TOL = searchSettings.diameterToleranceMm;
 const has = <T>(v: readonly T[] | undefined): v is readonly T[] => Boolean(v && v.length);
@@ -19,12 +19,15 @@ export function widestConditions(steps: readonly QueryParts[]): Fragment[] {
   if (every((s) => has(s.materialKeys) || has(s.materialGroups))) {
     const keys = union(steps.map((s) => s.materialKeys));
     const groups = union(steps.map((s) => s.materialGroups));
-    if (keys.length && groups.length) out.push(frag("(d.material_key = any(?::text[]) or d.material_group = any(?::text[]))", keys, groups));
+    if (keys.length && groups.length)
+      out.push(frag("(d.material_key = any(?::text[]) or d.material_group = any(?::text[]))", keys, groups));
     else if (keys.length) out.push(frag("d.material_key = any(?::text[])", keys));
     else out.push(frag("d.material_group = any(?::text[])", groups));
   }
   if (every((s) => has(s.operations))) {
-    const common = steps.slice(1).reduce<readonly string[]>((acc, s) => acc.filter((op) => s.operations!.includes(op as never)), steps[0].operations!);
+    const common = steps
+      .slice(1)
+      .reduce<readonly string[]>((acc, s) => acc.filter((op) => s.operations!.includes(op as never)), steps[0].operations!);
     if (common.length) out.push(frag("d.operations @> ?::text[]", [...common]));
   }
   if (every((s) => s.diameterMm !== undefined)) {
@@ -34,7 +37,14 @@ export function widestConditions(steps: readonly QueryParts[]): Fragment[] {
   if (every((s) => s.flutes !== undefined)) out.push(frag("d.flutes = any(?::int[])", [...new Set(steps.map((s) => s.flutes!))]));
   if (every((s) => has(s.cornerForms))) out.push(frag("d.corner_form = any(?::text[])", union(steps.map((s) => s.cornerForms))));
   if (every((s) => has(s.geometry))) out.push(frag("d.geometry = any(?::text[])", union(steps.map((s) => s.geometry))));
-  if (every((s) => s.machineClass !== undefined)) out.push(frag("d.machine_class = any(?::text[])", [...new Set(steps.map((s) => s.machineClass!))]));
-  if (every((s) => has(s.skus))) out.push(frag("upper(d.cutter_sku) = any(?::text[])", union(steps.map((s) => s.skus)).map((s) => s.toUpperCase())));
+  if (every((s) => s.machineClass !== undefined))
+    out.push(frag("d.machine_class = any(?::text[])", [...new Set(steps.map((s) => s.machineClass!))]));
+  if (every((s) => has(s.skus)))
+    out.push(
+      frag(
+        "upper(d.cutter_sku) = any(?::text[])",
+        union(steps.map((s) => s.skus)).map((s) => s.toUpperCase()),
+      ),
+    );
   return out;
 }

@@ -1,7 +1,6 @@
 import type { Knex } from "knex";
 
 import type { SearchDocument } from "@/search/document/document-schema";
-
 import { indexWords } from "@/search/document/index-words";
 
 import { docToRow, weightedText } from "./pg-columns";
@@ -22,14 +21,23 @@ export async function upsertRows(knex: Knex, vendorId: string, docs: readonly Se
       indexed_at: knex.fn.now(),
     }));
     await knex("search_documents").insert(rows).onConflict(["vendor_id", "doc_id"]).merge();
-    const words = [...new Set(chunk.flatMap((doc) => indexWords(doc).split(" ").map(lexemeOf)))].filter((w) => w.length >= 3 && !/\d/.test(w));
-    if (words.length) await knex("search_words").insert(words.map((word) => ({ vendor_id: vendorId, word }))).onConflict(["vendor_id", "word"]).ignore();
+    const words = [...new Set(chunk.flatMap((doc) => indexWords(doc).split(" ").map(lexemeOf)))].filter(
+      (w) => w.length >= 3 && !/\d/.test(w),
+    );
+    if (words.length)
+      await knex("search_words")
+        .insert(words.map((word) => ({ vendor_id: vendorId, word })))
+        .onConflict(["vendor_id", "word"])
+        .ignore();
   }
 }
 
 export async function removeRows(knex: Knex, vendorId: string, docIds: readonly string[]): Promise<void> {
   if (docIds.length === 0) return;
-  await knex("search_documents").where({ vendor_id: vendorId }).whereIn("doc_id", [...docIds]).delete();
+  await knex("search_documents")
+    .where({ vendor_id: vendorId })
+    .whereIn("doc_id", [...docIds])
+    .delete();
 }
 
 export async function replaceVendorRows(knex: Knex, vendorId: string, docs: readonly SearchDocument[]): Promise<void> {

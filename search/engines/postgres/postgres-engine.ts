@@ -2,14 +2,19 @@ import type { Knex } from "knex";
 
 import { LruCache } from "@/lib/mdx/lru-cache";
 
-import { compareFacetValues } from "../facet-order";
 import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
+import { compareFacetValues } from "../facet-order";
 import { rowToDoc } from "./pg-columns";
 import { buildSearchSql, buildSearchStepsSql } from "./pg-search-sql";
-import { type NativeStatement, numberPlaceholders, preparedQuery, runNative } from "./prepared-query";
 import { removeRows, replaceVendorRows, upsertRows } from "./pg-write";
+import { numberPlaceholders, preparedQuery, runNative, type NativeStatement } from "./prepared-query";
 
-type Raw = { total: number; hits: Record<string, unknown>[]; facets: { facet: FacetName; value: string; count: number }[]; cutters: Record<string, unknown>[] };
+type Raw = {
+  total: number;
+  hits: Record<string, unknown>[];
+  facets: { facet: FacetName; value: string; count: number }[];
+  cutters: Record<string, unknown>[];
+};
 
 function facetCounts(rows: Raw["facets"]): FacetCounts {
   const out: FacetCounts = {};

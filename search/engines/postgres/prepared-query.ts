@@ -1,5 +1,4 @@
 import { createHash } from "node:crypto";
-
 import type { Knex } from "knex";
 
 type PgConnection = { query: (config: { name?: string; text: string; values: readonly unknown[] }) => Promise<{ rows: unknown[] }> };

@@ -1,8 +1,14 @@
-const fold = (s: string) => s.normalize("NFKD").replace(/[\u0300-\u036f]/g, "").toLowerCase();
+const fold = (s: string) =>
+  s
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase();
 
 /** A word reduced to what to_tsquery reads safely inside quotes: letters, digits, inner `-` and `.`. */
 export function lexemeOf(word: string): string {
-  return fold(word).replace(/[^a-z0-9.-]+/g, "").replace(/^[.-]+|[.-]+$/g, "");
+  return fold(word)
+    .replace(/[^a-z0-9.-]+/g, "")
+    .replace(/^[.-]+|[.-]+$/g, "");
 }
 
 /**

@@ -1,17 +1,16 @@
 import { execFileSync } from "node:child_process";
 import { mkdirSync, writeFileSync } from "node:fs";
 import path from "node:path";
-
 import { unit } from "mathjs";
 import { afterAll, describe, expect, it } from "vitest";
 
 import { formatFeed, formatLength } from "@/lib/machining";
+import { mustExist } from "@/tests/support/must-exist";
 
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { SCREENSHOT_DIR } from "../support/env";
 import { signInWithPassword } from "../support/sign-in";
-import { mustExist } from "@/tests/support/must-exist";
 
 const squash = (text: string) => text.replace(/[\u00a0\u202f]/g, " ").replace(/\s+/g, " ");
 
@@ -35,8 +34,12 @@ describe("printable data sheets", () => {
   it("a visitor prints a sheet's data sheet and its cutter's data sheet from a public Library", { timeout: 240_000 }, async () => {
     const db = e2eDb();
     const vendor = mustExist(await db("vendors").where({ slug: "northbeck" }).first("id"), "vendor");
-    const row = await db("sheet_versions as v").join("sheets as s", "s.id", "v.sheet_id").join("cutters as c", "c.id", "s.cutter_id")
-      .where({ "v.vendor_id": vendor.id, "v.state": "published" }).orderBy("s.slug").first("s.slug", "v.number", "v.front_matter", "c.sku", "c.diameter_mm");
+    const row = await db("sheet_versions as v")
+      .join("sheets as s", "s.id", "v.sheet_id")
+      .join("cutters as c", "c.id", "s.cutter_id")
+      .where({ "v.vendor_id": vendor.id, "v.state": "published" })
+      .orderBy("s.slug")
+      .first("s.slug", "v.number", "v.front_matter", "c.sku", "c.diameter_mm");
     const s = await openBrowser();
     sessions.push(s);
     s.page.setDefaultNavigationTimeout(90_000);
@@ -71,7 +74,10 @@ describe("printable data sheets", () => {
   it("a customers-only Library prints only for its customers", { timeout: 240_000 }, async () => {
     const db = e2eDb();
     const vendor = mustExist(await db("vendors").where({ slug: "quillon" }).first("id"), "vendor");
-    const row = await db("sheet_versions as v").join("sheets as s", "s.id", "v.sheet_id").where({ "v.vendor_id": vendor.id, "v.state": "published" }).first("s.slug", "v.number");
+    const row = await db("sheet_versions as v")
+      .join("sheets as s", "s.id", "v.sheet_id")
+      .where({ "v.vendor_id": vendor.id, "v.state": "published" })
+      .first("s.slug", "v.number");
     const url = `/quillon/library/${row.slug}/v/${row.number}/pdf`;
     const visitor = await openBrowser();
     sessions.push(visitor);

@@ -25,12 +25,38 @@ describe("accessibility (axe, WCAG 2.1 A/AA)", () => {
   });
 
   it("pages for visitors, customers and staff have no violations", { timeout: 480_000 }, async () => {
-    const sheet = await e2eDb()("sheets as s").join("vendors as d", "d.id", "s.vendor_id").where("d.slug", "northbeck").orderBy("s.slug").first("s.slug");
+    const sheet = await e2eDb()("sheets as s")
+      .join("vendors as d", "d.id", "s.vendor_id")
+      .where("d.slug", "northbeck")
+      .orderBy("s.slug")
+      .first("s.slug");
     const audiences: { who: string | null; urls: string[] }[] = [
-      { who: null, urls: ["/", "/sign-in", "/northbeck/library", `/northbeck/library/${sheet.slug}`, "/northbeck/library/search?q=1%2F8+acrylic+slot", "/developers/api"] },
+      {
+        who: null,
+        urls: [
+          "/",
+          "/sign-in",
+          "/northbeck/library",
+          `/northbeck/library/${sheet.slug}`,
+          "/northbeck/library/search?q=1%2F8+acrylic+slot",
+          "/developers/api",
+        ],
+      },
       { who: "maker@example.test", urls: ["/northbeck/bench", "/northbeck/support", "/northbeck/support/new"] },
-      { who: "eng1@northbeck.test", urls: ["/northbeck/drafting", "/northbeck/drafting/sheets", "/northbeck/drafting/field", `/northbeck/drafting/field/${sheet.slug}`] },
-      { who: "admin@northbeck.test", urls: ["/northbeck/desk", "/northbeck/desk/dashboard", "/northbeck/admin", "/northbeck/admin/members", "/northbeck/admin/integrations"] },
+      {
+        who: "eng1@northbeck.test",
+        urls: ["/northbeck/drafting", "/northbeck/drafting/sheets", "/northbeck/drafting/field", `/northbeck/drafting/field/${sheet.slug}`],
+      },
+      {
+        who: "admin@northbeck.test",
+        urls: [
+          "/northbeck/desk",
+          "/northbeck/desk/dashboard",
+          "/northbeck/admin",
+          "/northbeck/admin/members",
+          "/northbeck/admin/integrations",
+        ],
+      },
     ];
     const found: string[] = [];
     for (const { who, urls } of audiences) {

@@ -13,7 +13,9 @@ describe("client address behind next start", () => {
   it("counts requests with rotating X-Forwarded-For under the socket's address, not the forged ones", async () => {
     const forged = Array.from({ length: 12 }, (_, i) => `203.0.113.${100 + i}`);
     for (const ip of forged) {
-      const response = await fetch(`${BASE_URL}/api/v1/vendors/northbeck/logo`, { headers: { "x-forwarded-for": ip, "x-swarfbook-peer": ip } });
+      const response = await fetch(`${BASE_URL}/api/v1/vendors/northbeck/logo`, {
+        headers: { "x-forwarded-for": ip, "x-swarfbook-peer": ip },
+      });
       expect([200, 404]).toContain(response.status);
     }
     const keys: string[] = await e2eDb()("rate_limit_buckets").where("key", "like", "api:all:%").pluck("key");

@@ -1,14 +1,14 @@
 import { createHash, randomBytes } from "node:crypto";
-
 import type { Knex } from "knex";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+
+import { mustExist } from "@/tests/support/must-exist";
 
 import { fillPattern, listAppRoutes, paramKeysOf } from "../support/app-routes";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { BASE_URL } from "../support/env";
 import { signInWithPassword } from "../support/sign-in";
-import { mustExist } from "@/tests/support/must-exist";
 
 // A member of vendor A (northbeck's admin, no role at quillon) probes every vendor route of the app with
 // vendor B's slug and B's real object ids: every answer must be a 404, never data and never a 403.
@@ -25,8 +25,10 @@ const PUBLIC_BY_DESIGN: Record<string, string> = {
 };
 
 type ValueSource = (db: Knex, vendorId: string) => Promise<string | undefined>;
-const firstId = (table: string, column = "id"): ValueSource => async (db, vendorId) =>
-  (await db(table).where({ vendor_id: vendorId }).first(column))?.[column];
+const firstId =
+  (table: string, column = "id"): ValueSource =>
+  async (db, vendorId) =>
+    (await db(table).where({ vendor_id: vendorId }).first(column))?.[column];
 
 // Where a real object of the target vendor comes from, by "parent/[param]". A new dynamic segment
 // without a source here fails the probe, so its author must add one.
@@ -109,7 +111,12 @@ describe("cross-vendor probe", () => {
         // With the app's own Origin, as the site's pages send it (and a script can): the probe tests tenant
         // isolation, which the cross-site check in front of writes must not mask.
         const headers = method === "GET" ? undefined : { origin: new URL(BASE_URL).origin };
-        const response = await session.context.request.fetch(url, { method, headers, data: method === "GET" ? undefined : {}, failOnStatusCode: false });
+        const response = await session.context.request.fetch(url, {
+          method,
+          headers,
+          data: method === "GET" ? undefined : {},
+          failOnStatusCode: false,
+        });
         if (response.status() !== 404) failures.push(`${method} ${url} → ${response.status()}`);
         const text = await response.text();
         if (/quillon/i.test(text.replace(url, ""))) failures.push(`${method} ${url} leaks data`);
@@ -122,9 +129,19 @@ describe("cross-vendor probe", () => {
     const db = e2eDb();
     const vendor = mustExist(await db("vendors").where({ slug: TARGET }).first("id"), "vendor");
     const secret = `sbk_${randomBytes(24).toString("base64url")}`;
-    const [user] = await db("users").insert({ email: `removed-${randomBytes(4).toString("hex")}@example.test`, name: "Removed probe", email_verified: db.fn.now() }).returning("id");
-    const [member] = await db("members").insert({ vendor_id: vendor.id, user_id: user.id, role: "admin", created_at: new Date(Date.now() - 60_000) }).returning("id");
-    await db("api_tokens").insert({ vendor_id: vendor.id, user_id: user.id, name: "probe", prefix: secret.slice(0, 12), token_hash: createHash("sha256").update(secret).digest("hex") });
+    const [user] = await db("users")
+      .insert({ email: `removed-${randomBytes(4).toString("hex")}@example.test`, name: "Removed probe", email_verified: db.fn.now() })
+      .returning("id");
+    const [member] = await db("members")
+      .insert({ vendor_id: vendor.id, user_id: user.id, role: "admin", created_at: new Date(Date.now() - 60_000) })
+      .returning("id");
+    await db("api_tokens").insert({
+      vendor_id: vendor.id,
+      user_id: user.id,
+      name: "probe",
+      prefix: secret.slice(0, 12),
+      token_hash: createHash("sha256").update(secret).digest("hex"),
+    });
     const probe = async (label: string, expectOk: boolean) => {
       const failures: string[] = [];
       for (const route of routes.filter((r) => r.kind === "api" && !(r.pattern in PUBLIC_BY_DESIGN))) {
@@ -132,7 +149,10 @@ describe("cross-vendor probe", () => {
         for (const method of expectOk ? ["GET"] : route.methods) {
           if (!route.methods.includes(method)) continue;
           const response = await session.context.request.fetch(url, {
-            method, data: method === "GET" ? undefined : {}, failOnStatusCode: false, headers: { authorization: `Bearer ${secret}` },
+            method,
+            data: method === "GET" ? undefined : {},
+            failOnStatusCode: false,
+            headers: { authorization: `Bearer ${secret}` },
           });
           if (!expectOk && response.status() !== 404) failures.push(`${label}: ${method} ${url} → ${response.status()}`);
           if (expectOk && response.status() === 200) return [];

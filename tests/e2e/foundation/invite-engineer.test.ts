@@ -1,5 +1,4 @@
 import { randomBytes } from "node:crypto";
-
 import { afterAll, describe, expect, it } from "vitest";
 
 import { openBrowser, screenshot, type Session } from "../support/browser";

@@ -1,5 +1,4 @@
 import { randomBytes } from "node:crypto";
-
 import { afterAll, describe, expect, it } from "vitest";
 
 import { openBrowser, screenshot, type Session } from "../support/browser";
@@ -49,7 +48,9 @@ describe("an account registered in advance with an invitee's address", () => {
     await expect(attacker.page.getByRole("status").textContent({ timeout: 15_000 })).resolves.toContain("we sent a link");
     await expect(trySignIn(attacker, email, ATTACKER_PASSWORD)).resolves.toContain("Confirm your e-mail first");
     await attacker.page.getByRole("button", { name: "Send the link again" }).click();
-    await expect(attacker.page.locator("form [role=status]").textContent({ timeout: 15_000 })).resolves.toContain("a new link is on its way");
+    await expect(attacker.page.locator("form [role=status]").textContent({ timeout: 15_000 })).resolves.toContain(
+      "a new link is on its way",
+    );
     await screenshot(attacker.page, "takeover-attacker-unconfirmed");
 
     const admin = await open();

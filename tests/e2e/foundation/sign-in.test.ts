@@ -1,9 +1,9 @@
 import { afterEach, describe, expect, it } from "vitest";
 
 import { openBrowser, screenshot, type Session } from "../support/browser";
+import { BASE_URL } from "../support/env";
 import { firstLink, waitForMail } from "../support/maildev";
 import { signInWithPassword } from "../support/sign-in";
-import { BASE_URL } from "../support/env";
 
 describe("sign-in", () => {
   let session: Session | undefined;

@@ -1,12 +1,12 @@
 import { createHash, randomBytes } from "node:crypto";
-
 import { afterAll, describe, expect, it } from "vitest";
+
+import { mustExist } from "@/tests/support/must-exist";
 
 import { receiverAccepts, startReceiver } from "../../support/webhook-receiver";
 import { openBrowser, screenshot, type Session } from "../support/browser";
 import { closeE2eDb, e2eDb } from "../support/db";
 import { signInWithPassword } from "../support/sign-in";
-import { mustExist } from "@/tests/support/must-exist";
 
 const ADMIN = "admin@northbeck.test";
 
@@ -16,7 +16,13 @@ async function tokenFor(email: string): Promise<string> {
   const vendor = mustExist(await db("vendors").where({ slug: "northbeck" }).first("id"), "vendor");
   const user = mustExist(await db("users").where({ email }).first("id"), "user");
   const secret = `sbk_${randomBytes(24).toString("base64url")}`;
-  await db("api_tokens").insert({ vendor_id: vendor.id, user_id: user.id, name: "webhook e2e", prefix: secret.slice(0, 12), token_hash: createHash("sha256").update(secret).digest("hex") });
+  await db("api_tokens").insert({
+    vendor_id: vendor.id,
+    user_id: user.id,
+    name: "webhook e2e",
+    prefix: secret.slice(0, 12),
+    token_hash: createHash("sha256").update(secret).digest("hex"),
+  });
   return secret;
 }
 
@@ -53,11 +59,18 @@ describe("webhooks", () => {
 
     // A new sheet from an existing sheet's source, through the API: author, second engineer approves and publishes.
     const db = e2eDb();
-    const source = await db("sheet_versions as v").join("vendors as d", "d.id", "v.vendor_id").where({ "d.slug": "northbeck", "v.state": "published" }).first<{ source: string }>("v.source");
+    const source = await db("sheet_versions as v")
+      .join("vendors as d", "d.id", "v.vendor_id")
+      .where({ "d.slug": "northbeck", "v.state": "published" })
+      .first<{ source: string }>("v.source");
     const slug = `webhook-e2e-${randomBytes(3).toString("hex")}`;
     const [author, reviewer] = [await tokenFor("eng1@northbeck.test"), await tokenFor("eng2@northbeck.test")];
     const api = async (token: string, method: "post" | "put", path: string, data?: unknown) => {
-      const response = await page.request[method](`/api/v1/vendors/northbeck${path}`, { headers: { authorization: `Bearer ${token}` }, data: data ?? {}, failOnStatusCode: false });
+      const response = await page.request[method](`/api/v1/vendors/northbeck${path}`, {
+        headers: { authorization: `Bearer ${token}` },
+        data: data ?? {},
+        failOnStatusCode: false,
+      });
       expect(response.status(), `${method} ${path}: ${await response.text()}`).toBeLessThan(300);
     };
     await api(author, "post", "/sheets", { slug, source: source.source });
@@ -65,7 +78,9 @@ describe("webhooks", () => {
     await api(reviewer, "post", `/sheets/${slug}/draft/approve`);
     await api(reviewer, "post", `/sheets/${slug}/draft/publish`);
 
-    const got = await until("the sheet.published delivery", () => hook.received.find((r) => r.headers["swarfbook-event"] === "sheet.published" && r.body.includes(slug)));
+    const got = await until("the sheet.published delivery", () =>
+      hook.received.find((r) => r.headers["swarfbook-event"] === "sheet.published" && r.body.includes(slug)),
+    );
     expect(receiverAccepts(secret!, got)).toBe(true);
     const body = JSON.parse(got.body);
     expect(body).toMatchObject({ type: "sheet.published", vendor: "northbeck", data: { sheet: slug, version: 1, supersedes: null } });
@@ -87,7 +102,10 @@ describe("webhooks", () => {
 
   it("another vendor's webhook page is not found", async () => {
     const db = e2eDb();
-    const other = await db("webhooks as w").join("vendors as v", "v.id", "w.vendor_id").where("v.slug", "quillon").first<{ id: string } | undefined>("w.id");
+    const other = await db("webhooks as w")
+      .join("vendors as v", "v.id", "w.vendor_id")
+      .where("v.slug", "quillon")
+      .first<{ id: string } | undefined>("w.id");
     const id = other?.id ?? "00000000-0000-4000-8000-000000000000";
     const response = await session!.page.goto(`/northbeck/admin/integrations/webhooks/${id}`);
     expect(response?.status()).toBe(404);

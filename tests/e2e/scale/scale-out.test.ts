@@ -3,7 +3,6 @@
 import { execFile } from "node:child_process";
 import { randomUUID } from "node:crypto";
 import { promisify } from "node:util";
-
 import knexFactory, { type Knex } from "knex";
 import PgBoss from "pg-boss";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -30,7 +29,10 @@ let boss: PgBoss;
 const tokens: Record<string, string> = {};
 
 function cookiesFrom(response: Response): string {
-  return response.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  return response.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
 }
 
 async function signIn(base: string, email: string): Promise<string> {
@@ -48,9 +50,25 @@ async function signIn(base: string, email: string): Promise<string> {
 }
 
 async function createToken(email: string): Promise<string> {
-  const { stdout } = await run("node", ["--conditions=react-server", "--import", "tsx", "scripts/token.ts", "create", "--vendor", VENDOR, "--email", email, "--name", `scale ${RUN}`], {
-    env: { ...process.env, DATABASE_URL: env("SCALE_PRIMARY_URL") },
-  });
+  const { stdout } = await run(
+    "node",
+    [
+      "--conditions=react-server",
+      "--import",
+      "tsx",
+      "scripts/token.ts",
+      "create",
+      "--vendor",
+      VENDOR,
+      "--email",
+      email,
+      "--name",
+      `scale ${RUN}`,
+    ],
+    {
+      env: { ...process.env, DATABASE_URL: env("SCALE_PRIMARY_URL") },
+    },
+  );
   return stdout.trim();
 }
 
@@ -62,7 +80,11 @@ const api = (path: string, init: RequestInit & { token?: string; cookie?: string
   return fetch(`${BASE}/api/v1/vendors/${VENDOR}${path}`, { ...init, headers });
 };
 
-async function until<T>(what: string, seconds: number, probe: () => Promise<T | undefined | false>): Promise<{ value: T; waitedMs: number }> {
+async function until<T>(
+  what: string,
+  seconds: number,
+  probe: () => Promise<T | undefined | false>,
+): Promise<{ value: T; waitedMs: number }> {
   const started = Date.now();
   for (;;) {
     const value = await probe();
@@ -99,7 +121,10 @@ afterAll(async () => {
 
 describe("two app processes behind HAProxy", () => {
   it("serves through HAProxy with the replica in use", async () => {
-    const health = (await (await fetch(`${BASE}/api/health`)).json()) as { ok: boolean; replica: { configured: boolean; usable: boolean; lagSeconds: number } };
+    const health = (await (await fetch(`${BASE}/api/health`)).json()) as {
+      ok: boolean;
+      replica: { configured: boolean; usable: boolean; lagSeconds: number };
+    };
     expect(health.ok).toBe(true);
     expect(health.replica).toMatchObject({ configured: true, usable: true });
     expect(health.replica.lagSeconds).toBeLessThanOrEqual(MAX_LAG_SECONDS);
@@ -116,10 +141,27 @@ describe("two app processes behind HAProxy", () => {
   it("a rate limit holds across both processes", async () => {
     const body = JSON.stringify({
       units: "metric",
-      operation: { kind: "slotting", diameter: { value: 6, unit: "mm" }, flutes: 2, spindleSpeed: { value: 18000, unit: "rpm" }, feed: { value: 1500, unit: "mm/min" }, axialDepth: { value: 3, unit: "mm" }, radialDepth: { value: 6, unit: "mm" } },
-      material: { cuttingSpeedWindow: { min: 100, max: 400, unit: "m/min" }, minChipLoad: { value: 0.03, unit: "mm/tooth" }, specificCuttingForce: { value: 100, unit: "N/mm²" } },
+      operation: {
+        kind: "slotting",
+        diameter: { value: 6, unit: "mm" },
+        flutes: 2,
+        spindleSpeed: { value: 18000, unit: "rpm" },
+        feed: { value: 1500, unit: "mm/min" },
+        axialDepth: { value: 3, unit: "mm" },
+        radialDepth: { value: 6, unit: "mm" },
+      },
+      material: {
+        cuttingSpeedWindow: { min: 100, max: 400, unit: "m/min" },
+        minChipLoad: { value: 0.03, unit: "mm/tooth" },
+        specificCuttingForce: { value: 100, unit: "N/mm²" },
+      },
       referenceMachine: { rigidity: 0.8 },
-      machine: { spindleSpeed: { min: 8000, max: 24000, unit: "rpm" }, maxFeed: { value: 5000, unit: "mm/min" }, spindlePower: { value: 1.5, unit: "kW" }, rigidity: 0.5 },
+      machine: {
+        spindleSpeed: { min: 8000, max: 24000, unit: "rpm" },
+        maxFeed: { value: 5000, unit: "mm/min" },
+        spindlePower: { value: 1.5, unit: "kW" },
+        rigidity: 0.5,
+      },
     });
     const statuses: number[] = [];
     // 120 a minute per client address; round robin spreads the 130 calls over both processes.
@@ -154,25 +196,42 @@ describe("two app processes behind HAProxy", () => {
       .join("sheets as s", "s.id", "v.sheet_id")
       .join("vendors as vd", "vd.id", "v.vendor_id")
       .where({ "vd.slug": VENDOR, "v.state": "published" })
-      .whereNotExists((q) => q.select(primary.raw("1")).from("sheet_versions as d").whereRaw("d.sheet_id = s.id and d.state in ('draft', 'in_review')"))
+      .whereNotExists((q) =>
+        q.select(primary.raw("1")).from("sheet_versions as d").whereRaw("d.sheet_id = s.id and d.state in ('draft', 'in_review')"),
+      )
       .orderBy("s.slug")
       .first<{ slug: string; number: number; source: string }>("s.slug", "v.number", "v.source");
     expect(sheet).toBeTruthy();
     const { slug, number, source } = sheet!;
     const author = tokens["eng1@northbeck.test"];
-    const current = async (cookie?: string) => ((await (await api(`/sheets/${slug}`, { cookie })).json()) as { currentNumber: number }).currentNumber;
+    const current = async (cookie?: string) =>
+      ((await (await api(`/sheets/${slug}`, { cookie })).json()) as { currentNumber: number }).currentNumber;
     expect(await current()).toBe(number);
 
     // Hold the standby's replay: what the anonymous reader sees now can only come from the replica.
     await primary.raw("select txid_current()");
     const lsn = (await primary.raw("select pg_current_wal_lsn()::text as lsn")).rows[0].lsn as string;
-    await until("the standby to catch up", 20, async () => (await standby.raw("select pg_last_wal_replay_lsn() >= ?::pg_lsn as ok", [lsn])).rows[0].ok);
+    await until(
+      "the standby to catch up",
+      20,
+      async () => (await standby.raw("select pg_last_wal_replay_lsn() >= ?::pg_lsn as ok", [lsn])).rows[0].ok,
+    );
     await standby.raw("select pg_wal_replay_pause()");
     let authorCookie = "";
     try {
       expect((await api(`/sheets/${slug}/draft`, { method: "PUT", token: author, body: JSON.stringify({ source }) })).status).toBe(201);
-      expect((await api(`/sheets/${slug}/draft/submit`, { method: "POST", token: author, body: JSON.stringify({ changeNote: `Scale run ${RUN}` }) })).status).toBeLessThan(300);
-      expect((await api(`/sheets/${slug}/draft/approve`, { method: "POST", token: tokens["eng2@northbeck.test"] })).status).toBeLessThan(300);
+      expect(
+        (
+          await api(`/sheets/${slug}/draft/submit`, {
+            method: "POST",
+            token: author,
+            body: JSON.stringify({ changeNote: `Scale run ${RUN}` }),
+          })
+        ).status,
+      ).toBeLessThan(300);
+      expect((await api(`/sheets/${slug}/draft/approve`, { method: "POST", token: tokens["eng2@northbeck.test"] })).status).toBeLessThan(
+        300,
+      );
       const published = await api(`/sheets/${slug}/draft/publish`, { method: "POST", token: author });
       expect(published.status).toBeLessThan(300);
       authorCookie = cookiesFrom(published);
@@ -188,7 +247,12 @@ describe("two app processes behind HAProxy", () => {
 
   it("200 queued jobs each run once with two workers", async () => {
     const prefix = `scale-job-${RUN}-`;
-    await boss.insert(Array.from({ length: 200 }, (_, i) => ({ name: "mail.send", data: { to: "ops@example.test", subject: `${prefix}${i}`, text: "probe" } })));
+    await boss.insert(
+      Array.from({ length: 200 }, (_, i) => ({
+        name: "mail.send",
+        data: { to: "ops@example.test", subject: `${prefix}${i}`, text: "probe" },
+      })),
+    );
     // Each worker takes one job a second per queue (batches of one, so a failed mail never resends others).
     await until("200 mails", 200, async () => (await mails(prefix)).length >= 200);
     await new Promise((r) => setTimeout(r, 3000));
@@ -205,7 +269,11 @@ describe("two app processes behind HAProxy", () => {
     const create = async (token: string, key: string) => {
       for (let attempt = 0; attempt < 8; attempt++) {
         try {
-          const response = await api("/tickets", { method: "POST", token, body: JSON.stringify({ subject: `Load ${key}`, body: "Under load.", idempotencyKey: key }) });
+          const response = await api("/tickets", {
+            method: "POST",
+            token,
+            body: JSON.stringify({ subject: `Load ${key}`, body: "Under load.", idempotencyKey: key }),
+          });
           if (response.status === 201 || response.status === 200) {
             acknowledged.set(key, ((await response.json()) as { ticket: { id: string } }).ticket.id);
             return;
@@ -229,7 +297,9 @@ describe("two app processes behind HAProxy", () => {
     await Promise.all(load);
     console.log(`[scale] ${acknowledged.size} writes acknowledged, ${failures} attempts failed while app2 stopped`);
     expect(acknowledged.size).toBe(60);
-    const rows = await primary("tickets").whereIn("idempotency_key", [...acknowledged.keys()]).select("id", "idempotency_key");
+    const rows = await primary("tickets")
+      .whereIn("idempotency_key", [...acknowledged.keys()])
+      .select("id", "idempotency_key");
     expect(rows).toHaveLength(acknowledged.size);
     for (const row of rows) expect(acknowledged.get(row.idempotency_key)).toBe(row.id);
   });
@@ -248,7 +318,11 @@ describe("two app processes behind HAProxy", () => {
       }
     })();
     await new Promise((r) => setTimeout(r, 1000));
-    await run("runuser", ["-u", "postgres", "--", "/usr/lib/postgresql/15/bin/pg_ctl", "-D", env("SCALE_STANDBY_DATA"), "-m", "fast", "-w", "stop"], { cwd: "/" });
+    await run(
+      "runuser",
+      ["-u", "postgres", "--", "/usr/lib/postgresql/15/bin/pg_ctl", "-D", env("SCALE_STANDBY_DATA"), "-m", "fast", "-w", "stop"],
+      { cwd: "/" },
+    );
     await new Promise((r) => setTimeout(r, 4000));
     stopping = false;
     await loop;
@@ -261,7 +335,9 @@ describe("two app processes behind HAProxy", () => {
   it("a schedule fires once a minute, not once per process", async () => {
     const subject = `scale-cron-${RUN}`;
     const { waitedMs } = await until("the first scheduled job", 150, async () => {
-      const { rows } = await primary.raw("select count(*)::int as n from pgboss.job where name = 'mail.send' and data->>'subject' = ?", [subject]);
+      const { rows } = await primary.raw("select count(*)::int as n from pgboss.job where name = 'mail.send' and data->>'subject' = ?", [
+        subject,
+      ]);
       return rows[0].n > 0;
     });
     await new Promise((r) => setTimeout(r, 5000));

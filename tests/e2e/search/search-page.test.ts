@@ -29,15 +29,21 @@ describe("Library search", () => {
     const headings = await results.evaluateAll((as) => as.map((a) => a.querySelector("span")?.textContent ?? ""));
     expect(new Set(headings).size).toBe(2);
     // The matched words are marked in the titles.
-    await expect.poll(() => results.first().locator("mark").allTextContents(), { timeout: 30_000 }).toEqual(expect.arrayContaining(["Cast acrylic", "1/8"]));
+    await expect
+      .poll(() => results.first().locator("mark").allTextContents(), { timeout: 30_000 })
+      .toEqual(expect.arrayContaining(["Cast acrylic", "1/8"]));
 
     const chipList = page.getByRole("list", { name: "Understood parts of the query" }).getByRole("button");
     // Labels use no-break spaces between number and unit.
     const chips = { allTextContents: async () => (await chipList.allTextContents()).map((t) => t.replace(/\s+/g, " ")) };
     expect(await chips.allTextContents()).toEqual(['Ø 3.175 mm (1/8")', "acrylic", "slotting"]);
     const operations = page.locator('[data-facet="operations"]');
-    await expect.poll(() => operations.getByRole("button", { name: /Slot, full width/ }).textContent(), { timeout: 30_000 }).toMatch(/Slot, full width\s*2/);
-    await expect.poll(() => page.locator('[data-facet="machineClass"]').textContent(), { timeout: 30_000 }).toMatch(/Light belt-drive router\s*1.*Rigid ball-screw router\s*1/s);
+    await expect
+      .poll(() => operations.getByRole("button", { name: /Slot, full width/ }).textContent(), { timeout: 30_000 })
+      .toMatch(/Slot, full width\s*2/);
+    await expect
+      .poll(() => page.locator('[data-facet="machineClass"]').textContent(), { timeout: 30_000 })
+      .toMatch(/Light belt-drive router\s*1.*Rigid ball-screw router\s*1/s);
     await screenshot(page, "search-1-8-acrylic-slot");
 
     await page.getByRole("button", { name: "Remove slotting" }).click();
@@ -96,7 +102,9 @@ describe("Library search", () => {
     await page.goto("/northbeck/library");
     await page.locator("#shell-search").fill("plexi");
     await page.locator("#shell-search").press("Enter");
-    await page.waitForURL((url) => url.pathname === "/northbeck/library/search" && url.searchParams.get("q") === "plexi", { timeout: 30_000 });
+    await page.waitForURL((url) => url.pathname === "/northbeck/library/search" && url.searchParams.get("q") === "plexi", {
+      timeout: 30_000,
+    });
     await expect.poll(() => page.getByRole("list", { name: "Matching sheets" }).getByRole("link").count(), { timeout: 30_000 }).toBe(3);
   });
 });

@@ -1,5 +1,4 @@
 import { randomBytes } from "node:crypto";
-
 import { afterAll, describe, expect, it } from "vitest";
 
 import { openBrowser, screenshot, type Session } from "../support/browser";
@@ -19,7 +18,8 @@ describe("catalogue, tokens and Library pages", () => {
     page.setDefaultTimeout(60_000);
     await signInWithPassword(page, ENGINEER, "/northbeck/drafting").catch(async () => {
       // Under load the landing page can be slow to fire "load"; what matters is the session cookie.
-      if (!(await page.context().cookies()).some((c) => c.name.includes("session-token"))) await signInWithPassword(page, ENGINEER, "/northbeck/drafting");
+      if (!(await page.context().cookies()).some((c) => c.name.includes("session-token")))
+        await signInWithPassword(page, ENGINEER, "/northbeck/drafting");
     });
     for (const [path, name] of [
       ["/northbeck/drafting", "drafting-overview"],

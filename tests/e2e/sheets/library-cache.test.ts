@@ -1,5 +1,4 @@
 import { randomBytes } from "node:crypto";
-
 import type { Page } from "playwright-core";
 import { afterAll, describe, expect, it } from "vitest";
 
@@ -22,7 +21,11 @@ async function visit(path: string) {
 
 async function api(page: Page, method: "PUT" | "POST" | "DELETE", url: string, data?: unknown) {
   // A change made with the session cookie must name the app's origin, as the browser does for its own fetches.
-  const res = await page.request.fetch(url, { method, data, headers: { "content-type": "application/json", origin: new URL(BASE_URL).origin } });
+  const res = await page.request.fetch(url, {
+    method,
+    data,
+    headers: { "content-type": "application/json", origin: new URL(BASE_URL).origin },
+  });
   expect(res.status(), `${method} ${url}: ${await res.text()}`).toBeLessThan(300);
   return res.status() === 204 ? null : res.json();
 }
@@ -84,25 +87,38 @@ describe("Library pages from the cache", () => {
     expect(withdrawn.html).toContain(reason);
   });
 
-  it("a customers-only Library turns an anonymous visitor away from pages a customer has just read (cached)", { timeout: 180_000 }, async () => {
-    const { slug } = await publishedSource("quillon");
-    const cutter = await e2eDb()("cutters as c").join("vendors as d", "d.id", "c.vendor_id").where({ "d.slug": "quillon" }).orderBy("c.sku").first<{ sku: string }>("c.sku");
-    const paths = ["/quillon/library", `/quillon/library/${slug}`, `/quillon/library/${slug}/v/1`, `/quillon/library/cutters/${encodeURIComponent(cutter!.sku)}`];
-    const customer = await openBrowser();
-    sessions.push(customer);
-    await signInWithPassword(customer.page, "signs@example.test", "/quillon/library");
-    for (const path of paths) {
-      const res = await customer.page.request.get(path);
-      expect(res.status(), path).toBe(200);
-    }
-    for (const path of paths) {
-      const res = await visit(path);
-      expect(res.status, path).toBeGreaterThanOrEqual(300);
-      expect(res.status, path).toBeLessThan(400);
-      expect(res.location, path).toContain("/sign-in?callbackUrl=");
-      expect(res.html, path).not.toContain("data-sheet=");
-    }
-  });
+  it(
+    "a customers-only Library turns an anonymous visitor away from pages a customer has just read (cached)",
+    { timeout: 180_000 },
+    async () => {
+      const { slug } = await publishedSource("quillon");
+      const cutter = await e2eDb()("cutters as c")
+        .join("vendors as d", "d.id", "c.vendor_id")
+        .where({ "d.slug": "quillon" })
+        .orderBy("c.sku")
+        .first<{ sku: string }>("c.sku");
+      const paths = [
+        "/quillon/library",
+        `/quillon/library/${slug}`,
+        `/quillon/library/${slug}/v/1`,
+        `/quillon/library/cutters/${encodeURIComponent(cutter!.sku)}`,
+      ];
+      const customer = await openBrowser();
+      sessions.push(customer);
+      await signInWithPassword(customer.page, "signs@example.test", "/quillon/library");
+      for (const path of paths) {
+        const res = await customer.page.request.get(path);
+        expect(res.status(), path).toBe(200);
+      }
+      for (const path of paths) {
+        const res = await visit(path);
+        expect(res.status, path).toBeGreaterThanOrEqual(300);
+        expect(res.status, path).toBeLessThan(400);
+        expect(res.location, path).toContain("/sign-in?callbackUrl=");
+        expect(res.html, path).not.toContain("data-sheet=");
+      }
+    },
+  );
 
   it("a signed-in customer finds their own machines in the adapt panel of a cached sheet page", { timeout: 180_000 }, async () => {
     const { slug } = await publishedSource(VENDOR);
@@ -113,7 +129,14 @@ describe("Library pages from the cache", () => {
     await signInWithPassword(c.page, "maker@example.test", `/${VENDOR}/bench`);
     const name = `Cache probe router ${randomBytes(3).toString("hex")}`;
     const { machine } = (await api(c.page, "POST", `/api/v1/vendors/${VENDOR}/machines`, {
-      name, rpmMin: 8000, rpmMax: 24000, powerKw: 1.5, maxFeedMmMin: "5000 mm/min", rigidity: "moderate", spindleKind: "constant-torque", units: "metric",
+      name,
+      rpmMin: 8000,
+      rpmMax: 24000,
+      powerKw: 1.5,
+      maxFeedMmMin: "5000 mm/min",
+      rigidity: "moderate",
+      spindleKind: "constant-torque",
+      units: "metric",
     })) as { machine: { id: string } };
     try {
       await c.page.goto(`/${VENDOR}/library/${slug}`);

@@ -1,5 +1,4 @@
 import { randomBytes } from "node:crypto";
-
 import type { Page } from "playwright-core";
 import { afterAll, describe, expect, it } from "vitest";
 
@@ -39,7 +38,10 @@ async function submitForReview(page: Page, note: string) {
   await page.getByText("No problems found.").waitFor({ timeout: 60_000 });
   await waitSaved(page);
   await page.locator("#change-note").fill(note);
-  await Promise.all([page.waitForURL((u) => !u.pathname.endsWith("/edit"), { timeout: 90_000, waitUntil: "commit" }), page.getByRole("button", { name: "Submit for review" }).click()]);
+  await Promise.all([
+    page.waitForURL((u) => !u.pathname.endsWith("/edit"), { timeout: 90_000, waitUntil: "commit" }),
+    page.getByRole("button", { name: "Submit for review" }).click(),
+  ]);
   await page.getByText("In review").first().waitFor({ timeout: 45_000 });
 }
 
@@ -84,7 +86,10 @@ describe("recipe sheet journey", () => {
     await a.page.locator("#machineClassId").selectOption({ label: "Light belt-drive router" });
     await a.page.locator("#slug").fill(slug);
     await screenshot(a.page, "new-sheet-form");
-    await Promise.all([a.page.waitForURL(`**${sheetPath}/edit`, { timeout: 90_000, waitUntil: "commit" }), a.page.getByRole("button", { name: "Create the draft" }).click()]);
+    await Promise.all([
+      a.page.waitForURL(`**${sheetPath}/edit`, { timeout: 90_000, waitUntil: "commit" }),
+      a.page.getByRole("button", { name: "Create the draft" }).click(),
+    ]);
 
     // A feed without its unit: the problem list names the line, and clicking it selects that line.
     await setFirstFeed(a.page, "1800");
@@ -132,7 +137,10 @@ describe("recipe sheet journey", () => {
 
     // Version 2 lowers the first operation's feed; the diff shows that change and nothing else.
     await a.page.goto(sheetPath);
-    await Promise.all([a.page.waitForURL(`**${sheetPath}/edit`, { timeout: 90_000, waitUntil: "commit" }), a.page.getByRole("button", { name: "Start a new version" }).click()]);
+    await Promise.all([
+      a.page.waitForURL(`**${sheetPath}/edit`, { timeout: 90_000, waitUntil: "commit" }),
+      a.page.getByRole("button", { name: "Start a new version" }).click(),
+    ]);
     await setFirstFeed(a.page, "1620 mm/min");
     await submitForReview(a.page, "Feed lowered 10 % after chatter reports.");
     await approveAndPublish(r.page, sheetPath, 2);

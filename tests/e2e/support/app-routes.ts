@@ -4,7 +4,8 @@ import path from "node:path";
 export type AppRoute = { pattern: string; kind: "page" | "api"; methods: string[]; file: string };
 
 const APP_DIR = path.resolve(import.meta.dirname, "../../../app");
-const METHOD_RE = /export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b|export\s*\{[^}]*\bas\s+(GET|POST|PUT|PATCH|DELETE)\b/g;
+const METHOD_RE =
+  /export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b|export\s*\{[^}]*\bas\s+(GET|POST|PUT|PATCH|DELETE)\b/g;
 
 function walk(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {

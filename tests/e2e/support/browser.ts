@@ -1,15 +1,21 @@
 import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-
-import { type BrowserContext, chromium, type Page } from "playwright-core";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
 
 import { BASE_URL, SCREENSHOT_DIR } from "./env";
 
 // Flags for Debian's Chromium as root on a machine without a network (see DEVELOPERS.md).
 const CHROMIUM_ARGS = [
-  "--headless=new", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
-  "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage",
+  "--headless=new",
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+  "--disable-dev-shm-usage",
 ];
 
 export type Session = { context: BrowserContext; page: Page; close: () => Promise<void> };

@@ -8,6 +8,9 @@ export async function signInWithPassword(page: Page, email: string, callbackUrl 
   await page.goto(`/sign-in?callbackUrl=${encodeURIComponent(callbackUrl)}`);
   await page.locator("#pw-email").fill(email);
   await page.locator("#pw-password").fill(password);
-  await Promise.all([page.waitForURL((url) => !url.pathname.startsWith("/sign-in"), { timeout: 30_000 }), page.getByRole("button", { name: "Sign in", exact: true }).click()]);
+  await Promise.all([
+    page.waitForURL((url) => !url.pathname.startsWith("/sign-in"), { timeout: 30_000 }),
+    page.getByRole("button", { name: "Sign in", exact: true }).click(),
+  ]);
   await screenshot(page, `signed-in-${email}`);
 }

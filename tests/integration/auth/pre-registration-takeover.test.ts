@@ -8,7 +8,7 @@ import { Unauthenticated } from "@/lib/errors/domain-errors";
 import { acceptInvitation } from "@/lib/members/accept-invitation";
 import { inviteMember } from "@/lib/members/invite-member";
 import { confirmEmail } from "@/lib/users/confirm-email";
-import { resendVerification, RESEND_LIMITS } from "@/lib/users/resend-verification";
+import { RESEND_LIMITS, resendVerification } from "@/lib/users/resend-verification";
 import { signUpCustomer } from "@/lib/users/sign-up-customer";
 import { createVendor as createVendorWorkspace } from "@/lib/vendors/create-vendor";
 import { createUser, createVendorWithStaff, FACTORY_PASSWORD, uniq } from "@/tests/factories/foundation";
@@ -18,14 +18,21 @@ const ATTACKER_PASSWORD = "attacker-password-1";
 const ip = (n: number) => ({ "x-forwarded-for": `10.44.0.${n}` });
 
 async function linkMailedTo(email: string): Promise<string> {
-  const [job] = await db("pgboss.job").where({ name: "mail.send" }).whereRaw("data->>'to' = ?", [email]).whereRaw("data->>'subject' like 'Confirm%'").orderBy("created_on", "desc").select("data");
+  const [job] = await db("pgboss.job")
+    .where({ name: "mail.send" })
+    .whereRaw("data->>'to' = ?", [email])
+    .whereRaw("data->>'subject' like 'Confirm%'")
+    .orderBy("created_on", "desc")
+    .select("data");
   const token = /verify-email\?token=([\w.-]+)/.exec(job.data.text)?.[1];
   if (!token) throw new Error("no confirmation link");
   return token;
 }
 
 async function roleOf(vendorId: string, email: string) {
-  return (await db("members as m").join("users as u", "u.id", "m.user_id").where({ "m.vendor_id": vendorId, "u.email": email }).first("m.role"))?.role;
+  return (
+    await db("members as m").join("users as u", "u.id", "m.user_id").where({ "m.vendor_id": vendorId, "u.email": email }).first("m.role")
+  )?.role;
 }
 
 describe("e-mail confirmation for password accounts", () => {
@@ -59,7 +66,8 @@ describe("e-mail confirmation for password accounts", () => {
     const v = await createVendorWithStaff();
     const email = `${uniq("cust")}@example.test`;
     await signUpCustomer({ vendorId: v.vendor.id, name: "A", email, password: "a-long-password" });
-    const count = async () => Number((await db("pgboss.job").where({ name: "mail.send" }).whereRaw("data->>'to' = ?", [email]).count("* as n"))[0].n);
+    const count = async () =>
+      Number((await db("pgboss.job").where({ name: "mail.send" }).whereRaw("data->>'to' = ?", [email]).count("* as n"))[0].n);
     // The sign-up's own mail counts against the same per-address budget.
     for (let i = 1; i < RESEND_LIMITS.perAccount.limit; i++) await resendVerification({ email, ip: "10.45.0.1" });
     expect(await count()).toBe(RESEND_LIMITS.perAccount.limit);
@@ -72,7 +80,8 @@ describe("e-mail confirmation for password accounts", () => {
   it("signing up again and again with an unconfirmed address does not mail it without end", async () => {
     const v = await createVendorWithStaff();
     const email = `victim-${uniq("x")}@example.test`;
-    for (let i = 0; i < RESEND_LIMITS.perAccount.limit; i++) await signUpCustomer({ vendorId: v.vendor.id, name: "Spam", email, password: `spam-password-${i}` });
+    for (let i = 0; i < RESEND_LIMITS.perAccount.limit; i++)
+      await signUpCustomer({ vendorId: v.vendor.id, name: "Spam", email, password: `spam-password-${i}` });
     await expect(signUpCustomer({ vendorId: v.vendor.id, name: "Spam", email, password: "spam-password-x" })).rejects.toThrow("Too many");
     await expect(resendVerification({ email, ip: "10.45.0.9" })).rejects.toThrow("Too many");
     const mails = await db("pgboss.job").where({ name: "mail.send" }).whereRaw("data->>'to' = ?", [email]).count("* as n");
@@ -87,7 +96,9 @@ describe("e-mail confirmation for password accounts", () => {
     expect(row.password_hash).toBeNull();
     const confirmed = await createUser();
     await knexAdapter.updateUser!({ id: confirmed.id, emailVerified: new Date() });
-    await expect(authorizePassword({ email: confirmed.email, password: FACTORY_PASSWORD }, ip(2))).resolves.toMatchObject({ id: confirmed.id });
+    await expect(authorizePassword({ email: confirmed.email, password: FACTORY_PASSWORD }, ip(2))).resolves.toMatchObject({
+      id: confirmed.id,
+    });
   });
 });
 
@@ -98,13 +109,26 @@ describe("pre-registration takeover of an invited account", () => {
     // 1. The attacker signs up with the address before the invitation.
     await signUpCustomer({ vendorId: v.vendor.id, name: "Not the new hire", email, password: ATTACKER_PASSWORD });
     // 2. The admin invites the real person.
-    const { token } = await inviteMember({ vendorId: v.vendor.id, vendorSlug: v.vendor.slug, vendorName: v.vendor.name, actorUserId: v.admin.user.id, email, role: "admin" });
+    const { token } = await inviteMember({
+      vendorId: v.vendor.id,
+      vendorSlug: v.vendor.slug,
+      vendorName: v.vendor.name,
+      actorUserId: v.admin.user.id,
+      email,
+      role: "admin",
+    });
     // 3. The attacker cannot sign in: the address was never confirmed.
     await expect(authorizePassword({ email, password: ATTACKER_PASSWORD }, ip(3))).rejects.toThrow("email_unverified");
     // 4. The attacker does not have the invitation link; the role is not attached by sign-up or by the invitation alone.
     expect(await roleOf(v.vendor.id, email)).toBe("customer");
     // 5. The invitee opens the mailed link and chooses a password: the account becomes theirs, with the role.
-    const result = await acceptInvitation({ vendorId: v.vendor.id, token, name: "Real New Hire", password: "the-real-password", sessionUserId: null });
+    const result = await acceptInvitation({
+      vendorId: v.vendor.id,
+      token,
+      name: "Real New Hire",
+      password: "the-real-password",
+      sessionUserId: null,
+    });
     expect(result.created).toBe(true);
     expect(await roleOf(v.vendor.id, email)).toBe("admin");
     await expect(authorizePassword({ email, password: "the-real-password" }, ip(4))).resolves.toMatchObject({ email });
@@ -124,7 +148,14 @@ describe("pre-registration takeover of an invited account", () => {
     await expect(confirmEmail({ token: link, password: "" })).rejects.toThrow("not the password");
     expect((await db("users").where({ email }).first("email_verified"))?.email_verified).toBeNull();
     // The invitee accepts the admin invitation; the squatter's password still does not sign in.
-    const { token } = await inviteMember({ vendorId: v.vendor.id, vendorSlug: v.vendor.slug, vendorName: v.vendor.name, actorUserId: v.admin.user.id, email, role: "admin" });
+    const { token } = await inviteMember({
+      vendorId: v.vendor.id,
+      vendorSlug: v.vendor.slug,
+      vendorName: v.vendor.name,
+      actorUserId: v.admin.user.id,
+      email,
+      role: "admin",
+    });
     await acceptInvitation({ vendorId: v.vendor.id, token, name: "Real New Hire", password: "the-real-password", sessionUserId: null });
     expect(await roleOf(v.vendor.id, email)).toBe("admin");
     await expect(authorizePassword({ email, password: ATTACKER_PASSWORD }, ip(9))).resolves.toBeNull();
@@ -136,7 +167,13 @@ describe("pre-registration takeover of an invited account", () => {
     const email = `founder-${uniq("x")}@example.test`;
     const other = await createVendorWithStaff();
     await signUpCustomer({ vendorId: other.vendor.id, name: "Squatter", email, password: ATTACKER_PASSWORD });
-    const { vendorId, invitationToken } = await createVendorWorkspace({ actorUserId: operator.id, slug: uniq("ws"), name: "New Workspace", accentColor: "#2f5d8a", adminEmail: email });
+    const { vendorId, invitationToken } = await createVendorWorkspace({
+      actorUserId: operator.id,
+      slug: uniq("ws"),
+      name: "New Workspace",
+      accentColor: "#2f5d8a",
+      adminEmail: email,
+    });
     await expect(authorizePassword({ email, password: ATTACKER_PASSWORD }, ip(6))).rejects.toThrow("email_unverified");
     expect(await roleOf(vendorId, email)).toBeUndefined();
     await acceptInvitation({ vendorId, token: invitationToken, name: "Founder", password: "founder-password", sessionUserId: null });
@@ -147,13 +184,26 @@ describe("pre-registration takeover of an invited account", () => {
   it("a confirmed account accepts only while signed in as itself, and keeps its password", async () => {
     const v = await createVendorWithStaff();
     const existing = await createUser();
-    const { token } = await inviteMember({ vendorId: v.vendor.id, vendorSlug: v.vendor.slug, vendorName: v.vendor.name, actorUserId: v.admin.user.id, email: existing.email, role: "engineer" });
-    await expect(acceptInvitation({ vendorId: v.vendor.id, token, name: "X", password: "replaced-password", sessionUserId: null })).rejects.toBeInstanceOf(Unauthenticated);
-    await expect(acceptInvitation({ vendorId: v.vendor.id, token, sessionUserId: v.support.user.id })).rejects.toBeInstanceOf(Unauthenticated);
+    const { token } = await inviteMember({
+      vendorId: v.vendor.id,
+      vendorSlug: v.vendor.slug,
+      vendorName: v.vendor.name,
+      actorUserId: v.admin.user.id,
+      email: existing.email,
+      role: "engineer",
+    });
+    await expect(
+      acceptInvitation({ vendorId: v.vendor.id, token, name: "X", password: "replaced-password", sessionUserId: null }),
+    ).rejects.toBeInstanceOf(Unauthenticated);
+    await expect(acceptInvitation({ vendorId: v.vendor.id, token, sessionUserId: v.support.user.id })).rejects.toBeInstanceOf(
+      Unauthenticated,
+    );
     expect(await roleOf(v.vendor.id, existing.email)).toBeUndefined();
     // The refused attempts did not use the invitation up.
     const result = await acceptInvitation({ vendorId: v.vendor.id, token, sessionUserId: existing.id });
     expect(result).toMatchObject({ created: false, role: "engineer" });
-    await expect(authorizePassword({ email: existing.email, password: FACTORY_PASSWORD }, ip(8))).resolves.toMatchObject({ id: existing.id });
+    await expect(authorizePassword({ email: existing.email, password: FACTORY_PASSWORD }, ip(8))).resolves.toMatchObject({
+      id: existing.id,
+    });
   });
 });

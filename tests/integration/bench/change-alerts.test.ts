@@ -5,10 +5,10 @@ import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { createAlertStopToken, readAlertStopToken } from "@/lib/bench/alert-token";
 import { createSetup } from "@/lib/bench/create-setup";
 import { createMachine } from "@/lib/bench/machines";
-import { setMailPreference } from "@/lib/mail-preferences/mail-preferences";
 import { sendChangeAlerts } from "@/lib/bench/send-change-alerts";
 import { db } from "@/lib/db/knex";
 import { getBoss } from "@/lib/jobs/boss";
+import { setMailPreference } from "@/lib/mail-preferences/mail-preferences";
 import { createBenchSheet, supersede, weakMachineFields } from "@/tests/factories/bench";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
 
@@ -17,13 +17,19 @@ afterAll(async () => {
 });
 
 const mailsTo = async (email: string) =>
-  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map((r: { data: { subject: string; text: string; html: string; headers: Record<string, string> } }) => r.data);
+  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map(
+    (r: { data: { subject: string; text: string; html: string; headers: Record<string, string> } }) => r.data,
+  );
 
 async function customerWithSetups(vendorId: string, versionId: string, count: number) {
   const member = await createMember(vendorId, "customer");
   const machine = await createMachine({ vendorId, userId: member.user.id, fields: machineFieldsSchema.parse(weakMachineFields) });
   for (let i = 0; i < count; i++) {
-    await createSetup({ vendorId, userId: member.user.id, input: setupCreateSchema.parse({ versionId, machineId: machine.id, operationIndex: i % 2 }) });
+    await createSetup({
+      vendorId,
+      userId: member.user.id,
+      input: setupCreateSchema.parse({ versionId, machineId: machine.id, operationIndex: i % 2 }),
+    });
   }
   return member.user;
 }
@@ -69,8 +75,18 @@ describe("change alerts", () => {
   it("ignores a first publication and a withdrawal", async () => {
     const { vendor } = await createVendorWithStaff();
     const sheet = await createBenchSheet(vendor.id);
-    expect(await sendChangeAlerts({ type: "version.published", vendorId: vendor.id, sheetId: sheet.sheetId, versionId: sheet.versionId, supersededVersionId: null })).toBe(0);
-    expect(await sendChangeAlerts({ type: "version.withdrawn", vendorId: vendor.id, sheetId: sheet.sheetId, versionId: sheet.versionId })).toBe(0);
+    expect(
+      await sendChangeAlerts({
+        type: "version.published",
+        vendorId: vendor.id,
+        sheetId: sheet.sheetId,
+        versionId: sheet.versionId,
+        supersededVersionId: null,
+      }),
+    ).toBe(0);
+    expect(
+      await sendChangeAlerts({ type: "version.withdrawn", vendorId: vendor.id, sheetId: sheet.sheetId, versionId: sheet.versionId }),
+    ).toBe(0);
   });
 
   it("re-adapts both versions to the machine as it is now, so a machine edit does not show up as a sheet change", async () => {

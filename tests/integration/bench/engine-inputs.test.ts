@@ -5,9 +5,9 @@ import { materialFieldsSchema } from "@/content-schema/catalogue-material";
 import { machineFieldsSchema } from "@/content-schema/machine-fields";
 import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { adaptOperation, buildAdaptInput } from "@/lib/adapt/adapt-context";
+import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { createSetup } from "@/lib/bench/create-setup";
 import { getSetup } from "@/lib/bench/list-setups";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { machineToInput } from "@/lib/bench/machine-rows";
 import { createMachine, getMachine } from "@/lib/bench/machines";
 import { getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
@@ -26,11 +26,39 @@ describe("engine inputs from stored rows", () => {
     const saved = await saveMaterial({
       vendorId: vendor.id,
       userId: null,
-      fields: materialFieldsSchema.parse({ slug: uniq("al"), name: "Aluminium", materialGroup: "non-ferrous", vcMinMpm: 150, vcMaxMpm: 400, minChipLoadMm: 0.02, kcNmm2: 700, chipLoadMinPctD: 0.6, chipLoadMaxPctD: 1.4, kc11Nmm2: 500, mc: 0.25 }),
+      fields: materialFieldsSchema.parse({
+        slug: uniq("al"),
+        name: "Aluminium",
+        materialGroup: "non-ferrous",
+        vcMinMpm: 150,
+        vcMaxMpm: 400,
+        minChipLoadMm: 0.02,
+        kcNmm2: 700,
+        chipLoadMinPctD: 0.6,
+        chipLoadMaxPctD: 1.4,
+        kc11Nmm2: 500,
+        mc: 0.25,
+      }),
     });
-    expect(await getMaterialById({ vendorId: vendor.id, id: saved.id })).toMatchObject({ chipLoadMinPctD: 0.6, chipLoadMaxPctD: 1.4, kc11Nmm2: 500, mc: 0.25 });
+    expect(await getMaterialById({ vendorId: vendor.id, id: saved.id })).toMatchObject({
+      chipLoadMinPctD: 0.6,
+      chipLoadMaxPctD: 1.4,
+      kc11Nmm2: 500,
+      mc: 0.25,
+    });
 
-    const [raw] = await db("materials").insert({ vendor_id: vendor.id, slug: uniq("pc"), name: "PC", material_group: "plastics", vc_min_mpm: 150, vc_max_mpm: 300, min_chip_load_mm: 0.05, kc_nmm2: 130 }).returning(["chip_load_min_pct_d", "chip_load_max_pct_d", "kc11_nmm2"]);
+    const [raw] = await db("materials")
+      .insert({
+        vendor_id: vendor.id,
+        slug: uniq("pc"),
+        name: "PC",
+        material_group: "plastics",
+        vc_min_mpm: 150,
+        vc_max_mpm: 300,
+        min_chip_load_mm: 0.05,
+        kc_nmm2: 130,
+      })
+      .returning(["chip_load_min_pct_d", "chip_load_max_pct_d", "kc11_nmm2"]);
     expect(raw).toEqual({ chip_load_min_pct_d: 1.2, chip_load_max_pct_d: 3, kc11_nmm2: null });
   });
 
@@ -39,21 +67,46 @@ describe("engine inputs from stored rows", () => {
     const saved = await saveMachineClass({
       vendorId: vendor.id,
       userId: null,
-      fields: machineClassFieldsSchema.parse({ slug: uniq("r"), name: "Router", rpmMin: 6000, rpmMax: 24000, powerKw: 2.2, maxFeedMmMin: 10000, rigidity: 0.7, spindleKind: "constant-torque", ratedRpm: 18000 }),
+      fields: machineClassFieldsSchema.parse({
+        slug: uniq("r"),
+        name: "Router",
+        rpmMin: 6000,
+        rpmMax: 24000,
+        powerKw: 2.2,
+        maxFeedMmMin: 10000,
+        rigidity: 0.7,
+        spindleKind: "constant-torque",
+        ratedRpm: 18000,
+      }),
     });
-    expect(await getMachineClassById({ vendorId: vendor.id, id: saved.id })).toMatchObject({ spindleKind: "constant-torque", ratedRpm: 18000 });
+    expect(await getMachineClassById({ vendorId: vendor.id, id: saved.id })).toMatchObject({
+      spindleKind: "constant-torque",
+      ratedRpm: 18000,
+    });
   });
 
   it("hands every new field of the sheet, its catalogue rows and the machine to the engine", async () => {
     const { vendor, customer } = await createVendorWithStaff();
     const sheet = await createBenchSheet(vendor.id);
-    const machine = await createMachine({ vendorId: vendor.id, userId: customer.user.id, fields: machineFieldsSchema.parse({ ...weakMachineFields, spindleKind: "constant-torque", ratedRpm: "12000", zThrustN: "150" }) });
-    expect(await getMachine({ vendorId: vendor.id, userId: customer.user.id, machineId: machine.id })).toMatchObject({ spindleKind: "constant-torque", ratedRpm: 12000, zThrustN: 150 });
+    const machine = await createMachine({
+      vendorId: vendor.id,
+      userId: customer.user.id,
+      fields: machineFieldsSchema.parse({ ...weakMachineFields, spindleKind: "constant-torque", ratedRpm: "12000", zThrustN: "150" }),
+    });
+    expect(await getMachine({ vendorId: vendor.id, userId: customer.user.id, machineId: machine.id })).toMatchObject({
+      spindleKind: "constant-torque",
+      ratedRpm: 12000,
+      zThrustN: 150,
+    });
     const context = (await loadAdaptContext({ vendorId: vendor.id, versionId: sheet.versionId }))!;
     const input = buildAdaptInput(context, 0, machineToInput(machine), {}, { entryCapability: "plunge-only", units: "imperial" });
     // The factory's catalogue: 3.175 mm cutter with 12 mm of flute in cast acrylic (its band 1.2–3.5 % of D).
     expect(input.operation).toMatchObject({ cornerForm: "square", fluteLengthMm: 12, entry: "ramp", rampAngleDeg: 3 });
-    expect(input.material).toMatchObject({ chipLoadPctOfD: { min: 0.012, max: 0.035 }, minChipLoadMm: 0.05, specificCuttingForceNmm2: 100 });
+    expect(input.material).toMatchObject({
+      chipLoadPctOfD: { min: 0.012, max: 0.035 },
+      minChipLoadMm: 0.05,
+      specificCuttingForceNmm2: 100,
+    });
     expect(input.referenceMachine).toMatchObject({ rigidity: 0.8, maxFeedMmMin: 10000, maxRpm: 24000 });
     expect(input.machine).toMatchObject({ spindleKind: "constant-torque", ratedRpm: 12000, zThrustN: 150 });
     expect(input.entryCapability).toBe("plunge-only");
@@ -63,19 +116,37 @@ describe("engine inputs from stored rows", () => {
   it("saves the customer's CAM entry capability with the setup and recomputes with it on the server", async () => {
     const { vendor, customer } = await createVendorWithStaff();
     const sheet = await createBenchSheet(vendor.id);
-    const machine = await createMachine({ vendorId: vendor.id, userId: customer.user.id, fields: machineFieldsSchema.parse({ ...weakMachineFields, zThrustN: "150" }) });
-    const input = setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id, entryCapability: "plunge-only", result: { plungeFeedMmMin: 9999 } });
+    const machine = await createMachine({
+      vendorId: vendor.id,
+      userId: customer.user.id,
+      fields: machineFieldsSchema.parse({ ...weakMachineFields, zThrustN: "150" }),
+    });
+    const input = setupCreateSchema.parse({
+      versionId: sheet.versionId,
+      machineId: machine.id,
+      entryCapability: "plunge-only",
+      result: { plungeFeedMmMin: 9999 },
+    });
     const { id } = await createSetup({ vendorId: vendor.id, userId: customer.user.id, input });
     const setup = (await getSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }))!;
     expect(setup.entryCapability).toBe("plunge-only");
     const context = (await loadAdaptContext({ vendorId: vendor.id, versionId: sheet.versionId }))!;
-    const expected = adaptOperation(context, 0, machineToInput(machine), { stickoutMm: 15 }, { entryCapability: "plunge-only", units: "metric" });
+    const expected = adaptOperation(
+      context,
+      0,
+      machineToInput(machine),
+      { stickoutMm: 15 },
+      { entryCapability: "plunge-only", units: "metric" },
+    );
     expect(setup.result.plungeFeedMmMin).toBeCloseTo(expected.plungeFeedMmMin!, 9);
     expect(setup.result.axialDepthMm).toBeCloseTo(expected.axialDepthMm, 9);
 
     // A capability that is not one of the three is a field error, not a stored value.
     const bad = setupCreateSchema.safeParse({ versionId: sheet.versionId, machineId: machine.id, entryCapability: "teleport" });
     expect(bad.success).toBe(false);
-    expect(bad.error?.issues[0]).toMatchObject({ path: ["entryCapability"], message: expect.stringMatching(/straight plunge only, ramp or helix/) });
+    expect(bad.error?.issues[0]).toMatchObject({
+      path: ["entryCapability"],
+      message: expect.stringMatching(/straight plunge only, ramp or helix/),
+    });
   });
 });

@@ -18,7 +18,7 @@ describe("machine validation", () => {
     expect(errors.maxFeedMmMin).toMatch(/feed/i);
   });
 
-  it("reads feeds and stick-outs with their units (70 in/min = 1778 mm/min, 3/4\" = 19.05 mm)", () => {
+  it('reads feeds and stick-outs with their units (70 in/min = 1778 mm/min, 3/4" = 19.05 mm)', () => {
     const parsed = machineFieldsSchema.parse({ ...weakMachineFields, maxFeedMmMin: "70 in/min", stickoutMm: '3/4"' });
     // 1 in = 25.4 mm exactly (NIST SP 811).
     expect(parsed.maxFeedMmMin).toBeCloseTo(70 * 25.4, 9);
@@ -36,16 +36,29 @@ describe("machines are per vendor and per customer", () => {
     expect((await listMachines({ vendorId: vendor.id, userId: customer.user.id })).map((m) => m.id)).toEqual([mine.id]);
     expect(await listMachines({ vendorId: vendor.id, userId: other.user.id })).toEqual([]);
     expect(await getMachine({ vendorId: vendor.id, userId: other.user.id, machineId: mine.id })).toBeNull();
-    await expect(updateMachine({ vendorId: vendor.id, userId: other.user.id, machineId: mine.id, fields })).rejects.toMatchObject({ code: "not_found" });
-    await expect(deleteMachine({ vendorId: vendor.id, userId: other.user.id, machineId: mine.id })).rejects.toMatchObject({ code: "not_found" });
+    await expect(updateMachine({ vendorId: vendor.id, userId: other.user.id, machineId: mine.id, fields })).rejects.toMatchObject({
+      code: "not_found",
+    });
+    await expect(deleteMachine({ vendorId: vendor.id, userId: other.user.id, machineId: mine.id })).rejects.toMatchObject({
+      code: "not_found",
+    });
   });
 
   it("does not find a machine through another vendor", async () => {
     const a = await createVendorWithStaff();
     const b = await createVendorWithStaff();
-    const machine = await createMachine({ vendorId: a.vendor.id, userId: a.customer.user.id, fields: machineFieldsSchema.parse(weakMachineFields) });
+    const machine = await createMachine({
+      vendorId: a.vendor.id,
+      userId: a.customer.user.id,
+      fields: machineFieldsSchema.parse(weakMachineFields),
+    });
     expect(await getMachine({ vendorId: b.vendor.id, userId: a.customer.user.id, machineId: machine.id })).toBeNull();
-    const updated = await updateMachine({ vendorId: a.vendor.id, userId: a.customer.user.id, machineId: machine.id, fields: machineFieldsSchema.parse({ ...weakMachineFields, name: "Desk router, new spindle", powerKw: "1.5" }) });
+    const updated = await updateMachine({
+      vendorId: a.vendor.id,
+      userId: a.customer.user.id,
+      machineId: machine.id,
+      fields: machineFieldsSchema.parse({ ...weakMachineFields, name: "Desk router, new spindle", powerKw: "1.5" }),
+    });
     expect(updated).toMatchObject({ name: "Desk router, new spindle", powerKw: 1.5 });
     await deleteMachine({ vendorId: a.vendor.id, userId: a.customer.user.id, machineId: machine.id });
     expect(await listMachines({ vendorId: a.vendor.id, userId: a.customer.user.id })).toEqual([]);

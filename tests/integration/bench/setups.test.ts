@@ -12,7 +12,11 @@ import { mustExist } from "@/tests/support/must-exist";
 async function fixture() {
   const staff = await createVendorWithStaff();
   const sheet = await createBenchSheet(staff.vendor.id);
-  const machine = await createMachine({ vendorId: staff.vendor.id, userId: staff.customer.user.id, fields: machineFieldsSchema.parse(weakMachineFields) });
+  const machine = await createMachine({
+    vendorId: staff.vendor.id,
+    userId: staff.customer.user.id,
+    fields: machineFieldsSchema.parse(weakMachineFields),
+  });
   return { ...staff, sheet, machine };
 }
 
@@ -20,7 +24,14 @@ describe("saving a setup", () => {
   it("pins the version and stores numbers the server computed, ignoring numbers sent by the client", async () => {
     const { vendor, customer, sheet, machine } = await fixture();
     // A client that sends its own result: the schema drops it, the server recomputes.
-    const input = setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id, operationIndex: "0", ae: "", rpm: 99999, result: { rpm: 99999 } });
+    const input = setupCreateSchema.parse({
+      versionId: sheet.versionId,
+      machineId: machine.id,
+      operationIndex: "0",
+      ae: "",
+      rpm: 99999,
+      result: { rpm: 99999 },
+    });
     const { id } = await createSetup({ vendorId: vendor.id, userId: customer.user.id, input });
     const row = mustExist(await getSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }), "setup");
     expect(row.sheetVersionId).toBe(sheet.versionId);
@@ -46,14 +57,23 @@ describe("saving a setup", () => {
     const { vendor, sheet, machine } = await fixture();
     const stranger = await createMember(vendor.id, "customer");
     const input = setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id });
-    await expect(createSetup({ vendorId: vendor.id, userId: stranger.user.id, input })).rejects.toMatchObject({ code: "invalid_input", fieldErrors: { machineId: [expect.any(String)] } });
+    await expect(createSetup({ vendorId: vendor.id, userId: stranger.user.id, input })).rejects.toMatchObject({
+      code: "invalid_input",
+      fieldErrors: { machineId: [expect.any(String)] },
+    });
     const other = await createVendorWithStaff();
-    await expect(createSetup({ vendorId: other.vendor.id, userId: stranger.user.id, input })).rejects.toMatchObject({ code: "invalid_input" });
+    await expect(createSetup({ vendorId: other.vendor.id, userId: stranger.user.id, input })).rejects.toMatchObject({
+      code: "invalid_input",
+    });
   });
 
   it("lists setups with their version and a newer version once the sheet is superseded", async () => {
     const { vendor, customer, sheet, machine } = await fixture();
-    const { id } = await createSetup({ vendorId: vendor.id, userId: customer.user.id, input: setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id }) });
+    const { id } = await createSetup({
+      vendorId: vendor.id,
+      userId: customer.user.id,
+      input: setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id }),
+    });
     expect((await getSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }))?.newerVersionNumber).toBeNull();
     await supersede(vendor.id, sheet.sheetId);
     const [summary] = await listSetups({ vendorId: vendor.id, userId: customer.user.id });

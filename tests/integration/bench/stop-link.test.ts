@@ -6,9 +6,17 @@ import { createAlertStopToken } from "@/lib/bench/alert-token";
 import { wantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
-const url = (vendorSlug: string, token: string) => `http://127.0.0.1:3000/api/v1/vendors/${vendorSlug}/setups/alerts/stop?token=${encodeURIComponent(token)}`;
+const url = (vendorSlug: string, token: string) =>
+  `http://127.0.0.1:3000/api/v1/vendors/${vendorSlug}/setups/alerts/stop?token=${encodeURIComponent(token)}`;
 // What a mail client's one-click unsubscribe sends (RFC 8058), and what the page's button sends.
-const stop = (vendorSlug: string, token: string) => POST(new NextRequest(url(vendorSlug, token), { method: "POST", body: "List-Unsubscribe=One-Click", headers: { "content-type": "application/x-www-form-urlencoded" } }));
+const stop = (vendorSlug: string, token: string) =>
+  POST(
+    new NextRequest(url(vendorSlug, token), {
+      method: "POST",
+      body: "List-Unsubscribe=One-Click",
+      headers: { "content-type": "application/x-www-form-urlencoded" },
+    }),
+  );
 
 describe("the one-click stop link", () => {
   it("only asks on GET, because mail scanners open links: the button POSTs", async () => {

@@ -15,7 +15,9 @@ import { createVendorWithStaff } from "@/tests/factories/foundation";
 
 const HEADER = "sku,name,diameter_mm,flutes,flute_length_mm,overall_length_mm,shank_mm,geometry";
 // The 8-byte PNG signature and an IHDR chunk header: enough for content sniffing (PNG spec, section 5.2).
-const PNG = Uint8Array.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, 0, 0, 0, 1, 0, 0, 0, 1, 8, 6, 0, 0, 0]);
+const PNG = Uint8Array.from([
+  0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, 0, 0, 0, 1, 0, 0, 0, 1, 8, 6, 0, 0, 0,
+]);
 
 describe("cutter catalogue", () => {
   it("creates, updates and lists cutters within one vendor; a duplicate SKU is a field error", async () => {
@@ -29,13 +31,17 @@ describe("cutter catalogue", () => {
     expect((dup as InvalidInput).fieldErrors?.sku).toBeDefined();
     expect(await listCutters({ vendorId: other.vendor.id })).toEqual([]);
     await expect(updateCutter({ vendorId: other.vendor.id, userId: null, id: cutter.id, fields })).rejects.toBeInstanceOf(NotFound);
-    expect(await db("audit_log").where({ vendor_id: vendor.id }).pluck("action")).toEqual(expect.arrayContaining(["cutter.create", "cutter.update"]));
+    expect(await db("audit_log").where({ vendor_id: vendor.id }).pluck("action")).toEqual(
+      expect.arrayContaining(["cutter.create", "cutter.update"]),
+    );
   });
 
   it("imports nothing when one row is wrong (all-or-nothing), naming the row and the cell", async () => {
     const { vendor, engineer } = await createVendorWithStaff();
     const csv = `${HEADER}\nA-1,One,6,2,18,50,6,upcut\nA-2,Two,6,zero,18,50,6,upcut\n`;
-    const error = await importCutters({ vendorId: vendor.id, userId: engineer.user.id, csv, mode: "all-or-nothing" }).catch((e: unknown) => e);
+    const error = await importCutters({ vendorId: vendor.id, userId: engineer.user.id, csv, mode: "all-or-nothing" }).catch(
+      (e: unknown) => e,
+    );
     expect(error).toBeInstanceOf(InvalidInput);
     expect((error as InvalidInput).fieldErrors?.csv?.[0]).toMatch(/^Row 3, flutes:/);
     expect(await listCutters({ vendorId: vendor.id })).toEqual([]);
@@ -45,7 +51,13 @@ describe("cutter catalogue", () => {
     const { vendor, engineer } = await createVendorWithStaff();
     const progress: number[] = [];
     const clean = `${HEADER}\nA-1,One,6,2,18,50,6,upcut\n"A-2","Two, with comma",4,3,12,50,4,straight\n`;
-    const result = await importCutters({ vendorId: vendor.id, userId: engineer.user.id, csv: clean, mode: "all-or-nothing", onProgress: (done) => progress.push(done) });
+    const result = await importCutters({
+      vendorId: vendor.id,
+      userId: engineer.user.id,
+      csv: clean,
+      mode: "all-or-nothing",
+      onProgress: (done) => progress.push(done),
+    });
     expect([result.imported, progress]).toEqual([2, [1, 2]]);
     expect((await getCutterBySku({ vendorId: vendor.id, sku: "A-2" }))?.name).toBe("Two, with comma");
     const mixed = `${HEADER}\nA-3,Three,6,2,18,50,6,upcut\nA-1,Again,6,2,18,50,6,upcut\n`;

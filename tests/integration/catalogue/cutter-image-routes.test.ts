@@ -9,10 +9,20 @@ import { createVendorWithStaff } from "@/tests/factories/foundation";
 
 type Handler = (request: NextRequest, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 // A 1×1 PNG (ISO/IEC 15948: signature, IHDR, IDAT, IEND).
-const PNG = Buffer.from("89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da63f8cfc0f01f0005000201a2a0e1df0000000049454e44ae426082", "hex");
+const PNG = Buffer.from(
+  "89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d4944415478da63f8cfc0f01f0005000201a2a0e1df0000000049454e44ae426082",
+  "hex",
+);
 
 const send = (handler: unknown, method: string, params: Record<string, string>, token: string, body?: Uint8Array) =>
-  (handler as Handler)(new NextRequest("http://localhost/x", { method, headers: { authorization: `Bearer ${token}` }, body: body ? new Uint8Array(body) : undefined }), { params: Promise.resolve(params) });
+  (handler as Handler)(
+    new NextRequest("http://localhost/x", {
+      method,
+      headers: { authorization: `Bearer ${token}` },
+      body: body ? new Uint8Array(body) : undefined,
+    }),
+    { params: Promise.resolve(params) },
+  );
 
 describe("cutter image routes", () => {
   it("stores a PNG checked by content, serves it to readers, refuses a disguised file and another vendor's token", async () => {

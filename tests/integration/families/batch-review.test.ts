@@ -7,7 +7,6 @@ import { createSetup } from "@/lib/bench/create-setup";
 import { createMachine } from "@/lib/bench/machines";
 import { sendChangeAlerts } from "@/lib/bench/send-change-alerts";
 import { db } from "@/lib/db/knex";
-import { mustExist } from "@/tests/support/must-exist";
 import { approveBatch } from "@/lib/families/approve-batch";
 import { excludeBatchItem } from "@/lib/families/exclude-batch-item";
 import { generateBatch } from "@/lib/families/generate-batch";
@@ -20,6 +19,7 @@ import { returnToDraft } from "@/lib/sheets/return-to-draft";
 import { weakMachineFields } from "@/tests/factories/bench";
 import { createFamilyScenario, FAMILY_RULES } from "@/tests/factories/families";
 import { createMember } from "@/tests/factories/foundation";
+import { mustExist } from "@/tests/support/must-exist";
 
 afterAll(async () => {
   await (await getBoss()).stop({ graceful: false, wait: true });
@@ -34,8 +34,14 @@ async function generate(s: Scenario) {
 }
 
 const review = (s: Scenario, number: number) => ({ ...s.as(s.engineer2.user.id), number });
-const publishedCount = async (vendorId: string) => Number((await db("sheet_versions").where({ vendor_id: vendorId, state: "published" }).count<{ count: string }[]>("id as count"))[0].count);
-const mailsTo = async (email: string) => (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map((r: { data: { subject: string; text: string } }) => r.data);
+const publishedCount = async (vendorId: string) =>
+  Number(
+    (await db("sheet_versions").where({ vendor_id: vendorId, state: "published" }).count<{ count: string }[]>("id as count"))[0].count,
+  );
+const mailsTo = async (email: string) =>
+  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map(
+    (r: { data: { subject: string; text: string } }) => r.data,
+  );
 
 /** The first batch published: every cell of the family has a published v1. */
 async function publishedFamily(s: Scenario) {
@@ -48,7 +54,12 @@ async function publishedFamily(s: Scenario) {
 async function customerWithSetupsOn(vendorId: string, versionIds: string[]) {
   const member = await createMember(vendorId, "customer");
   const machine = await createMachine({ vendorId, userId: member.user.id, fields: machineFieldsSchema.parse(weakMachineFields) });
-  for (const versionId of versionIds) await createSetup({ vendorId, userId: member.user.id, input: setupCreateSchema.parse({ versionId, machineId: machine.id, operationIndex: 0 }) });
+  for (const versionId of versionIds)
+    await createSetup({
+      vendorId,
+      userId: member.user.id,
+      input: setupCreateSchema.parse({ versionId, machineId: machine.id, operationIndex: 0 }),
+    });
   return member.user;
 }
 
@@ -79,24 +90,43 @@ describe("sheet families: batch review and publish", () => {
     const batch = await generate(s);
     await approveBatch(review(s, batch.number));
     // Someone returns one sheet of the approved batch to draft on its own page.
-    const item = await db("family_batch_items as i").join("sheets as sh", "sh.id", "i.sheet_id").where({ "i.batch_id": batch.id }).orderBy("sh.slug", "desc").first("sh.slug");
+    const item = await db("family_batch_items as i")
+      .join("sheets as sh", "sh.id", "i.sheet_id")
+      .where({ "i.batch_id": batch.id })
+      .orderBy("sh.slug", "desc")
+      .first("sh.slug");
     await returnToDraft({ ...s.as(s.engineer.user.id), slug: item.slug });
     await expect(publishBatch(review(s, batch.number))).rejects.toThrow(item.slug);
     expect(await publishedCount(s.vendorId)).toBe(0);
     expect((await db("family_batches").where({ id: batch.id }).first()).state).toBe("approved");
-    expect(await db.raw("select count(*)::int as n from pgboss.job where name = 'families.alerts' and data->>'batchId' = ?", [batch.id])).toMatchObject({ rows: [{ n: 0 }] });
+    expect(
+      await db.raw("select count(*)::int as n from pgboss.job where name = 'families.alerts' and data->>'batchId' = ?", [batch.id]),
+    ).toMatchObject({ rows: [{ n: 0 }] });
   });
 
   it("sends one alert mail per customer per batch, listing every changed sheet of theirs; a retry sends nothing twice", async () => {
     const s = await createFamilyScenario();
     await publishedFamily(s);
-    const v1 = await db("sheet_versions as v").join("sheets as sh", "sh.id", "v.sheet_id").where({ "v.vendor_id": s.vendorId, "v.state": "published" }).orderBy("sh.slug").select("v.id", "v.title", "sh.slug");
+    const v1 = await db("sheet_versions as v")
+      .join("sheets as sh", "sh.id", "v.sheet_id")
+      .where({ "v.vendor_id": s.vendorId, "v.state": "published" })
+      .orderBy("sh.slug")
+      .select("v.id", "v.title", "sh.slug");
     const both = await customerWithSetupsOn(s.vendorId, [v1[0].id, v1[1].id, v1[2].id]);
     const one = await customerWithSetupsOn(s.vendorId, [v1[3].id]);
     // Rules version 2 runs the chip higher in the band: every sheet gets a new version.
-    await saveFamilyRules({ ...s.as(s.engineer.user.id), rules: familyRulesSchema.parse({ ...FAMILY_RULES, rules: [{ materialGroup: "plastics", kind: "slotting", chipLoadPosition: 0.6 }] }), note: "Higher chip in slots." });
+    await saveFamilyRules({
+      ...s.as(s.engineer.user.id),
+      rules: familyRulesSchema.parse({ ...FAMILY_RULES, rules: [{ materialGroup: "plastics", kind: "slotting", chipLoadPosition: 0.6 }] }),
+      note: "Higher chip in slots.",
+    });
     const batch = await generate(s);
-    expect((await db("family_batch_items").where({ batch_id: batch.id }).pluck("outcome")).sort()).toEqual(["new-version", "new-version", "new-version", "new-version"]);
+    expect((await db("family_batch_items").where({ batch_id: batch.id }).pluck("outcome")).sort()).toEqual([
+      "new-version",
+      "new-version",
+      "new-version",
+      "new-version",
+    ]);
     await approveBatch(review(s, batch.number));
     await publishBatch(review(s, batch.number));
 

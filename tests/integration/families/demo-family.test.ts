@@ -24,14 +24,29 @@ describe("demo family (invented demo data)", () => {
     const second = await db("family_batch_items").where({ batch_id: batches[1].id }).pluck("outcome");
     expect(second).toContain("new-version");
 
-    const published = await db("family_batch_items as i").join("sheet_versions as v", "v.id", "i.version_id").where({ "i.batch_id": batches[0].id, "v.state": "published" }).select("v.id", "i.machine_class_id");
+    const published = await db("family_batch_items as i")
+      .join("sheet_versions as v", "v.id", "i.version_id")
+      .where({ "i.batch_id": batches[0].id, "v.state": "published" })
+      .select("v.id", "i.machine_class_id");
     expect(published.length).toBeGreaterThan(4);
     for (const { id, machine_class_id } of published) {
       const context = (await loadAdaptContext({ vendorId: family.vendor_id, versionId: id }))!;
       const k = mustExist(await db("machine_classes").where({ id: machine_class_id }).first(), "k");
-      const machine = { minRpm: k.rpm_min, maxRpm: k.rpm_max, spindlePowerKw: k.power_kw, maxFeedMmMin: k.max_feed_mm_min, rigidity: k.rigidity, zThrustN: k.z_thrust_n ?? undefined, spindleKind: k.spindle_kind, ratedRpm: k.rated_rpm ?? undefined, stickoutMm: context.cutter.fluteLengthMm };
+      const machine = {
+        minRpm: k.rpm_min,
+        maxRpm: k.rpm_max,
+        spindlePowerKw: k.power_kw,
+        maxFeedMmMin: k.max_feed_mm_min,
+        rigidity: k.rigidity,
+        zThrustN: k.z_thrust_n ?? undefined,
+        spindleKind: k.spindle_kind,
+        ratedRpm: k.rated_rpm ?? undefined,
+        stickoutMm: context.cutter.fluteLengthMm,
+      };
       for (const op of context.operations) {
-        const codes = adaptOperation(context, op.index, machine, {}, { entryCapability: "helix" }).warnings.map((w) => w.code).filter((c) => c !== "standard-cautions" && c !== "values-adapted");
+        const codes = adaptOperation(context, op.index, machine, {}, { entryCapability: "helix" })
+          .warnings.map((w) => w.code)
+          .filter((c) => c !== "standard-cautions" && c !== "values-adapted");
         expect(codes, `${context.sheetSlug} ${op.label}`).toEqual([]);
       }
     }

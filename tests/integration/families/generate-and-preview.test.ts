@@ -10,16 +10,19 @@ import { saveFamilyRules } from "@/lib/families/save-family";
 import { startGeneration } from "@/lib/families/start-generation";
 import { getBoss } from "@/lib/jobs/boss";
 import { createFamilyScenario, FAMILY_RULES } from "@/tests/factories/families";
+import { mustExist } from "@/tests/support/must-exist";
 
 import { engineOperation, engineWarnings } from "./engine-cells";
-import { mustExist } from "@/tests/support/must-exist";
 
 afterAll(async () => {
   await (await getBoss()).stop({ graceful: false, wait: true });
 });
 
 // A rule that takes the profile 3·D deep on the light router: the engine warns that the cutter bends too far.
-const DEEP_ON_LIGHT = { ...FAMILY_RULES, rules: [{ materialGroup: "plastics" as const, kind: "profile" as const, machineClass: "light-router", apPerD: 3 }] };
+const DEEP_ON_LIGHT = {
+  ...FAMILY_RULES,
+  rules: [{ materialGroup: "plastics" as const, kind: "profile" as const, machineClass: "light-router", apPerD: 3 }],
+};
 
 async function generate(s: Awaited<ReturnType<typeof createFamilyScenario>>) {
   const batch = await startGeneration(s.as(s.engineer.user.id));
@@ -37,9 +40,22 @@ describe("sheet families: preview and generation", () => {
     expect(preview.cells).toHaveLength(4);
     for (const cell of preview.cells) {
       const apPerD = cell.machineClass.slug === "light-router" ? 3 : undefined;
-      const expected = [engineOperation(cell.cutter, s.material, cell.machineClass, "slotting"), engineOperation(cell.cutter, s.material, cell.machineClass, "profile", { apPerD })];
-      expect(cell.operations.map((op) => [op.operation.n.text, op.operation.vf.text, op.operation.ap.text, op.operation.ae.text, op.operation.plungeFeed?.text])).toEqual(expected.map((op) => [op.n, op.vf, op.ap, op.ae, op.plungeFeed]));
-      expect(cell.warnings.map((w) => w.code)).toEqual(expected.flatMap((op) => engineWarnings(cell.cutter, s.material, cell.machineClass, op)));
+      const expected = [
+        engineOperation(cell.cutter, s.material, cell.machineClass, "slotting"),
+        engineOperation(cell.cutter, s.material, cell.machineClass, "profile", { apPerD }),
+      ];
+      expect(
+        cell.operations.map((op) => [
+          op.operation.n.text,
+          op.operation.vf.text,
+          op.operation.ap.text,
+          op.operation.ae.text,
+          op.operation.plungeFeed?.text,
+        ]),
+      ).toEqual(expected.map((op) => [op.n, op.vf, op.ap, op.ae, op.plungeFeed]));
+      expect(cell.warnings.map((w) => w.code)).toEqual(
+        expected.flatMap((op) => engineWarnings(cell.cutter, s.material, cell.machineClass, op)),
+      );
       expect(cell.status).toBe(cell.warnings.length ? "warned" : "new");
     }
     const warned = preview.cells.filter((c) => c.status === "warned");
@@ -53,7 +69,9 @@ describe("sheet families: preview and generation", () => {
       if (cell.status === "warned") {
         expect(item.outcome).toBe("blocked");
         expect(item.version_id).toBeNull();
-        expect(await db("sheets").where({ vendor_id: s.vendorId, cutter_id: cell.cutter.id, machine_class_id: cell.machineClass.id }).first()).toBeUndefined();
+        expect(
+          await db("sheets").where({ vendor_id: s.vendorId, cutter_id: cell.cutter.id, machine_class_id: cell.machineClass.id }).first(),
+        ).toBeUndefined();
         continue;
       }
       expect(item.outcome).toBe("created");
@@ -72,8 +90,17 @@ describe("sheet families: preview and generation", () => {
   it("after the rule is fixed the warned cells generate, and their sheets say which rule version made the numbers", async () => {
     const s = await createFamilyScenario({ rules: DEEP_ON_LIGHT });
     await generate(s);
-    const fixed = { ...FAMILY_RULES, rules: [{ materialGroup: "plastics" as const, kind: "profile" as const, machineClass: "light-router", apPerD: 0.5 }] };
-    expect(await saveFamilyRules({ ...s.as(s.engineer.user.id), rules: familyRulesSchema.parse(fixed), note: "Shallower profiles on light routers." })).toEqual({ number: 2, created: true });
+    const fixed = {
+      ...FAMILY_RULES,
+      rules: [{ materialGroup: "plastics" as const, kind: "profile" as const, machineClass: "light-router", apPerD: 0.5 }],
+    };
+    expect(
+      await saveFamilyRules({
+        ...s.as(s.engineer.user.id),
+        rules: familyRulesSchema.parse(fixed),
+        note: "Shallower profiles on light routers.",
+      }),
+    ).toEqual({ number: 2, created: true });
     const preview = await previewFamily({ vendorId: s.vendorId, slug: s.slug, rules: familyRulesSchema.parse(fixed) });
     expect(preview.cells.map((c) => c.status).sort()).toEqual(["new", "new", "unchanged", "unchanged"]);
     const batch = await generate(s);
@@ -92,7 +119,10 @@ describe("sheet families: preview and generation", () => {
     const s = await createFamilyScenario();
     await generate(s);
     const before = await db("sheet_versions").where({ vendor_id: s.vendorId }).count<{ count: string }[]>("id as count");
-    expect(await saveFamilyRules({ ...s.as(s.engineer.user.id), rules: familyRulesSchema.parse(FAMILY_RULES), note: "same" })).toEqual({ number: 1, created: false });
+    expect(await saveFamilyRules({ ...s.as(s.engineer.user.id), rules: familyRulesSchema.parse(FAMILY_RULES), note: "same" })).toEqual({
+      number: 1,
+      created: false,
+    });
     const again = await generate(s);
     expect((await items(again.id)).map((r) => r.outcome)).toEqual(["unchanged", "unchanged", "unchanged", "unchanged"]);
     const after = await db("sheet_versions").where({ vendor_id: s.vendorId }).count<{ count: string }[]>("id as count");
@@ -113,6 +143,8 @@ describe("sheet families: preview and generation", () => {
   it("another vendor's family is not found", async () => {
     const s = await createFamilyScenario();
     const other = await createFamilyScenario();
-    await expect(previewFamily({ vendorId: other.vendorId, slug: s.slug, rules: familyRulesSchema.parse(FAMILY_RULES) })).rejects.toThrow("No such family");
+    await expect(previewFamily({ vendorId: other.vendorId, slug: s.slug, rules: familyRulesSchema.parse(FAMILY_RULES) })).rejects.toThrow(
+      "No such family",
+    );
   });
 });

@@ -2,8 +2,8 @@ import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 
 import { PUT as putDraft } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draft/route";
-import { db } from "@/lib/db/knex";
 import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
+import { db } from "@/lib/db/knex";
 import { DraftConflict, saveDraft } from "@/lib/sheets/save-draft";
 import { createDraftingScenario, sourceWithFeed } from "@/tests/factories/sheets";
 
@@ -13,7 +13,11 @@ type Handler = (request: NextRequest, ctx: { params: Promise<Record<string, stri
 
 const put = (vendor: string, slug: string, token: string, body: unknown) =>
   (putDraft as unknown as Handler)(
-    new NextRequest(`http://localhost/api/v1/vendors/${vendor}/sheets/${slug}/draft`, { method: "PUT", headers: { authorization: `Bearer ${token}`, "content-type": "application/json" }, body: JSON.stringify(body) }),
+    new NextRequest(`http://localhost/api/v1/vendors/${vendor}/sheets/${slug}/draft`, {
+      method: "PUT",
+      headers: { authorization: `Bearer ${token}`, "content-type": "application/json" },
+      body: JSON.stringify(body),
+    }),
     { params: Promise.resolve({ vendor, slug }) },
   );
 
@@ -21,7 +25,10 @@ describe("fault: two engineers save one draft at once, through the API and the e
   it("one save wins, the other gets one conflict carrying the winner's text; nothing is lost or overwritten", async () => {
     const s = await createDraftingScenario();
     const token = (await createPersonalToken({ vendorId: s.vendor.id, userId: s.engineer.user.id, name: "script" })).secret;
-    const current = async () => db("sheet_versions").where({ vendor_id: s.vendor.id, id: s.created.versionId }).first<{ source: string; revision: number }>("source", "revision");
+    const current = async () =>
+      db("sheet_versions")
+        .where({ vendor_id: s.vendor.id, id: s.created.versionId })
+        .first<{ source: string; revision: number }>("source", "revision");
     const rounds = 12;
     let apiWins = 0;
     let editorWins = 0;

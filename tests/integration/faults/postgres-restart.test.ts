@@ -1,5 +1,4 @@
 import { randomUUID } from "node:crypto";
-
 import { afterAll, describe, expect, it } from "vitest";
 
 import { recordOutcome } from "@/lib/bench/outcomes";
@@ -13,7 +12,7 @@ import { createFieldCustomer } from "@/tests/factories/field";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { loadVendor } from "@/tests/factories/tickets";
 
-import { emptyQueue, faultPg, type MailDev, report, startMailDev, waitFor } from "./support/services";
+import { emptyQueue, faultPg, report, startMailDev, waitFor, type MailDev } from "./support/services";
 
 Object.assign(process.env, { MAIL_RETRY_BASE_SECONDS: "1", MAIL_RETRY_CAP_SECONDS: "2" });
 
@@ -38,14 +37,46 @@ describe("fault: PostgreSQL stopped and started under a write load", () => {
     const vendor = await loadVendor(v.id);
     const sheet = await createBenchSheet(v.id);
     const field = await createFieldCustomer(v.id);
-    const setups = await db("setups").insert(Array.from({ length: 5 }, () => ({ vendor_id: v.id, user_id: field.userId, machine_id: field.machineId, sheet_version_id: sheet.versionId, result: "{}" }))).returning("id");
-    const firstTicket = await createTicket({ vendor, customerId: customer.user.id, input: { subject: "Load base", body: "Base.", idempotencyKey: randomUUID(), attachmentIds: [] } });
+    const setups = await db("setups")
+      .insert(
+        Array.from({ length: 5 }, () => ({
+          vendor_id: v.id,
+          user_id: field.userId,
+          machine_id: field.machineId,
+          sheet_version_id: sheet.versionId,
+          result: "{}",
+        })),
+      )
+      .returning("id");
+    const firstTicket = await createTicket({
+      vendor,
+      customerId: customer.user.id,
+      input: { subject: "Load base", body: "Base.", idempotencyKey: randomUUID(), attachmentIds: [] },
+    });
     await startWorker();
 
     const write = (a: Attempt) => {
-      if (a.kind === "ticket") return createTicket({ vendor, customerId: customer.user.id, input: { subject: a.body, body: a.body, idempotencyKey: a.key, attachmentIds: [] } });
-      if (a.kind === "reply") return addCustomerMessage({ vendorId: v.id, ticketId: firstTicket.id, authorId: customer.user.id, body: a.body, idempotencyKey: a.key });
-      return recordOutcome({ vendorId: v.id, userId: field.userId, setupId: setups[parseInt(a.key.slice(-1), 16) % setups.length].id, fields: { result: "worked_as_written", changes: {}, notes: a.body }, idempotencyKey: a.key });
+      if (a.kind === "ticket")
+        return createTicket({
+          vendor,
+          customerId: customer.user.id,
+          input: { subject: a.body, body: a.body, idempotencyKey: a.key, attachmentIds: [] },
+        });
+      if (a.kind === "reply")
+        return addCustomerMessage({
+          vendorId: v.id,
+          ticketId: firstTicket.id,
+          authorId: customer.user.id,
+          body: a.body,
+          idempotencyKey: a.key,
+        });
+      return recordOutcome({
+        vendorId: v.id,
+        userId: field.userId,
+        setupId: setups[parseInt(a.key.slice(-1), 16) % setups.length].id,
+        fields: { result: "worked_as_written", changes: {}, notes: a.body },
+        idempotencyKey: a.key,
+      });
     };
     const attempts: Attempt[] = [];
     const started = Date.now();
@@ -96,11 +127,17 @@ describe("fault: PostgreSQL stopped and started under a write load", () => {
       else madeOnResubmit++;
       a.id = again.id;
     }
-    const table: Record<Kind, { table: string; column: string }> = { ticket: { table: "tickets", column: "subject" }, reply: { table: "ticket_messages", column: "body" }, outcome: { table: "outcomes", column: "notes" } };
+    const table: Record<Kind, { table: string; column: string }> = {
+      ticket: { table: "tickets", column: "subject" },
+      reply: { table: "ticket_messages", column: "body" },
+      outcome: { table: "outcomes", column: "notes" },
+    };
     let missing = 0;
     let doubled = 0;
     for (const a of attempts) {
-      const rows = await db(table[a.kind].table).where({ vendor_id: v.id, [table[a.kind].column]: a.body }).select("id");
+      const rows = await db(table[a.kind].table)
+        .where({ vendor_id: v.id, [table[a.kind].column]: a.body })
+        .select("id");
       if (rows.length === 0) missing++;
       if (rows.length > 1) doubled++;
       if (a.ok && rows[0]?.id !== a.id) missing++;

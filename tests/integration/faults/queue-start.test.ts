@@ -1,12 +1,11 @@
 import { randomUUID } from "node:crypto";
-
 import { afterAll, describe, expect, it } from "vitest";
 
 import { createTicket } from "@/lib/tickets/create-ticket";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { loadVendor } from "@/tests/factories/tickets";
 
-import { emptyQueue, faultPg, type MailDev, report, startMailDev, waitFor } from "./support/services";
+import { emptyQueue, faultPg, report, startMailDev, waitFor, type MailDev } from "./support/services";
 
 let maildev: MailDev | null = null;
 let stopBoss: (() => Promise<void>) | null = null;
@@ -42,7 +41,11 @@ describe("fault: the queue cannot start at boot", () => {
     const afterRecovery = boss.queueState();
 
     const subject = `After recovery ${randomUUID().slice(0, 8)}`;
-    await createTicket({ vendor, customerId: customer.user.id, input: { subject, body: "Queued after the queue came back.", idempotencyKey: randomUUID(), attachmentIds: [] } });
+    await createTicket({
+      vendor,
+      customerId: customer.user.id,
+      input: { subject, body: "Queued after the queue came back.", idempotencyKey: randomUUID(), attachmentIds: [] },
+    });
     const delivered = await waitFor(async () => (await maildev!.mails()).some((m) => m.subject.includes(subject)), { timeoutMs: 30_000 });
     const mails = (await maildev.mails()).filter((m) => m.subject.includes(subject));
 

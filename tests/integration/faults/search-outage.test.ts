@@ -11,7 +11,8 @@ afterAll(async () => {
   await stopBoss?.();
 });
 
-const indexed = async (vendorId: string, versionId: string) => Number((await db("search_documents").where({ vendor_id: vendorId, version_id: versionId }).count<{ n: number }[]>("* as n"))[0].n);
+const indexed = async (vendorId: string, versionId: string) =>
+  Number((await db("search_documents").where({ vendor_id: vendorId, version_id: versionId }).count<{ n: number }[]>("* as n"))[0].n);
 
 describe("fault: the search engine is unavailable during publishing", () => {
   it("publishes anyway, and the index catches up when the engine is back", async () => {
@@ -26,15 +27,40 @@ describe("fault: the search engine is unavailable during publishing", () => {
     const published: { vendorId: string; versionId: string }[] = [];
     for (const s of scenarios) published.push({ vendorId: s.vendor.id, ...(await publishOpenDraft(s)) });
     await new Promise((resolve) => setTimeout(resolve, 4_000));
-    const failedAttempts = Number((await db.raw("select coalesce(sum(retry_count), 0)::int as n from pgboss.job where name = 'sheet.events.deliver' and data->>'subscriber' = 'search-index'")).rows[0].n);
-    const versionsPublished = Number((await db("sheet_versions").whereIn("id", published.map((p) => p.versionId)).where({ state: "published" }).count<{ n: number }[]>("* as n"))[0].n);
+    const failedAttempts = Number(
+      (
+        await db.raw(
+          "select coalesce(sum(retry_count), 0)::int as n from pgboss.job where name = 'sheet.events.deliver' and data->>'subscriber' = 'search-index'",
+        )
+      ).rows[0].n,
+    );
+    const versionsPublished = Number(
+      (
+        await db("sheet_versions")
+          .whereIn(
+            "id",
+            published.map((p) => p.versionId),
+          )
+          .where({ state: "published" })
+          .count<{ n: number }[]>("* as n")
+      )[0].n,
+    );
 
     await db.raw("alter table search_documents_away rename to search_documents");
     const back = Date.now();
-    const caughtUp = await waitFor(async () => (await Promise.all(published.map((p) => indexed(p.vendorId, p.versionId)))).every((n) => n > 0), { timeoutMs: 60_000 });
+    const caughtUp = await waitFor(
+      async () => (await Promise.all(published.map((p) => indexed(p.vendorId, p.versionId)))).every((n) => n > 0),
+      { timeoutMs: 60_000 },
+    );
     const docs = await Promise.all(published.map((p) => indexed(p.vendorId, p.versionId)));
 
-    report("search-outage", { published: published.length, versionsPublished, failedIndexAttempts: failedAttempts, caughtUpWithinMs: Date.now() - back, documentsPerVersion: docs });
+    report("search-outage", {
+      published: published.length,
+      versionsPublished,
+      failedIndexAttempts: failedAttempts,
+      caughtUpWithinMs: Date.now() - back,
+      documentsPerVersion: docs,
+    });
     expect(versionsPublished).toBe(published.length);
     expect(failedAttempts).toBeGreaterThan(0);
     expect(caughtUp).toBe(true);

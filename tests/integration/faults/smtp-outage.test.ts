@@ -5,7 +5,7 @@ import { addStaffMessage } from "@/lib/tickets/add-message";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
 import { openTicket } from "@/tests/factories/tickets";
 
-import { emptyQueue, type MailDev, report, startMailDev, waitFor } from "./support/services";
+import { emptyQueue, report, startMailDev, waitFor, type MailDev } from "./support/services";
 
 // The retry schedule shortened by configuration: one second stands for one hour. Mail retries for
 // 50 "hours" (waits of 1 s, then 2 s); SMTP stays down for 24 "hours", a simulated day.
@@ -41,13 +41,21 @@ describe("fault: SMTP down for a simulated day", () => {
       expected.set(`New ticket: ${subject}`, support.user.email);
     }
     for (const [i, t] of tickets.entries()) {
-      await addStaffMessage({ vendorId: vendor.id, ticketId: t.id, authorId: support.user.id, body: `Answer ${i}: lower the feed.`, visibility: "public" });
+      await addStaffMessage({
+        vendorId: vendor.id,
+        ticketId: t.id,
+        authorId: support.user.id,
+        body: `Answer ${i}: lower the feed.`,
+        visibility: "public",
+      });
       expected.set(`#${t.number}] Outage ticket ${i}`, t.customer.email);
     }
     const writesDoneMs = Date.now() - outageStarted;
     await new Promise((resolve) => setTimeout(resolve, Math.max(0, 24 * HOUR_MS - (Date.now() - outageStarted))));
 
-    const during = (await db.raw("select state, count(*)::int as n, max(retry_count) as attempts from pgboss.job where name = 'mail.send' group by state")).rows as { state: string; n: number; attempts: number }[];
+    const during = (
+      await db.raw("select state, count(*)::int as n, max(retry_count) as attempts from pgboss.job where name = 'mail.send' group by state")
+    ).rows as { state: string; n: number; attempts: number }[];
     const dead = Number((await db.raw("select count(*)::int as n from pgboss.job where name = 'mail.dead-letter'")).rows[0].n);
     expect(dead).toBe(0);
     expect(during.filter((r) => r.state === "completed")).toEqual([]);
@@ -61,7 +69,8 @@ describe("fault: SMTP down for a simulated day", () => {
     await new Promise((resolve) => setTimeout(resolve, 3_000));
     const mails = await maildev.mails();
     const counts = new Map<string, number>();
-    for (const [key, to] of expected) counts.set(key, mails.filter((m) => m.subject.endsWith(key) && m.to.some((a) => a.address === to)).length);
+    for (const [key, to] of expected)
+      counts.set(key, mails.filter((m) => m.subject.endsWith(key) && m.to.some((a) => a.address === to)).length);
     const notOnce = [...counts].filter(([, n]) => n !== 1);
     const states = (await db.raw("select state, count(*)::int as n from pgboss.job where name = 'mail.send' group by state")).rows;
     report("smtp-outage", {

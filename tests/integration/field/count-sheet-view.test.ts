@@ -15,7 +15,15 @@ describe("Library page views counted in memory", () => {
     const b = await createVendorWithStaff();
     const sheetA = await createBenchSheet(a.vendor.id);
     const sheetB = await createBenchSheet(b.vendor.id);
-    await db("sheet_versions").insert({ vendor_id: b.vendor.id, sheet_id: sheetB.sheetId, number: 2, state: "draft", title: "Draft", source: "x", front_matter: "{}" });
+    await db("sheet_versions").insert({
+      vendor_id: b.vendor.id,
+      sheet_id: sheetB.sheetId,
+      number: 2,
+      state: "draft",
+      title: "Draft",
+      source: "x",
+      front_matter: "{}",
+    });
     const draft = mustExist(await db("sheet_versions").where({ sheet_id: sheetB.sheetId, number: 2 }).first("id"), "draft");
 
     for (let i = 0; i < 5; i++) countSheetView(a.vendor.id, sheetA.versionId);
@@ -34,6 +42,8 @@ describe("Library page views counted in memory", () => {
     countSheetView(a.vendor.id, sheetA.versionId);
     await flushSheetViews();
     expect(Number(await viewsOf(sheetA.versionId))).toBe(7);
-    expect(await db("sheet_version_activity").where({ sheet_version_id: sheetA.versionId }).count<{ count: string }[]>("* as count")).toEqual([{ count: "1" }]);
+    expect(
+      await db("sheet_version_activity").where({ sheet_version_id: sheetA.versionId }).count<{ count: string }[]>("* as count"),
+    ).toEqual([{ count: "1" }]);
   });
 });

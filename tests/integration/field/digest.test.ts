@@ -1,15 +1,15 @@
 import { NextRequest } from "next/server";
 import { afterAll, describe, expect, it } from "vitest";
 
+import { POST as stopDigest } from "@/app/api/v1/vendors/[vendor]/field/digest/stop/route";
 import { createAlertStopToken } from "@/lib/bench/alert-token";
-import { setMailPreference, wantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { db } from "@/lib/db/knex";
-import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { weekStartOf } from "@/lib/field/digest-content";
+import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { sendDigestOnRequest, sendVendorDigests } from "@/lib/field/send-digest";
 import { getBoss } from "@/lib/jobs/boss";
+import { setMailPreference, wantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { readStopToken } from "@/lib/mail/stop-token";
-import { POST as stopDigest } from "@/app/api/v1/vendors/[vendor]/field/digest/stop/route";
 import { createBenchSheet } from "@/tests/factories/bench";
 import { reportOutcomes } from "@/tests/factories/field";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
@@ -20,8 +20,14 @@ afterAll(async () => {
 });
 
 type Mail = { subject: string; text: string; html: string; headers: Record<string, string> };
-const mailsTo = async (email: string): Promise<Mail[]> => (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map((r: { data: Mail }) => r.data);
-const stop = (slug: string, token: string) => stopDigest(new NextRequest(`http://localhost/api/v1/vendors/${slug}/field/digest/stop?token=${encodeURIComponent(token)}`, { method: "POST" }));
+const mailsTo = async (email: string): Promise<Mail[]> =>
+  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map(
+    (r: { data: Mail }) => r.data,
+  );
+const stop = (slug: string, token: string) =>
+  stopDigest(
+    new NextRequest(`http://localhost/api/v1/vendors/${slug}/field/digest/stop?token=${encodeURIComponent(token)}`, { method: "POST" }),
+  );
 
 describe("weekly Field-results digest", () => {
   it("goes to engineers and admins once a week with the top items and a one-click stop; a retry sends nothing twice", async () => {

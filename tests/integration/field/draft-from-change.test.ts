@@ -26,12 +26,32 @@ async function scenario() {
   const sheet = await createBenchSheet(staff.vendor.id);
   // Slot feed lowered by 10, 20, 20, 30 and 40 % → median −20 %, middle half −30 % to −20 %.
   const feeds = [900, 800, 800, 700, 600].map((to) => ({ feedMmMin: { from: 1000, to } }));
-  const slotCustomer = await reportOutcomes(staff.vendor.id, sheet.versionId, { asWritten: 3, afterChanges: 5, failed: { chatter: 3 } }, feeds);
+  const slotCustomer = await reportOutcomes(
+    staff.vendor.id,
+    sheet.versionId,
+    { asWritten: 3, afterChanges: 5, failed: { chatter: 3 } },
+    feeds,
+  );
   // The profile's ap, lowered by a third in 2 reports: another operation, another suggestion.
-  const profileCustomer = await reportOutcomes(staff.vendor.id, sheet.versionId, { afterChanges: 2 }, [{ axialDepthMm: { from: 3, to: 2 } }], { operationIndex: 1 });
+  const profileCustomer = await reportOutcomes(
+    staff.vendor.id,
+    sheet.versionId,
+    { afterChanges: 2 },
+    [{ axialDepthMm: { from: 3, to: 2 } }],
+    { operationIndex: 1 },
+  );
   await refreshFieldRollups();
   const start = (over: Partial<Parameters<typeof startDraftFromChange>[0]> = {}) =>
-    startDraftFromChange({ vendorId: staff.vendor.id, userId: staff.engineer.user.id, versionId: sheet.versionId, operationIndex: 0, param: "feedMmMin", z: Z95, confidenceLabel: "95 %", ...over });
+    startDraftFromChange({
+      vendorId: staff.vendor.id,
+      userId: staff.engineer.user.id,
+      versionId: sheet.versionId,
+      operationIndex: 0,
+      param: "feedMmMin",
+      z: Z95,
+      confidenceLabel: "95 %",
+      ...over,
+    });
   const openDraft = async () => (await findOpenDraft({ vendorId: staff.vendor.id, sheetId: sheet.sheetId }))!;
   return { ...staff, sheet, start, openDraft, customers: [slotCustomer, profileCustomer] };
 }
@@ -40,7 +60,10 @@ describe("Start a draft from a customers' change", () => {
   it("suggests per operation: the slot's feed and the profile's ap are separate rows", async () => {
     const s = await scenario();
     const changes = await listSheetChanges({ vendorId: s.vendor.id, sheetId: s.sheet.sheetId });
-    expect(changes.map((c) => [c.operationIndex, c.operationLabel, c.param, c.reports])).toEqual([[0, "Full-width slot", "feedMmMin", 5], [1, "Outside profile", "axialDepthMm", 2]]);
+    expect(changes.map((c) => [c.operationIndex, c.operationLabel, c.param, c.reports])).toEqual([
+      [0, "Full-width slot", "feedMmMin", 5],
+      [1, "Outside profile", "axialDepthMm", 2],
+    ]);
   });
 
   it("opens a new draft version with the reported median applied to that operation only", async () => {
@@ -52,7 +75,15 @@ describe("Start a draft from a customers' change", () => {
     const checked = validateSheetSource(draft.source);
     expect(checked.ok).toBe(true);
     const [slot, profile] = checked.frontMatter!.operations;
-    const median = mustExist(mustExist(await db("field_change_rollups").where({ vendor_id: s.vendor.id, sheet_version_id: s.sheet.versionId, operation_index: 0, param: "feedMmMin" }).first(), "rollup").median_pct, "median");
+    const median = mustExist(
+      mustExist(
+        await db("field_change_rollups")
+          .where({ vendor_id: s.vendor.id, sheet_version_id: s.sheet.versionId, operation_index: 0, param: "feedMmMin" })
+          .first(),
+        "rollup",
+      ).median_pct,
+      "median",
+    );
     expect(median).toBeCloseTo(-20, 9);
     expect(slot.vf.value).toBe(1800 * (1 + median / 100));
     expect(slot.vf.text).toBe("1440 mm/min");
@@ -88,10 +119,20 @@ describe("Start a draft from a customers' change", () => {
     // n doubled: 36 000 rpm on a 24 000 rpm class, vc far above acrylic's window.
     await reportOutcomes(staff.vendor.id, sheet.versionId, { afterChanges: 3 }, [{ rpm: { from: 18000, to: 36000 } }]);
     await refreshFieldRollups();
-    await startDraftFromChange({ vendorId: staff.vendor.id, userId: staff.engineer.user.id, versionId: sheet.versionId, operationIndex: 0, param: "rpm", z: Z95, confidenceLabel: "95 %" });
+    await startDraftFromChange({
+      vendorId: staff.vendor.id,
+      userId: staff.engineer.user.id,
+      versionId: sheet.versionId,
+      operationIndex: 0,
+      param: "rpm",
+      z: Z95,
+      confidenceLabel: "95 %",
+    });
     const draft = (await findOpenDraft({ vendorId: staff.vendor.id, sheetId: sheet.sheetId }))!;
     expect(validateSheetSource(draft.source).frontMatter!.operations[0].n.value).toBe(36000);
-    expect(draft.changeNote).toMatch(/the changed operation raises (a warning|\d+ warnings): .*The engine would change n \(spindle speed\) 36000 → 24000: /);
+    expect(draft.changeNote).toMatch(
+      /the changed operation raises (a warning|\d+ warnings): .*The engine would change n \(spindle speed\) 36000 → 24000: /,
+    );
   });
 
   it("is idempotent: a second click opens the same draft; one draft version only", async () => {
@@ -99,12 +140,22 @@ describe("Start a draft from a customers' change", () => {
     await s.start();
     const again = await s.start();
     expect(again).toEqual({ slug: s.sheet.sheetSlug, number: 2, existing: true });
-    expect(await db("sheet_versions").where({ vendor_id: s.vendor.id, sheet_id: s.sheet.sheetId }).count<{ count: string }[]>("* as count")).toEqual([{ count: "2" }]);
+    expect(
+      await db("sheet_versions").where({ vendor_id: s.vendor.id, sheet_id: s.sheet.sheetId }).count<{ count: string }[]>("* as count"),
+    ).toEqual([{ count: "2" }]);
   });
 
   it("refuses clearly while another draft is open, and for a version no longer published", async () => {
     const s = await scenario();
-    await db("sheet_versions").insert({ vendor_id: s.vendor.id, sheet_id: s.sheet.sheetId, number: 2, state: "draft", title: "Hand-made draft", source: "", front_matter: "{}" });
+    await db("sheet_versions").insert({
+      vendor_id: s.vendor.id,
+      sheet_id: s.sheet.sheetId,
+      number: 2,
+      state: "draft",
+      title: "Hand-made draft",
+      source: "",
+      front_matter: "{}",
+    });
     await expect(s.start()).rejects.toThrow(/already has an open draft \(version 2\)/);
     await db("sheet_versions").where({ vendor_id: s.vendor.id, sheet_id: s.sheet.sheetId, number: 2 }).delete();
     await db("sheet_versions").where({ id: s.sheet.versionId }).update({ state: "superseded", superseded_at: db.fn.now() });
@@ -116,7 +167,15 @@ describe("Start a draft from a customers' change", () => {
     await expect(s.start({ param: "rpm" })).rejects.toBeInstanceOf(NotFound);
     await expect(s.start({ operationIndex: 4 })).rejects.toBeInstanceOf(NotFound);
     const other = await createVendorWithStaff();
-    const err = await startDraftFromChange({ vendorId: other.vendor.id, userId: other.engineer.user.id, versionId: s.sheet.versionId, operationIndex: 0, param: "feedMmMin", z: Z95, confidenceLabel: "95 %" }).catch((e: unknown) => e);
+    const err = await startDraftFromChange({
+      vendorId: other.vendor.id,
+      userId: other.engineer.user.id,
+      versionId: s.sheet.versionId,
+      operationIndex: 0,
+      param: "feedMmMin",
+      z: Z95,
+      confidenceLabel: "95 %",
+    }).catch((e: unknown) => e);
     expect(err).toBeInstanceOf(NotFound);
     expect(await findOpenDraft({ vendorId: s.vendor.id, sheetId: s.sheet.sheetId })).toBeNull();
   });

@@ -13,7 +13,10 @@ afterAll(async () => {
 
 const snapshot = async (vendorId: string) => ({
   versions: await db("field_version_rollups").where({ vendor_id: vendorId }).orderBy("sheet_version_id").select("*"),
-  changes: await db("field_change_rollups").where({ vendor_id: vendorId }).orderBy(["sheet_version_id", "operation_index", "param"]).select("*"),
+  changes: await db("field_change_rollups")
+    .where({ vendor_id: vendorId })
+    .orderBy(["sheet_version_id", "operation_index", "param"])
+    .select("*"),
   weeks: await db("field_week_rollups").where({ vendor_id: vendorId }).orderBy(["sheet_version_id", "week"]).select("*"),
 });
 
@@ -22,7 +25,10 @@ describe("incremental Field-results rollups", () => {
     const { vendor } = await createVendorWithStaff();
     const first = await createBenchSheet(vendor.id);
     const second = await createBenchSheet(vendor.id);
-    await reportOutcomes(vendor.id, first.versionId, { asWritten: 3, afterChanges: 2, failed: { chatter: 1 } }, [{ feedMmMin: { from: 1000, to: 800 } }, { rpm: { from: 18000, to: 16000 } }]);
+    await reportOutcomes(vendor.id, first.versionId, { asWritten: 3, afterChanges: 2, failed: { chatter: 1 } }, [
+      { feedMmMin: { from: 1000, to: 800 } },
+      { rpm: { from: 18000, to: 16000 } },
+    ]);
     await reportOutcomes(vendor.id, second.versionId, { failed: { broken_tool: 2 } });
     await refreshFieldRollups();
 
@@ -30,14 +36,21 @@ describe("incremental Field-results rollups", () => {
     await reportOutcomes(vendor.id, second.versionId, { asWritten: 1 });
     const { versions } = await refreshFieldRollups();
     expect(versions).toBe(1);
-    expect(await db("field_version_rollups").where({ sheet_version_id: second.versionId }).first("outcomes", "failed", "worked_as_written")).toEqual({ outcomes: 3, failed: 2, worked_as_written: 1 });
+    expect(
+      await db("field_version_rollups").where({ sheet_version_id: second.versionId }).first("outcomes", "failed", "worked_as_written"),
+    ).toEqual({ outcomes: 3, failed: 2, worked_as_written: 1 });
 
     // Deletes and state changes reach the rollup too.
     await db("outcomes").where({ sheet_version_id: first.versionId, result: "failed" }).delete();
     await supersede(vendor.id, first.sheetId);
     expect((await refreshFieldRollups()).versions).toBeGreaterThanOrEqual(1);
     const incremental = await snapshot(vendor.id);
-    expect(incremental.versions.find((r) => r.sheet_version_id === first.versionId)).toMatchObject({ failed: 0, chatter: 0, outcomes: 5, state: "superseded" });
+    expect(incremental.versions.find((r) => r.sheet_version_id === first.versionId)).toMatchObject({
+      failed: 0,
+      chatter: 0,
+      outcomes: 5,
+      state: "superseded",
+    });
 
     await refreshFieldRollups(db, { rebuild: true });
     expect(await snapshot(vendor.id)).toEqual(incremental);

@@ -19,7 +19,10 @@ afterAll(async () => {
   await (await getBoss()).stop({ graceful: false, wait: true });
 });
 
-const mailsTo = async (email: string) => (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map((r: { data: { text: string } }) => r.data);
+const mailsTo = async (email: string) =>
+  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [email])).rows.map(
+    (r: { data: { text: string } }) => r.data,
+  );
 
 describe("Field results across vendors", () => {
   it("never shows vendor B's outcomes, changes, machines or sheets in vendor A's lists or digest", async () => {
@@ -68,10 +71,21 @@ describe("Field results across vendors", () => {
     await sendVendorDigests(v);
     const [digest] = await mailsTo(engineer.user.email);
     const everything = [
-      JSON.stringify({ attention, changes, coverage, summary: await loadFieldSummary({ vendorId: vendor.id }), versions: sheetResults.versions, changesOfSheet: sheetResults.changes }),
-      needsAttentionCsv(attention, 0.95), customerChangesCsv(changes), coverageGapsCsv(coverage), sheetVersionsCsv(sheet.sheetSlug, sheetResults.versions, 0.95),
+      JSON.stringify({
+        attention,
+        changes,
+        coverage,
+        summary: await loadFieldSummary({ vendorId: vendor.id }),
+        versions: sheetResults.versions,
+        changesOfSheet: sheetResults.changes,
+      }),
+      needsAttentionCsv(attention, 0.95),
+      customerChangesCsv(changes),
+      coverageGapsCsv(coverage),
+      sheetVersionsCsv(sheet.sheetSlug, sheetResults.versions, 0.95),
       digest.text,
     ].join("\n");
-    for (const secret of ["Quarrington", customer.email, customer.userId, customer.machineId, "private note"]) expect(everything).not.toContain(secret);
+    for (const secret of ["Quarrington", customer.email, customer.userId, customer.machineId, "private note"])
+      expect(everything).not.toContain(secret);
   });
 });

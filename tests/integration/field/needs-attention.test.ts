@@ -42,10 +42,22 @@ describe("Needs attention", () => {
   });
 
   it("computes the same lower bound in SQL as wilsonInterval() does", async () => {
-    const cases = [[0, 1], [1, 1], [1, 29], [15, 148], [81, 263], [5, 5], [499, 1000], [1, 100000]];
+    const cases = [
+      [0, 1],
+      [1, 1],
+      [1, 29],
+      [15, 148],
+      [81, 263],
+      [5, 5],
+      [499, 1000],
+      [1, 100000],
+    ];
     for (const z of [1.644854, Z95, 2.575829]) {
       for (const [failed, outcomes] of cases) {
-        const { rows } = await db.raw(`select ${WILSON_LOWER_SQL} as lower from (select ?::int as failed, ?::int as outcomes) r cross join (select ?::float8 as z) zz`, [failed, outcomes, z]);
+        const { rows } = await db.raw(
+          `select ${WILSON_LOWER_SQL} as lower from (select ?::int as failed, ?::int as outcomes) r cross join (select ?::float8 as z) zz`,
+          [failed, outcomes, z],
+        );
         expect(Number(rows[0].lower)).toBeCloseTo(wilsonInterval(failed, outcomes, z).lower, 12);
       }
     }
@@ -56,7 +68,10 @@ describe("Needs attention", () => {
     const sheet = await createBenchSheet(vendor.id);
     // Feed lowered by 10, 20, 20, 30 and 40 % → median −20 %, quartiles −30 % and −20 % (linear interpolation).
     const feeds = [900, 800, 800, 700, 600].map((to) => ({ feedMmMin: { from: 1000, to } }));
-    await reportOutcomes(vendor.id, sheet.versionId, { afterChanges: 5, failed: { chatter: 1 } }, [...feeds.slice(0, 4), { feedMmMin: { from: 1000, to: 600 }, rpm: { from: 18000, to: 19800 } }]);
+    await reportOutcomes(vendor.id, sheet.versionId, { afterChanges: 5, failed: { chatter: 1 } }, [
+      ...feeds.slice(0, 4),
+      { feedMmMin: { from: 1000, to: 600 }, rpm: { from: 18000, to: 19800 } },
+    ]);
     await refreshFieldRollups();
     const changes = await listCustomerChanges({ vendorId: vendor.id, minReports: 1 });
     const feed = changes.find((c) => c.param === "feedMmMin")!;

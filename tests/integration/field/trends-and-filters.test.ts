@@ -27,7 +27,9 @@ describe("Field-results trends per sheet", () => {
     await reportOutcomes(vendor.id, sheet.versionId, { asWritten: 3 }, undefined, { at: at("2026-11-02T00:00:00Z") });
     await reportOutcomes(vendor.id, sheet.versionId, { failed: { chatter: 1 } }, undefined, { at: at("2026-11-08T23:59:00Z") });
     // Week of Mon 9 Nov: nothing. Week of Mon 16 Nov: 5 reports on v1, 2 failed.
-    await reportOutcomes(vendor.id, sheet.versionId, { asWritten: 1, afterChanges: 2, failed: { poor_finish: 2 } }, undefined, { at: at("2026-11-18T10:00:00Z") });
+    await reportOutcomes(vendor.id, sheet.versionId, { asWritten: 1, afterChanges: 2, failed: { poor_finish: 2 } }, undefined, {
+      at: at("2026-11-18T10:00:00Z"),
+    });
     const event = await supersede(vendor.id, sheet.sheetId);
     // The same week, on v2: 3 more reports, none failed. Outside the range: one report in October.
     await reportOutcomes(vendor.id, event.versionId, { asWritten: 3 }, undefined, { at: at("2026-11-20T10:00:00Z") });
@@ -35,17 +37,32 @@ describe("Field-results trends per sheet", () => {
     await refreshFieldRollups();
 
     const trends = await loadSheetTrends({ vendorId: vendor.id, sheetId: sheet.sheetId, from: "2026-11-04", to: "2026-11-22", z: Z95 });
-    expect(trends.weeks.map((w) => [w.week, w.outcomes, w.failed])).toEqual([["2026-11-02", 4, 1], ["2026-11-09", 0, 0], ["2026-11-16", 8, 2]]);
+    expect(trends.weeks.map((w) => [w.week, w.outcomes, w.failed])).toEqual([
+      ["2026-11-02", 4, 1],
+      ["2026-11-09", 0, 0],
+      ["2026-11-16", 8, 2],
+    ]);
     expect(trends.weeks[2].failure).toEqual(wilsonInterval(2, 8, Z95));
     // Both versions were published when the factory ran (published versions are immutable): their week is marked.
     expect(trends.weeks.some((w) => w.published.length)).toBe(false);
     const today = new Date().toISOString().slice(0, 10);
-    const upToNow = await loadSheetTrends({ vendorId: vendor.id, sheetId: sheet.sheetId, from: "2026-11-02", to: today > "2026-11-02" ? today : "2026-11-02", z: Z95 });
+    const upToNow = await loadSheetTrends({
+      vendorId: vendor.id,
+      sheetId: sheet.sheetId,
+      from: "2026-11-02",
+      to: today > "2026-11-02" ? today : "2026-11-02",
+      z: Z95,
+    });
     const marked = upToNow.weeks.filter((w) => w.published.length);
     expect(marked.map((w) => w.week)).toEqual([weekStartOf(new Date())]);
     expect(marked[0].published).toEqual([1, 2]);
     // The weekly rollup equals a count over the raw reports.
-    const raw = await db("outcomes").where({ vendor_id: vendor.id }).whereIn("sheet_version_id", [sheet.versionId, event.versionId]).where("created_at", ">=", "2026-11-16").where("created_at", "<", "2026-11-23").count<{ count: string }[]>("* as count");
+    const raw = await db("outcomes")
+      .where({ vendor_id: vendor.id })
+      .whereIn("sheet_version_id", [sheet.versionId, event.versionId])
+      .where("created_at", ">=", "2026-11-16")
+      .where("created_at", "<", "2026-11-23")
+      .count<{ count: string }[]>("* as count");
     expect(trends.weeks[2].outcomes).toBe(Number(raw[0].count));
   });
 
@@ -56,10 +73,14 @@ describe("Field-results trends per sheet", () => {
     await refreshFieldRollups();
     await reportOutcomes(vendor.id, sheet.versionId, { failed: { broken_tool: 1 } }, undefined, { at: at("2026-11-04T10:00:00Z") });
     await refreshFieldRollups();
-    expect(await db("field_week_rollups").where({ vendor_id: vendor.id }).select("outcomes", "failed", "broken_tool")).toEqual([{ outcomes: 3, failed: 1, broken_tool: 1 }]);
+    expect(await db("field_week_rollups").where({ vendor_id: vendor.id }).select("outcomes", "failed", "broken_tool")).toEqual([
+      { outcomes: 3, failed: 1, broken_tool: 1 },
+    ]);
     await db("outcomes").where({ vendor_id: vendor.id, result: "failed" }).delete();
     await refreshFieldRollups();
-    expect(await db("field_week_rollups").where({ vendor_id: vendor.id }).select("outcomes", "failed")).toEqual([{ outcomes: 2, failed: 0 }]);
+    expect(await db("field_week_rollups").where({ vendor_id: vendor.id }).select("outcomes", "failed")).toEqual([
+      { outcomes: 2, failed: 0 },
+    ]);
   });
 
   it("shows nothing of another vendor's sheet: not found, and no weeks", async () => {
@@ -81,11 +102,17 @@ describe("Needs attention, filtered", () => {
     const early = await createBenchSheet(vendor.id);
     const late = await createBenchSheet(vendor.id);
     // early: fails a lot in October, fine in November. late: fails in November only.
-    await reportOutcomes(vendor.id, early.versionId, { failed: { chatter: 8 }, asWritten: 2 }, undefined, { at: at("2026-10-14T10:00:00Z") });
+    await reportOutcomes(vendor.id, early.versionId, { failed: { chatter: 8 }, asWritten: 2 }, undefined, {
+      at: at("2026-10-14T10:00:00Z"),
+    });
     await reportOutcomes(vendor.id, early.versionId, { asWritten: 6 }, undefined, { at: at("2026-11-11T10:00:00Z") });
-    await reportOutcomes(vendor.id, late.versionId, { failed: { melting_welding: 3 }, asWritten: 3 }, undefined, { at: at("2026-11-12T10:00:00Z") });
+    await reportOutcomes(vendor.id, late.versionId, { failed: { melting_welding: 3 }, asWritten: 3 }, undefined, {
+      at: at("2026-11-12T10:00:00Z"),
+    });
     await refreshFieldRollups();
-    const classOf = async (sheetId: string) => (await db("sheets as s").join("machine_classes as mc", "mc.id", "s.machine_class_id").where("s.id", sheetId).first("mc.slug")).slug as string;
+    const classOf = async (sheetId: string) =>
+      (await db("sheets as s").join("machine_classes as mc", "mc.id", "s.machine_class_id").where("s.id", sheetId).first("mc.slug"))
+        .slug as string;
     return { vendor, early, late, classOf };
   }
 
@@ -105,8 +132,18 @@ describe("Needs attention, filtered", () => {
 
   it("filters by machine class, alone or with dates, and never shows another vendor's versions", async () => {
     const { vendor, early, late, classOf } = await twoSheets();
-    expect((await listNeedsAttention({ vendorId: vendor.id, z: Z95, filters: { machineClass: await classOf(late.sheetId) } })).map((i) => i.versionId)).toEqual([late.versionId]);
-    expect(await listNeedsAttention({ vendorId: vendor.id, z: Z95, filters: { machineClass: await classOf(early.sheetId), from: "2026-11-01" } })).toEqual([]);
+    expect(
+      (await listNeedsAttention({ vendorId: vendor.id, z: Z95, filters: { machineClass: await classOf(late.sheetId) } })).map(
+        (i) => i.versionId,
+      ),
+    ).toEqual([late.versionId]);
+    expect(
+      await listNeedsAttention({
+        vendorId: vendor.id,
+        z: Z95,
+        filters: { machineClass: await classOf(early.sheetId), from: "2026-11-01" },
+      }),
+    ).toEqual([]);
     expect(await listNeedsAttention({ vendorId: vendor.id, z: Z95, filters: { machineClass: "no-such-class" } })).toEqual([]);
     const other = await createVendorWithStaff();
     expect(await listNeedsAttention({ vendorId: other.vendor.id, z: Z95, filters: { from: "2026-01-01", to: "2026-12-31" } })).toEqual([]);

@@ -6,15 +6,26 @@ import { POST } from "@/app/api/v1/calculate/route";
 const BODY = JSON.stringify({
   units: "imperial",
   operation: {
-    kind: "slotting", diameter: { value: 0.25, unit: "in" }, flutes: 2, spindleSpeed: { value: 18000, unit: "rpm" },
-    feed: { value: 100, unit: "in/min" }, axialDepth: { value: 0.125, unit: "in" }, radialDepth: { value: 0.25, unit: "in" },
+    kind: "slotting",
+    diameter: { value: 0.25, unit: "in" },
+    flutes: 2,
+    spindleSpeed: { value: 18000, unit: "rpm" },
+    feed: { value: 100, unit: "in/min" },
+    axialDepth: { value: 0.125, unit: "in" },
+    radialDepth: { value: 0.25, unit: "in" },
   },
   material: {
-    cuttingSpeedWindow: { min: 300, max: 1200, unit: "SFM" }, minChipLoad: { value: 0.002, unit: "in/tooth" },
+    cuttingSpeedWindow: { min: 300, max: 1200, unit: "SFM" },
+    minChipLoad: { value: 0.002, unit: "in/tooth" },
     specificCuttingForce: { value: 100, unit: "N/mm²" },
   },
   referenceMachine: { rigidity: 0.8 },
-  machine: { spindleSpeed: { min: 8000, max: 12000, unit: "rpm" }, maxFeed: { value: 150, unit: "in/min" }, spindlePower: { value: 0.8, unit: "kW" }, rigidity: 0.5 },
+  machine: {
+    spindleSpeed: { min: 8000, max: 12000, unit: "rpm" },
+    maxFeed: { value: 150, unit: "in/min" },
+    spindlePower: { value: 0.8, unit: "kW" },
+    rigidity: 0.5,
+  },
 });
 
 // Headers as the app's server stamps them (lib/http/record-peer-address.ts): the TCP peer, and the
@@ -24,7 +35,12 @@ const call = (peer: string, forwarded: string) =>
     new NextRequest("http://127.0.0.1/api/v1/calculate", {
       method: "POST",
       body: BODY,
-      headers: { "content-type": "application/json", "x-forwarded-for": forwarded, "x-swarfbook-peer": peer, "x-swarfbook-forwarded-for": forwarded },
+      headers: {
+        "content-type": "application/json",
+        "x-forwarded-for": forwarded,
+        "x-swarfbook-peer": peer,
+        "x-swarfbook-forwarded-for": forwarded,
+      },
     }),
   );
 

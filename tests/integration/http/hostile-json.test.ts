@@ -2,8 +2,8 @@ import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 
 import { POST } from "@/app/api/v1/vendors/[vendor]/machines/route";
-import { db } from "@/lib/db/knex";
 import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
+import { db } from "@/lib/db/knex";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { hostileCorpusBytes } from "@/tests/support/hostile-corpus";
 

@@ -2,8 +2,8 @@ import { NextRequest } from "next/server";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
 import { GET, POST } from "@/app/api/v1/vendors/[vendor]/machines/route";
-import type { SessionUser } from "@/lib/auth/session-user";
 import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
+import type { SessionUser } from "@/lib/auth/session-user";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
 // The session cookie is what a browser sends on its own; stand in for it with the user it would resolve to.
@@ -12,7 +12,11 @@ vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.
 
 const ORIGIN = "http://localhost";
 
-function call(handler: typeof GET | typeof POST, slug: string, init: { method: string; headers?: Record<string, string>; body?: BodyInit }) {
+function call(
+  handler: typeof GET | typeof POST,
+  slug: string,
+  init: { method: string; headers?: Record<string, string>; body?: BodyInit },
+) {
   return handler(new NextRequest(`${ORIGIN}/api/v1/vendors/${slug}/machines`, init), { params: Promise.resolve({ vendor: slug }) });
 }
 
@@ -30,9 +34,18 @@ describe("route handlers with a session cookie", () => {
 
   it("refuse a change without an Origin, or from another site, with a clear 403", async () => {
     const { vendor } = await signedInCustomer();
-    const variants: Array<Record<string, string>> = [{}, { origin: "https://evil.example" }, { origin: "null" }, { origin: "http://localhost.evil.example" }];
+    const variants: Array<Record<string, string>> = [
+      {},
+      { origin: "https://evil.example" },
+      { origin: "null" },
+      { origin: "http://localhost.evil.example" },
+    ];
     for (const headers of variants) {
-      const res = await call(POST, vendor.slug, { method: "POST", headers: { "content-type": "application/json", ...headers }, body: "{}" });
+      const res = await call(POST, vendor.slug, {
+        method: "POST",
+        headers: { "content-type": "application/json", ...headers },
+        body: "{}",
+      });
       expect(res.status).toBe(403);
       expect(await res.json()).toMatchObject({ error: "forbidden", message: expect.stringMatching(/Origin/) });
     }
@@ -41,7 +54,11 @@ describe("route handlers with a session cookie", () => {
   it("accept a change from the app's own origin", async () => {
     const { vendor } = await signedInCustomer();
     // An empty machine is invalid: a 400 from the schema shows the request got past the guards.
-    const res = await call(POST, vendor.slug, { method: "POST", headers: { "content-type": "application/json", origin: ORIGIN }, body: "{}" });
+    const res = await call(POST, vendor.slug, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: ORIGIN },
+      body: "{}",
+    });
     expect(res.status).toBe(400);
   });
 
@@ -60,7 +77,11 @@ describe("route handlers with a session cookie", () => {
   it("need no Origin with a personal access token", async () => {
     const { vendor, customer } = await createVendorWithStaff();
     const { secret } = await createPersonalToken({ vendorId: vendor.id, userId: customer.user.id, name: "script" });
-    const res = await call(POST, vendor.slug, { method: "POST", headers: { authorization: `Bearer ${secret}`, "content-type": "application/json" }, body: "{}" });
+    const res = await call(POST, vendor.slug, {
+      method: "POST",
+      headers: { authorization: `Bearer ${secret}`, "content-type": "application/json" },
+      body: "{}",
+    });
     expect(res.status).toBe(400);
   });
 });
@@ -69,7 +90,11 @@ describe("JSON bodies", () => {
   it("must be sent as application/json (text/plain is a 415, not read as JSON)", async () => {
     const { vendor } = await signedInCustomer();
     for (const type of ["text/plain", "application/x-www-form-urlencoded", "multipart/form-data; boundary=x", ""]) {
-      const res = await call(POST, vendor.slug, { method: "POST", headers: { origin: ORIGIN, ...(type ? { "content-type": type } : {}) }, body: "{}" });
+      const res = await call(POST, vendor.slug, {
+        method: "POST",
+        headers: { origin: ORIGIN, ...(type ? { "content-type": type } : {}) },
+        body: "{}",
+      });
       expect(res.status, type).toBe(415);
       expect(await res.json()).toMatchObject({ error: "unsupported_media_type", message: expect.stringMatching(/application\/json/) });
     }
@@ -90,7 +115,12 @@ describe("JSON bodies", () => {
         controller.enqueue(new Uint8Array(64 * 1024).fill(32));
       },
     });
-    const request = new NextRequest(`${ORIGIN}/api/v1/vendors/${vendor.slug}/machines`, { method: "POST", headers: { origin: ORIGIN, "content-type": "application/json" }, body, duplex: "half" });
+    const request = new NextRequest(`${ORIGIN}/api/v1/vendors/${vendor.slug}/machines`, {
+      method: "POST",
+      headers: { origin: ORIGIN, "content-type": "application/json" },
+      body,
+      duplex: "half",
+    });
     expect(request.headers.get("content-length")).toBeNull();
     const res = await POST(request, { params: Promise.resolve({ vendor: vendor.slug }) });
     expect(res.status).toBe(413);

@@ -1,8 +1,8 @@
 import { NextRequest } from "next/server";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
-import { saveViewAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { signUpAction } from "@/app/[vendor]/(public)/sign-up/actions";
+import { saveViewAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { GET as shortLink } from "@/app/c/[code]/route";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { db } from "@/lib/db/knex";
@@ -41,7 +41,10 @@ describe("inputs that used to escape as raw errors", () => {
       const result = await saveViewAction({ ok: false }, form({ vendor: vendor.slug, name: "Mine", filters }));
       expect(result.ok).toBe(false);
       expect(result, filters).toMatchObject({ message: "Please correct the marked fields." });
-      expect(Object.keys(result.errors ?? {}).some((key) => key.startsWith("filters")), filters).toBe(true);
+      expect(
+        Object.keys(result.errors ?? {}).some((key) => key.startsWith("filters")),
+        filters,
+      ).toBe(true);
     }
     expect(await db("desk_views").where({ vendor_id: vendor.id })).toEqual([]);
     const ok = await saveViewAction({ ok: false }, form({ vendor: vendor.slug, name: "Mine", filters: '{"status":["new"]}' }));

@@ -1,11 +1,11 @@
 import { afterAll, describe, expect, it } from "vitest";
 
+import { recordOutcome } from "@/lib/bench/outcomes";
 import { db } from "@/lib/db/knex";
 import { dispatchSheetEvent } from "@/lib/events/dispatch-sheet-event";
 import { stopBoss } from "@/lib/jobs/boss";
 import { enqueue } from "@/lib/jobs/enqueue";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
-import { recordOutcome } from "@/lib/bench/outcomes";
 import { addCustomerMessage, addStaffMessage } from "@/lib/tickets/add-message";
 import { createProblemReport } from "@/lib/tickets/problem-reports";
 import { createBenchSheet } from "@/tests/factories/bench";
@@ -17,7 +17,11 @@ afterAll(async () => {
   await stopBoss();
 });
 
-const jobsTo = async (to: string) => (await db.raw("select id, data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [to])).rows as { id: string; data: { text: string } }[];
+const jobsTo = async (to: string) =>
+  (await db.raw("select id, data from pgboss.job where name = 'mail.send' and data->>'to' = ?", [to])).rows as {
+    id: string;
+    data: { text: string };
+  }[];
 const count = async (name: string, where = "true", bindings: string[] = []) =>
   Number((await db.raw(`select count(*)::int as n from pgboss.job where name = ? and ${where}`, [name, ...bindings])).rows[0].n);
 
@@ -48,14 +52,28 @@ describe("transactional outbox", () => {
     const ticket = await openTicket(vendor.id, customer.user.id);
     // The customer's address no longer passes the mail schema: queueing the notification throws inside the write.
     await db("users").where({ id: customer.user.id }).update({ email: "not-an-address" });
-    await expect(addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Lower the feed.", visibility: "public" })).rejects.toThrow();
+    await expect(
+      addStaffMessage({
+        vendorId: vendor.id,
+        ticketId: ticket.id,
+        authorId: support.user.id,
+        body: "Lower the feed.",
+        visibility: "public",
+      }),
+    ).rejects.toThrow();
     expect(await db("ticket_messages").where({ ticket_id: ticket.id, body: "Lower the feed." })).toEqual([]);
   });
 
   it("a resubmitted reply posts once and mails once", async () => {
     const { vendor, support, customer } = await createVendorWithStaff();
     const ticket = await openTicket(vendor.id, customer.user.id);
-    const reply = { vendorId: vendor.id, ticketId: ticket.id, authorId: customer.user.id, body: "Still chatters.", idempotencyKey: uniq("reply") };
+    const reply = {
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      authorId: customer.user.id,
+      body: "Still chatters.",
+      idempotencyKey: uniq("reply"),
+    };
     const [first, second] = await Promise.all([addCustomerMessage(reply), addCustomerMessage(reply)]);
     expect(first.id).toBe(second.id);
     expect([first.created, second.created].sort()).toEqual([false, true]);
@@ -67,8 +85,16 @@ describe("transactional outbox", () => {
     const { vendor, support, customer } = await createVendorWithStaff();
     const sheet = await createBenchSheet(vendor.id);
     const field = await createFieldCustomer(vendor.id);
-    const [setup] = await db("setups").insert({ vendor_id: vendor.id, user_id: field.userId, machine_id: field.machineId, sheet_version_id: sheet.versionId, result: "{}" }).returning("id");
-    const outcome = { vendorId: vendor.id, userId: field.userId, setupId: setup.id, fields: { result: "worked_as_written" as const, changes: {}, notes: "" }, idempotencyKey: uniq("outcome") };
+    const [setup] = await db("setups")
+      .insert({ vendor_id: vendor.id, user_id: field.userId, machine_id: field.machineId, sheet_version_id: sheet.versionId, result: "{}" })
+      .returning("id");
+    const outcome = {
+      vendorId: vendor.id,
+      userId: field.userId,
+      setupId: setup.id,
+      fields: { result: "worked_as_written" as const, changes: {}, notes: "" },
+      idempotencyKey: uniq("outcome"),
+    };
     const a = await recordOutcome(outcome);
     const b = await recordOutcome(outcome);
     expect(b).toEqual({ id: a.id, created: false });
@@ -76,7 +102,15 @@ describe("transactional outbox", () => {
     expect(await count("field.refresh-rollups")).toBeGreaterThan(0);
 
     const ticket = await openTicket(vendor.id, customer.user.id);
-    const handoff = { vendorId: vendor.id, actorUserId: support.user.id, ticketId: ticket.id, sheetVersionId: sheet.versionId, summary: "vf too high", details: "", idempotencyKey: uniq("handoff") };
+    const handoff = {
+      vendorId: vendor.id,
+      actorUserId: support.user.id,
+      ticketId: ticket.id,
+      sheetVersionId: sheet.versionId,
+      summary: "vf too high",
+      details: "",
+      idempotencyKey: uniq("handoff"),
+    };
     const [h1, h2] = await Promise.all([createProblemReport(handoff), createProblemReport(handoff)]);
     expect(h1.id).toBe(h2.id);
     expect(await db("problem_reports").where({ ticket_id: ticket.id })).toHaveLength(1);

@@ -1,32 +1,71 @@
-import type { SheetState } from "@/content-schema/sheet-workflow";
 import { NextRequest } from "next/server";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
 import { GET as cutterPdf } from "@/app/[vendor]/(customer)/library/cutters/[sku]/pdf/route";
 import { sheetFrontMatterSchema } from "@/content-schema/sheet-front-matter";
+import type { SheetState } from "@/content-schema/sheet-workflow";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { db } from "@/lib/db/knex";
 import { createBenchSheet, supersede } from "@/tests/factories/bench";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
 import { buildSheetSource, frontMatterInput, operationInput } from "@/tests/factories/sheet-source";
-import { readPdf } from "@/tests/support/pdf-text";
 import { mustExist } from "@/tests/support/must-exist";
+import { readPdf } from "@/tests/support/pdf-text";
 
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
 vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.user }));
 
-const get = (vendor: string, sku: string) => cutterPdf(new NextRequest(`http://127.0.0.1:3000/${vendor}/library/cutters/${sku}/pdf`), { params: Promise.resolve({ vendor, sku }) });
+const get = (vendor: string, sku: string) =>
+  cutterPdf(new NextRequest(`http://127.0.0.1:3000/${vendor}/library/cutters/${sku}/pdf`), { params: Promise.resolve({ vendor, sku }) });
 const textOf = async (res: Response) => readPdf(new Uint8Array(await res.arrayBuffer()));
 const squash = (text: string) => text.replace(/[\u00a0\u202f]/g, " ").replace(/\s+/g, " ");
 
 /** A second published sheet of the same cutter, in invented MDF on an invented small router, slot at 1200 mm/min. */
 async function mdfSheet(vendorId: string, cutterId: string, state: SheetState = "published") {
-  const [material] = await db("materials").insert({ vendor_id: vendorId, slug: uniq("mdf"), name: "MDF board", material_group: "wood", vc_min_mpm: 150, vc_max_mpm: 400, min_chip_load_mm: 0.04, kc_nmm2: 40 }).returning("id");
-  const [klass] = await db("machine_classes").insert({ vendor_id: vendorId, slug: uniq("hobby"), name: "Hobby router", rpm_min: 10000, rpm_max: 24000, power_kw: 0.8, max_feed_mm_min: 4000, rigidity: 0.4 }).returning("id");
-  const [sheet] = await db("sheets").insert({ vendor_id: vendorId, slug: uniq("mdf-sheet"), cutter_id: cutterId, material_id: material.id, machine_class_id: klass.id }).returning("id");
-  const fields = frontMatterInput({ title: "MDF, 1/8 in single-flute cutter", operations: [operationInput({ vf: "1200 mm/min" })], cautions: [{ kind: "dust", text: "MDF dust is fine: extract at the cutter." }] });
+  const [material] = await db("materials")
+    .insert({
+      vendor_id: vendorId,
+      slug: uniq("mdf"),
+      name: "MDF board",
+      material_group: "wood",
+      vc_min_mpm: 150,
+      vc_max_mpm: 400,
+      min_chip_load_mm: 0.04,
+      kc_nmm2: 40,
+    })
+    .returning("id");
+  const [klass] = await db("machine_classes")
+    .insert({
+      vendor_id: vendorId,
+      slug: uniq("hobby"),
+      name: "Hobby router",
+      rpm_min: 10000,
+      rpm_max: 24000,
+      power_kw: 0.8,
+      max_feed_mm_min: 4000,
+      rigidity: 0.4,
+    })
+    .returning("id");
+  const [sheet] = await db("sheets")
+    .insert({ vendor_id: vendorId, slug: uniq("mdf-sheet"), cutter_id: cutterId, material_id: material.id, machine_class_id: klass.id })
+    .returning("id");
+  const fields = frontMatterInput({
+    title: "MDF, 1/8 in single-flute cutter",
+    operations: [operationInput({ vf: "1200 mm/min" })],
+    cautions: [{ kind: "dust", text: "MDF dust is fine: extract at the cutter." }],
+  });
   const fm = sheetFrontMatterSchema.parse(fields);
-  await db("sheet_versions").insert({ vendor_id: vendorId, sheet_id: sheet.id, number: 1, state, title: fm.title, source: buildSheetSource({ frontMatter: fields }), front_matter: JSON.stringify(fm), published_at: db.fn.now(), ...(state === "withdrawn" ? { withdrawn_at: db.fn.now(), withdrawn_reason: "Wrong feed." } : {}) });
+  await db("sheet_versions").insert({
+    vendor_id: vendorId,
+    sheet_id: sheet.id,
+    number: 1,
+    state,
+    title: fm.title,
+    source: buildSheetSource({ frontMatter: fields }),
+    front_matter: JSON.stringify(fm),
+    published_at: db.fn.now(),
+    ...(state === "withdrawn" ? { withdrawn_at: db.fn.now(), withdrawn_reason: "Wrong feed." } : {}),
+  });
 }
 
 beforeEach(() => {

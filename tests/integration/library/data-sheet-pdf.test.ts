@@ -16,7 +16,9 @@ const as = (user: { id: string; email: string; name: string } | null) => {
   session.user = user ? { id: user.id, email: user.email, name: user.name, isOperator: false } : null;
 };
 const get = (vendor: string, sheet: string, n: string) =>
-  versionPdf(new NextRequest(`http://127.0.0.1:3000/${vendor}/library/${sheet}/v/${n}/pdf`), { params: Promise.resolve({ vendor, sheet, n }) });
+  versionPdf(new NextRequest(`http://127.0.0.1:3000/${vendor}/library/${sheet}/v/${n}/pdf`), {
+    params: Promise.resolve({ vendor, sheet, n }),
+  });
 const squash = (text: string) => text.replace(/[\u00a0\u202f]/g, " ").replace(/\s+/g, " ");
 
 beforeEach(() => as(null));
@@ -60,9 +62,19 @@ describe("the printable data sheet of a sheet version", () => {
     as(customer.user);
     const old = squash(readPdf(new Uint8Array(await (await get(vendor.slug, sheet.sheetSlug, "1")).arrayBuffer())).text);
     expect(old).toMatch(/Superseded on .*the current version is 2/);
-    await db("sheet_versions").where({ vendor_id: vendor.id, sheet_id: sheet.sheetId, number: 2 }).update({ state: "withdrawn", withdrawn_at: db.fn.now(), withdrawn_reason: "Chatter on light routers." });
+    await db("sheet_versions")
+      .where({ vendor_id: vendor.id, sheet_id: sheet.sheetId, number: 2 })
+      .update({ state: "withdrawn", withdrawn_at: db.fn.now(), withdrawn_reason: "Chatter on light routers." });
     expect((await get(vendor.slug, sheet.sheetSlug, "2")).status).toBe(404);
-    await db("sheet_versions").insert({ vendor_id: vendor.id, sheet_id: sheet.sheetId, number: 3, state: "draft", title: "Draft", source: "", front_matter: "{}" });
+    await db("sheet_versions").insert({
+      vendor_id: vendor.id,
+      sheet_id: sheet.sheetId,
+      number: 3,
+      state: "draft",
+      title: "Draft",
+      source: "",
+      front_matter: "{}",
+    });
     expect((await get(vendor.slug, sheet.sheetSlug, "3")).status).toBe(404);
     expect((await get(vendor.slug, sheet.sheetSlug, "abc")).status).toBe(404);
   });

@@ -21,7 +21,9 @@ afterAll(async () => {
 
 type Queued = { to: string; subject: string; text: string; html?: string };
 const mailsTo = async (to: string): Promise<Queued[]> =>
-  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ? order by created_on", [to])).rows.map((r: { data: Queued }) => r.data);
+  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ? order by created_on", [to])).rows.map(
+    (r: { data: Queued }) => r.data,
+  );
 
 /** The footer's preferences link, opened as its reader would: it must lead to that person's own preferences. */
 async function footerLeadsTo(mail: Queued, vendorSlug: string, userId: string) {
@@ -41,8 +43,16 @@ describe("mail preferences are honoured by every sender", () => {
     const people = [];
     for (const _ of [1, 2]) {
       const member = await createMember(vendor.id, "customer");
-      const machine = await createMachine({ vendorId: vendor.id, userId: member.user.id, fields: machineFieldsSchema.parse(weakMachineFields) });
-      await createSetup({ vendorId: vendor.id, userId: member.user.id, input: setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id, operationIndex: 0 }) });
+      const machine = await createMachine({
+        vendorId: vendor.id,
+        userId: member.user.id,
+        fields: machineFieldsSchema.parse(weakMachineFields),
+      });
+      await createSetup({
+        vendorId: vendor.id,
+        userId: member.user.id,
+        input: setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id, operationIndex: 0 }),
+      });
       people.push(member.user);
     }
     await setMailPreference({ vendorId: vendor.id, userId: people[1].id, kind: "change_alerts", enabled: false });
@@ -72,7 +82,13 @@ describe("mail preferences are honoured by every sender", () => {
     await footerLeadsTo(notice, v.slug, support.user.id);
     expect(await mailsTo(second.user.email)).toEqual([]);
 
-    await addStaffMessage({ vendorId: v.id, ticketId: ticket.id, authorId: support.user.id, body: "Raise the feed.", visibility: "public" });
+    await addStaffMessage({
+      vendorId: v.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Raise the feed.",
+      visibility: "public",
+    });
     const [reply] = await mailsTo(customer.user.email);
     await footerLeadsTo(reply, v.slug, customer.user.id);
     // The footer sits below the reply, so answering by mail above the line still works.

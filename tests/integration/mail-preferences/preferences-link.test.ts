@@ -1,14 +1,14 @@
 import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 
-import { POST as stopAlerts } from "@/app/api/v1/vendors/[vendor]/setups/alerts/stop/route";
 import { POST as stopDigest } from "@/app/api/v1/vendors/[vendor]/field/digest/stop/route";
+import { POST as stopAlerts } from "@/app/api/v1/vendors/[vendor]/setups/alerts/stop/route";
 import { createAlertStopToken } from "@/lib/bench/alert-token";
 import { db } from "@/lib/db/knex";
-import { createStopToken } from "@/lib/mail/stop-token";
 import { findPreferencesPerson } from "@/lib/mail-preferences/find-preferences-person";
 import { listMailPreferences, saveMailPreferences } from "@/lib/mail-preferences/mail-preferences";
 import { createPreferencesToken } from "@/lib/mail-preferences/preferences-link";
+import { createStopToken } from "@/lib/mail/stop-token";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
 const post = (handler: typeof stopAlerts, url: string, body: string) =>
@@ -17,7 +17,10 @@ const post = (handler: typeof stopAlerts, url: string, body: string) =>
 describe("the mail preferences page's signed link", () => {
   it("opens the preferences of the person it was made for, without signing in", async () => {
     const { vendor, customer } = await createVendorWithStaff();
-    const person = await findPreferencesPerson({ vendorSlug: vendor.slug, token: createPreferencesToken({ vendorId: vendor.id, userId: customer.user.id }) });
+    const person = await findPreferencesPerson({
+      vendorSlug: vendor.slug,
+      token: createPreferencesToken({ vendorId: vendor.id, userId: customer.user.id }),
+    });
     expect(person).toMatchObject({ userId: customer.user.id, email: customer.user.email, role: "customer", viaLink: true });
   });
 
@@ -26,7 +29,9 @@ describe("the mail preferences page's signed link", () => {
     const b = await createVendorWithStaff();
     const who = { vendorId: a.vendor.id, userId: a.customer.user.id };
     const token = createPreferencesToken(who);
-    expect(await findPreferencesPerson({ vendorSlug: a.vendor.slug, token: token.replace(/.$/, (c) => (c === "A" ? "B" : "A")) })).toBeNull();
+    expect(
+      await findPreferencesPerson({ vendorSlug: a.vendor.slug, token: token.replace(/.$/, (c) => (c === "A" ? "B" : "A")) }),
+    ).toBeNull();
     expect(await findPreferencesPerson({ vendorSlug: a.vendor.slug, token: createStopToken("change-alerts", who) })).toBeNull();
     expect(await findPreferencesPerson({ vendorSlug: b.vendor.slug, token })).toBeNull();
     await db("members").where({ vendor_id: a.vendor.id, user_id: a.customer.user.id }).delete();
@@ -37,7 +42,12 @@ describe("the mail preferences page's signed link", () => {
     const a = await createVendorWithStaff();
     const who = { vendorId: a.vendor.id, userId: a.customer.user.id };
     await saveMailPreferences({ ...who, choices: { change_alerts: false, ticket_notifications: true, batch_changes: false } });
-    expect(await listMailPreferences(who)).toEqual({ change_alerts: false, batch_changes: false, ticket_notifications: true, weekly_digest: true });
+    expect(await listMailPreferences(who)).toEqual({
+      change_alerts: false,
+      batch_changes: false,
+      ticket_notifications: true,
+      weekly_digest: true,
+    });
   });
 });
 
@@ -45,7 +55,11 @@ describe("the stop links land on the preferences page", () => {
   it("the page's button turns change alerts off and redirects to the person's preferences with a notice", async () => {
     const { vendor, customer } = await createVendorWithStaff();
     const who = { vendorId: vendor.id, userId: customer.user.id };
-    const res = await post(stopAlerts, `http://127.0.0.1:3000/api/v1/vendors/${vendor.slug}/setups/alerts/stop?token=${createAlertStopToken(who)}`, "via=page");
+    const res = await post(
+      stopAlerts,
+      `http://127.0.0.1:3000/api/v1/vendors/${vendor.slug}/setups/alerts/stop?token=${createAlertStopToken(who)}`,
+      "via=page",
+    );
     expect(res.status).toBe(303);
     const to = new URL(res.headers.get("location")!);
     expect(to.pathname).toBe(`/${vendor.slug}/mail-preferences`);
@@ -57,7 +71,11 @@ describe("the stop links land on the preferences page", () => {
   it("a mail client's one-click POST (RFC 8058) gets a plain answer that links to the preferences", async () => {
     const { vendor, engineer } = await createVendorWithStaff();
     const who = { vendorId: vendor.id, userId: engineer.user.id };
-    const res = await post(stopDigest, `http://127.0.0.1:3000/api/v1/vendors/${vendor.slug}/field/digest/stop?token=${createStopToken("weekly-digest", who)}`, "List-Unsubscribe=One-Click");
+    const res = await post(
+      stopDigest,
+      `http://127.0.0.1:3000/api/v1/vendors/${vendor.slug}/field/digest/stop?token=${createStopToken("weekly-digest", who)}`,
+      "List-Unsubscribe=One-Click",
+    );
     expect(res.status).toBe(200);
     const html = await res.text();
     expect(html).toContain("Weekly digest stopped");

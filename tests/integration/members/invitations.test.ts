@@ -9,7 +9,14 @@ import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
 import { mustExist } from "@/tests/support/must-exist";
 
 async function invite(v: Awaited<ReturnType<typeof createVendorWithStaff>>, email = `${uniq("new")}@example.test`) {
-  const { token } = await inviteMember({ vendorId: v.vendor.id, vendorSlug: v.vendor.slug, vendorName: v.vendor.name, actorUserId: v.admin.user.id, email, role: "engineer" });
+  const { token } = await inviteMember({
+    vendorId: v.vendor.id,
+    vendorSlug: v.vendor.slug,
+    vendorName: v.vendor.name,
+    actorUserId: v.admin.user.id,
+    email,
+    role: "engineer",
+  });
   return { token, email };
 }
 
@@ -17,11 +24,19 @@ describe("staff invitations", () => {
   it("creates the account and membership once, and the link is single use", async () => {
     const v = await createVendorWithStaff();
     const { token, email } = await invite(v);
-    const result = await acceptInvitation({ vendorId: v.vendor.id, token, name: "New Engineer", password: "a-long-password", sessionUserId: null });
+    const result = await acceptInvitation({
+      vendorId: v.vendor.id,
+      token,
+      name: "New Engineer",
+      password: "a-long-password",
+      sessionUserId: null,
+    });
     expect(result).toMatchObject({ email, role: "engineer" });
     const member = mustExist(await db("members").where({ vendor_id: v.vendor.id, user_id: result.userId }).first(), "member");
     expect(member.role).toBe("engineer");
-    await expect(acceptInvitation({ vendorId: v.vendor.id, token, name: "Again", password: "a-long-password", sessionUserId: null })).rejects.toBeInstanceOf(NotFound);
+    await expect(
+      acceptInvitation({ vendorId: v.vendor.id, token, name: "Again", password: "a-long-password", sessionUserId: null }),
+    ).rejects.toBeInstanceOf(NotFound);
     const audit = await db("audit_log").where({ vendor_id: v.vendor.id }).pluck("action");
     expect(audit).toEqual(expect.arrayContaining(["member.invite", "member.join"]));
   });
@@ -30,9 +45,15 @@ describe("staff invitations", () => {
     const v = await createVendorWithStaff();
     const other = await createVendorWithStaff();
     const { token } = await invite(v);
-    await expect(acceptInvitation({ vendorId: other.vendor.id, token, name: "X", password: "a-long-password", sessionUserId: null })).rejects.toBeInstanceOf(NotFound);
-    await db("invitations").where({ vendor_id: v.vendor.id }).update({ expires_at: new Date(Date.now() - 1000) });
-    await expect(acceptInvitation({ vendorId: v.vendor.id, token, name: "X", password: "a-long-password", sessionUserId: null })).rejects.toBeInstanceOf(NotFound);
+    await expect(
+      acceptInvitation({ vendorId: other.vendor.id, token, name: "X", password: "a-long-password", sessionUserId: null }),
+    ).rejects.toBeInstanceOf(NotFound);
+    await db("invitations")
+      .where({ vendor_id: v.vendor.id })
+      .update({ expires_at: new Date(Date.now() - 1000) });
+    await expect(
+      acceptInvitation({ vendorId: v.vendor.id, token, name: "X", password: "a-long-password", sessionUserId: null }),
+    ).rejects.toBeInstanceOf(NotFound);
   });
 
   it("queues the invitation e-mail with the link", async () => {
@@ -54,17 +75,28 @@ describe("member roles", () => {
     const v = await createVendorWithStaff();
     await changeMemberRole({ vendorId: v.vendor.id, actorUserId: v.admin.user.id, memberId: v.support.memberId, role: "engineer" });
     expect((await db("members").where({ id: v.support.memberId }).first())?.role).toBe("engineer");
-    const entry = mustExist(await db("audit_log").where({ vendor_id: v.vendor.id, action: "member.role", object_id: v.support.memberId }).first(), "entry");
+    const entry = mustExist(
+      await db("audit_log").where({ vendor_id: v.vendor.id, action: "member.role", object_id: v.support.memberId }).first(),
+      "entry",
+    );
     expect(entry.details).toEqual({ from: "support", to: "engineer" });
-    await expect(changeMemberRole({ vendorId: v.vendor.id, actorUserId: v.admin.user.id, memberId: v.admin.memberId, role: "customer" })).rejects.toBeInstanceOf(Conflict);
-    await expect(removeMember({ vendorId: v.vendor.id, actorUserId: v.admin.user.id, memberId: v.admin.memberId })).rejects.toBeInstanceOf(Conflict);
+    await expect(
+      changeMemberRole({ vendorId: v.vendor.id, actorUserId: v.admin.user.id, memberId: v.admin.memberId, role: "customer" }),
+    ).rejects.toBeInstanceOf(Conflict);
+    await expect(removeMember({ vendorId: v.vendor.id, actorUserId: v.admin.user.id, memberId: v.admin.memberId })).rejects.toBeInstanceOf(
+      Conflict,
+    );
   });
 
   it("cannot touch a member of another vendor", async () => {
     const a = await createVendorWithStaff();
     const b = await createVendorWithStaff();
-    await expect(removeMember({ vendorId: a.vendor.id, actorUserId: a.admin.user.id, memberId: b.customer.memberId })).rejects.toBeInstanceOf(NotFound);
-    await expect(changeMemberRole({ vendorId: a.vendor.id, actorUserId: a.admin.user.id, memberId: b.customer.memberId, role: "admin" })).rejects.toBeInstanceOf(NotFound);
+    await expect(
+      removeMember({ vendorId: a.vendor.id, actorUserId: a.admin.user.id, memberId: b.customer.memberId }),
+    ).rejects.toBeInstanceOf(NotFound);
+    await expect(
+      changeMemberRole({ vendorId: a.vendor.id, actorUserId: a.admin.user.id, memberId: b.customer.memberId, role: "admin" }),
+    ).rejects.toBeInstanceOf(NotFound);
     expect(await db("members").where({ id: b.customer.memberId }).first()).toBeTruthy();
   });
 });

@@ -16,7 +16,11 @@ describe(`migration ${MIGRATION}`, () => {
   it("carries both old columns over as rows, keeps everyone else on, and goes back down losslessly", async () => {
     const [vendor] = await knex("vendors").insert({ slug: "m-mail", name: "Migration test" }).returning("id");
     const user = async (email: string) => (await knex("users").insert({ email, name: email }).returning("id"))[0].id as string;
-    const [off, digestOff, untouched] = [await user("off@example.test"), await user("digest@example.test"), await user("none@example.test")];
+    const [off, digestOff, untouched] = [
+      await user("off@example.test"),
+      await user("digest@example.test"),
+      await user("none@example.test"),
+    ];
     // The table as it was before the migration (the typed table map knows only the new shape).
     await knex<{ vendor_id: string; user_id: string; change_alerts: boolean; weekly_digest: boolean }>("mail_preferences").insert([
       { vendor_id: vendor.id, user_id: off, change_alerts: false, weekly_digest: true },
@@ -30,7 +34,14 @@ describe(`migration ${MIGRATION}`, () => {
     expect(of(off)).toEqual({ change_alerts: false, weekly_digest: true });
     expect(of(digestOff)).toEqual({ change_alerts: true, weekly_digest: false });
     expect(of(untouched)).toEqual({});
-    await expect(knex<Record<string, unknown>>("mail_preferences").insert({ vendor_id: vendor.id, user_id: untouched, kind: "newsletter", enabled: true })).rejects.toThrow(/mail_preferences_kind/);
+    await expect(
+      knex<Record<string, unknown>>("mail_preferences").insert({
+        vendor_id: vendor.id,
+        user_id: untouched,
+        kind: "newsletter",
+        enabled: true,
+      }),
+    ).rejects.toThrow(/mail_preferences_kind/);
     await knex("mail_preferences").insert({ vendor_id: vendor.id, user_id: untouched, kind: "ticket_notifications", enabled: false });
 
     await (await load(MIGRATION)).down(knex);

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 
 import { db } from "@/lib/db/knex";
-import { addMyCutter } from "@/lib/my-cutters/my-cutters";
 import { findShopFilter, listMyCutterSheets } from "@/lib/my-cutters/list-shop-sheets";
+import { addMyCutter } from "@/lib/my-cutters/my-cutters";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 import { createBenchSheet } from "@/tests/factories/bench";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
@@ -18,10 +18,38 @@ async function shop() {
   const otherCutter = await createBenchSheet(vendor.id);
   const cutter = mustExist(await db("cutters").where({ vendor_id: vendor.id, sku: acrylic.cutterSku }).first("id"), "cutter");
   const material = mustExist(await db("sheets").where({ id: acrylic.sheetId }).first("material_id"), "material");
-  const [hobby] = await db("machine_classes").insert({ vendor_id: vendor.id, slug: uniq("hobby"), name: "Hobby router", rpm_min: 10000, rpm_max: 24000, power_kw: 0.8, max_feed_mm_min: 4000, rigidity: 0.4 }).returning("id");
-  const [hobbySheet] = await db("sheets").insert({ vendor_id: vendor.id, slug: uniq("hobby-sheet"), cutter_id: cutter.id, material_id: material.material_id, machine_class_id: hobby.id }).returning(["id", "slug"]);
+  const [hobby] = await db("machine_classes")
+    .insert({
+      vendor_id: vendor.id,
+      slug: uniq("hobby"),
+      name: "Hobby router",
+      rpm_min: 10000,
+      rpm_max: 24000,
+      power_kw: 0.8,
+      max_feed_mm_min: 4000,
+      rigidity: 0.4,
+    })
+    .returning("id");
+  const [hobbySheet] = await db("sheets")
+    .insert({
+      vendor_id: vendor.id,
+      slug: uniq("hobby-sheet"),
+      cutter_id: cutter.id,
+      material_id: material.material_id,
+      machine_class_id: hobby.id,
+    })
+    .returning(["id", "slug"]);
   const v1 = mustExist(await db("sheet_versions").where({ id: acrylic.versionId }).first(), "v1");
-  await db("sheet_versions").insert({ vendor_id: vendor.id, sheet_id: hobbySheet.id, number: 1, state: "published", title: "Hobby version", source: v1.source, front_matter: JSON.stringify(v1.front_matter), published_at: db.fn.now() });
+  await db("sheet_versions").insert({
+    vendor_id: vendor.id,
+    sheet_id: hobbySheet.id,
+    number: 1,
+    state: "published",
+    title: "Hobby version",
+    source: v1.source,
+    front_matter: JSON.stringify(v1.front_matter),
+    published_at: db.fn.now(),
+  });
   return { vendor, owner: { vendorId: vendor.id, userId: customer.user.id }, acrylic, otherCutter, hobbySheet };
 }
 
@@ -29,8 +57,20 @@ describe("fits my shop", () => {
   it("lists for each of my cutters the sheets that fit each of my machines", async () => {
     const { owner, acrylic, hobbySheet } = await shop();
     await addMyCutter({ ...owner, sku: acrylic.cutterSku });
-    const small = await createMachine(owner.vendorId, owner.userId, { name: "Small router", rpm_min: 10000, rpm_max: 24000, power_kw: 0.8, rigidity: 0.4 });
-    const big = await createMachine(owner.vendorId, owner.userId, { name: "Big router", rpm_min: 8000, rpm_max: 24000, power_kw: 2.2, rigidity: 0.8 });
+    const small = await createMachine(owner.vendorId, owner.userId, {
+      name: "Small router",
+      rpm_min: 10000,
+      rpm_max: 24000,
+      power_kw: 0.8,
+      rigidity: 0.4,
+    });
+    const big = await createMachine(owner.vendorId, owner.userId, {
+      name: "Big router",
+      rpm_min: 8000,
+      rpm_max: 24000,
+      power_kw: 2.2,
+      rigidity: 0.8,
+    });
     const [row] = await listMyCutterSheets(owner);
     expect(row.cutter.sku).toBe(acrylic.cutterSku);
     const on = (id: string) => row.machines.find((m) => m.machine.id === id)?.sheets.map((s) => s.slug);
@@ -44,11 +84,25 @@ describe("fits my shop", () => {
     expect(all).toHaveLength(3);
     const empty = await findShopFilter(owner);
     expect(empty).toMatchObject({ cutters: 0, machines: 0 });
-    expect(await listPublishedSheets({ vendorId: owner.vendorId, filters: { cutterIds: empty.cutterIds, machineClassIds: empty.machineClassIds } })).toEqual([]);
+    expect(
+      await listPublishedSheets({
+        vendorId: owner.vendorId,
+        filters: { cutterIds: empty.cutterIds, machineClassIds: empty.machineClassIds },
+      }),
+    ).toEqual([]);
     await addMyCutter({ ...owner, sku: acrylic.cutterSku });
-    await createMachine(owner.vendorId, owner.userId, { name: "Small router", rpm_min: 10000, rpm_max: 24000, power_kw: 0.8, rigidity: 0.4 });
+    await createMachine(owner.vendorId, owner.userId, {
+      name: "Small router",
+      rpm_min: 10000,
+      rpm_max: 24000,
+      power_kw: 0.8,
+      rigidity: 0.4,
+    });
     const filter = await findShopFilter(owner);
-    const fits = await listPublishedSheets({ vendorId: owner.vendorId, filters: { cutterIds: filter.cutterIds, machineClassIds: filter.machineClassIds } });
+    const fits = await listPublishedSheets({
+      vendorId: owner.vendorId,
+      filters: { cutterIds: filter.cutterIds, machineClassIds: filter.machineClassIds },
+    });
     // The other cutter's sheet and the rigid router's sheet are left out.
     expect(fits.map((s) => s.slug)).toEqual([hobbySheet.slug]);
   });

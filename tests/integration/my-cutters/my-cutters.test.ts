@@ -24,8 +24,12 @@ describe("my cutters", () => {
     const a = await createVendorWithStaff();
     const b = await createVendorWithStaff();
     const sheetOfB = await createBenchSheet(b.vendor.id);
-    await expect(addMyCutter({ vendorId: a.vendor.id, userId: a.customer.user.id, sku: "NO-SUCH" })).rejects.toThrow("No cutter has the SKU NO-SUCH.");
-    await expect(addMyCutter({ vendorId: a.vendor.id, userId: a.customer.user.id, sku: sheetOfB.cutterSku })).rejects.toMatchObject({ code: "not_found" });
+    await expect(addMyCutter({ vendorId: a.vendor.id, userId: a.customer.user.id, sku: "NO-SUCH" })).rejects.toThrow(
+      "No cutter has the SKU NO-SUCH.",
+    );
+    await expect(addMyCutter({ vendorId: a.vendor.id, userId: a.customer.user.id, sku: sheetOfB.cutterSku })).rejects.toMatchObject({
+      code: "not_found",
+    });
     expect(await db("customer_cutters").where({ user_id: a.customer.user.id })).toEqual([]);
   });
 

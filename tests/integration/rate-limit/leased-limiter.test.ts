@@ -1,13 +1,13 @@
 import { randomUUID } from "node:crypto";
-
 import { describe, expect, it } from "vitest";
 
 import { db } from "@/lib/db/knex";
 import { RateLimited } from "@/lib/errors/domain-errors";
-import { createLeasedLimiter, leaseSize } from "@/lib/rate-limit/leased-limiter";
 import { consumeRateLimit, resetRateLimit } from "@/lib/rate-limit/consume-rate-limit";
+import { createLeasedLimiter, leaseSize } from "@/lib/rate-limit/leased-limiter";
 
-const bucketHits = async (key: string) => (await db("rate_limit_buckets").where({ key }).first<{ hits: number } | undefined>("hits"))?.hits ?? 0;
+const bucketHits = async (key: string) =>
+  (await db("rate_limit_buckets").where({ key }).first<{ hits: number } | undefined>("hits"))?.hits ?? 0;
 
 /** Calls `consume` `count` times, `parallel` at a time; returns how many were let through. */
 async function spend(consume: () => Promise<number>, count: number, parallel = 8) {

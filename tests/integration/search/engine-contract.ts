@@ -1,11 +1,10 @@
 import { randomUUID } from "node:crypto";
-
 import { beforeAll, describe, expect, it } from "vitest";
 
+import { buildCutterDocument } from "@/search/document/build-sheet-document";
 import type { SearchDocument } from "@/search/document/document-schema";
 import type { EngineQuery, SearchEngine } from "@/search/engines/engine-types";
 import { sheetDoc } from "@/tests/unit/search/document/document-fixture";
-import { buildCutterDocument } from "@/search/document/build-sheet-document";
 
 const acrylic = { slug: "cast-acrylic", name: "Cast acrylic", group: "plastics", synonyms: ["PMMA"] };
 const mdf = { slug: "mdf", name: "MDF", group: "wood", synonyms: [] };
@@ -21,7 +20,15 @@ export function defineEngineContract(name: string, makeEngine: () => Promise<Sea
     const b = randomUUID();
     let engine: SearchEngine;
     let docs: Record<string, SearchDocument>;
-    const q = (over: Partial<EngineQuery>): EngineQuery => ({ vendorId: a, words: [], filters: {}, boosts: {}, page: 1, perPage: 20, ...over });
+    const q = (over: Partial<EngineQuery>): EngineQuery => ({
+      vendorId: a,
+      words: [],
+      filters: {},
+      boosts: {},
+      page: 1,
+      perPage: 20,
+      ...over,
+    });
     const ids = async (over: Partial<EngineQuery>) => (await engine.search(q(over))).hits.map((h) => h.doc.id).sort();
 
     beforeAll(async () => {
@@ -29,12 +36,47 @@ export function defineEngineContract(name: string, makeEngine: () => Promise<Sea
       await engine.configure();
       docs = {
         acrylic18: sheetDoc({ vendorId: a, slug: "acrylic-18", title: "Cast acrylic, 1/8 in single flute", material: acrylic }),
-        acrylic14: sheetDoc({ vendorId: a, slug: "acrylic-14", title: "Cast acrylic, 1/4 in single flute", material: acrylic, diameterMm: 6.35, sku: "T-SF-6350" }),
-        mdf6: sheetDoc({ vendorId: a, slug: "mdf-6", title: "MDF, 6 mm two-flute", material: mdf, diameterMm: 6, flutes: 2, sku: "T-2F-6", kinds: ["pocket", "profile"], geometry: "upcut" }),
-        alu6: sheetDoc({ vendorId: a, slug: "alu-6", title: "Aluminium 6061, 6 mm three-flute", material: alu, diameterMm: 6, flutes: 3, sku: "T-3F-6", kinds: ["constant-engagement", "slotting"], geometry: "straight" }),
+        acrylic14: sheetDoc({
+          vendorId: a,
+          slug: "acrylic-14",
+          title: "Cast acrylic, 1/4 in single flute",
+          material: acrylic,
+          diameterMm: 6.35,
+          sku: "T-SF-6350",
+        }),
+        mdf6: sheetDoc({
+          vendorId: a,
+          slug: "mdf-6",
+          title: "MDF, 6 mm two-flute",
+          material: mdf,
+          diameterMm: 6,
+          flutes: 2,
+          sku: "T-2F-6",
+          kinds: ["pocket", "profile"],
+          geometry: "upcut",
+        }),
+        alu6: sheetDoc({
+          vendorId: a,
+          slug: "alu-6",
+          title: "Aluminium 6061, 6 mm three-flute",
+          material: alu,
+          diameterMm: 6,
+          flutes: 3,
+          sku: "T-3F-6",
+          kinds: ["constant-engagement", "slotting"],
+          geometry: "straight",
+        }),
         otherVendor: sheetDoc({ vendorId: b, slug: "b-acrylic", title: "Cast acrylic, 1/8 in single flute zebrawood", material: acrylic }),
       };
-      const cutter = buildCutterDocument(a, { id: docs.mdf6.cutterId, sku: "T-2F-6", name: "6 mm two-flute up-cut", diameterMm: 6, flutes: 2, cornerForm: "square", geometry: "upcut" });
+      const cutter = buildCutterDocument(a, {
+        id: docs.mdf6.cutterId,
+        sku: "T-2F-6",
+        name: "6 mm two-flute up-cut",
+        diameterMm: 6,
+        flutes: 2,
+        cornerForm: "square",
+        geometry: "upcut",
+      });
       await engine.replaceVendor(a, [docs.acrylic18, docs.acrylic14, docs.mdf6, docs.alu6, cutter]);
       await engine.replaceVendor(b, [docs.otherVendor]);
     });
@@ -62,8 +104,18 @@ export function defineEngineContract(name: string, makeEngine: () => Promise<Sea
 
     it("counts facets over the matches", async () => {
       const { facets } = await engine.search(q({ filters: { diameterMm: 6 } }));
-      expect(facets.flutes).toEqual(expect.arrayContaining([{ value: "2", count: 1 }, { value: "3", count: 1 }]));
-      expect(facets.operations).toEqual(expect.arrayContaining([{ value: "slotting", count: 1 }, { value: "pocket", count: 1 }]));
+      expect(facets.flutes).toEqual(
+        expect.arrayContaining([
+          { value: "2", count: 1 },
+          { value: "3", count: 1 },
+        ]),
+      );
+      expect(facets.operations).toEqual(
+        expect.arrayContaining([
+          { value: "slotting", count: 1 },
+          { value: "pocket", count: 1 },
+        ]),
+      );
       expect(facets.materialGroup?.find((f) => f.value === "plastics")).toBeUndefined();
     });
 

@@ -17,15 +17,22 @@ let ids: Awaited<ReturnType<typeof runSeeds>>;
 const search = (vendor: string, q: string) => runSearch(engine, { vendorId: ids.vendors[vendor], q, perPage: 50 });
 
 async function publishedVersions(vendorId: string): Promise<Map<string, number>> {
-  const rows: { slug: string; number: number }[] = await db("sheet_versions as v").join("sheets as s", "s.id", "v.sheet_id").where({ "v.vendor_id": vendorId, "v.state": "published" }).select("s.slug", "v.number");
+  const rows: { slug: string; number: number }[] = await db("sheet_versions as v")
+    .join("sheets as s", "s.id", "v.sheet_id")
+    .where({ "v.vendor_id": vendorId, "v.state": "published" })
+    .select("s.slug", "v.number");
   return new Map(rows.map((r) => [r.slug, r.number]));
 }
 
 /** Runs the queued sheet events through the real dispatcher and the search subscriber, as the worker would. */
 async function deliverQueuedEvents() {
-  const events: { id: string; data: unknown }[] = (await db.raw("select id, data from pgboss.job where name = 'sheet.events' and state = 'created' order by created_on")).rows;
+  const events: { id: string; data: unknown }[] = (
+    await db.raw("select id, data from pgboss.job where name = 'sheet.events' and state = 'created' order by created_on")
+  ).rows;
   for (const e of events) await dispatchSheetEvent(e.data);
-  const deliveries: { id: string; data: { subscriber: string } }[] = (await db.raw("select id, data from pgboss.job where name = 'sheet.events.deliver' and state = 'created' order by created_on")).rows;
+  const deliveries: { id: string; data: { subscriber: string } }[] = (
+    await db.raw("select id, data from pgboss.job where name = 'sheet.events.deliver' and state = 'created' order by created_on")
+  ).rows;
   for (const d of deliveries.filter((x) => x.data.subscriber === "search-index")) await deliverSheetEvent(d.data);
   await db.raw("delete from pgboss.job where name in ('sheet.events', 'sheet.events.deliver')");
   return events.length;
@@ -34,11 +41,31 @@ async function deliverQueuedEvents() {
 async function insertReviewedDraft(vendor: string, slug: string, title: string) {
   const vendorId = ids.vendors[vendor];
   const template = mustExist(await db("sheets").where({ vendor_id: vendorId }).first(), "template sheet");
-  const source = mustExist(await db("sheet_versions").where({ vendor_id: vendorId, sheet_id: template.id, state: "published" }).first("source", "front_matter"), "published version");
-  const [{ id: sheetId }] = await db("sheets").insert({ vendor_id: vendorId, slug, cutter_id: template.cutter_id, material_id: template.material_id, machine_class_id: template.machine_class_id }).returning("id");
+  const source = mustExist(
+    await db("sheet_versions").where({ vendor_id: vendorId, sheet_id: template.id, state: "published" }).first("source", "front_matter"),
+    "published version",
+  );
+  const [{ id: sheetId }] = await db("sheets")
+    .insert({
+      vendor_id: vendorId,
+      slug,
+      cutter_id: template.cutter_id,
+      material_id: template.material_id,
+      machine_class_id: template.machine_class_id,
+    })
+    .returning("id");
   await db("sheet_versions").insert({
-    vendor_id: vendorId, sheet_id: sheetId, number: 1, state: "in_review", title, source: source.source, front_matter: JSON.stringify(source.front_matter),
-    author_id: ids.users[`eng1@${vendor}.test`], approved_by: ids.users[`eng2@${vendor}.test`], approved_at: new Date(), submitted_at: new Date(),
+    vendor_id: vendorId,
+    sheet_id: sheetId,
+    number: 1,
+    state: "in_review",
+    title,
+    source: source.source,
+    front_matter: JSON.stringify(source.front_matter),
+    author_id: ids.users[`eng1@${vendor}.test`],
+    approved_by: ids.users[`eng2@${vendor}.test`],
+    approved_at: new Date(),
+    submitted_at: new Date(),
   });
   return sheetId as string;
 }
@@ -72,7 +99,10 @@ describe("search isolation", () => {
 
   it("a sheet with a draft in review is found at its published version", async () => {
     const slug = "mdf-nb-bn-6-rigid-router";
-    const inReview = await db("sheet_versions as v").join("sheets as s", "s.id", "v.sheet_id").where({ "s.slug": slug, "v.state": "in_review" }).first<{ number: number }>("v.number");
+    const inReview = await db("sheet_versions as v")
+      .join("sheets as s", "s.id", "v.sheet_id")
+      .where({ "s.slug": slug, "v.state": "in_review" })
+      .first<{ number: number }>("v.number");
     const published = (await publishedVersions(ids.vendors.northbeck)).get(slug);
     expect(inReview?.number).toBeGreaterThan(published ?? Infinity);
     const hit = (await search("northbeck", "ball nose mdf")).hits.find((h) => h.slug === slug);
@@ -106,7 +136,9 @@ describe("indexing on publish and withdraw", () => {
   it("a failing engine fails the indexing job (which retries), not the write; a retry catches up", async () => {
     const vendorId = ids.vendors.northbeck;
     const sheetId = await insertReviewedDraft("northbeck", "wenge-trial", "Wenge trial sheet");
-    await expect(publishDraft({ vendorId, userId: ids.users["eng2@northbeck.test"], slug: "wenge-trial" })).resolves.toMatchObject({ state: "published" });
+    await expect(publishDraft({ vendorId, userId: ids.users["eng2@northbeck.test"], slug: "wenge-trial" })).resolves.toMatchObject({
+      state: "published",
+    });
     const down: SearchEngine = { ...engine, upsert: async () => Promise.reject(new Error("engine down")) };
     await expect(reindexSheets({ engine: down, vendorId, sheetIds: [sheetId] })).rejects.toThrow("engine down");
     expect((await search("northbeck", "wenge")).total).toBe(0);
@@ -118,7 +150,9 @@ describe("indexing on publish and withdraw", () => {
   it("a catalogue edit reindexes the sheets that use the entry", async () => {
     const vendorId = ids.vendors.quillon;
     const material: { id: string } = await db("materials").where({ vendor_id: vendorId, slug: "mdf" }).first("id");
-    await db("materials").where({ vendor_id: vendorId, id: material.id }).update({ synonyms: ["tamboured board"] });
+    await db("materials")
+      .where({ vendor_id: vendorId, id: material.id })
+      .update({ synonyms: ["tamboured board"] });
     expect((await search("quillon", "tamboured")).total).toBe(0);
     await dispatchSheetEvent({ type: "catalogue.changed", vendorId, entity: "material", entityId: material.id });
     await deliverQueuedEvents();

@@ -8,7 +8,10 @@ const engine = createPostgresEngine(db);
 defineEngineContract("postgres", () => ({
   ...engine,
   async replaceVendor(vendorId, docs) {
-    await db("vendors").insert({ id: vendorId, slug: `search-${vendorId.slice(0, 8)}`, name: "Search contract vendor", settings: "{}" }).onConflict("id").ignore();
+    await db("vendors")
+      .insert({ id: vendorId, slug: `search-${vendorId.slice(0, 8)}`, name: "Search contract vendor", settings: "{}" })
+      .onConflict("id")
+      .ignore();
     await engine.replaceVendor(vendorId, docs);
   },
 }));

@@ -22,14 +22,27 @@ async function tokenFor(vendorId: string) {
 
 // Bearer tokens only: a cookie session needs a request scope that a direct handler call does not have.
 const call = (slug: string, query: string, bearer = openToken) =>
-  GET(new NextRequest(`http://localhost/api/v1/vendors/${slug}/search?${query}`, { headers: { authorization: `Bearer ${bearer}` } }), { params: Promise.resolve({ vendor: slug }) });
+  GET(new NextRequest(`http://localhost/api/v1/vendors/${slug}/search?${query}`, { headers: { authorization: `Bearer ${bearer}` } }), {
+    params: Promise.resolve({ vendor: slug }),
+  });
 
 beforeAll(async () => {
   open = await createVendor({ settings: { libraryPublic: true } });
   closed = await createVendor({ settings: { libraryPublic: false } });
   const engine = getSearchEngine();
   await reindexVendor({ engine, vendorId: open.id });
-  await engine.upsert(open.id, [sheetDoc({ vendorId: open.id, slug: "acrylic-18" }), sheetDoc({ vendorId: open.id, slug: "mdf-6", title: "MDF, 6 mm", diameterMm: 6, flutes: 2, material: { slug: "mdf", name: "MDF", group: "wood" }, kinds: ["pocket"] })]);
+  await engine.upsert(open.id, [
+    sheetDoc({ vendorId: open.id, slug: "acrylic-18" }),
+    sheetDoc({
+      vendorId: open.id,
+      slug: "mdf-6",
+      title: "MDF, 6 mm",
+      diameterMm: 6,
+      flutes: 2,
+      material: { slug: "mdf", name: "MDF", group: "wood" },
+      kinds: ["pocket"],
+    }),
+  ]);
   await engine.upsert(closed.id, [sheetDoc({ vendorId: closed.id, slug: "closed-acrylic" })]);
   token = await tokenFor(closed.id);
   openToken = await tokenFor(open.id);
@@ -41,7 +54,11 @@ describe("GET /api/v1/vendors/{vendor}/search", () => {
     expect(response.status).toBe(200);
     const body = (await response.json()) as SearchResponse;
     expect(body.hits.map((h) => h.slug)).toEqual(["acrylic-18"]);
-    expect(body.hits[0]).toMatchObject({ version: 2, cutter: { sku: "T-SF-3175", diameterMm: 3.175 }, operations: ["slotting", "profile"] });
+    expect(body.hits[0]).toMatchObject({
+      version: 2,
+      cutter: { sku: "T-SF-3175", diameterMm: 3.175 },
+      operations: ["slotting", "profile"],
+    });
     expect(body.chips.map((c) => c.kind)).toEqual(["diameter", "material"]);
     expect(body.facets.operations).toEqual(expect.arrayContaining([{ value: "slotting", count: 1 }]));
   });
@@ -60,7 +77,8 @@ describe("GET /api/v1/vendors/{vendor}/search", () => {
   });
 
   it("answers a very long or SQL-looking query", async () => {
-    for (const q of ["x".repeat(5000), "'; drop table search_documents; --"]) expect((await call(open.slug, `q=${encodeURIComponent(q)}`)).status).toBe(200);
+    for (const q of ["x".repeat(5000), "'; drop table search_documents; --"])
+      expect((await call(open.slug, `q=${encodeURIComponent(q)}`)).status).toBe(200);
     expect(await db("search_documents").where({ vendor_id: open.id }).count()).toEqual([{ count: "2" }]);
   });
 

@@ -16,8 +16,20 @@ let vendors: Record<string, string> = {};
 
 // Relaxing queries (nothing matches every part), filters, pages, an empty box, words only, nonsense.
 const EXTRA = [
-  "1/8 2F acrylic slot", "12 mm 4 flute brass ball nose ramp", "1/2 compression mdf slot", "3mm 3 flute plywood", "alumnium 6mm 2 flute",
-  "", "jig", "xyzzy plugh", "6 mm", "ball", "polycarbonate 1/4 2F profile", "plastics 1/8 4 flute", "oak", "NB-SF",
+  "1/8 2F acrylic slot",
+  "12 mm 4 flute brass ball nose ramp",
+  "1/2 compression mdf slot",
+  "3mm 3 flute plywood",
+  "alumnium 6mm 2 flute",
+  "",
+  "jig",
+  "xyzzy plugh",
+  "6 mm",
+  "ball",
+  "polycarbonate 1/4 2F profile",
+  "plastics 1/8 4 flute",
+  "oak",
+  "NB-SF",
 ];
 
 beforeAll(async () => {

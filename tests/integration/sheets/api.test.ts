@@ -1,11 +1,11 @@
 import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 
-import { GET as getSheet } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/route";
-import { PUT as putDraft } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draft/route";
 import { POST as approve } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draft/approve/route";
 import { POST as publish } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draft/publish/route";
+import { PUT as putDraft } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draft/route";
 import { POST as submit } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draft/submit/route";
+import { GET as getSheet } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/route";
 import { GET as getVersion } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/versions/[n]/route";
 import { POST as withdraw } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/withdraw/route";
 import { POST as createSheet } from "@/app/api/v1/vendors/[vendor]/sheets/route";
@@ -29,7 +29,12 @@ async function setup() {
   const staff = await createVendorWithStaff();
   await createCatalogue(staff.vendor.id);
   const token = async (userId: string) => (await createPersonalToken({ vendorId: staff.vendor.id, userId, name: "test" })).secret;
-  return { ...staff, t1: await token(staff.engineer.user.id), t2: await token(staff.engineer2.user.id), tc: await token(staff.customer.user.id) };
+  return {
+    ...staff,
+    t1: await token(staff.engineer.user.id),
+    t2: await token(staff.engineer2.user.id),
+    tc: await token(staff.customer.user.id),
+  };
 }
 
 describe("Drafting JSON API with personal access tokens", () => {
@@ -79,7 +84,9 @@ describe("Drafting JSON API with personal access tokens", () => {
     const slug = uniq("api-sheet");
     await call(createSheet, "POST", { vendor: s.vendor.slug }, s.t1, { slug, source: sourceWithFeed() });
     expect((await call(putDraft, "PUT", { vendor: s.vendor.slug, slug }, other.t1, { source: sourceWithFeed() })).status).toBe(404);
-    expect((await call(createSheet, "POST", { vendor: s.vendor.slug }, other.t1, { slug: uniq("x"), source: sourceWithFeed() })).status).toBe(404);
+    expect(
+      (await call(createSheet, "POST", { vendor: s.vendor.slug }, other.t1, { slug: uniq("x"), source: sourceWithFeed() })).status,
+    ).toBe(404);
     expect((await call(submit, "POST", { vendor: s.vendor.slug, slug }, s.tc, { changeNote: "Customer." })).status).toBe(404);
   });
 });

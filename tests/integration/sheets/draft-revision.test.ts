@@ -3,8 +3,8 @@ import { describe, expect, it } from "vitest";
 
 import { PUT as putDraft } from "@/app/api/v1/vendors/[vendor]/sheets/[slug]/draft/route";
 import { POST as createSheet } from "@/app/api/v1/vendors/[vendor]/sheets/route";
-import { db } from "@/lib/db/knex";
 import { createPersonalToken } from "@/lib/auth/personal-access-tokens";
+import { db } from "@/lib/db/knex";
 import { createCatalogue } from "@/tests/factories/catalogue";
 import { createVendorWithStaff, uniq } from "@/tests/factories/foundation";
 import { sourceWithFeed } from "@/tests/factories/sheets";

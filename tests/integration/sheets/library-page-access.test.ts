@@ -1,8 +1,8 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
-import CutterPage from "@/app/[vendor]/(customer)/library/cutters/[sku]/page";
 import SheetPage from "@/app/[vendor]/(customer)/library/[sheet]/page";
 import SheetVersionPage from "@/app/[vendor]/(customer)/library/[sheet]/v/[n]/page";
+import CutterPage from "@/app/[vendor]/(customer)/library/cutters/[sku]/page";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { db } from "@/lib/db/knex";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
@@ -16,7 +16,11 @@ vi.mock("@/components/library/read-units", () => ({ readUnits: async () => "metr
 vi.mock("next/server", async (original) => ({ ...(await original<typeof import("next/server")>()), after: () => undefined }));
 // Outside Next's server the "use cache" directive is inert and cacheLife/cacheTag refuse to run: the pages render
 // uncached here (what this test is about is the access check, which runs on every request before the cache).
-vi.mock("next/cache", async (original) => ({ ...(await original<typeof import("next/cache")>()), cacheLife: () => undefined, cacheTag: () => undefined }));
+vi.mock("next/cache", async (original) => ({
+  ...(await original<typeof import("next/cache")>()),
+  cacheLife: () => undefined,
+  cacheTag: () => undefined,
+}));
 
 const digestOf = async (render: () => Promise<unknown>) => {
   try {

@@ -14,7 +14,11 @@ import { createDraftingScenario, publishOpenDraft, sourceWithFeed } from "@/test
 import { mustExist } from "@/tests/support/must-exist";
 
 const states = async (vendorId: string, slug: string) =>
-  db("sheet_versions as v").join("sheets as s", "s.id", "v.sheet_id").where({ "s.slug": slug, "v.vendor_id": vendorId }).orderBy("v.number").pluck("v.state");
+  db("sheet_versions as v")
+    .join("sheets as s", "s.id", "v.sheet_id")
+    .where({ "s.slug": slug, "v.vendor_id": vendorId })
+    .orderBy("v.number")
+    .pluck("v.state");
 const auditActions = (vendorId: string) => db("audit_log").where({ vendor_id: vendorId }).orderBy("created_at").pluck("action");
 
 describe("sheet version workflow", () => {
@@ -26,7 +30,9 @@ describe("sheet version workflow", () => {
     await approveDraft(s.as(s.engineer2.user.id));
     const published = await publishDraft(s.as(s.engineer2.user.id));
     expect(published).toMatchObject({ number: 1, state: "published", superseded: null });
-    expect(await auditActions(s.vendor.id)).toEqual(expect.arrayContaining(["sheet.create", "sheet.submit", "sheet.approve", "sheet.publish"]));
+    expect(await auditActions(s.vendor.id)).toEqual(
+      expect.arrayContaining(["sheet.create", "sheet.submit", "sheet.approve", "sheet.publish"]),
+    );
   });
 
   it("refuses to submit without a change note, and with a source that has a schema error (naming its line)", async () => {
@@ -74,7 +80,11 @@ describe("sheet version workflow", () => {
     const s = await createDraftingScenario();
     const first = await saveDraft({ ...s.as(s.engineer.user.id), source: sourceWithFeed("1700 mm/min"), revision: s.created.revision });
     expect(first.revision).toBe(s.created.revision + 1);
-    const stale = await saveDraft({ ...s.as(s.engineer2.user.id), source: sourceWithFeed("1600 mm/min"), revision: s.created.revision }).catch((e: unknown) => e);
+    const stale = await saveDraft({
+      ...s.as(s.engineer2.user.id),
+      source: sourceWithFeed("1600 mm/min"),
+      revision: s.created.revision,
+    }).catch((e: unknown) => e);
     expect(stale).toBeInstanceOf(DraftConflict);
     expect((stale as DraftConflict).current).toMatchObject({ revision: first.revision });
     expect((stale as DraftConflict).current.source).toContain("1700 mm/min");
@@ -102,7 +112,9 @@ describe("sheet version workflow", () => {
     await publishOpenDraft(s);
     const edit = db("sheet_versions").where({ vendor_id: s.vendor.id }).update({ source: "tampered" });
     await expect(edit).rejects.toThrow(/published and immutable/);
-    await expect(db("sheet_versions").where({ vendor_id: s.vendor.id }).update({ state: "draft" })).rejects.toThrow(/cannot move from published to draft/);
+    await expect(db("sheet_versions").where({ vendor_id: s.vendor.id }).update({ state: "draft" })).rejects.toThrow(
+      /cannot move from published to draft/,
+    );
     await expect(db("sheet_versions").where({ vendor_id: s.vendor.id }).delete()).rejects.toThrow(/cannot be deleted/);
   });
 

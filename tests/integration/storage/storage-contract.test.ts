@@ -1,7 +1,6 @@
 import { mkdtemp, readdir, rm } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
-
 import S3rver from "s3rver";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
@@ -57,7 +56,13 @@ afterAll(async () => {
 
 contract("filesystem", () => filesystemStorage(dir));
 contract("s3 (s3rver)", () =>
-  s3Storage({ endpoint: `http://127.0.0.1:${port}`, bucket: "contract", region: "us-east-1", accessKeyId: "S3RVER", secretAccessKey: "S3RVER" }),
+  s3Storage({
+    endpoint: `http://127.0.0.1:${port}`,
+    bucket: "contract",
+    region: "us-east-1",
+    accessKeyId: "S3RVER",
+    secretAccessKey: "S3RVER",
+  }),
 );
 
 describe("filesystem layout", () => {

@@ -13,7 +13,12 @@ describe("a reply with an adapted sheet", () => {
     // Sheet slot: n 18000 rpm, vf 1800 mm/min, 1 flute → fz = vf/(z·n) = 0.1 mm. Machine tops out at 16 000 rpm.
     const machine = await createMachine(vendor.id, customer.user.id, { rpm_max: 16000, max_feed_mm_min: 3000 });
     const ticket = await openTicket(vendor.id, customer.user.id);
-    const card = await buildCard({ vendorId: vendor.id, sheetVersionId: sheet.versionId, machineId: machine.id, customerId: customer.user.id });
+    const card = await buildCard({
+      vendorId: vendor.id,
+      sheetVersionId: sheet.versionId,
+      machineId: machine.id,
+      customerId: customer.user.id,
+    });
     const slot = card.operations[0];
     expect(slot.reference).toMatchObject({ rpm: 18000, feedMmMin: 1800 });
     expect(slot.adapted?.rpm).toBe(16000);
@@ -22,8 +27,19 @@ describe("a reply with an adapted sheet", () => {
     expect(slot.steps.map((s) => s.rule)).toContain("spindle-speed-range");
     expect(slot.warnings.map((w) => w.code)).toContain("standard-cautions");
 
-    await addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Here is the sheet for your router.", visibility: "public", card });
-    const thread = await getTicketThread({ vendorId: vendor.id, ticketId: ticket.id, viewer: { kind: "customer", userId: customer.user.id } });
+    await addStaffMessage({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Here is the sheet for your router.",
+      visibility: "public",
+      card,
+    });
+    const thread = await getTicketThread({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      viewer: { kind: "customer", userId: customer.user.id },
+    });
     expect(thread.messages[0].card?.operations[0].adapted?.rpm).toBe(16000);
     expect(thread.links.map((l) => [l.sheetVersionId, l.machineId])).toEqual([[sheet.versionId, machine.id]]);
   });
@@ -32,6 +48,8 @@ describe("a reply with an adapted sheet", () => {
     const { vendor, customer, support } = await createVendorWithStaff();
     const sheet = await createPublishedSheet(vendor.id);
     const machine = await createMachine(vendor.id, support.user.id);
-    await expect(buildCard({ vendorId: vendor.id, sheetVersionId: sheet.versionId, machineId: machine.id, customerId: customer.user.id })).rejects.toMatchObject({ code: "invalid_input" });
+    await expect(
+      buildCard({ vendorId: vendor.id, sheetVersionId: sheet.versionId, machineId: machine.id, customerId: customer.user.id }),
+    ).rejects.toMatchObject({ code: "invalid_input" });
   });
 });

@@ -1,7 +1,6 @@
 import { mkdtemp } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
-
 import { NextRequest } from "next/server";
 import { beforeAll, describe, expect, it } from "vitest";
 
@@ -38,9 +37,12 @@ function uploadRequest(slug: string, token: string, bytes: Buffer, name: string)
 }
 
 const downloadRequest = (slug: string, token: string, id: string) =>
-  download(new NextRequest(`http://localhost/api/v1/vendors/${slug}/attachments/${id}`, { headers: { authorization: `Bearer ${token}` } }), {
-    params: Promise.resolve({ vendor: slug, attachment: id }),
-  });
+  download(
+    new NextRequest(`http://localhost/api/v1/vendors/${slug}/attachments/${id}`, { headers: { authorization: `Bearer ${token}` } }),
+    {
+      params: Promise.resolve({ vendor: slug, attachment: id }),
+    },
+  );
 
 describe("uploads", () => {
   it("accepts a PNG by its signature and refuses an HTML file named .png", async () => {
@@ -51,7 +53,9 @@ describe("uploads", () => {
     expect((await ok.json()).attachment).toMatchObject({ kind: "image", contentType: "image/png", fileName: "chips.png" });
     const bad = await uploadRequest(vendor.slug, token, HTML, "chips.png");
     expect(bad.status).toBe(400);
-    expect(await db("ticket_attachments").where({ vendor_id: vendor.id }).count<{ count: string }[]>("* as count").first()).toEqual({ count: "1" });
+    expect(await db("ticket_attachments").where({ vendor_id: vendor.id }).count<{ count: string }[]>("* as count").first()).toEqual({
+      count: "1",
+    });
   });
 
   it("answers 413 past 10 MB", async () => {
@@ -79,7 +83,11 @@ describe("downloads", () => {
     const vendor = await loadVendor(a.vendor.id);
     const customerToken = await createApiToken(a.vendor.id, a.customer.user.id);
     const { attachment } = await (await uploadRequest(a.vendor.slug, customerToken, PNG, "finish.png")).json();
-    await createTicket({ vendor, customerId: a.customer.user.id, input: { subject: "Poor finish", body: "See photo", idempotencyKey: "k-download-1", attachmentIds: [attachment.id] } });
+    await createTicket({
+      vendor,
+      customerId: a.customer.user.id,
+      input: { subject: "Poor finish", body: "See photo", idempotencyKey: "k-download-1", attachmentIds: [attachment.id] },
+    });
 
     const own = await downloadRequest(a.vendor.slug, customerToken, attachment.id);
     expect(own.status).toBe(200);
@@ -94,8 +102,23 @@ describe("downloads", () => {
     const engineer = await downloadRequest(a.vendor.slug, await createApiToken(a.vendor.id, a.engineer.user.id), attachment.id);
     expect(engineer.status).toBe(404);
 
-    const otherCustomer = await createApiToken(a.vendor.id, (await db("users").insert({ email: `x${Date.now()}@example.test` }).returning("id"))[0].id);
-    await db("members").insert({ vendor_id: a.vendor.id, user_id: (await db("api_tokens").where({ token_hash: hashToken(otherCustomer) }).first())?.user_id, role: "customer" });
+    const otherCustomer = await createApiToken(
+      a.vendor.id,
+      (
+        await db("users")
+          .insert({ email: `x${Date.now()}@example.test` })
+          .returning("id")
+      )[0].id,
+    );
+    await db("members").insert({
+      vendor_id: a.vendor.id,
+      user_id: (
+        await db("api_tokens")
+          .where({ token_hash: hashToken(otherCustomer) })
+          .first()
+      )?.user_id,
+      role: "customer",
+    });
     expect((await downloadRequest(a.vendor.slug, otherCustomer, attachment.id)).status).toBe(404);
 
     const otherVendorStaff = await createApiToken(b.vendor.id, b.support.user.id);

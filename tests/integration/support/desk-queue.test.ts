@@ -17,9 +17,15 @@ describe("desk queue", () => {
     const a = await openTicket(v.id, customer.user.id, { subject: "A" });
     const b = await openTicket(v.id, customer.user.id, { subject: "B" });
     const c = await openTicket(v.id, customer.user.id, { subject: "C" });
-    await updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: a.id, assigneeId: support.user.id, tags: ["melting"], priority: "urgent" } });
+    await updateTicket({
+      vendor,
+      actorUserId: support.user.id,
+      input: { ticketId: a.id, assigneeId: support.user.id, tags: ["melting"], priority: "urgent" },
+    });
     await updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: c.id, status: "closed" } });
-    await db("tickets").where({ id: b.id }).update({ first_response_due_at: new Date(Date.now() - 60_000) });
+    await db("tickets")
+      .where({ id: b.id })
+      .update({ first_response_due_at: new Date(Date.now() - 60_000) });
 
     const ids = async (filters: Parameters<typeof listQueue>[0]["filters"], userId = support.user.id) =>
       (await listQueue({ vendorId: v.id, userId, filters })).map((t) => t.id).sort();
@@ -53,10 +59,17 @@ describe("dashboard and hand-off", () => {
     const t1 = await openTicket(v.id, customer.user.id, { sheetVersionId: sheet.versionId, machineId: machine.id });
     const t2 = await openTicket(v.id, customer.user.id, { sheetVersionId: sheet.versionId });
     const t3 = await openTicket(v.id, customer.user.id);
-    for (const t of [t1, t2, t3]) await addStaffMessage({ vendorId: v.id, ticketId: t.id, authorId: support.user.id, body: "ok", visibility: "public" });
+    for (const t of [t1, t2, t3])
+      await addStaffMessage({ vendorId: v.id, ticketId: t.id, authorId: support.user.id, body: "ok", visibility: "public" });
     // First responses after 1 h, 2 h and 6 h: the median is 2 h.
-    for (const [t, h] of [[t1, 1], [t2, 2], [t3, 6]] as const) {
-      await db("tickets").where({ id: t.id }).update({ first_response_at: db.raw("created_at + make_interval(hours => ?)", [h]) });
+    for (const [t, h] of [
+      [t1, 1],
+      [t2, 2],
+      [t3, 6],
+    ] as const) {
+      await db("tickets")
+        .where({ id: t.id })
+        .update({ first_response_at: db.raw("created_at + make_interval(hours => ?)", [h]) });
     }
     const stats = await getDeskDashboard({ vendorId: v.id });
     expect(stats.medianFirstResponseHours).toBeCloseTo(2, 6);
@@ -69,12 +82,26 @@ describe("dashboard and hand-off", () => {
     const b = await createVendorWithStaff();
     const sheet = await createPublishedSheet(a.vendor.id);
     const ticket = await openTicket(a.vendor.id, a.customer.user.id, { sheetVersionId: sheet.versionId });
-    await createProblemReport({ vendorId: a.vendor.id, actorUserId: a.support.user.id, ticketId: ticket.id, sheetVersionId: sheet.versionId, summary: "vf too low for light routers", details: "" });
+    await createProblemReport({
+      vendorId: a.vendor.id,
+      actorUserId: a.support.user.id,
+      ticketId: ticket.id,
+      sheetVersionId: sheet.versionId,
+      summary: "vf too low for light routers",
+      details: "",
+    });
     const reports = await listProblemReports({ vendorId: a.vendor.id, sheetVersionId: sheet.versionId });
     expect(reports.map((r) => [r.summary, r.ticketNumber, r.status])).toEqual([["vf too low for light routers", ticket.number, "open"]]);
     expect(await listProblemReports({ vendorId: b.vendor.id })).toEqual([]);
     await expect(
-      createProblemReport({ vendorId: b.vendor.id, actorUserId: b.support.user.id, ticketId: ticket.id, sheetVersionId: sheet.versionId, summary: "x y z", details: "" }),
+      createProblemReport({
+        vendorId: b.vendor.id,
+        actorUserId: b.support.user.id,
+        ticketId: ticket.id,
+        sheetVersionId: sheet.versionId,
+        summary: "x y z",
+        details: "",
+      }),
     ).rejects.toMatchObject({ code: "not_found" });
   });
 });

@@ -1,5 +1,4 @@
 import { randomUUID } from "node:crypto";
-
 import { describe, expect, it } from "vitest";
 
 import { db } from "@/lib/db/knex";
@@ -21,7 +20,9 @@ describe("ticket creation", () => {
     ]);
     expect(a.id).toBe(b.id);
     expect([a.created, b.created].sort()).toEqual([false, true]);
-    const { count } = await db("tickets").where({ vendor_id: v.id }).count<{ count: string }[]>("* as count").first() as { count: string };
+    const { count } = (await db("tickets").where({ vendor_id: v.id }).count<{ count: string }[]>("* as count").first()) as {
+      count: string;
+    };
     expect(Number(count)).toBe(1);
   });
 
@@ -35,7 +36,9 @@ describe("ticket creation", () => {
   });
 
   it("sets the first-response target from the vendor's hours for normal priority", async () => {
-    const { vendor: v, customer } = await createVendorWithStaff({ settings: { firstResponseHours: { low: 48, normal: 10, high: 4, urgent: 1 } } });
+    const { vendor: v, customer } = await createVendorWithStaff({
+      settings: { firstResponseHours: { low: 48, normal: 10, high: 4, urgent: 1 } },
+    });
     const vendor = await loadVendor(v.id);
     const t = await createTicket({ vendor, customerId: customer.user.id, input: input(randomUUID()) });
     const row = mustExist(await db("tickets").where({ id: t.id }).first(), "row");
@@ -49,7 +52,11 @@ describe("ticket creation", () => {
     const sheet = await createPublishedSheet(v.id);
     const machine = await createMachine(v.id, customer.user.id);
     const foreign = await createMachine(v.id, support.user.id);
-    const t = await createTicket({ vendor, customerId: customer.user.id, input: { ...input(randomUUID()), sheetVersionId: sheet.versionId, machineId: machine.id } });
+    const t = await createTicket({
+      vendor,
+      customerId: customer.user.id,
+      input: { ...input(randomUUID()), sheetVersionId: sheet.versionId, machineId: machine.id },
+    });
     const link = await db("ticket_sheet_links").where({ ticket_id: t.id }).first();
     expect(link).toMatchObject({ sheet_version_id: sheet.versionId, machine_id: machine.id });
     const row = mustExist(await db("tickets").where({ id: t.id }).first(), "row");

@@ -1,9 +1,8 @@
-import nodemailer from "nodemailer";
-import type { SMTPServer } from "smtp-server";
 import { mkdtemp } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
-
+import nodemailer from "nodemailer";
+import type { SMTPServer } from "smtp-server";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
 import { db } from "@/lib/db/knex";
@@ -46,7 +45,9 @@ describe("reply by e-mail", () => {
       text: "Raised the feed, the chips are clean now.\n\nOn Tue, 1 Dec 2026 at 10:00, Support wrote:\n> -- Reply above this line to add to the ticket --\n> Try 1800 mm/min\n",
     });
     const { messages, attachments } = await thread(vendor.id, ticket.id);
-    expect(messages.map((m) => [m.body, m.source, m.authorId])).toEqual([["Raised the feed, the chips are clean now.", "email", customer.user.id]]);
+    expect(messages.map((m) => [m.body, m.source, m.authorId])).toEqual([
+      ["Raised the feed, the chips are clean now.", "email", customer.user.id],
+    ]);
     // The G-code file is kept (sniffed as text); the HTML file is refused like any upload.
     expect(attachments.map((a) => [a.fileName, a.kind, a.messageId])).toEqual([["slot.nc", "text", messages[0].id]]);
     const log = await db("inbound_mail_log").where({ ticket_id: ticket.id }).first();
@@ -59,10 +60,16 @@ describe("reply by e-mail", () => {
     const genuine = replyAddress({ ticketId: ticket.id, userId: customer.user.id });
     const forged = genuine.replace(/\.([0-9a-f])/, (_m, c: string) => `.${c === "0" ? "1" : "0"}`);
     expect(verifyReplyAddress(forged)).toBeNull();
-    const results = await handleInboundMail({ rcptTo: [forged, `reply+${ticket.id}@swarfbook.localhost`], from: customer.user.email, text: "Hello" });
+    const results = await handleInboundMail({
+      rcptTo: [forged, `reply+${ticket.id}@swarfbook.localhost`],
+      from: customer.user.email,
+      text: "Hello",
+    });
     expect(results.map((r) => r.outcome)).toEqual(["dropped", "dropped"]);
     expect((await thread(vendor.id, ticket.id)).messages).toEqual([]);
-    const logged = await db("inbound_mail_log").whereIn("rcpt_to", [forged, `reply+${ticket.id}@swarfbook.localhost`]).select("outcome", "reason");
+    const logged = await db("inbound_mail_log")
+      .whereIn("rcpt_to", [forged, `reply+${ticket.id}@swarfbook.localhost`])
+      .select("outcome", "reason");
     expect(logged).toHaveLength(2);
     expect(logged.every((l) => l.outcome === "dropped" && /unsigned or forged/.test(l.reason))).toBe(true);
   });
@@ -71,7 +78,11 @@ describe("reply by e-mail", () => {
     const { vendor, customer } = await createVendorWithStaff();
     const stranger = await createMember(vendor.id, "customer");
     const ticket = await openTicket(vendor.id, customer.user.id);
-    const [result] = await handleInboundMail({ rcptTo: [replyAddress({ ticketId: ticket.id, userId: customer.user.id })], from: stranger.user.email, text: "Let me in" });
+    const [result] = await handleInboundMail({
+      rcptTo: [replyAddress({ ticketId: ticket.id, userId: customer.user.id })],
+      from: stranger.user.email,
+      text: "Let me in",
+    });
     expect(result).toMatchObject({ outcome: "dropped", reason: "From is not the person the reply address was sent to" });
     expect((await thread(vendor.id, ticket.id)).messages).toEqual([]);
   });
@@ -79,7 +90,11 @@ describe("reply by e-mail", () => {
   it("a support agent answering by mail adds a public reply", async () => {
     const { vendor, customer, support } = await createVendorWithStaff();
     const ticket = await openTicket(vendor.id, customer.user.id);
-    const [result] = await handleInboundMail({ rcptTo: [replyAddress({ ticketId: ticket.id, userId: support.user.id })], from: support.user.email.toUpperCase(), text: "Use a ramp entry." });
+    const [result] = await handleInboundMail({
+      rcptTo: [replyAddress({ ticketId: ticket.id, userId: support.user.id })],
+      from: support.user.email.toUpperCase(),
+      text: "Use a ramp entry.",
+    });
     expect(result.outcome).toBe("accepted");
     const t = await thread(vendor.id, ticket.id);
     expect(t.messages.map((m) => [m.visibility, m.authorId])).toEqual([["public", support.user.id]]);
@@ -102,7 +117,11 @@ describe("reply by e-mail: the address is bound to its recipient", () => {
   it("someone a notification was forwarded to cannot post as its recipient", async () => {
     const { vendor, customer } = await createVendorWithStaff();
     const ticket = await openTicket(vendor.id, customer.user.id);
-    const [result] = await handleInboundMail({ rcptTo: [replyAddress({ ticketId: ticket.id, userId: customer.user.id })], from: "colleague@elsewhere.test", text: "I am not the customer" });
+    const [result] = await handleInboundMail({
+      rcptTo: [replyAddress({ ticketId: ticket.id, userId: customer.user.id })],
+      from: "colleague@elsewhere.test",
+      text: "I am not the customer",
+    });
     expect(result.outcome).toBe("dropped");
     expect((await thread(vendor.id, ticket.id)).messages).toEqual([]);
   });
@@ -112,12 +131,20 @@ describe("reply by e-mail: the address is bound to its recipient", () => {
     const ticket = await openTicket(vendor.id, customer.user.id);
     const toSupport = replyAddress({ ticketId: ticket.id, userId: support.user.id });
     await db("members").where({ id: customer.memberId }).delete();
-    const [removed] = await handleInboundMail({ rcptTo: [replyAddress({ ticketId: ticket.id, userId: customer.user.id })], from: customer.user.email, text: "Still here" });
+    const [removed] = await handleInboundMail({
+      rcptTo: [replyAddress({ ticketId: ticket.id, userId: customer.user.id })],
+      from: customer.user.email,
+      text: "Still here",
+    });
     expect(removed).toMatchObject({ outcome: "dropped", reason: "the person the address was sent to is no longer a member" });
     await db("members").where({ id: support.memberId }).update({ role: "engineer" });
     const [demoted] = await handleInboundMail({ rcptTo: [toSupport], from: support.user.email, text: "Answer" });
     expect(demoted).toMatchObject({ outcome: "dropped", reason: "the person the address was sent to has no access to the ticket" });
-    const [engineerTry] = await handleInboundMail({ rcptTo: [replyAddress({ ticketId: ticket.id, userId: engineer.user.id })], from: engineer.user.email, text: "Hi" });
+    const [engineerTry] = await handleInboundMail({
+      rcptTo: [replyAddress({ ticketId: ticket.id, userId: engineer.user.id })],
+      from: engineer.user.email,
+      text: "Hi",
+    });
     expect(engineerTry.outcome).toBe("dropped");
     expect((await thread(vendor.id, ticket.id)).messages).toEqual([]);
   });
@@ -126,12 +153,26 @@ describe("reply by e-mail: the address is bound to its recipient", () => {
     const { vendor, customer } = await createVendorWithStaff();
     const ticket = await openTicket(vendor.id, customer.user.id);
     const to = replyAddress({ ticketId: ticket.id, userId: customer.user.id });
-    for (const verdict of ["dmarc=fail header.from=example.test", "spf=fail smtp.mailfrom=example.test", "dkim=fail header.d=example.test"]) {
-      const [result] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Hello", authenticationResults: [` mx.test; ${verdict}`] });
+    for (const verdict of [
+      "dmarc=fail header.from=example.test",
+      "spf=fail smtp.mailfrom=example.test",
+      "dkim=fail header.d=example.test",
+    ]) {
+      const [result] = await handleInboundMail({
+        rcptTo: [to],
+        from: customer.user.email,
+        text: "Hello",
+        authenticationResults: [` mx.test; ${verdict}`],
+      });
       expect(result.outcome).toBe("dropped");
       expect(result.reason).toMatch(/receiving server reports (dmarc|spf|dkim)=fail/);
     }
-    const [passed] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Hello", authenticationResults: [" mx.test; spf=pass; dkim=pass; dmarc=pass"] });
+    const [passed] = await handleInboundMail({
+      rcptTo: [to],
+      from: customer.user.email,
+      text: "Hello",
+      authenticationResults: [" mx.test; spf=pass; dkim=pass; dmarc=pass"],
+    });
     expect(passed.outcome).toBe("accepted");
   });
 
@@ -140,7 +181,13 @@ describe("reply by e-mail: the address is bound to its recipient", () => {
     const ticket = await openTicket(vendor.id, customer.user.id);
     const transport = nodemailer.createTransport({ host: "127.0.0.1", port, secure: false, ignoreTLS: true });
     const to = replyAddress({ ticketId: ticket.id, userId: customer.user.id });
-    await transport.sendMail({ from: customer.user.email, to, subject: "Re", text: "Spoofed", headers: { "Authentication-Results": "mx.test; dmarc=fail header.from=example.test" } });
+    await transport.sendMail({
+      from: customer.user.email,
+      to,
+      subject: "Re",
+      text: "Spoofed",
+      headers: { "Authentication-Results": "mx.test; dmarc=fail header.from=example.test" },
+    });
     const mail = { from: customer.user.email, to, subject: "Re", text: "Posted once", messageId: `<retry-${ticket.id}@mail.example.test>` };
     await transport.sendMail(mail);
     await transport.sendMail(mail);
@@ -164,7 +211,13 @@ describe("reply by e-mail: the address is bound to its recipient", () => {
       begin if new.ticket_id = '${ticket.id}' then raise exception 'log down'; end if; return new; end $$`);
     await db.raw("create trigger refuse_inbound_log before insert on inbound_mail_log for each row execute function refuse_inbound_log()");
     try {
-      const info = await transport.sendMail({ from: customer.user.email, to, subject: "Re", text: "Stored despite the log", messageId: `<later-${ticket.id}@x.test>` });
+      const info = await transport.sendMail({
+        from: customer.user.email,
+        to,
+        subject: "Re",
+        text: "Stored despite the log",
+        messageId: `<later-${ticket.id}@x.test>`,
+      });
       expect(info.response).toMatch(/^250/);
       expect((await thread(vendor.id, ticket.id)).messages.map((m) => m.body)).toEqual(["Stored despite the log"]);
     } finally {
@@ -175,7 +228,9 @@ describe("reply by e-mail: the address is bound to its recipient", () => {
       begin if new.ticket_id = '${ticket.id}' then raise exception 'db down'; end if; return new; end $$`);
     await db.raw("create trigger refuse_message before insert on ticket_messages for each row execute function refuse_message()");
     try {
-      await expect(transport.sendMail({ from: customer.user.email, to, subject: "Re", text: "Not stored", messageId: `<early-${ticket.id}@x.test>` })).rejects.toMatchObject({ responseCode: 451 });
+      await expect(
+        transport.sendMail({ from: customer.user.email, to, subject: "Re", text: "Not stored", messageId: `<early-${ticket.id}@x.test>` }),
+      ).rejects.toMatchObject({ responseCode: 451 });
     } finally {
       await db.raw("drop trigger refuse_message on ticket_messages");
     }
@@ -192,17 +247,39 @@ describe("reply by e-mail with INBOUND_MAIL_REQUIRE_AUTH on", () => {
     process.env.INBOUND_MAIL_REQUIRE_AUTH = "on";
     try {
       // No header, no verdict, or a pass for another domain: the From header alone is anyone's to write.
-      const refused = [[], [" mx.test; spf=pass; dkim=none"], [` mx.test; dkim=pass header.d=attacker.test`], [` mx.test; dmarc=pass header.from=attacker.test`]];
+      const refused = [
+        [],
+        [" mx.test; spf=pass; dkim=none"],
+        [` mx.test; dkim=pass header.d=attacker.test`],
+        [` mx.test; dmarc=pass header.from=attacker.test`],
+      ];
       for (const authenticationResults of refused) {
         const [result] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Forged", authenticationResults });
         expect(result).toMatchObject({ outcome: "dropped" });
       }
       // A sender's own pass written below the receiving server's header is not believed.
-      const [below] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Forged", authenticationResults: [" mx.test; dkim=none", ` mx.test; dkim=pass header.d=${domain}`] });
+      const [below] = await handleInboundMail({
+        rcptTo: [to],
+        from: customer.user.email,
+        text: "Forged",
+        authenticationResults: [" mx.test; dkim=none", ` mx.test; dkim=pass header.d=${domain}`],
+      });
       expect(below).toMatchObject({ outcome: "dropped" });
-      const [dkim] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Signed", messageId: "<a@signed>", authenticationResults: [` mx.test; spf=pass; dkim=pass header.d=${domain}`] });
+      const [dkim] = await handleInboundMail({
+        rcptTo: [to],
+        from: customer.user.email,
+        text: "Signed",
+        messageId: "<a@signed>",
+        authenticationResults: [` mx.test; spf=pass; dkim=pass header.d=${domain}`],
+      });
       expect(dkim).toMatchObject({ outcome: "accepted" });
-      const [dmarc] = await handleInboundMail({ rcptTo: [to], from: customer.user.email, text: "Aligned", messageId: "<b@signed>", authenticationResults: [` mx.test; dmarc=pass header.from=${domain}`] });
+      const [dmarc] = await handleInboundMail({
+        rcptTo: [to],
+        from: customer.user.email,
+        text: "Aligned",
+        messageId: "<b@signed>",
+        authenticationResults: [` mx.test; dmarc=pass header.from=${domain}`],
+      });
       expect(dmarc).toMatchObject({ outcome: "accepted" });
       expect((await thread(vendor.id, ticket.id)).messages.map((m) => m.body)).not.toContain("Forged");
     } finally {

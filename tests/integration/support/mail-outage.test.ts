@@ -1,5 +1,4 @@
 import net from "node:net";
-
 import { SMTPServer } from "smtp-server";
 import { afterAll, describe, expect, it } from "vitest";
 
@@ -33,8 +32,7 @@ function startSink(port: number, received: string[]): Promise<SMTPServer> {
 
 const jobState = async (subject: string) =>
   (await db.raw("select state, retry_count from pgboss.job where name = 'mail.send' and data->>'subject' = ?", [subject])).rows[0] as
-    | { state: string; retry_count: number }
-    | undefined;
+    { state: string; retry_count: number } | undefined;
 
 let stopBoss: (() => Promise<void>) | null = null;
 afterAll(async () => {

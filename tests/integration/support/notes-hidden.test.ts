@@ -14,13 +14,32 @@ describe("internal notes", () => {
     const { vendor, support, customer } = await createVendorWithStaff();
     const ticket = await openTicket(vendor.id, customer.user.id);
     const file = await saveAttachment({ vendorId: vendor.id, userId: support.user.id, bytes: GCODE, fileName: "internal.nc" });
-    await addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Internal: the customer runs a worn cutter.", visibility: "note", attachmentIds: [file.id] });
-    await addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Raise the feed to 1800 mm/min.", visibility: "public" });
+    await addStaffMessage({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Internal: the customer runs a worn cutter.",
+      visibility: "note",
+      attachmentIds: [file.id],
+    });
+    await addStaffMessage({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Raise the feed to 1800 mm/min.",
+      visibility: "public",
+    });
 
-    const seen = await getTicketThread({ vendorId: vendor.id, ticketId: ticket.id, viewer: { kind: "customer", userId: customer.user.id } });
+    const seen = await getTicketThread({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      viewer: { kind: "customer", userId: customer.user.id },
+    });
     expect(seen.messages.map((m) => m.body)).toEqual(["Raise the feed to 1800 mm/min."]);
     expect(seen.attachments).toEqual([]);
-    await expect(readAttachment({ vendorId: vendor.id, attachmentId: file.id, userId: customer.user.id, role: "customer" })).rejects.toMatchObject({ code: "not_found" });
+    await expect(
+      readAttachment({ vendorId: vendor.id, attachmentId: file.id, userId: customer.user.id, role: "customer" }),
+    ).rejects.toMatchObject({ code: "not_found" });
 
     const staff = await getTicketThread({ vendorId: vendor.id, ticketId: ticket.id, viewer: { kind: "staff" } });
     expect(staff.messages.map((m) => m.visibility)).toEqual(["note", "public"]);
@@ -30,7 +49,13 @@ describe("internal notes", () => {
   it("a note does not stop the first-response clock or change the status", async () => {
     const { vendor, support, customer } = await createVendorWithStaff();
     const ticket = await openTicket(vendor.id, customer.user.id);
-    await addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Looking into it", visibility: "note" });
+    await addStaffMessage({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Looking into it",
+      visibility: "note",
+    });
     const { ticket: t } = await getTicketThread({ vendorId: vendor.id, ticketId: ticket.id, viewer: { kind: "staff" } });
     expect(t.status).toBe("new");
     expect(t.firstResponseAt).toBeNull();

@@ -9,7 +9,9 @@ import { loadVendor, openTicket } from "@/tests/factories/tickets";
 
 type Queued = { to: string; subject: string; text: string; html?: string; replyTo?: string };
 const mailsTo = async (to: string): Promise<Queued[]> =>
-  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ? order by created_on", [to])).rows.map((r: { data: Queued }) => r.data);
+  (await db.raw("select data from pgboss.job where name = 'mail.send' and data->>'to' = ? order by created_on", [to])).rows.map(
+    (r: { data: Queued }) => r.data,
+  );
 
 describe("ticket e-mail", () => {
   it("team hears of new tickets, customers of staff replies (never notes), assignees of customer replies", async () => {
@@ -20,9 +22,21 @@ describe("ticket e-mail", () => {
     // Admins are only the fallback when the vendor has support staff.
     expect(await mailsTo(admin.user.email)).toEqual([]);
 
-    await addStaffMessage({ vendorId: v.id, ticketId: ticket.id, authorId: support.user.id, body: "Secret internal remark", visibility: "note" });
+    await addStaffMessage({
+      vendorId: v.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Secret internal remark",
+      visibility: "note",
+    });
     expect(await mailsTo(customer.user.email)).toEqual([]);
-    await addStaffMessage({ vendorId: v.id, ticketId: ticket.id, authorId: support.user.id, body: "Use a helical entry.", visibility: "public" });
+    await addStaffMessage({
+      vendorId: v.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Use a helical entry.",
+      visibility: "public",
+    });
     const [reply] = await mailsTo(customer.user.email);
     expect(reply.text).toContain("Use a helical entry.");
     expect(reply.text).not.toContain("Secret internal remark");
@@ -38,7 +52,8 @@ describe("ticket e-mail", () => {
   it("sends a reply's Markdown formatted, with a plain-text part free of marks, and never its raw HTML", async () => {
     const { vendor: v, support, customer } = await createVendorWithStaff();
     const ticket = await openTicket(v.id, customer.user.id, { subject: "Chatter on the finish pass" });
-    const body = "Try **18,000 rpm** and _climb_ milling:\n\n- ae 0.5 mm\n- [the sheet](https://example.com/s)\n\n<script>alert(1)</script>\n\n[x](javascript:alert(1))";
+    const body =
+      "Try **18,000 rpm** and _climb_ milling:\n\n- ae 0.5 mm\n- [the sheet](https://example.com/s)\n\n<script>alert(1)</script>\n\n[x](javascript:alert(1))";
     await addStaffMessage({ vendorId: v.id, ticketId: ticket.id, authorId: support.user.id, body, visibility: "public" });
     const [reply] = await mailsTo(customer.user.email);
     expect(reply.html).toContain("<strong>18,000 rpm</strong>");

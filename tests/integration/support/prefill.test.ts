@@ -10,8 +10,16 @@ describe("new ticket prefilled from a sheet or a setup", () => {
     const { vendor, customer } = await createVendorWithStaff();
     const sheet = await createPublishedSheet(vendor.id);
     const machine = await createMachine(vendor.id, customer.user.id);
-    const prefill = await prefillLinks({ vendorId: vendor.id, customerId: customer.user.id, sheetVersion: sheet.versionId, machine: machine.id });
-    expect(prefill).toEqual({ sheetVersion: { id: sheet.versionId, title: sheet.title, number: 1, materialId: sheet.materialId }, machine: { id: machine.id, name: machine.name } });
+    const prefill = await prefillLinks({
+      vendorId: vendor.id,
+      customerId: customer.user.id,
+      sheetVersion: sheet.versionId,
+      machine: machine.id,
+    });
+    expect(prefill).toEqual({
+      sheetVersion: { id: sheet.versionId, title: sheet.title, number: 1, materialId: sheet.materialId },
+      machine: { id: machine.id, name: machine.name },
+    });
   });
 
   it("ignores another vendor's version, another customer's machine, drafts and junk", async () => {
@@ -26,7 +34,8 @@ describe("new ticket prefilled from a sheet or a setup", () => {
       .returning("id");
     const otherMachine = await createMachine(a.vendor.id, a.support.user.id);
     const none = { sheetVersion: null, machine: null };
-    const ask = (sheetVersion?: string, machine?: string) => prefillLinks({ vendorId: a.vendor.id, customerId: a.customer.user.id, sheetVersion, machine });
+    const ask = (sheetVersion?: string, machine?: string) =>
+      prefillLinks({ vendorId: a.vendor.id, customerId: a.customer.user.id, sheetVersion, machine });
     expect(await ask(foreignSheet.versionId, otherMachine.id)).toEqual(none);
     expect(await ask(openDraft.id)).toEqual(none);
     expect(await ask("../../etc", "'; select 1")).toEqual(none);

@@ -17,7 +17,11 @@ describe("replies", () => {
       addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Reply A", visibility: "public" }),
       addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: admin.user.id, body: "Reply B", visibility: "public" }),
     ]);
-    const thread = await getTicketThread({ vendorId: vendor.id, ticketId: ticket.id, viewer: { kind: "customer", userId: customer.user.id } });
+    const thread = await getTicketThread({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      viewer: { kind: "customer", userId: customer.user.id },
+    });
     expect(thread.messages.map((m) => m.body).sort()).toEqual(["Reply A", "Reply B"]);
     expect(thread.ticket.status).toBe("answered");
     expect(thread.ticket.firstResponseAt).not.toBeNull();
@@ -27,11 +31,19 @@ describe("replies", () => {
     const { vendor, support, customer } = await createVendorWithStaff();
     const stranger = await createMember(vendor.id, "customer");
     const ticket = await openTicket(vendor.id, customer.user.id);
-    await addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Try 1800 mm/min", visibility: "public" });
+    await addStaffMessage({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Try 1800 mm/min",
+      visibility: "public",
+    });
     await addCustomerMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: customer.user.id, body: "Still melts" });
     const { ticket: t } = await getTicketThread({ vendorId: vendor.id, ticketId: ticket.id, viewer: { kind: "staff" } });
     expect(t.status).toBe("in_progress");
-    await expect(addCustomerMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: stranger.user.id, body: "x" })).rejects.toMatchObject({ code: "not_found" });
+    await expect(
+      addCustomerMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: stranger.user.id, body: "x" }),
+    ).rejects.toMatchObject({ code: "not_found" });
   });
 });
 
@@ -40,7 +52,11 @@ describe("audit trail", () => {
     const { vendor: v, support, customer } = await createVendorWithStaff();
     const vendor = await loadVendor(v.id);
     const ticket = await openTicket(v.id, customer.user.id);
-    await updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: ticket.id, status: "in_progress", priority: "urgent", assigneeId: support.user.id } });
+    await updateTicket({
+      vendor,
+      actorUserId: support.user.id,
+      input: { ticketId: ticket.id, status: "in_progress", priority: "urgent", assigneeId: support.user.id },
+    });
     await updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: ticket.id, status: "in_progress" } });
     const rows = await db("audit_log").where({ vendor_id: v.id, object_id: ticket.id }).whereNot("action", "ticket.create").orderBy("id");
     expect(rows.map((r) => [r.action, r.actor_user_id, r.details])).toEqual([
@@ -64,7 +80,9 @@ describe("audit trail", () => {
     const { vendor: v, support, customer } = await createVendorWithStaff();
     const vendor = await loadVendor(v.id);
     const ticket = await openTicket(v.id, customer.user.id);
-    await expect(updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: ticket.id, assigneeId: customer.user.id } })).rejects.toMatchObject({ code: "invalid_input" });
+    await expect(
+      updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: ticket.id, assigneeId: customer.user.id } }),
+    ).rejects.toMatchObject({ code: "invalid_input" });
   });
 });
 
@@ -73,9 +91,15 @@ describe("satisfaction", () => {
     const { vendor: v, support, customer } = await createVendorWithStaff();
     const vendor = await loadVendor(v.id);
     const ticket = await openTicket(v.id, customer.user.id);
-    await expect(rateTicket({ vendorId: v.id, customerId: customer.user.id, input: { ticketId: ticket.id, satisfaction: 5, comment: "" } })).rejects.toMatchObject({ code: "conflict" });
+    await expect(
+      rateTicket({ vendorId: v.id, customerId: customer.user.id, input: { ticketId: ticket.id, satisfaction: 5, comment: "" } }),
+    ).rejects.toMatchObject({ code: "conflict" });
     await updateTicket({ vendor, actorUserId: support.user.id, input: { ticketId: ticket.id, status: "closed" } });
-    await rateTicket({ vendorId: v.id, customerId: customer.user.id, input: { ticketId: ticket.id, satisfaction: 4, comment: "Quick and right" } });
+    await rateTicket({
+      vendorId: v.id,
+      customerId: customer.user.id,
+      input: { ticketId: ticket.id, satisfaction: 4, comment: "Quick and right" },
+    });
     const row = mustExist(await db("tickets").where({ id: ticket.id }).first(), "row");
     expect([row.satisfaction, row.satisfaction_comment, row.closed_at instanceof Date]).toEqual([4, "Quick and right", true]);
   });

@@ -1,10 +1,9 @@
 import { randomUUID } from "node:crypto";
-
 import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 
 import { GET as getOne } from "@/app/api/v1/vendors/[vendor]/tickets/[ticket]/route";
-import { GET as list, POST as create } from "@/app/api/v1/vendors/[vendor]/tickets/route";
+import { POST as create, GET as list } from "@/app/api/v1/vendors/[vendor]/tickets/route";
 import { db } from "@/lib/db/knex";
 import { addStaffMessage } from "@/lib/tickets/add-message";
 import { updateTicket } from "@/lib/tickets/update-ticket";
@@ -14,7 +13,11 @@ import { loadVendor } from "@/tests/factories/tickets";
 
 const post = (slug: string, token: string, body: unknown) =>
   create(
-    new NextRequest(`http://localhost/api/v1/vendors/${slug}/tickets`, { method: "POST", body: JSON.stringify(body), headers: { authorization: `Bearer ${token}`, "content-type": "application/json" } }),
+    new NextRequest(`http://localhost/api/v1/vendors/${slug}/tickets`, {
+      method: "POST",
+      body: JSON.stringify(body),
+      headers: { authorization: `Bearer ${token}`, "content-type": "application/json" },
+    }),
     { params: Promise.resolve({ vendor: slug }) },
   );
 const get = (slug: string, token: string, id: string) =>
@@ -27,13 +30,30 @@ describe("tickets API", () => {
     const { vendor, customer, support } = await createVendorWithStaff();
     await db("users").where({ id: support.user.id }).update({ name: "" });
     const token = await createApiToken(vendor.id, customer.user.id);
-    const { ticket } = await (await post(vendor.slug, token, { subject: "Burn marks", body: "On every pass.", idempotencyKey: randomUUID() })).json();
+    const { ticket } = await (
+      await post(vendor.slug, token, { subject: "Burn marks", body: "On every pass.", idempotencyKey: randomUUID() })
+    ).json();
     const staffVendor = await loadVendor(vendor.id);
-    await updateTicket({ vendor: staffVendor, actorUserId: support.user.id, input: { ticketId: ticket.id, assigneeId: support.user.id, priority: "high", tags: ["difficult-customer"] } });
-    await addStaffMessage({ vendorId: vendor.id, ticketId: ticket.id, authorId: support.user.id, body: "Lower the spindle speed.", visibility: "public" });
+    await updateTicket({
+      vendor: staffVendor,
+      actorUserId: support.user.id,
+      input: { ticketId: ticket.id, assigneeId: support.user.id, priority: "high", tags: ["difficult-customer"] },
+    });
+    await addStaffMessage({
+      vendorId: vendor.id,
+      ticketId: ticket.id,
+      authorId: support.user.id,
+      body: "Lower the spindle speed.",
+      visibility: "public",
+    });
 
     const one = await (await get(vendor.slug, token, ticket.id)).json();
-    const many = await (await list(new NextRequest(`http://localhost/api/v1/vendors/${vendor.slug}/tickets`, { headers: { authorization: `Bearer ${token}` } }), { params: Promise.resolve({ vendor: vendor.slug }) })).json();
+    const many = await (
+      await list(
+        new NextRequest(`http://localhost/api/v1/vendors/${vendor.slug}/tickets`, { headers: { authorization: `Bearer ${token}` } }),
+        { params: Promise.resolve({ vendor: vendor.slug }) },
+      )
+    ).json();
     for (const text of [JSON.stringify(one), JSON.stringify(many)]) {
       expect(text).not.toContain("difficult-customer");
       expect(text).not.toContain(support.user.email);
@@ -41,7 +61,9 @@ describe("tickets API", () => {
       expect(text).not.toMatch(/"(tags|priority|assigneeId|assigneeName|overdue|customerEmail)"/);
     }
     expect(one.ticket.subject).toBe("Burn marks");
-    expect(one.messages.map((m: { authorName: string; body: string }) => [m.authorName, m.body])).toEqual([["Support team", "Lower the spindle speed."]]);
+    expect(one.messages.map((m: { authorName: string; body: string }) => [m.authorName, m.body])).toEqual([
+      ["Support team", "Lower the spindle speed."],
+    ]);
     expect(many.tickets.map((t: { id: string }) => t.id)).toEqual([ticket.id]);
   });
 

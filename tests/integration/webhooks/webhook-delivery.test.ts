@@ -1,5 +1,4 @@
 import { randomUUID } from "node:crypto";
-
 import { afterAll, afterEach, beforeEach, describe, expect, it } from "vitest";
 
 import { recordOutcome } from "@/lib/bench/outcomes";
@@ -67,8 +66,18 @@ async function scenario(events: string[] = ["ticket.created"]) {
   const staff = await createVendorWithStaff();
   const vendor = await loadVendor(staff.vendor.id);
   const openTicket = (subject = "Chatter on the finishing pass") =>
-    createTicket({ vendor, customerId: staff.customer.user.id, input: { subject, body: "Hear it at 18 000 rpm.", idempotencyKey: uniq("key"), attachmentIds: [] } });
-  return { ...staff, vendor, openTicket, hook: (url: string) => createWebhook({ vendorId: vendor.id, userId: staff.admin.user.id, input: { url, description: "", events: events as never } }) };
+    createTicket({
+      vendor,
+      customerId: staff.customer.user.id,
+      input: { subject, body: "Hear it at 18 000 rpm.", idempotencyKey: uniq("key"), attachmentIds: [] },
+    });
+  return {
+    ...staff,
+    vendor,
+    openTicket,
+    hook: (url: string) =>
+      createWebhook({ vendorId: vendor.id, userId: staff.admin.user.id, input: { url, description: "", events: events as never } }),
+  };
 }
 
 describe("webhook delivery", () => {
@@ -84,14 +93,31 @@ describe("webhook delivery", () => {
       expect(receiverAccepts(secret, got)).toBe(true);
       expect(got.headers["swarfbook-event"]).toBe("ticket.created");
       const body = JSON.parse(got.body);
-      expect(body).toMatchObject({ type: "ticket.created", vendor: s.vendor.slug, data: { ticketId: ticket.id, number: ticket.number, subject: "Chatter on the finishing pass" } });
+      expect(body).toMatchObject({
+        type: "ticket.created",
+        vendor: s.vendor.slug,
+        data: { ticketId: ticket.id, number: ticket.number, subject: "Chatter on the finishing pass" },
+      });
       // A changed body, another secret or an old timestamp fail the same check.
       expect(receiverAccepts(secret, { ...got, body: got.body.replace("Chatter", "Chattor") })).toBe(false);
       expect(receiverAccepts(`${secret}x`, got)).toBe(false);
       expect(receiverAccepts(secret, got, Math.floor(Date.now() / 1000) + 301)).toBe(false);
-      expect(verifySignature({ secret, timestamp: String(got.headers["swarfbook-timestamp"]), signature: String(got.headers["swarfbook-signature"]), body: got.body })).toBe(true);
+      expect(
+        verifySignature({
+          secret,
+          timestamp: String(got.headers["swarfbook-timestamp"]),
+          signature: String(got.headers["swarfbook-signature"]),
+          body: got.body,
+        }),
+      ).toBe(true);
       const [delivery] = await listDeliveries({ vendorId: s.vendor.id, webhookId: id });
-      expect(delivery).toMatchObject({ state: "delivered", attempts: 1, lastStatus: 200, responseExcerpt: "ok", eventType: "ticket.created" });
+      expect(delivery).toMatchObject({
+        state: "delivered",
+        attempts: 1,
+        lastStatus: 200,
+        responseExcerpt: "ok",
+        eventType: "ticket.created",
+      });
       // The secret is stored encrypted: neither it nor its signing form is in the row.
       const row = await db("webhooks").where({ id }).first();
       expect(JSON.stringify(row)).not.toContain(secret);
@@ -156,7 +182,9 @@ describe("webhook delivery", () => {
       expect(await queuedJobs(id)).toEqual([]);
       const held = (await listDeliveries({ vendorId: s.vendor.id, webhookId: id })).find((d) => d.state === "held");
       expect(held).toBeDefined();
-      await expect(redeliverWebhook({ vendorId: s.vendor.id, webhookId: id, deliveryId: failed.id })).rejects.toThrow("Resume the webhook first.");
+      await expect(redeliverWebhook({ vendorId: s.vendor.id, webhookId: id, deliveryId: failed.id })).rejects.toThrow(
+        "Resume the webhook first.",
+      );
 
       healthy = true;
       const before = receiver.received.length;
@@ -179,7 +207,9 @@ describe("webhook delivery", () => {
       await runDeliveries(id);
       const [delivery] = await listDeliveries({ vendorId: s.vendor.id, webhookId: id });
       await redeliverWebhook({ vendorId: s.vendor.id, webhookId: id, deliveryId: delivery.id });
-      await expect(redeliverWebhook({ vendorId: s.vendor.id, webhookId: id, deliveryId: delivery.id })).rejects.toThrow("already on its way");
+      await expect(redeliverWebhook({ vendorId: s.vendor.id, webhookId: id, deliveryId: delivery.id })).rejects.toThrow(
+        "already on its way",
+      );
       expect(await queuedJobs(id)).toHaveLength(1);
       await runDeliveries(id);
       expect(receiver.received).toHaveLength(2);
@@ -222,7 +252,9 @@ describe("webhook delivery", () => {
       const [delivery] = await listDeliveries({ vendorId: a.vendor.id, webhookId: id });
       await expect(getWebhook({ vendorId: b.vendor.id, webhookId: id })).rejects.toThrow("No such webhook.");
       expect(await listDeliveries({ vendorId: b.vendor.id, webhookId: id })).toEqual([]);
-      await expect(redeliverWebhook({ vendorId: b.vendor.id, webhookId: id, deliveryId: delivery.id })).rejects.toThrow("No such delivery.");
+      await expect(redeliverWebhook({ vendorId: b.vendor.id, webhookId: id, deliveryId: delivery.id })).rejects.toThrow(
+        "No such delivery.",
+      );
       await expect(resumeWebhook({ vendorId: b.vendor.id, userId: b.admin.user.id, webhookId: id })).rejects.toThrow("No such webhook.");
     } finally {
       await receiver.close();
@@ -239,11 +271,37 @@ describe("webhook delivery", () => {
       await webhookSheetSubscriber.handle(event);
       await webhookSheetSubscriber.handle(event);
       const ticket = await s.openTicket();
-      await addStaffMessage({ vendorId: s.vendor.id, ticketId: ticket.id, authorId: s.support.user.id, body: "Lower the feed.", visibility: "public" });
-      await addStaffMessage({ vendorId: s.vendor.id, ticketId: ticket.id, authorId: s.support.user.id, body: "Internal only.", visibility: "note" });
+      await addStaffMessage({
+        vendorId: s.vendor.id,
+        ticketId: ticket.id,
+        authorId: s.support.user.id,
+        body: "Lower the feed.",
+        visibility: "public",
+      });
+      await addStaffMessage({
+        vendorId: s.vendor.id,
+        ticketId: ticket.id,
+        authorId: s.support.user.id,
+        body: "Internal only.",
+        visibility: "note",
+      });
       const customer = await createFieldCustomer(s.vendor.id);
-      const [setup] = await db("setups").insert({ vendor_id: s.vendor.id, user_id: customer.userId, machine_id: customer.machineId, sheet_version_id: event.versionId, result: "{}" }).returning("id");
-      await recordOutcome({ vendorId: s.vendor.id, userId: customer.userId, setupId: setup.id, fields: { result: "failed", symptom: "chatter", changes: {}, notes: "" }, idempotencyKey: randomUUID() });
+      const [setup] = await db("setups")
+        .insert({
+          vendor_id: s.vendor.id,
+          user_id: customer.userId,
+          machine_id: customer.machineId,
+          sheet_version_id: event.versionId,
+          result: "{}",
+        })
+        .returning("id");
+      await recordOutcome({
+        vendorId: s.vendor.id,
+        userId: customer.userId,
+        setupId: setup.id,
+        fields: { result: "failed", symptom: "chatter", changes: {}, notes: "" },
+        idempotencyKey: randomUUID(),
+      });
       await runDeliveries(id);
       const bodies = receiver.received.map((r) => JSON.parse(r.body));
       expect(bodies.map((b) => b.type).sort()).toEqual(["outcome.reported", "sheet.published", "sheet.superseded", "ticket.answered"]);
@@ -252,7 +310,12 @@ describe("webhook delivery", () => {
       expect(published.data).toMatchObject({ sheet: sheet.sheetSlug, version: 2, supersedes: 1 });
       expect(published.data.url).toContain(`/${s.vendor.slug}/library/${sheet.sheetSlug}/v/2`);
       expect(bodies.find((b) => b.type === "sheet.superseded").data).toMatchObject({ version: 1, supersededBy: 2 });
-      expect(bodies.find((b) => b.type === "outcome.reported").data).toMatchObject({ sheet: sheet.sheetSlug, version: 2, result: "failed", symptom: "chatter" });
+      expect(bodies.find((b) => b.type === "outcome.reported").data).toMatchObject({
+        sheet: sheet.sheetSlug,
+        version: 2,
+        result: "failed",
+        symptom: "chatter",
+      });
       expect(bodies.find((b) => b.type === "ticket.answered").data).toMatchObject({ ticketId: ticket.id });
     } finally {
       await receiver.close();
@@ -262,7 +325,15 @@ describe("webhook delivery", () => {
   it("prunes finished deliveries after 30 days and keeps held ones", async () => {
     const s = await scenario();
     const { id } = await s.hook("http://127.0.0.1:9/never");
-    const row = (state: string, days: number) => ({ vendor_id: s.vendor.id, webhook_id: id, event_id: randomUUID(), event_type: "ticket.created", body: "{}", state, created_at: db.raw(`now() - interval '${days} days'`) });
+    const row = (state: string, days: number) => ({
+      vendor_id: s.vendor.id,
+      webhook_id: id,
+      event_id: randomUUID(),
+      event_type: "ticket.created",
+      body: "{}",
+      state,
+      created_at: db.raw(`now() - interval '${days} days'`),
+    });
     await db("webhook_deliveries").insert([row("delivered", 31), row("failed", 31), row("held", 31), row("delivered", 29)]);
     await pruneWebhookDeliveriesJob();
     const left = await db("webhook_deliveries").where({ webhook_id: id }).orderBy("state").select("state");

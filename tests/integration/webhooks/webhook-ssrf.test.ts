@@ -75,10 +75,23 @@ describe("webhook addresses", () => {
     const receiver = await startReceiver();
     try {
       const staff = await createVendorWithStaff();
-      const { id } = await createWebhook({ vendorId: staff.vendor.id, userId: staff.admin.user.id, input: { url: receiver.url, description: "", events: ["ticket.created"] } });
-      await createTicket({ vendor: await loadVendor(staff.vendor.id), customerId: staff.customer.user.id, input: { subject: "Hello there", body: "A question.", idempotencyKey: uniq("k"), attachmentIds: [] } });
+      const { id } = await createWebhook({
+        vendorId: staff.vendor.id,
+        userId: staff.admin.user.id,
+        input: { url: receiver.url, description: "", events: ["ticket.created"] },
+      });
+      await createTicket({
+        vendor: await loadVendor(staff.vendor.id),
+        customerId: staff.customer.user.id,
+        input: { subject: "Hello there", body: "A question.", idempotencyKey: uniq("k"), attachmentIds: [] },
+      });
       delete process.env.WEBHOOKS_ALLOW_LOOPBACK;
-      const job = (await db.raw("select j.data from pgboss.job j join webhook_deliveries d on d.id = (j.data->>'deliveryId')::uuid where j.name = ? and d.webhook_id = ?", [WEBHOOK_DELIVERY_QUEUE, id])).rows[0];
+      const job = (
+        await db.raw(
+          "select j.data from pgboss.job j join webhook_deliveries d on d.id = (j.data->>'deliveryId')::uuid where j.name = ? and d.webhook_id = ?",
+          [WEBHOOK_DELIVERY_QUEUE, id],
+        )
+      ).rows[0];
       await deliverWebhookJob(job.data);
       expect(receiver.received).toEqual([]);
       const [delivery] = await listDeliveries({ vendorId: staff.vendor.id, webhookId: id });

@@ -31,7 +31,11 @@ describe("adapt panel", () => {
     expect(adapted("n")).toContain(formatQuantity(16000, "spindleSpeed", "metric"));
     expect(adapted("vf")).toContain(formatQuantity(1600, "feedRate", "metric"));
     const steps = screen.getByRole("list", { name: "Steps" });
-    expect(within(steps).getAllByRole("listitem").map((li) => li.getAttribute("data-rule"))).toContain("spindle-speed-range");
+    expect(
+      within(steps)
+        .getAllByRole("listitem")
+        .map((li) => li.getAttribute("data-rule")),
+    ).toContain("spindle-speed-range");
 
     type(/highest spindle speed/i, "12000");
     // 0.1 · 1 · 12000 = 1200 mm/min.
@@ -55,7 +59,12 @@ describe("adapt panel", () => {
     expect(ae.getAttribute("aria-invalid")).toBe("true");
     expect(document.getElementById("override-ae-error")?.textContent).toMatch(/“a lot” is not a length/);
     type(/highest spindle speed/i, "8000");
-    expect(screen.getAllByRole("alert").map((a) => a.textContent).join(" ")).toMatch(/lowest spindle speed is above the highest/i);
+    expect(
+      screen
+        .getAllByRole("alert")
+        .map((a) => a.textContent)
+        .join(" "),
+    ).toMatch(/lowest spindle speed is above the highest/i);
     expect(container.textContent).not.toMatch(/NaN|Infinity/);
   });
 
@@ -69,7 +78,22 @@ describe("adapt panel", () => {
   });
 
   it("starts with the customer's first registered machine and switches units", () => {
-    const machine: Machine = { id: "m1", name: "Garage router", preset: null, rpmMin: 8000, rpmMax: 20000, powerKw: 1.5, maxFeedMmMin: 5000, rigidity: 0.55, zThrustN: null, spindleKind: "constant-torque", ratedRpm: null, stickoutMm: 20, units: "metric", updatedAt: "" };
+    const machine: Machine = {
+      id: "m1",
+      name: "Garage router",
+      preset: null,
+      rpmMin: 8000,
+      rpmMax: 20000,
+      powerKw: 1.5,
+      maxFeedMmMin: 5000,
+      rigidity: 0.55,
+      zThrustN: null,
+      spindleKind: "constant-torque",
+      ratedRpm: null,
+      stickoutMm: 20,
+      units: "metric",
+      updatedAt: "",
+    };
     render(<AdaptPanel context={acrylicContext} vendorSlug="northbeck" machines={[machine]} />);
     expect(adapted("n")).toContain(formatQuantity(18000, "spindleSpeed", "metric"));
     fireEvent.click(screen.getByRole("button", { name: "in, hp" }));
@@ -119,9 +143,28 @@ describe("adapt panel", () => {
   });
 
   it("shows a ball nose's vc at its effective diameter De = 2·√(ap·(D − ap)) (geometry of a sphere)", () => {
-    const ball = { ...acrylicContext, cutter: { ...acrylicContext.cutter, diameterMm: 6, cornerForm: "ball" as const, cornerRadiusMm: 3 }, operations: [{ ...acrylicContext.operations[1], axialDepthMm: 0.2, radialDepthMm: 0.3 }] };
+    const ball = {
+      ...acrylicContext,
+      cutter: { ...acrylicContext.cutter, diameterMm: 6, cornerForm: "ball" as const, cornerRadiusMm: 3 },
+      operations: [{ ...acrylicContext.operations[1], axialDepthMm: 0.2, radialDepthMm: 0.3 }],
+    };
     // A machine as stiff as the reference keeps the sheet's ap, so De is the sheet's.
-    const stiff: Machine = { id: "m2", name: "Stiff router", preset: null, rpmMin: 8000, rpmMax: 18000, powerKw: 2.2, maxFeedMmMin: 10000, rigidity: 0.8, zThrustN: 600, spindleKind: "constant-power", ratedRpm: null, stickoutMm: 20, units: "metric", updatedAt: "" };
+    const stiff: Machine = {
+      id: "m2",
+      name: "Stiff router",
+      preset: null,
+      rpmMin: 8000,
+      rpmMax: 18000,
+      powerKw: 2.2,
+      maxFeedMmMin: 10000,
+      rigidity: 0.8,
+      zThrustN: 600,
+      spindleKind: "constant-power",
+      ratedRpm: null,
+      stickoutMm: 20,
+      units: "metric",
+      updatedAt: "",
+    };
     render(<AdaptPanel context={ball} vendorSlug="northbeck" machines={[stiff]} />);
     const de = 2 * Math.sqrt(0.2 * 5.8);
     expect(screen.getByText("vc (cutting speed at De)")).toBeTruthy();

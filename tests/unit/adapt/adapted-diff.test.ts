@@ -10,7 +10,10 @@ const machine = { minRpm: 10000, maxRpm: 16000, spindlePowerKw: 0.8, maxFeedMmMi
 describe("diffAdapted", () => {
   it("lists only the numbers that changed, with the change in percent", () => {
     const before = adaptOperation(acrylicContext, 0, machine);
-    const lowered = { ...acrylicContext, operations: acrylicContext.operations.map((op) => (op.index === 0 ? { ...op, feedMmMin: 1440 } : op)) };
+    const lowered = {
+      ...acrylicContext,
+      operations: acrylicContext.operations.map((op) => (op.index === 0 ? { ...op, feedMmMin: 1440 } : op)),
+    };
     const after = adaptOperation(lowered, 0, machine);
     const changes = diffAdapted(before, after);
     // fz 0.1 → 0.08 mm at 16 000 rpm: vf 1600 → 1280 mm/min, −20 %.

@@ -4,7 +4,17 @@ import { computeAdaptation, readAdhocMachine } from "@/lib/adapt/compute-adaptat
 
 import { acrylicContext } from "./adapt-context-fixture";
 
-const weak = { rpmMin: "10000", rpmMax: "16000", power: "0.8", maxFeed: "3000", rigidity: "light" as const, zThrust: "", stickout: "", spindleKind: "constant-torque" as const, ratedRpm: "" };
+const weak = {
+  rpmMin: "10000",
+  rpmMax: "16000",
+  power: "0.8",
+  maxFeed: "3000",
+  rigidity: "light" as const,
+  zThrust: "",
+  stickout: "",
+  spindleKind: "constant-torque" as const,
+  ratedRpm: "",
+};
 const none = { ae: "", ap: "", stickout: "" };
 
 describe("computeAdaptation", () => {
@@ -31,7 +41,14 @@ describe("computeAdaptation", () => {
     const machine = readAdhocMachine({ ...weak, rpmMax: "", power: "-1", maxFeed: "fast" }, "metric", errors);
     expect(machine).toBeNull();
     expect(Object.keys(errors).sort()).toEqual(["maxFeed", "power", "rpmMax"]);
-    const out = computeAdaptation({ context: acrylicContext, operationIndex: 0, machine, overrides: { ...none, ae: "1/0" }, units: "metric", errors });
+    const out = computeAdaptation({
+      context: acrylicContext,
+      operationIndex: 0,
+      machine,
+      overrides: { ...none, ae: "1/0" },
+      units: "metric",
+      errors,
+    });
     expect(out.ok).toBe(false);
     if (out.ok) return;
     expect(out.errors.ae).toBeTruthy();
@@ -42,7 +59,13 @@ describe("computeAdaptation", () => {
     const errors = {};
     const machine = readAdhocMachine(weak, "metric", errors);
     // 5 % of 3.175 mm is 0.159 mm; 0.1 mm is below it (lib/machining/README.md, rule 2).
-    const out = computeAdaptation({ context: acrylicContext, operationIndex: 0, machine, overrides: { ...none, ae: "0.1 mm" }, units: "metric" });
+    const out = computeAdaptation({
+      context: acrylicContext,
+      operationIndex: 0,
+      machine,
+      overrides: { ...none, ae: "0.1 mm" },
+      units: "metric",
+    });
     expect(out.ok).toBe(false);
     if (!out.ok) expect(Object.keys(out.errors)).toEqual(["ae"]);
   });

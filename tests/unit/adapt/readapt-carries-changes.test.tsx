@@ -11,13 +11,36 @@ import { acrylicContext } from "./adapt-context-fixture";
 vi.mock("next/dynamic", () => ({ default: () => () => null }));
 afterEach(cleanup);
 
-const base: Machine = { id: "m1", name: "Garage router", preset: null, rpmMin: 8000, rpmMax: 20000, powerKw: 1.5, maxFeedMmMin: 5000, rigidity: 0.55, zThrustN: null, spindleKind: "constant-torque", ratedRpm: null, stickoutMm: 20, units: "metric", updatedAt: "" };
+const base: Machine = {
+  id: "m1",
+  name: "Garage router",
+  preset: null,
+  rpmMin: 8000,
+  rpmMax: 20000,
+  powerKw: 1.5,
+  maxFeedMmMin: 5000,
+  rigidity: 0.55,
+  zThrustN: null,
+  spindleKind: "constant-torque",
+  ratedRpm: null,
+  stickoutMm: 20,
+  units: "metric",
+  updatedAt: "",
+};
 
 describe("adapting a newer version from a saved setup", () => {
   it("starts on the setup's machine with the customer's own changes, and the numbers use them", () => {
     const machines = [base, { ...base, id: "m2", name: "Mill" }];
     const apMm = acrylicContext.operations[0].axialDepthMm / 2;
-    render(<AdaptPanel context={acrylicContext} vendorSlug="northbeck" machines={machines} initialMachineId="m2" initialOverrides={{ ae: "", ap: `${apMm} mm`, stickout: "25 mm" }} />);
+    render(
+      <AdaptPanel
+        context={acrylicContext}
+        vendorSlug="northbeck"
+        machines={machines}
+        initialMachineId="m2"
+        initialOverrides={{ ae: "", ap: `${apMm} mm`, stickout: "25 mm" }}
+      />,
+    );
     expect((screen.getByLabelText("Adapt to") as HTMLSelectElement).value).toBe("m2");
     expect((screen.getByLabelText(/ap \(axial depth\)/) as HTMLInputElement).value).toBe(`${apMm} mm`);
     expect((screen.getByLabelText(/Stick-out/) as HTMLInputElement).value).toBe("25 mm");

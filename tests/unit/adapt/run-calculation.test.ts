@@ -64,7 +64,9 @@ describe("runCalculation", () => {
     expect(outcome.ok).toBe(false);
     if (outcome.ok) return;
     expect(outcome.status).toBe(400);
-    expect(Object.keys(outcome.errors)).toEqual(expect.arrayContaining(["operation.diameter.value", "operation.diameter.unit", "operation.flutes", "body"]));
+    expect(Object.keys(outcome.errors)).toEqual(
+      expect.arrayContaining(["operation.diameter.value", "operation.diameter.unit", "operation.flutes", "body"]),
+    );
     expect(outcome.message).toMatch(/invalid/i);
   });
 
@@ -73,7 +75,9 @@ describe("runCalculation", () => {
     // 0.3 in radial depth on a 0.25 in cutter: an imperial caller reads inches (model 1 answered 7.62 mm)
     const outcome = runCalculation({ ...body, operation: { ...body.operation, radialDepth: { value: 0.3, unit: "in" } } });
     if (outcome.ok) throw new Error("expected an error");
-    expect(outcome.errors["operation.radialDepth.value"]?.[0]).toMatch(/^operation\.radialDepth\.value \(0\.3\sin\) cannot exceed the cutter diameter \(0\.25\sin\)/);
+    expect(outcome.errors["operation.radialDepth.value"]?.[0]).toMatch(
+      /^operation\.radialDepth\.value \(0\.3\sin\) cannot exceed the cutter diameter \(0\.25\sin\)/,
+    );
     const metric = runCalculation({ ...body, units: "metric", operation: { ...body.operation, radialDepth: { value: 0.3, unit: "in" } } });
     if (metric.ok) throw new Error("expected an error");
     expect(metric.errors["operation.radialDepth.value"]?.[0]).toMatch(/\(7\.62\smm\)/);
@@ -110,9 +114,30 @@ describe("runCalculation", () => {
     const body = imperialBody();
     const outcome = runCalculation({
       ...body,
-      operation: { ...body.operation, kind: "adaptive", fluteLength: { value: 0.75, unit: "in" }, cornerForm: "square", entry: "plunge", plungeFeed: { value: 30, unit: "in/min" } },
-      material: { ...body.material, specificCuttingForce: undefined, kc11: { value: 120, unit: "N/mm²" }, mc: 0, chipLoadBand: { min: 1.2, max: 3, unit: "% of D" }, meltsWhenRubbing: true },
-      machine: { ...body.machine, spindleSpeed: { min: 10000, max: 10000, unit: "rpm" }, zThrust: undefined, rigidityClass: "light", spindleKind: "constant-torque", ratedSpindleSpeed: { value: 10000, unit: "rpm" } },
+      operation: {
+        ...body.operation,
+        kind: "adaptive",
+        fluteLength: { value: 0.75, unit: "in" },
+        cornerForm: "square",
+        entry: "plunge",
+        plungeFeed: { value: 30, unit: "in/min" },
+      },
+      material: {
+        ...body.material,
+        specificCuttingForce: undefined,
+        kc11: { value: 120, unit: "N/mm²" },
+        mc: 0,
+        chipLoadBand: { min: 1.2, max: 3, unit: "% of D" },
+        meltsWhenRubbing: true,
+      },
+      machine: {
+        ...body.machine,
+        spindleSpeed: { min: 10000, max: 10000, unit: "rpm" },
+        zThrust: undefined,
+        rigidityClass: "light",
+        spindleKind: "constant-torque",
+        ratedSpindleSpeed: { value: 10000, unit: "rpm" },
+      },
       entryCapability: "plunge-only",
     });
     if (!outcome.ok) throw new Error(JSON.stringify(outcome.errors));

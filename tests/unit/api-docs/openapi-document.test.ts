@@ -15,8 +15,14 @@ describe("OpenAPI document", () => {
     expect(handlers.length).toBeGreaterThan(30);
     const documented = new Set(API_OPERATIONS.map(key));
     const routed = new Set(handlers.map(key));
-    expect([...routed].filter((k) => !documented.has(k)), "routes without an entry in lib/api-docs").toEqual([]);
-    expect([...documented].filter((k) => !routed.has(k)), "entries without a route").toEqual([]);
+    expect(
+      [...routed].filter((k) => !documented.has(k)),
+      "routes without an entry in lib/api-docs",
+    ).toEqual([]);
+    expect(
+      [...documented].filter((k) => !routed.has(k)),
+      "entries without a route",
+    ).toEqual([]);
     expect(API_OPERATIONS.length).toBe(documented.size);
   });
 
@@ -33,13 +39,25 @@ describe("OpenAPI document", () => {
     const handler = handlers.get(key(createSheet))!;
     expect(await driftProblems(createSheet, handler)).toEqual([]);
     // A look-alike schema (same fields, another object) is drift: the document would no longer follow the handler.
-    expect(await driftProblems({ ...createSheet, body: apiNewSheetSchema.extend({}) }, handler)).toEqual([expect.stringContaining("does not parse with the schema object")]);
-    expect(await driftProblems({ ...createSheet, body: saveDraftSchema }, handler)).toEqual([expect.stringContaining("does not parse with the schema object")]);
+    expect(await driftProblems({ ...createSheet, body: apiNewSheetSchema.extend({}) }, handler)).toEqual([
+      expect.stringContaining("does not parse with the schema object"),
+    ]);
+    expect(await driftProblems({ ...createSheet, body: saveDraftSchema }, handler)).toEqual([
+      expect.stringContaining("does not parse with the schema object"),
+    ]);
     expect(await driftProblems({ ...createSheet, body: undefined }, handler)).toEqual([expect.stringContaining("reads a JSON body")]);
-    expect(await driftProblems({ ...createSheet, permission: "sheets.publish" }, handler)).toEqual([expect.stringContaining("requires sheets.author")]);
-    expect(await driftProblems({ ...createSheet, rateLimit: { limit: 5, windowSeconds: 60 } }, handler)).toEqual([expect.stringContaining("rate limit is the default")]);
+    expect(await driftProblems({ ...createSheet, permission: "sheets.publish" }, handler)).toEqual([
+      expect.stringContaining("requires sheets.author"),
+    ]);
+    expect(await driftProblems({ ...createSheet, rateLimit: { limit: 5, windowSeconds: 60 } }, handler)).toEqual([
+      expect.stringContaining("rate limit is the default"),
+    ]);
     // A fake handler that parses with its own copy of the schema is caught as well.
-    const copy = { ...handler, chunk: handler.chunk.replace("parseInput(apiNewSheetSchema", "parseInput(localCopy"), source: handler.source };
+    const copy = {
+      ...handler,
+      chunk: handler.chunk.replace("parseInput(apiNewSheetSchema", "parseInput(localCopy"),
+      source: handler.source,
+    };
     expect(await driftProblems(createSheet, copy)).toEqual([expect.stringContaining("does not parse with the schema object")]);
   });
 
@@ -65,7 +83,12 @@ describe("OpenAPI document", () => {
       const op = API_OPERATIONS.find((o) => o.method === "POST" && o.path === path)!;
       expect(Object.keys(op.requestExamples ?? {}), path).toEqual(expect.arrayContaining(["metric", "imperial"]));
     }
-    const calculate = buildOpenApiDocument().paths["/api/v1/calculate"].post as { responses: Record<string, { content?: Record<string, { examples?: Record<string, { value: { units: string; metric: object; imperial: object } }> }> }> };
+    const calculate = buildOpenApiDocument().paths["/api/v1/calculate"].post as {
+      responses: Record<
+        string,
+        { content?: Record<string, { examples?: Record<string, { value: { units: string; metric: object; imperial: object } }> }> }
+      >;
+    };
     const answers = calculate.responses["200"].content!["application/json"].examples!;
     expect(answers.metric.value.units).toBe("metric");
     expect(answers.imperial.value.units).toBe("imperial");
@@ -78,9 +101,20 @@ describe("OpenAPI document", () => {
     expect(publish["x-swarfbook-permission"]).toBe("sheets.publish");
     expect(publish["x-swarfbook-roles"]).toEqual(["engineer", "admin"]);
     expect(publish["x-swarfbook-rate-limit"]).toEqual({ limit: 300, windowSeconds: 60, bucket: "shared" });
-    expect((doc.paths["/api/v1/vendors/{vendor}/tickets"].post as Record<string, unknown>)["x-swarfbook-rate-limit"]).toEqual({ limit: 30, windowSeconds: 60, bucket: "own" });
+    expect((doc.paths["/api/v1/vendors/{vendor}/tickets"].post as Record<string, unknown>)["x-swarfbook-rate-limit"]).toEqual({
+      limit: 30,
+      windowSeconds: 60,
+      bucket: "own",
+    });
     expect(doc.components.schemas.ApiError).toMatchObject({ type: "object", required: ["error", "message"] });
-    expect(Object.keys(doc.webhooks).sort()).toEqual(["outcome.reported", "sheet.published", "sheet.superseded", "sheet.withdrawn", "ticket.answered", "ticket.created"]);
+    expect(Object.keys(doc.webhooks).sort()).toEqual([
+      "outcome.reported",
+      "sheet.published",
+      "sheet.superseded",
+      "sheet.withdrawn",
+      "ticket.answered",
+      "ticket.created",
+    ]);
     expect(doc.info.description).toContain("HMAC-SHA256");
     expect(doc.info.description).toContain("5 minutes");
   });

@@ -1,6 +1,5 @@
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
-
 import type { z } from "zod";
 
 import type { ApiOperation } from "@/lib/api-docs/api-operation";
@@ -24,12 +23,20 @@ export function listApiHandlers(): RouteHandler[] {
     .filter((file) => file.endsWith(`${path.sep}route.ts`))
     .flatMap((file) => {
       const source = readFileSync(file, "utf8");
-      const apiPath = "/" + path.relative(path.join(ROOT, "app"), path.dirname(file)).split(path.sep).map((s) => s.replace(/^\[(\w+)\]$/, "{$1}")).join("/");
+      const apiPath =
+        "/" +
+        path
+          .relative(path.join(ROOT, "app"), path.dirname(file))
+          .split(path.sep)
+          .map((s) => s.replace(/^\[(\w+)\]$/, "{$1}"))
+          .join("/");
       const chunks = source.split(/(?=^export\s+const\s)/m).filter((c) => c.startsWith("export"));
       return chunks.flatMap((chunk) => {
         const names = chunk.match(/^export\s+const\s+(?:\{([^}]+)\}|(\w+))/)!;
         const exported = (names[1] ?? names[2]).split(",").map((n) => n.trim());
-        return exported.filter((n): n is (typeof METHODS)[number] => (METHODS as readonly string[]).includes(n)).map((method) => ({ method, path: apiPath, file, chunk, source }));
+        return exported
+          .filter((n): n is (typeof METHODS)[number] => (METHODS as readonly string[]).includes(n))
+          .map((method) => ({ method, path: apiPath, file, chunk, source }));
       });
     });
 }
@@ -37,14 +44,18 @@ export function listApiHandlers(): RouteHandler[] {
 /** `import { a, b as c } from "m"` → [{ name: a, local: a, module: m }, …] */
 function importsOf(source: string): { name: string; local: string; module: string }[] {
   return [...source.matchAll(/import\s*\{([^}]+)\}\s*from\s*"([^"]+)"/g)].flatMap((m) =>
-    m[1].split(",").map((part) => {
-      const [name, local] = part.trim().split(/\s+as\s+/);
-      return { name: name.replace(/^type\s+/, ""), local: local ?? name.replace(/^type\s+/, ""), module: m[2] };
-    }).filter((i) => i.name),
+    m[1]
+      .split(",")
+      .map((part) => {
+        const [name, local] = part.trim().split(/\s+as\s+/);
+        return { name: name.replace(/^type\s+/, ""), local: local ?? name.replace(/^type\s+/, ""), module: m[2] };
+      })
+      .filter((i) => i.name),
   );
 }
 
-const parses = (text: string, local: string) => new RegExp(`parseInput\\(\\s*${local}\\b|\\b${local}\\s*\\.\\s*(?:safeParse|parse|parseAsync|safeParseAsync)\\(`).test(text);
+const parses = (text: string, local: string) =>
+  new RegExp(`parseInput\\(\\s*${local}\\b|\\b${local}\\s*\\.\\s*(?:safeParse|parse|parseAsync|safeParseAsync)\\(`).test(text);
 
 /**
  * What is wrong between a handler and its documented operation: a schema the document shows that the handler does
@@ -59,22 +70,29 @@ export async function driftProblems(op: ApiOperation, handler: RouteHandler): Pr
   const parsedInImports = importsOf(op.parsedIn ? parsedInSource : handler.source);
   if (op.parsedIn) {
     const moduleName = `@/${op.parsedIn.replace(/\.tsx?$/, "")}`;
-    if (!importsOf(handler.source).some((i) => i.module === moduleName)) problems.push(`${where}: the handler does not import ${moduleName}, where the document says it parses`);
+    if (!importsOf(handler.source).some((i) => i.module === moduleName))
+      problems.push(`${where}: the handler does not import ${moduleName}, where the document says it parses`);
   }
   const schemas = [op.body, op.query, ...(op.alsoParses ?? [])].filter((s): s is z.ZodType => Boolean(s));
   for (const schema of schemas) {
     let found = false;
     for (const imp of parsedInImports) {
-      const modulePath = imp.module.startsWith("@/") ? path.join(ROOT, imp.module.slice(2)) : imp.module.startsWith(".") ? path.resolve(path.dirname(parsedInFile), imp.module) : null;
+      const modulePath = imp.module.startsWith("@/")
+        ? path.join(ROOT, imp.module.slice(2))
+        : imp.module.startsWith(".")
+          ? path.resolve(path.dirname(parsedInFile), imp.module)
+          : null;
       if (!modulePath || !parses(parsedInSource, imp.local)) continue;
       const mod = (await import(/* @vite-ignore */ modulePath)) as Record<string, unknown>;
       if (mod[imp.name] === schema) found = true;
     }
     if (!found) problems.push(`${where}: the handler does not parse with the schema object the document shows`);
   }
-  if (/\breadJson\(/.test(handler.chunk) && !op.body) problems.push(`${where}: the handler reads a JSON body the document does not describe`);
+  if (/\breadJson\(/.test(handler.chunk) && !op.body)
+    problems.push(`${where}: the handler reads a JSON body the document does not describe`);
   const permission = handler.chunk.match(/permission:\s*"([\w.]+)"/)?.[1];
-  if (permission !== op.permission) problems.push(`${where}: the handler requires ${permission ?? "no permission"}, the document says ${op.permission ?? "none"}`);
+  if (permission !== op.permission)
+    problems.push(`${where}: the handler requires ${permission ?? "no permission"}, the document says ${op.permission ?? "none"}`);
   const rate = handler.chunk.match(/limit:\s*(\d+),\s*windowSeconds:\s*(\d+)/);
   const documented = op.rateLimit ? `${op.rateLimit.limit}/${op.rateLimit.windowSeconds}` : "the default";
   const actual = rate ? `${rate[1]}/${rate[2]}` : "the default";

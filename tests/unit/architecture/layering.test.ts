@@ -1,6 +1,5 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
-
 import madge from "madge";
 import { beforeAll, describe, expect, it } from "vitest";
 
@@ -33,7 +32,9 @@ const arrows = (from: RegExp, to: RegExp) =>
   Object.entries(graph).flatMap(([file, deps]) => (from.test(file) ? deps.filter((d) => to.test(d)).map((d) => `${file} → ${d}`) : []));
 
 const bareImports = (file: string) =>
-  [...readFileSync(path.join(root, file), "utf8").matchAll(/(?:from|import)\s+"([^"]+)"/g)].map((m) => m[1]).filter((s) => !s.startsWith(".") && !s.startsWith("@/"));
+  [...readFileSync(path.join(root, file), "utf8").matchAll(/(?:from|import)\s+"([^"]+)"/g)]
+    .map((m) => m[1])
+    .filter((s) => !s.startsWith(".") && !s.startsWith("@/"));
 
 describe("layering", () => {
   it("reads the whole tree", () => {

@@ -11,7 +11,14 @@ describe("isSameOriginChange", () => {
 
   it("accepts a change only from the app's own origin", () => {
     expect(isSameOriginChange({ method: "POST", origin: "https://portal.example", allowed })).toBe(true);
-    for (const origin of [null, "null", "https://evil.example", "http://portal.example", "https://portal.example.evil.example", "https://portal.example:8443"]) {
+    for (const origin of [
+      null,
+      "null",
+      "https://evil.example",
+      "http://portal.example",
+      "https://portal.example.evil.example",
+      "https://portal.example:8443",
+    ]) {
       for (const method of ["POST", "PUT", "PATCH", "DELETE"]) expect(isSameOriginChange({ method, origin, allowed })).toBe(false);
     }
   });

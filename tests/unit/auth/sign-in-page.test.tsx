@@ -16,10 +16,16 @@ const render = async (search: Record<string, string>) => formProps(await SignInP
 
 describe("sign-in page", () => {
   it("passes a same-site path on", async () => {
-    expect(await render({ callbackUrl: "/northbeck/desk?tab=mine", vendor: "northbeck" })).toEqual({ callbackUrl: "/northbeck/desk?tab=mine", vendor: "northbeck" });
+    expect(await render({ callbackUrl: "/northbeck/desk?tab=mine", vendor: "northbeck" })).toEqual({
+      callbackUrl: "/northbeck/desk?tab=mine",
+      vendor: "northbeck",
+    });
   });
 
-  it.each(["/\\evil.example", "/\t/evil.example", "//evil.example", "https://evil.example/", "javascript:alert(1)"])("never passes %j on", async (callbackUrl) => {
-    expect(await render({ callbackUrl, vendor: "/evil.example" })).toEqual({ callbackUrl: "/", vendor: undefined });
-  });
+  it.each(["/\\evil.example", "/\t/evil.example", "//evil.example", "https://evil.example/", "javascript:alert(1)"])(
+    "never passes %j on",
+    async (callbackUrl) => {
+      expect(await render({ callbackUrl, vendor: "/evil.example" })).toEqual({ callbackUrl: "/", vendor: undefined });
+    },
+  );
 });

@@ -3,7 +3,16 @@ import { describe, expect, it } from "vitest";
 import { feedSpeedCurve } from "@/lib/bench/feed-speed-curve";
 
 describe("feedSpeedCurve", () => {
-  const base = { machine: { minRpm: 10000, maxRpm: 20000, maxFeedMmMin: 1500 }, diameterMm: 6, flutes: 2, chipLoadMm: 0.05, minChipLoadMm: 0.02, vcWindowMpm: [150, 300] as [number, number], adapted: { rpm: 15000, feedMmMin: 1500 }, steps: 10 };
+  const base = {
+    machine: { minRpm: 10000, maxRpm: 20000, maxFeedMmMin: 1500 },
+    diameterMm: 6,
+    flutes: 2,
+    chipLoadMm: 0.05,
+    minChipLoadMm: 0.02,
+    vcWindowMpm: [150, 300] as [number, number],
+    adapted: { rpm: 15000, feedMmMin: 1500 },
+    steps: 10,
+  };
 
   it("runs vf = fz·z·n across the range, held at the machine's feed limit, with the rubbing line at fz_min", () => {
     const curve = feedSpeedCurve({ ...base, units: "metric" });

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 
 import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { renderChangeAlert } from "@/lib/bench/change-alert-mail";
 import { diffAdapted } from "@/lib/adapt/adapted-diff";
+import { renderChangeAlert } from "@/lib/bench/change-alert-mail";
 import { setupCsv } from "@/lib/bench/setup-csv";
 import { setupSheetData } from "@/lib/bench/setup-sheet-data";
 import { formatQuantity } from "@/lib/machining";
@@ -14,7 +14,14 @@ const machine = { minRpm: 10000, maxRpm: 16000, spindlePowerKw: 0.8, maxFeedMmMi
 describe("setup sheet data and CSV", () => {
   it("gives sheet and adapted numbers in the setup's units, one CSV row per quantity", () => {
     const result = adaptOperation(acrylicContext, 0, machine);
-    const data = setupSheetData({ context: acrylicContext, operationIndex: 0, result, setupName: "=HYPERLINK(1)", machineName: "Desk router", units: "imperial" });
+    const data = setupSheetData({
+      context: acrylicContext,
+      operationIndex: 0,
+      result,
+      setupName: "=HYPERLINK(1)",
+      machineName: "Desk router",
+      units: "imperial",
+    });
     const csv = setupCsv(data).trim().split("\r\n");
     expect(csv[0]).toBe("setup,machine,sheet_version,operation,symbol,quantity,unit,sheet_value,adapted_value,changed");
     const vf = csv.find((l) => l.includes(",vf,Feed rate,"))!;
@@ -35,7 +42,16 @@ describe("setup sheet data and CSV", () => {
     const strong = { minRpm: 6000, maxRpm: 30000, spindlePowerKw: 5, maxFeedMmMin: 20000, rigidity: 1 };
     const apMm = acrylicContext.operations[0].axialDepthMm / 2;
     const result = adaptOperation(acrylicContext, 0, strong, { axialDepthMm: apMm });
-    const data = setupSheetData({ context: acrylicContext, operationIndex: 0, result, setupName: "Slot", machineName: "Big router", units: "metric", overrides: { axialDepthMm: apMm }, machineStickoutMm: 18 });
+    const data = setupSheetData({
+      context: acrylicContext,
+      operationIndex: 0,
+      result,
+      setupName: "Slot",
+      machineName: "Big router",
+      units: "metric",
+      overrides: { axialDepthMm: apMm },
+      machineStickoutMm: 18,
+    });
     expect(data.yourChanges).toEqual([`ap (axial depth): ${formatQuantity(apMm, "length", "metric")}`]);
     expect(data.rows.find((r) => r.symbol === "ap")?.changed).toBe(true);
     expect(data.stickout).toBe(`${formatQuantity(18, "length", "metric")} (the machine's usual)`);
@@ -54,7 +70,27 @@ describe("setup sheet data and CSV", () => {
   it("renders a change alert with the re-adapted diff and the stop link", () => {
     const before = adaptOperation(acrylicContext, 0, machine);
     const after = adaptOperation({ ...acrylicContext, operations: [{ ...acrylicContext.operations[0], feedMmMin: 1440 }] }, 0, machine);
-    const mail = renderChangeAlert({ vendorName: "Northbeck", sheetTitle: "Acrylic", oldNumber: 1, newNumber: 2, changeNote: "", versionUrl: "http://x/v/2", stopUrl: "http://x/stop?token=t", units: "metric", sheetDiff: [], setups: [{ setupName: "Slot", machineName: "Desk", operationLabel: "Slot", setupUrl: "http://x/s", changes: diffAdapted(before, after), error: null }] });
+    const mail = renderChangeAlert({
+      vendorName: "Northbeck",
+      sheetTitle: "Acrylic",
+      oldNumber: 1,
+      newNumber: 2,
+      changeNote: "",
+      versionUrl: "http://x/v/2",
+      stopUrl: "http://x/stop?token=t",
+      units: "metric",
+      sheetDiff: [],
+      setups: [
+        {
+          setupName: "Slot",
+          machineName: "Desk",
+          operationLabel: "Slot",
+          setupUrl: "http://x/s",
+          changes: diffAdapted(before, after),
+          error: null,
+        },
+      ],
+    });
     expect(mail.text).toContain("vf (feed rate): 1600\u00a0mm/min → 1280\u00a0mm/min");
     expect(mail.text).toContain("Stop these e-mails: http://x/stop?token=t");
     expect(mail.html).toContain('href="http://x/stop?token=t"');

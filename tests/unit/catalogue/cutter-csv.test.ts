@@ -19,8 +19,15 @@ describe("checkCutterCsv", () => {
   });
 
   it("flags SKUs already in the catalogue and repeated within the file", () => {
-    const report = checkCutterCsv(`${HEADER}\nA-1,One,6,2,18,50,6,square,upcut\na-1,Two,6,2,18,50,6,square,upcut\nOLD-1,Three,6,2,18,50,6,square,upcut\n`, ["OLD-1"]);
-    expect(report.rows.map((r) => r.errors.map((e) => e.message))).toEqual([[], ["a-1 is also on row 2."], ["OLD-1 is already in the catalogue."]]);
+    const report = checkCutterCsv(
+      `${HEADER}\nA-1,One,6,2,18,50,6,square,upcut\na-1,Two,6,2,18,50,6,square,upcut\nOLD-1,Three,6,2,18,50,6,square,upcut\n`,
+      ["OLD-1"],
+    );
+    expect(report.rows.map((r) => r.errors.map((e) => e.message))).toEqual([
+      [],
+      ["a-1 is also on row 2."],
+      ["OLD-1 is already in the catalogue."],
+    ]);
   });
 
   it("refuses a file without the required columns or with unknown ones", () => {

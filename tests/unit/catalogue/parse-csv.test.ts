@@ -11,8 +11,14 @@ const cells = (text: string) => {
 // Cases follow RFC 4180 section 2 (rules 1–7).
 describe("parseCsv (RFC 4180)", () => {
   it("splits records on CRLF and on LF, and ignores one line break at the end (rules 1–2)", () => {
-    expect(cells("a,b\r\nc,d\r\n")).toEqual([["a", "b"], ["c", "d"]]);
-    expect(cells("a,b\nc,d")).toEqual([["a", "b"], ["c", "d"]]);
+    expect(cells("a,b\r\nc,d\r\n")).toEqual([
+      ["a", "b"],
+      ["c", "d"],
+    ]);
+    expect(cells("a,b\nc,d")).toEqual([
+      ["a", "b"],
+      ["c", "d"],
+    ]);
   });
 
   it("keeps empty cells, including a trailing one (rule 4)", () => {
@@ -20,7 +26,10 @@ describe("parseCsv (RFC 4180)", () => {
   });
 
   it("reads quoted cells holding commas, line breaks and doubled quotes (rules 5–7)", () => {
-    expect(cells('sku,notes\nNB-1,"say ""hi"", then\nleave"\n')).toEqual([["sku", "notes"], ["NB-1", 'say "hi", then\nleave']]);
+    expect(cells('sku,notes\nNB-1,"say ""hi"", then\nleave"\n')).toEqual([
+      ["sku", "notes"],
+      ["NB-1", 'say "hi", then\nleave'],
+    ]);
     expect(cells('"",x')).toEqual([["", "x"]]);
   });
 

@@ -1,6 +1,5 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
-
 import { describe, expect, it } from "vitest";
 
 import { sheetFrontMatterJsonSchema } from "@/content-schema/sheet-json-schema";

@@ -47,9 +47,13 @@ describe("sheet front matter schema", () => {
   });
 
   it("allows a ramp angle only with ramp or helical entry", () => {
-    const onPlunge = sheetFrontMatterSchema.safeParse(frontMatterInput({ operations: [operationInput({ entry: "plunge", rampAngleDeg: 3 })] }));
+    const onPlunge = sheetFrontMatterSchema.safeParse(
+      frontMatterInput({ operations: [operationInput({ entry: "plunge", rampAngleDeg: 3 })] }),
+    );
     expect(onPlunge.error?.issues[0].path).toEqual(["operations", 0, "rampAngleDeg"]);
-    const onHelix = sheetFrontMatterSchema.safeParse(frontMatterInput({ operations: [operationInput({ entry: "helical", rampAngleDeg: 2 })] }));
+    const onHelix = sheetFrontMatterSchema.safeParse(
+      frontMatterInput({ operations: [operationInput({ entry: "helical", rampAngleDeg: 2 })] }),
+    );
     expect(onHelix.success).toBe(true);
   });
 

@@ -66,7 +66,13 @@ describe("csvCell: formula-injection guard", () => {
 
 describe("toCsv", () => {
   it("joins cells with commas and ends every line, the last included, with CRLF", () => {
-    expect(toCsv([["param", "median %"], ["vf", -18], ["n", 12]])).toBe("param,median %\r\nvf,-18\r\nn,12\r\n");
+    expect(
+      toCsv([
+        ["param", "median %"],
+        ["vf", -18],
+        ["n", 12],
+      ]),
+    ).toBe("param,median %\r\nvf,-18\r\nn,12\r\n");
   });
 
   it("quotes and guards cells inside rows and keeps empty cells", () => {

@@ -11,7 +11,9 @@ describe("database unavailable", () => {
     expect(isDatabaseUnavailable(new Error("Knex: Timeout acquiring a connection. The pool is probably full."))).toBe(true);
     expect(isDatabaseUnavailable(new Error("Connection terminated unexpectedly"))).toBe(true);
     expect(isDatabaseUnavailable(Object.assign(new AggregateError([withCode("x", "ECONNREFUSED")]), {}))).toBe(true);
-    expect(isDatabaseUnavailable(new Error("select failed", { cause: withCode("the database system is starting up", "57P03") }))).toBe(true);
+    expect(isDatabaseUnavailable(new Error("select failed", { cause: withCode("the database system is starting up", "57P03") }))).toBe(
+      true,
+    );
   });
 
   it("leaves errors of the request itself alone", () => {

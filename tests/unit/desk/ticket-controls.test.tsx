@@ -40,7 +40,11 @@ afterEach(cleanup);
 
 describe("desk ticket panel", () => {
   it("shows the saved value after a save and sends only the touched field the next time", async () => {
-    answer = (sent) => ({ ok: true, message: "Ticket updated.", data: { status: "new", priority: sent.priority ?? "normal", assigneeId: "", tags: sent.tags ?? "melting" } });
+    answer = (sent) => ({
+      ok: true,
+      message: "Ticket updated.",
+      data: { status: "new", priority: sent.priority ?? "normal", assigneeId: "", tags: sent.tags ?? "melting" },
+    });
     render(<TicketControls updateTicketAction={updateTicketAction} vendor="northbeck" ticket={ticket} assignees={assignees} />);
     fireEvent.change(select("Priority"), { target: { value: "high" } });
     await save();
@@ -49,7 +53,11 @@ describe("desk ticket panel", () => {
     expect(select("Priority").value).toBe("high");
 
     fireEvent.change(screen.getByLabelText(/Tags/), { target: { value: "melting, acrylic" } });
-    answer = () => ({ ok: true, message: "Ticket updated.", data: { status: "new", priority: "high", assigneeId: "", tags: "melting, acrylic" } });
+    answer = () => ({
+      ok: true,
+      message: "Ticket updated.",
+      data: { status: "new", priority: "high", assigneeId: "", tags: "melting, acrylic" },
+    });
     await save();
     expect(calls[1]).toMatchObject({ tags: "melting, acrylic" });
     expect(calls[1]).not.toHaveProperty("priority");
@@ -57,7 +65,11 @@ describe("desk ticket panel", () => {
   });
 
   it("reports a conflict in words and shows the other person's value", async () => {
-    answer = () => ({ ok: false, message: "Someone else changed the priority while you were editing.", data: { status: "new", priority: "urgent", assigneeId: "", tags: "melting" } });
+    answer = () => ({
+      ok: false,
+      message: "Someone else changed the priority while you were editing.",
+      data: { status: "new", priority: "urgent", assigneeId: "", tags: "melting" },
+    });
     render(<TicketControls updateTicketAction={updateTicketAction} vendor="northbeck" ticket={ticket} assignees={assignees} />);
     fireEvent.change(select("Status"), { target: { value: "in_progress" } });
     await save();
@@ -67,8 +79,17 @@ describe("desk ticket panel", () => {
   });
 
   it("takes a fresh status and assignee from the page after a reply", () => {
-    const { rerender } = render(<TicketControls updateTicketAction={updateTicketAction} vendor="northbeck" ticket={ticket} assignees={assignees} />);
-    rerender(<TicketControls updateTicketAction={updateTicketAction} vendor="northbeck" ticket={{ ...ticket, status: "answered", assigneeId: agentId }} assignees={assignees} />);
+    const { rerender } = render(
+      <TicketControls updateTicketAction={updateTicketAction} vendor="northbeck" ticket={ticket} assignees={assignees} />,
+    );
+    rerender(
+      <TicketControls
+        updateTicketAction={updateTicketAction}
+        vendor="northbeck"
+        ticket={{ ...ticket, status: "answered", assigneeId: agentId }}
+        assignees={assignees}
+      />,
+    );
     expect(select("Status").value).toBe("answered");
     expect(select("Assignee").value).toBe(agentId);
   });

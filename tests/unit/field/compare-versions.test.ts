@@ -1,12 +1,17 @@
 import { describe, expect, it } from "vitest";
 
 import { compareVersions } from "@/lib/field/compare-versions";
-import { type Interval, wilsonInterval } from "@/lib/field/wilson";
+import { wilsonInterval, type Interval } from "@/lib/field/wilson";
 
 // z for 95 % two-sided, from a standard normal table (common practice).
 const Z95 = 1.959964;
 
-const version = (number: number, failed: number, outcomes: number) => ({ number, failed, outcomes, failure: wilsonInterval(failed, outcomes, Z95) });
+const version = (number: number, failed: number, outcomes: number) => ({
+  number,
+  failed,
+  outcomes,
+  failure: wilsonInterval(failed, outcomes, Z95),
+});
 const withInterval = (number: number, failed: number, outcomes: number, failure: Interval) => ({ number, failed, outcomes, failure });
 
 describe("compareVersions", () => {
@@ -25,7 +30,9 @@ describe("compareVersions", () => {
   it("the other way round is more failures", () => {
     const result = compareVersions(version(3, 1, 14), version(4, 8, 10), "95 %");
     expect(result.verdict).toBe("more_failures");
-    expect(result.sentence).toMatch(/^Version 4 failed in 8 of 10 reports .*; version 3 failed in 1 of 14 reports .*\. More failures: the 95 % intervals do not overlap\.$/);
+    expect(result.sentence).toMatch(
+      /^Version 4 failed in 8 of 10 reports .*; version 3 failed in 1 of 14 reports .*\. More failures: the 95 % intervals do not overlap\.$/,
+    );
   });
 
   it("3/3 vs 0/3: the raw shares differ completely but the intervals overlap, so unclear", () => {
@@ -46,10 +53,16 @@ describe("compareVersions", () => {
   });
 
   it("no reports on the current version gives no_reports naming that version", () => {
-    expect(compareVersions(version(1, 2, 10), version(2, 0, 0), "95 %")).toEqual({ verdict: "no_reports", sentence: "No comparison yet: version 2 has no outcome reports." });
+    expect(compareVersions(version(1, 2, 10), version(2, 0, 0), "95 %")).toEqual({
+      verdict: "no_reports",
+      sentence: "No comparison yet: version 2 has no outcome reports.",
+    });
   });
 
   it("no reports on the previous version gives no_reports naming that version", () => {
-    expect(compareVersions(version(1, 0, 0), version(2, 2, 10), "95 %")).toEqual({ verdict: "no_reports", sentence: "No comparison yet: version 1 has no outcome reports." });
+    expect(compareVersions(version(1, 0, 0), version(2, 2, 10), "95 %")).toEqual({
+      verdict: "no_reports",
+      sentence: "No comparison yet: version 1 has no outcome reports.",
+    });
   });
 });

@@ -1,6 +1,13 @@
 import { describe, expect, it } from "vitest";
 
-import { type ClassSpec, COVERAGE_BANDS, findCoverageGaps, type MachineGroup, type MachineSpec, missesFor } from "@/lib/field/coverage-gaps";
+import {
+  COVERAGE_BANDS,
+  findCoverageGaps,
+  missesFor,
+  type ClassSpec,
+  type MachineGroup,
+  type MachineSpec,
+} from "@/lib/field/coverage-gaps";
 
 // NOTE: the coverage bands (75–150 % top speed, minimum speed within 50 %, half to twice the power,
 // rigidity ±0.2) are Swarfbook's own judgement, not a published standard. These tests pin the behaviour
@@ -31,7 +38,11 @@ describe("missesFor: one dimension at a time", () => {
   it.each<[string, Partial<MachineSpec>, ReturnType<typeof missesFor>]>([
     ["spindle top speed below 75 %", { rpmMax: 17999 }, [{ dimension: "spindle", direction: "below" }]],
     ["spindle top speed above 150 %", { rpmMax: 36001 }, [{ dimension: "spindle", direction: "above" }]],
-    ["minimum speed more than 150 % of the class's (cannot turn slowly enough)", { rpmMin: 9001 }, [{ dimension: "spindle", direction: "above" }]],
+    [
+      "minimum speed more than 150 % of the class's (cannot turn slowly enough)",
+      { rpmMin: 9001 },
+      [{ dimension: "spindle", direction: "above" }],
+    ],
     ["power below half", { powerKw: 0.99 }, [{ dimension: "power", direction: "below" }]],
     ["power above twice", { powerKw: 4.01 }, [{ dimension: "power", direction: "above" }]],
     ["rigidity more than 0.2 below", { rigidity: 0.34 }, [{ dimension: "rigidity", direction: "below" }]],
@@ -192,7 +203,10 @@ describe("findCoverageGaps", () => {
 
   it("gives the median lowest speed and rigidity of a cluster, weighted by count, as the start of a new class", () => {
     const report = findCoverageGaps(
-      [machine({ count: 1, rpmMin: 8000, rpmMax: 12000, powerKw: 0.6, rigidity: 0.3 }), machine({ count: 10, rpmMin: 6000, rpmMax: 12000, powerKw: 0.6, rigidity: 0.4 })],
+      [
+        machine({ count: 1, rpmMin: 8000, rpmMax: 12000, powerKw: 0.6, rigidity: 0.3 }),
+        machine({ count: 10, rpmMin: 6000, rpmMax: 12000, powerKw: 0.6, rigidity: 0.4 }),
+      ],
       [klass()],
     );
     expect(report.clusters).toHaveLength(1);

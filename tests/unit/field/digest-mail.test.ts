@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 
-import { type DigestMail, renderDigest } from "@/lib/field/digest-mail";
+import { renderDigest, type DigestMail } from "@/lib/field/digest-mail";
 
 type Attention = DigestMail["attention"][number];
 
@@ -62,7 +62,9 @@ describe("renderDigest: subject", () => {
   });
 
   it("says 0 versions when nothing needs attention", () => {
-    expect(renderDigest(digest({ attention: [] })).subject).toBe("Field results for Acme Tools, week of 2026-12-07: 0 versions need attention");
+    expect(renderDigest(digest({ attention: [] })).subject).toBe(
+      "Field results for Acme Tools, week of 2026-12-07: 0 versions need attention",
+    );
   });
 });
 
@@ -120,7 +122,11 @@ describe("renderDigest: html", () => {
 
   it("escapes HTML in change titles and sentences, gaps and the vendor name", () => {
     const { html } = renderDigest(
-      digest({ vendorName: "<b>Acme</b>", changes: [{ title: nasty, number: 2, sentence: "<img src=x onerror=alert(1)>" }], gaps: ["<iframe>"] }),
+      digest({
+        vendorName: "<b>Acme</b>",
+        changes: [{ title: nasty, number: 2, sentence: "<img src=x onerror=alert(1)>" }],
+        gaps: ["<iframe>"],
+      }),
     );
     expect(html).not.toMatch(/<script|<img|<iframe|<b>Acme/);
     expect(html).toContain("<strong>&#60;b&#62;Acme&#60;/b&#62;</strong>");
@@ -136,7 +142,9 @@ describe("renderDigest: html", () => {
 
   it("carries the stop link as an anchor", () => {
     const { html } = renderDigest(digest());
-    expect(html).toContain('<p><a href="https://swarf.example/api/v1/vendors/acme/field/digest/stop?token=abc.def">Stop the weekly digest</a></p>');
+    expect(html).toContain(
+      '<p><a href="https://swarf.example/api/v1/vendors/acme/field/digest/stop?token=abc.def">Stop the weekly digest</a></p>',
+    );
     expect(html).toContain('<a href="https://swarf.example/acme/drafting/field">Open Field results</a>');
   });
 

@@ -4,7 +4,10 @@ import { readAttentionFilter, readTrendRange } from "@/lib/field/read-filters";
 
 describe("Field-results search params", () => {
   it("reads a date range and a machine class; empty fields mean no filter", () => {
-    expect(readAttentionFilter({ from: "2026-10-01", to: "2026-11-30", class: "light-router" })).toEqual({ filter: { from: "2026-10-01", to: "2026-11-30", class: "light-router" }, error: null });
+    expect(readAttentionFilter({ from: "2026-10-01", to: "2026-11-30", class: "light-router" })).toEqual({
+      filter: { from: "2026-10-01", to: "2026-11-30", class: "light-router" },
+      error: null,
+    });
     expect(readAttentionFilter({ from: "", to: "", class: "" })).toEqual({ filter: {}, error: null });
   });
 
@@ -19,7 +22,13 @@ describe("Field-results search params", () => {
     const today = new Date("2026-12-02T10:00:00Z");
     expect(readTrendRange({}, today).range).toEqual({ from: "2026-06-08", to: "2026-12-02" });
     expect(readTrendRange({ from: "2026-11-01" }, today).range).toEqual({ from: "2026-11-01", to: "2026-12-02" });
-    expect(readTrendRange({ from: "2001-01-01" }, today)).toMatchObject({ range: { from: "2026-06-08" }, error: expect.stringMatching(/three years/) });
-    expect(readTrendRange({ from: "2026-13-01" }, today)).toMatchObject({ range: { to: "2026-12-02" }, error: expect.stringMatching(/Showing the last 26 weeks/) });
+    expect(readTrendRange({ from: "2001-01-01" }, today)).toMatchObject({
+      range: { from: "2026-06-08" },
+      error: expect.stringMatching(/three years/),
+    });
+    expect(readTrendRange({ from: "2026-13-01" }, today)).toMatchObject({
+      range: { to: "2026-12-02" },
+      error: expect.stringMatching(/Showing the last 26 weeks/),
+    });
   });
 });

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 
 import { sheetOperationSchema } from "@/content-schema/sheet-operation";
-import { validateSheetSource } from "@/lib/mdx/validate-sheet-source";
 import { replaceOperationValue, scaleOperationValue, suggestionChangeNote } from "@/lib/field/suggested-change";
+import { validateSheetSource } from "@/lib/mdx/validate-sheet-source";
 import { buildSheetSource, operationInput } from "@/tests/factories/sheet-source";
 
 // Invented demo data: the factory's slot (n 18 000 rpm, vf 1800 mm/min, ap 1.5 mm, ae 100 %).
@@ -10,7 +10,12 @@ const op = (overrides: Record<string, unknown> = {}) => sheetOperationSchema.par
 
 describe("scaleOperationValue", () => {
   it("applies the factor to the named parameter, in the author's unit", () => {
-    expect(scaleOperationValue(op(), "feedMmMin", 0.8)).toMatchObject({ key: "vf", fromText: "1800 mm/min", toText: "1440 mm/min", toValue: 1440 });
+    expect(scaleOperationValue(op(), "feedMmMin", 0.8)).toMatchObject({
+      key: "vf",
+      fromText: "1800 mm/min",
+      toText: "1440 mm/min",
+      toValue: 1440,
+    });
     expect(scaleOperationValue(op(), "rpm", 0.9)).toMatchObject({ key: "n", toText: "16200 rpm", toValue: 16200 });
     expect(scaleOperationValue(op(), "axialDepthMm", 0.75)).toMatchObject({ key: "ap", toText: "1.13 mm" });
     expect(scaleOperationValue(op(), "plungeFeedMmMin", 1.1)).toMatchObject({ key: "plungeFeed", toText: "550 mm/min" });
@@ -51,21 +56,41 @@ describe("replaceOperationValue", () => {
 
 describe("suggestionChangeNote", () => {
   const facts = {
-    param: "feedMmMin" as const, operationLabel: "Full-width slot", versionNumber: 2, reports: 5, lowered: 5, raised: 0, medianPct: -20, q1Pct: -30, q3Pct: -20,
-    outcomes: 11, failed: 6, failure: { lower: 0.2, upper: 0.8 }, confidenceLabel: "95 %",
-    value: { key: "vf" as const, fromText: "1800 mm/min", toText: "1440 mm/min", fromValue: 1800, toValue: 1440 }, engineWarnings: [], referenceMachine: "the Light router reference machine",
+    param: "feedMmMin" as const,
+    operationLabel: "Full-width slot",
+    versionNumber: 2,
+    reports: 5,
+    lowered: 5,
+    raised: 0,
+    medianPct: -20,
+    q1Pct: -30,
+    q3Pct: -20,
+    outcomes: 11,
+    failed: 6,
+    failure: { lower: 0.2, upper: 0.8 },
+    confidenceLabel: "95 %",
+    value: { key: "vf" as const, fromText: "1800 mm/min", toText: "1440 mm/min", fromValue: 1800, toValue: 1440 },
+    engineWarnings: [],
+    referenceMachine: "the Light router reference machine",
   };
 
   it("cites the counts, the spread and the failure interval, and the engine's verdict", () => {
     const note = suggestionChangeNote(facts);
     expect(note).toContain("1800 mm/min → 1440 mm/min");
-    expect(note).toContain("(−20 %) in 5 “worked after changes” reports on version 2 (5 lowered, 0 raised; the middle half ran −30 % to −20 %)");
+    expect(note).toContain(
+      "(−20 %) in 5 “worked after changes” reports on version 2 (5 lowered, 0 raised; the middle half ran −30 % to −20 %)",
+    );
     expect(note).toContain("failed in 6 of 11 outcome reports (95 % interval 20 %–80 %)");
     expect(note).toContain("no warning for the changed operation");
   });
 
   it("names each engine warning, and stays within the change note's 1000 characters", () => {
-    expect(suggestionChangeNote({ ...facts, engineWarnings: ["Feed capped at the machine's maximum: 5000 mm/min."] })).toContain("raises a warning: Feed capped");
-    expect(suggestionChangeNote({ ...facts, engineWarnings: Array.from({ length: 40 }, () => "A long warning sentence from the engine.") }).length).toBeLessThanOrEqual(1000);
+    expect(suggestionChangeNote({ ...facts, engineWarnings: ["Feed capped at the machine's maximum: 5000 mm/min."] })).toContain(
+      "raises a warning: Feed capped",
+    );
+    expect(
+      suggestionChangeNote({ ...facts, engineWarnings: Array.from({ length: 40 }, () => "A long warning sentence from the engine.") })
+        .length,
+    ).toBeLessThanOrEqual(1000);
   });
 });

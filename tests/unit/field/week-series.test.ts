@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 
-import { defaultTrendRange, weekSeries, weeksBetween } from "@/lib/field/week-series";
+import { defaultTrendRange, weeksBetween, weekSeries } from "@/lib/field/week-series";
 import { wilsonInterval } from "@/lib/field/wilson";
 
 const Z95 = 1.959964;
@@ -17,9 +17,16 @@ describe("weeksBetween", () => {
 describe("weekSeries", () => {
   it("fills weeks without reports with zeros, sums versions of one week, and marks publications", () => {
     const series = weekSeries(
-      [{ week: "2026-11-16", outcomes: 4, failed: 1 }, { week: "2026-11-16", outcomes: 6, failed: 2 }, { week: "2026-11-30", outcomes: 2, failed: 0 }],
+      [
+        { week: "2026-11-16", outcomes: 4, failed: 1 },
+        { week: "2026-11-16", outcomes: 6, failed: 2 },
+        { week: "2026-11-30", outcomes: 2, failed: 0 },
+      ],
       { from: "2026-11-16", to: "2026-12-06" },
-      [{ number: 1, publishedAt: "2026-10-01T09:00:00Z" }, { number: 2, publishedAt: "2026-11-29T23:30:00Z" }],
+      [
+        { number: 1, publishedAt: "2026-10-01T09:00:00Z" },
+        { number: 2, publishedAt: "2026-11-29T23:30:00Z" },
+      ],
       Z95,
     );
     expect(series.map((w) => [w.week, w.outcomes, w.failed, w.published])).toEqual([

@@ -116,9 +116,14 @@ describe("wilsonInterval: properties", () => {
 
   it("a higher z (higher confidence) widens the interval", () => {
     fc.assert(
-      fc.property(counts, fc.double({ min: 0.05, max: 4, noNaN: true }), fc.double({ min: 1.01, max: 3, noNaN: true }), ([k, n], z, grow) => {
-        expect(width(k, n, z * grow)).toBeGreaterThan(width(k, n, z));
-      }),
+      fc.property(
+        counts,
+        fc.double({ min: 0.05, max: 4, noNaN: true }),
+        fc.double({ min: 1.01, max: 3, noNaN: true }),
+        ([k, n], z, grow) => {
+          expect(width(k, n, z * grow)).toBeGreaterThan(width(k, n, z));
+        },
+      ),
     );
   });
 

@@ -1,12 +1,15 @@
 import http from "node:http";
 import type { AddressInfo } from "node:net";
-
 import { describe, expect, it } from "vitest";
 
 import { clientIp, trustedProxies } from "@/lib/http/client-ip";
 import { recordPeerAddress } from "@/lib/http/record-peer-address";
 
-const stamped = (peer: string, forwarded = "") => ({ "x-swarfbook-peer": peer, "x-swarfbook-forwarded-for": forwarded, "x-forwarded-for": forwarded || peer });
+const stamped = (peer: string, forwarded = "") => ({
+  "x-swarfbook-peer": peer,
+  "x-swarfbook-forwarded-for": forwarded,
+  "x-forwarded-for": forwarded || peer,
+});
 
 describe("clientIp", () => {
   it("with no trusted proxies, the TCP peer is the client whatever X-Forwarded-For says", () => {
@@ -37,7 +40,11 @@ describe("clientIp", () => {
       const { port } = server.address() as AddressInfo;
       const answers = await Promise.all(
         ["1.1.1.1", "2.2.2.2", "3.3.3.3"].map(async (ip) =>
-          (await fetch(`http://127.0.0.1:${port}/`, { headers: { "x-forwarded-for": ip, "x-swarfbook-peer": ip, "x-swarfbook-forwarded-for": ip } })).text(),
+          (
+            await fetch(`http://127.0.0.1:${port}/`, {
+              headers: { "x-forwarded-for": ip, "x-swarfbook-peer": ip, "x-swarfbook-forwarded-for": ip },
+            })
+          ).text(),
         ),
       );
       expect(answers).toEqual(["127.0.0.1", "127.0.0.1", "127.0.0.1"]);
@@ -59,7 +66,9 @@ describe("clientIp", () => {
   });
 
   it("refuses a malformed TRUSTED_PROXIES entry with a clear message", () => {
-    expect(() => trustedProxies("127.0.0.1, proxy.internal")).toThrow('TRUSTED_PROXIES: "proxy.internal" is not an IP address or CIDR range.');
+    expect(() => trustedProxies("127.0.0.1, proxy.internal")).toThrow(
+      'TRUSTED_PROXIES: "proxy.internal" is not an IP address or CIDR range.',
+    );
     expect(() => trustedProxies("10.0.0.0/8/1")).toThrow("TRUSTED_PROXIES");
   });
 });

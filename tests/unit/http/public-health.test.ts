@@ -11,6 +11,11 @@ describe("the public health answer", () => {
       replica: { configured: true, usable: false, lagSeconds: null, checkedAt: "2026-12-02T08:00:00.000Z", error: leaky },
     });
     expect(JSON.stringify(answer)).not.toContain("ECONNREFUSED");
-    expect(answer).toMatchObject({ ok: true, database: "up", queue: { state: "failing", attempts: 3 }, replica: { configured: true, usable: false } });
+    expect(answer).toMatchObject({
+      ok: true,
+      database: "up",
+      queue: { state: "failing", attempts: 3 },
+      replica: { configured: true, usable: false },
+    });
   });
 });

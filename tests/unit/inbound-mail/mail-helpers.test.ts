@@ -1,5 +1,4 @@
 import { createHmac } from "node:crypto";
-
 import { afterEach, describe, expect, it } from "vitest";
 
 import { failedAuthentication, senderAuthenticated } from "@/lib/inbound-mail/authentication-results";
@@ -22,7 +21,10 @@ describe("signed reply addresses", () => {
     process.env.REPLY_SECRET = "test-secret";
     const now = Date.UTC(2026, 11, 2);
     const day = (Date.UTC(2026, 11, 2) / 86_400_000 + 180).toString(16);
-    const mac = createHmac("sha256", "test-secret").update(`ticket-reply:${hex(ID)}:${hex(USER)}:until:${day}`).digest("hex").slice(0, 32);
+    const mac = createHmac("sha256", "test-secret")
+      .update(`ticket-reply:${hex(ID)}:${hex(USER)}:until:${day}`)
+      .digest("hex")
+      .slice(0, 32);
     expect(replyAddress({ ticketId: ID, userId: USER, now })).toBe(`reply+${hex(ID)}.${hex(USER)}.${day}.${mac}@swarfbook.localhost`);
     const upper = replyAddress({ ticketId: ID, userId: USER }).toUpperCase().replace("SWARFBOOK.LOCALHOST", "swarfbook.localhost");
     expect(verifyReplyAddress(upper)).toEqual({ ticketId: ID, userId: USER });
@@ -37,7 +39,10 @@ describe("signed reply addresses", () => {
     expect(verifyReplyAddress(address, now + 31 * 86_400_000)).toBeNull();
     const day = (now / 86_400_000 + 30).toString(16);
     expect(verifyReplyAddress(address.replace(`.${day}.`, `.${(now / 86_400_000 + 999).toString(16)}.`), now + 31 * 86_400_000)).toBeNull();
-    const legacyMac = createHmac("sha256", "test-secret").update(`ticket-reply:${hex(ID)}:${hex(USER)}`).digest("hex").slice(0, 32);
+    const legacyMac = createHmac("sha256", "test-secret")
+      .update(`ticket-reply:${hex(ID)}:${hex(USER)}`)
+      .digest("hex")
+      .slice(0, 32);
     expect(verifyReplyAddress(`reply+${hex(ID)}.${hex(USER)}.${legacyMac}@swarfbook.localhost`)).toEqual({ ticketId: ID, userId: USER });
   });
 
@@ -63,7 +68,7 @@ describe("Authentication-Results", () => {
   it("finds a failed SPF, DKIM or DMARC check and ignores comments and passes", () => {
     expect(failedAuthentication([" mx.example.net; spf=pass smtp.mailfrom=a@b.test; dkim=pass header.d=b.test; dmarc=pass"])).toBeNull();
     expect(failedAuthentication([" mx.example.net; spf=pass; dmarc=fail (p=reject) header.from=b.test"])).toBe("dmarc=fail");
-    expect(failedAuthentication([" mx.example.net; dkim=fail reason=\"bad signature\""])).toBe("dkim=fail");
+    expect(failedAuthentication([' mx.example.net; dkim=fail reason="bad signature"'])).toBe("dkim=fail");
     expect(failedAuthentication([" mx.example.net;\r\n\tspf=FAIL smtp.mailfrom=x@y.test"])).toBe("spf=fail");
     expect(failedAuthentication([" mx.example.net; spf=pass (not dkim=fail at all)"])).toBeNull();
     expect(failedAuthentication([" mx.example.net; spf=softfail; dkim=none"])).toBeNull();
@@ -73,7 +78,9 @@ describe("Authentication-Results", () => {
 
 describe("stripQuotedText", () => {
   it("keeps the new text above an attribution line and quoted lines", () => {
-    expect(stripQuotedText("Thanks, works now.\r\n\r\nOn Tue, 1 Dec 2026 at 10:00, Support <s@x> wrote:\r\n> old text\r\n")).toBe("Thanks, works now.");
+    expect(stripQuotedText("Thanks, works now.\r\n\r\nOn Tue, 1 Dec 2026 at 10:00, Support <s@x> wrote:\r\n> old text\r\n")).toBe(
+      "Thanks, works now.",
+    );
   });
   it("stops at the reply marker, a signature and a forwarded header block", () => {
     expect(stripQuotedText("New\n-- Reply above this line to add to the ticket --\nold")).toBe("New");

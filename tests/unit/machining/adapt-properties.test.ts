@@ -1,7 +1,17 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 
-import { adaptRecipe, chipLoadBand, OPERATION_KINDS, RULE_PIPELINE, spindlePowerAt, RULES, WARNING_CODE_LIST, type AdaptInput, type AdaptResult } from "@/lib/machining";
+import {
+  adaptRecipe,
+  chipLoadBand,
+  OPERATION_KINDS,
+  RULE_PIPELINE,
+  RULES,
+  spindlePowerAt,
+  WARNING_CODE_LIST,
+  type AdaptInput,
+  type AdaptResult,
+} from "@/lib/machining";
 import { resolveInput } from "@/lib/machining/adapt/resolve-input";
 import { createState } from "@/lib/machining/adapt/state";
 
@@ -83,8 +93,25 @@ const validInput: fc.Arbitrary<AdaptInput> = fc
   }));
 
 const NUMBERS = [
-  "rpm", "feedMmMin", "chipLoadMm", "maxChipThicknessMm", "cuttingSpeedMpm", "axialDepthMm", "radialDepthMm", "plungeFeedMmMin", "mrrCm3Min",
-  "powerKw", "torqueNm", "forceN", "deflectionMm", "meanChipThicknessMm", "effectiveDiameterMm", "peakForceN", "availablePowerKw", "plungeThrustN", "plungeFeedPerRevMm",
+  "rpm",
+  "feedMmMin",
+  "chipLoadMm",
+  "maxChipThicknessMm",
+  "cuttingSpeedMpm",
+  "axialDepthMm",
+  "radialDepthMm",
+  "plungeFeedMmMin",
+  "mrrCm3Min",
+  "powerKw",
+  "torqueNm",
+  "forceN",
+  "deflectionMm",
+  "meanChipThicknessMm",
+  "effectiveDiameterMm",
+  "peakForceN",
+  "availablePowerKw",
+  "plungeThrustN",
+  "plungeFeedPerRevMm",
 ] as const;
 const TOL = 1 + 1e-12;
 const RUNS = { numRuns: 500 };
@@ -103,7 +130,13 @@ describe("adaptRecipe properties (fast-check)", () => {
         const r = adaptRecipe(input);
         expect(r.steps).toEqual(s.steps);
         expect(r.warnings).toEqual(s.warnings);
-        expect([r.rpm, r.feedMmMin, r.axialDepthMm, r.plungeFeedMmMin, r.deflectionMm]).toEqual([s.rpm, s.feedMmMin, s.axialDepthMm, s.plungeFeedMmMin, s.deflectionMm]);
+        expect([r.rpm, r.feedMmMin, r.axialDepthMm, r.plungeFeedMmMin, r.deflectionMm]).toEqual([
+          s.rpm,
+          s.feedMmMin,
+          s.axialDepthMm,
+          s.plungeFeedMmMin,
+          s.deflectionMm,
+        ]);
       }),
       RUNS,
     );

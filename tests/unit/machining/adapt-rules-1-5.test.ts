@@ -190,7 +190,9 @@ describe("rule 3: entry capability", () => {
 describe("rule 4: a shallow ball nose is sped up toward the window", () => {
   it("fires: vc at De = 2.154 mm is under 200 m/min, so n rises to the machine's top speed", () => {
     // wanted n = 1000 × 200 / (π × 2.15407) = 29 554 rpm, capped at 24 000
-    const r = adaptRecipe(withPatch({ operation: { cornerForm: "ball", axialDepthMm: 0.2 }, material: { cuttingSpeedWindowMpm: [200, 500] } }));
+    const r = adaptRecipe(
+      withPatch({ operation: { cornerForm: "ball", axialDepthMm: 0.2 }, material: { cuttingSpeedWindowMpm: [200, 500] } }),
+    );
     expect(r.rpm).toBe(24000);
     expect(stepsOf(r, "spindle-speed-range")).toHaveLength(1);
     expect(r.cuttingSpeedMpm).toBeCloseTo((Math.PI * 2.154066 * 24000) / 1000, 2); // 162.4 m/min, judged at De
@@ -215,6 +217,8 @@ describe("rule 5: the floor is compared with hex, not fz", () => {
   });
 
   it("does not fire when hex is above the floor", () => {
-    expect(codes(adaptRecipe(withPatch({ operation: { radialDepthMm: 0.6 }, material: { minChipLoadMm: 0.02 } })))).not.toContain("chip-load-below-minimum");
+    expect(codes(adaptRecipe(withPatch({ operation: { radialDepthMm: 0.6 }, material: { minChipLoadMm: 0.02 } })))).not.toContain(
+      "chip-load-below-minimum",
+    );
   });
 });

@@ -61,12 +61,13 @@ describe("rule 11: plunge feed and Z thrust", () => {
   });
 
   it("does not recommend a ramp for an operation that is already a helix", () => {
-    expect(codes(adaptRecipe(withPatch({ operation: { kind: "helical", diameterMm: 12, radialDepthMm: 12, plungeFeedMmMin: undefined } })))).not.toContain("ramp-entry-recommended");
+    expect(
+      codes(adaptRecipe(withPatch({ operation: { kind: "helical", diameterMm: 12, radialDepthMm: 12, plungeFeedMmMin: undefined } }))),
+    ).not.toContain("ramp-entry-recommended");
   });
 });
 
 describe("rule 12: sanity limits", () => {
-
   it("fires: refuses ap above the flute length, stick-out above 20·D and cutters outside 0.1–100 mm, naming the field", () => {
     expect(fieldOf(withPatch({ operation: { fluteLengthMm: 2 } }))).toBe("operation.axialDepthMm");
     expect(fieldOf(withPatch({ operation: { fluteLengthMm: 4 }, overrides: { axialDepthMm: 5 } }))).toBe("overrides.axialDepthMm");
@@ -82,7 +83,9 @@ describe("rule 12: sanity limits", () => {
   });
 
   it("states limits in the caller's units", () => {
-    expect(() => adaptRecipe(withPatch({ operation: { fluteLengthMm: 2 }, options: { messageUnits: "imperial" } }))).toThrowError(/0\.118\sin.*0\.0787\sin/);
+    expect(() => adaptRecipe(withPatch({ operation: { fluteLengthMm: 2 }, options: { messageUnits: "imperial" } }))).toThrowError(
+      /0\.118\sin.*0\.0787\sin/,
+    );
   });
 
   it("does not fire inside the limits", () => {

@@ -16,7 +16,9 @@ describe("rule 6: chip load band", () => {
 
   it("fires: a cutter whose ceiling is under the floor is told so plainly and never fed past the ceiling", () => {
     // ceiling 0.03 × 6 = 0.18 mm under the 0.2 mm absolute floor
-    const r = adaptRecipe(withPatch({ operation: { feedMmMin: 9000 }, material: { minChipLoadMm: 0.2, chipLoadPctOfD: { min: 0.012, max: 0.03 } } }));
+    const r = adaptRecipe(
+      withPatch({ operation: { feedMmMin: 9000 }, material: { minChipLoadMm: 0.2, chipLoadPctOfD: { min: 0.012, max: 0.03 } } }),
+    );
     expect(codes(r)).toContain("chip-load-band-impossible");
     expect(r.maxChipThicknessMm).toBeLessThanOrEqual(0.18 * (1 + 1e-12));
     expect(r.warnings.find((w) => w.code === "chip-load-band-impossible")?.message).toMatch(/larger cutter or a single-flute/);

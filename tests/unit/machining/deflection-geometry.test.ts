@@ -26,12 +26,18 @@ describe("tool deflection", () => {
 
   it("uses the given effective diameter ratio", () => {
     // solid 10 mm bar: I = π × 10⁴/64 = 490.874 mm⁴; 2.7e6 / (3 × 600000 × 490.874) = 0.0030558 mm
-    expect(toolDeflection({ forceN: 100, stickoutMm: 30, diameterMm: 10, youngsModulusGPa: 600, effectiveDiameterRatio: 1 })).toBeCloseTo(0.0030558, 7);
+    expect(toolDeflection({ forceN: 100, stickoutMm: 30, diameterMm: 10, youngsModulusGPa: 600, effectiveDiameterRatio: 1 })).toBeCloseTo(
+      0.0030558,
+      7,
+    );
   });
 
   it("inverts to the stick-out for a given deflection", () => {
     // δ ∝ L³: doubling the allowed deflection allows ∛2 × 30 = 37.798 mm
-    expect(stickoutForDeflection({ forceN: 100, deflectionMm: 2 * 0.0074604, diameterMm: 10, youngsModulusGPa: 600 })).toBeCloseTo(37.798, 2);
+    expect(stickoutForDeflection({ forceN: 100, deflectionMm: 2 * 0.0074604, diameterMm: 10, youngsModulusGPa: 600 })).toBeCloseTo(
+      37.798,
+      2,
+    );
   });
 
   it("refuses a negative stick-out", () => {

@@ -33,7 +33,9 @@ describe("radial engagement and chip thinning", () => {
   });
 
   it("refuses ae above the diameter, naming the field", () => {
-    expect(() => chipThinningFactor({ diameterMm: 6, radialDepthMm: 6.5 })).toThrowError(expect.objectContaining({ field: "radialDepthMm" }));
+    expect(() => chipThinningFactor({ diameterMm: 6, radialDepthMm: 6.5 })).toThrowError(
+      expect.objectContaining({ field: "radialDepthMm" }),
+    );
     expect(() => chipThinningFactor({ diameterMm: 6, radialDepthMm: 0 })).toThrowError(MachiningInputError);
   });
 });

@@ -8,7 +8,17 @@ import type { AdaptInput } from "@/lib/machining";
  * fixture had 1000 N, which model 2's thrust estimate exceeds).
  */
 export const baseInput = (): AdaptInput => ({
-  operation: { kind: "slotting", diameterMm: 6, flutes: 2, rpm: 18000, feedMmMin: 1800, axialDepthMm: 3, radialDepthMm: 6, plungeFeedMmMin: 600, stickoutMm: 20 },
+  operation: {
+    kind: "slotting",
+    diameterMm: 6,
+    flutes: 2,
+    rpm: 18000,
+    feedMmMin: 1800,
+    axialDepthMm: 3,
+    radialDepthMm: 6,
+    plungeFeedMmMin: 600,
+    stickoutMm: 20,
+  },
   material: { cuttingSpeedWindowMpm: [100, 500], minChipLoadMm: 0.02, specificCuttingForceNmm2: 800 },
   referenceMachine: { rigidity: 0.5 },
   machine: { minRpm: 6000, maxRpm: 24000, maxFeedMmMin: 10000, spindlePowerKw: 2.2, rigidity: 0.5, zThrustN: 1500 },

@@ -1,6 +1,15 @@
 import { describe, expect, it } from "vitest";
 
-import { formatChipLoad, formatCuttingSpeed, formatFeed, formatLength, formatNumber, formatQuantity, formatSpindleSpeed, UNIT_SEPARATOR } from "@/lib/machining";
+import {
+  formatChipLoad,
+  formatCuttingSpeed,
+  formatFeed,
+  formatLength,
+  formatNumber,
+  formatQuantity,
+  formatSpindleSpeed,
+  UNIT_SEPARATOR,
+} from "@/lib/machining";
 
 const nb = (text: string) => text.replace(/ /g, UNIT_SEPARATOR);
 

@@ -1,6 +1,6 @@
 import { expect } from "vitest";
 
-import { adaptRecipe, type AdaptInput, type AdaptResult, MachiningInputError, type RuleId } from "@/lib/machining";
+import { adaptRecipe, MachiningInputError, type AdaptInput, type AdaptResult, type RuleId } from "@/lib/machining";
 
 export const codes = (r: AdaptResult) => r.warnings.map((w) => w.code);
 export const stepsOf = (r: AdaptResult, rule: RuleId) => r.steps.filter((s) => s.rule === rule);

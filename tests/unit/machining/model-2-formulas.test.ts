@@ -5,9 +5,9 @@ import {
   chipLoadBand,
   defaultZThrustN,
   kienzleKc,
+  MachiningInputError,
   maxChipThickness,
   meanChipThickness,
-  MachiningInputError,
   normalizeOperationKind,
   peakToothForce,
   plungeFeedPerRevForThrust,
@@ -47,13 +47,26 @@ describe("Kienzle specific cutting force (Kienzle, 1952)", () => {
 describe("peak tooth force (Altintas ch. 2; Kr = 0.3 from memory)", () => {
   it("F_peak = kc(hex)·ap·hex·ze·√(1 + Kr²) with ze = max(1, z·φs/2π)", () => {
     // slot, D 10, ap 5, fz 0.1, four flutes: ze = 2; 2000 × 5 × 0.1 × 2 × √1.09 = 2088.06 N
-    expect(peakToothForce({ diameterMm: 10, radialDepthMm: 10, axialDepthMm: 5, chipLoadMm: 0.1, flutes: 4, kc11Nmm2: 2000 })).toBeCloseTo(2088.06, 2);
+    expect(peakToothForce({ diameterMm: 10, radialDepthMm: 10, axialDepthMm: 5, chipLoadMm: 0.1, flutes: 4, kc11Nmm2: 2000 })).toBeCloseTo(
+      2088.06,
+      2,
+    );
   });
 
   it("never counts fewer than one tooth in the cut", () => {
     // ae = D/4 with two flutes: z·φs/2π = 1/3, so ze = 1; hex = 0.1 × sin 60°
     const hex = 0.1 * Math.sin(Math.PI / 3);
-    expect(peakToothForce({ diameterMm: 10, radialDepthMm: 2.5, axialDepthMm: 5, chipLoadMm: 0.1, flutes: 2, kc11Nmm2: 2000, radialForceRatio: 0 })).toBeCloseTo(2000 * 5 * hex, 9);
+    expect(
+      peakToothForce({
+        diameterMm: 10,
+        radialDepthMm: 2.5,
+        axialDepthMm: 5,
+        chipLoadMm: 0.1,
+        flutes: 2,
+        kc11Nmm2: 2000,
+        radialForceRatio: 0,
+      }),
+    ).toBeCloseTo(2000 * 5 * hex, 9);
   });
 });
 
@@ -115,7 +128,14 @@ describe("defaults", () => {
   });
 
   it("rigidity classes from the 0–1 factor: under 0.45 light, under 0.85 medium, else rigid", () => {
-    expect([0.35, 0.45, 0.55, 0.75, 0.85, 1].map(rigidityClassFromFactor)).toEqual(["light", "medium", "medium", "medium", "rigid", "rigid"]);
+    expect([0.35, 0.45, 0.55, 0.75, 0.85, 1].map(rigidityClassFromFactor)).toEqual([
+      "light",
+      "medium",
+      "medium",
+      "medium",
+      "rigid",
+      "rigid",
+    ]);
     expect(() => rigidityClassFromFactor(0)).toThrowError(MachiningInputError);
   });
 

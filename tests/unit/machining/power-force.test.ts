@@ -24,9 +24,9 @@ describe("net cutting power (Machinery's Handbook, power section, unit power for
   });
 
   it("refuses an efficiency above 1", () => {
-    expect(() => cuttingPower({ axialDepthMm: 1, radialDepthMm: 1, feedMmMin: 1, specificCuttingForceNmm2: 1, efficiency: 1.2 })).toThrowError(
-      expect.objectContaining({ field: "efficiency" }),
-    );
+    expect(() =>
+      cuttingPower({ axialDepthMm: 1, radialDepthMm: 1, feedMmMin: 1, specificCuttingForceNmm2: 1, efficiency: 1.2 }),
+    ).toThrowError(expect.objectContaining({ field: "efficiency" }));
   });
 });
 

@@ -8,11 +8,11 @@ import {
   inToMm,
   mmMinToInMin,
   mpmToSfm,
+  PLUNGE_THRUST_A,
+  PLUNGE_THRUST_B,
   plungeFeed,
   plungeFeedPerRevForThrust,
   plungeThrustN,
-  PLUNGE_THRUST_A,
-  PLUNGE_THRUST_B,
   sfmToMpm,
   spindleSpeed,
   type AdaptInput,
@@ -28,7 +28,18 @@ const SIXTEENTH_INCH = inToMm(1 / 16);
 
 /** A sheet tested on a rigid machine plunging at 30 in/min, adapted to a light belt-drive router (Z thrust unknown: 150 N). */
 const acrylicOnLightRouter = (entryCapability: AdaptInput["entryCapability"]): AdaptInput => ({
-  operation: { kind: "pocket", diameterMm: QUARTER_INCH, flutes: 2, rpm: 10000, feedMmMin: inToMm(60), axialDepthMm: 3, radialDepthMm: 3, plungeFeedMmMin: inToMm(30), stickoutMm: 20, fluteLengthMm: 19 },
+  operation: {
+    kind: "pocket",
+    diameterMm: QUARTER_INCH,
+    flutes: 2,
+    rpm: 10000,
+    feedMmMin: inToMm(60),
+    axialDepthMm: 3,
+    radialDepthMm: 3,
+    plungeFeedMmMin: inToMm(30),
+    stickoutMm: 20,
+    fluteLengthMm: 19,
+  },
   material: { cuttingSpeedWindowMpm: [120, 300], specificCuttingForceNmm2: ACRYLIC_KC, minChipLoadMm: 0.05, meltsWhenRubbing: true },
   referenceMachine: { rigidity: 1, rigidityClass: "rigid", zThrustN: 1500 },
   machine: { minRpm: 10000, maxRpm: 10000, maxFeedMmMin: 5000, spindlePowerKw: 0.8, rigidity: 0.35 },

@@ -12,14 +12,22 @@ describe("mailTransportOptions", () => {
   });
 
   it("uses STARTTLS when offered and allows plain SMTP to a loopback relay without credentials", () => {
-    expect(mailTransportOptions({ SMTP_HOST: "127.0.0.1", SMTP_PORT: "1025" })).toMatchObject({ host: "127.0.0.1", port: 1025, secure: false, requireTLS: false, auth: undefined });
+    expect(mailTransportOptions({ SMTP_HOST: "127.0.0.1", SMTP_PORT: "1025" })).toMatchObject({
+      host: "127.0.0.1",
+      port: 1025,
+      secure: false,
+      requireTLS: false,
+      auth: undefined,
+    });
     expect(mailTransportOptions({})).toMatchObject({ host: "127.0.0.1", requireTLS: false });
     expect(mailTransportOptions({ SMTP_HOST: "localhost" }).requireTLS).toBe(false);
     expect(mailTransportOptions({ SMTP_HOST: "::1" }).requireTLS).toBe(false);
   });
 
   it("requires STARTTLS when credentials are set, even on loopback", () => {
-    expect(mailTransportOptions({ SMTP_HOST: "smtp.example.com", SMTP_PORT: "587", SMTP_USER: "mailer", SMTP_PASSWORD: "pw" })).toMatchObject({
+    expect(
+      mailTransportOptions({ SMTP_HOST: "smtp.example.com", SMTP_PORT: "587", SMTP_USER: "mailer", SMTP_PASSWORD: "pw" }),
+    ).toMatchObject({
       secure: false,
       requireTLS: true,
       auth: { user: "mailer", pass: "pw" },
@@ -34,7 +42,11 @@ describe("mailTransportOptions", () => {
   });
 
   it("keeps implicit TLS for SMTP_SECURE=true", () => {
-    expect(mailTransportOptions({ SMTP_HOST: "smtp.example.com", SMTP_SECURE: "true", SMTP_USER: "u" })).toMatchObject({ secure: true, port: 465, requireTLS: false });
+    expect(mailTransportOptions({ SMTP_HOST: "smtp.example.com", SMTP_SECURE: "true", SMTP_USER: "u" })).toMatchObject({
+      secure: true,
+      port: 465,
+      requireTLS: false,
+    });
   });
 
   it("knows which hosts are loopback", () => {
@@ -70,7 +82,9 @@ describe("against a relay without STARTTLS", () => {
   afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
 
   const send = (env: Record<string, string>) =>
-    nodemailer.createTransport(mailTransportOptions({ SMTP_HOST: "127.0.0.1", SMTP_PORT: String(port), ...env })).sendMail({ from: "a@example.test", to: "b@example.test", subject: "s", text: "t" });
+    nodemailer
+      .createTransport(mailTransportOptions({ SMTP_HOST: "127.0.0.1", SMTP_PORT: String(port), ...env }))
+      .sendMail({ from: "a@example.test", to: "b@example.test", subject: "s", text: "t" });
 
   it("refuses to send credentials without TLS", async () => {
     await expect(send({ SMTP_USER: "mailer", SMTP_PASSWORD: "secret" })).rejects.toThrow(/STARTTLS|TLS/i);

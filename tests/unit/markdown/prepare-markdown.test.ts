@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 
 import { MARKDOWN_LIMITS, prepareMarkdown } from "@/lib/markdown/prepare-markdown";
 
-const depthOf = (line: string) => (line.match(/^(?:[ \t]*(?:>|[-*+](?=[ \t]|$)|\d{1,9}[.)](?=[ \t]|$)))*/)?.[0].match(/>|[-*+]|\d+[.)]/g) ?? []).length;
+const depthOf = (line: string) =>
+  (line.match(/^(?:[ \t]*(?:>|[-*+](?=[ \t]|$)|\d{1,9}[.)](?=[ \t]|$)))*/)?.[0].match(/>|[-*+]|\d+[.)]/g) ?? []).length;
 
 describe("prepareMarkdown", () => {
   it("leaves ordinary Markdown alone", () => {
@@ -39,7 +40,13 @@ describe("prepareMarkdown", () => {
   it("falls back to plain text past the line limit, counting every kind of line break", () => {
     for (const br of ["\n", "\r\n", "\r"]) {
       expect(prepareMarkdown(Array(MARKDOWN_LIMITS.maxLines).fill("a").join(br)).kind).toBe("markdown");
-      expect(prepareMarkdown(Array(MARKDOWN_LIMITS.maxLines + 1).fill("a").join(br)).kind).toBe("plain");
+      expect(
+        prepareMarkdown(
+          Array(MARKDOWN_LIMITS.maxLines + 1)
+            .fill("a")
+            .join(br),
+        ).kind,
+      ).toBe("plain");
     }
     expect(prepareMarkdown("a\n=\n".repeat(4_999)).kind).toBe("plain");
     expect(prepareMarkdown(`> a\n${"b\n".repeat(9_996)}`).kind).toBe("plain");

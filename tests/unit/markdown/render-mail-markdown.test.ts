@@ -4,7 +4,9 @@ import { renderMailMarkdown } from "@/lib/markdown/render-mail-markdown";
 
 describe("renderMailMarkdown", () => {
   it("renders Markdown as HTML and as plain text without the marks", () => {
-    const { html, text } = renderMailMarkdown("Set **16000 rpm** and _F1600_.\n\n- one\n- [the sheet](https://example.com/s)\n\n```\nG1 X1\n```");
+    const { html, text } = renderMailMarkdown(
+      "Set **16000 rpm** and _F1600_.\n\n- one\n- [the sheet](https://example.com/s)\n\n```\nG1 X1\n```",
+    );
     expect(html).toContain("<strong>16000 rpm</strong>");
     expect(html).toContain("<em>F1600</em>");
     expect(html).toContain('<a href="https://example.com/s">the sheet</a>');
@@ -13,7 +15,9 @@ describe("renderMailMarkdown", () => {
   });
 
   it("never passes raw HTML or script links", () => {
-    const { html, text } = renderMailMarkdown('<script>alert(1)</script>\n\n[x](javascript:alert(1)) <img src=x onerror="alert(2)">\n\n![y](https://evil.example/p.png)');
+    const { html, text } = renderMailMarkdown(
+      '<script>alert(1)</script>\n\n[x](javascript:alert(1)) <img src=x onerror="alert(2)">\n\n![y](https://evil.example/p.png)',
+    );
     expect(html).not.toMatch(/<script|<img|javascript:|<[^>]*\sonerror=/);
     expect(html).toContain("&#x3C;script>");
     expect(text).toContain("x");

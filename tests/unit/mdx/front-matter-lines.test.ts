@@ -20,7 +20,11 @@ describe("front-matter errors name their YAML line in the whole file", () => {
   it("an unknown key such as fedd is reported on its own line", () => {
     const source = buildSheetSource({ frontMatter: { operations: [operationInput({ fedd: "1800 mm/min" })] } });
     expect(errorsOf(source)).toEqual([
-      expect.objectContaining({ line: lineOf(source, "fedd:"), path: "operations[0].fedd", message: expect.stringMatching(/Unknown field “fedd”/) }),
+      expect.objectContaining({
+        line: lineOf(source, "fedd:"),
+        path: "operations[0].fedd",
+        message: expect.stringMatching(/Unknown field “fedd”/),
+      }),
     ]);
   });
 
@@ -35,13 +39,19 @@ describe("front-matter errors name their YAML line in the whole file", () => {
     const { vf: _vf, ...withoutVf } = operationInput({ kind: "pocket" });
     const source = buildSheetSource({ frontMatter: { operations: [withoutVf] } });
     expect(errorsOf(source)).toEqual([
-      expect.objectContaining({ line: lineOf(source, "- kind: pocket"), path: "operations[0].vf", message: "operations[0].vf is required." }),
+      expect.objectContaining({
+        line: lineOf(source, "- kind: pocket"),
+        path: "operations[0].vf",
+        message: "operations[0].vf is required.",
+      }),
     ]);
   });
 
   it("no operations at all is reported on the operations line", () => {
     const source = buildSheetSource({ frontMatter: { operations: [] } });
-    expect(errorsOf(source)).toEqual([expect.objectContaining({ line: lineOf(source, "operations:"), message: expect.stringMatching(/at least one operation/) })]);
+    expect(errorsOf(source)).toEqual([
+      expect.objectContaining({ line: lineOf(source, "operations:"), message: expect.stringMatching(/at least one operation/) }),
+    ]);
   });
 
   it("a missing operations key is reported at the start of the front matter", () => {
@@ -51,12 +61,16 @@ describe("front-matter errors name their YAML line in the whole file", () => {
 
   it("a misspelt top-level key is reported on its line", () => {
     const source = buildSheetSource({ frontMatter: { tagz: ["acrylic"] } });
-    expect(errorsOf(source)).toEqual([expect.objectContaining({ line: lineOf(source, "tagz:"), message: expect.stringMatching(/“tagz”/) })]);
+    expect(errorsOf(source)).toEqual([
+      expect.objectContaining({ line: lineOf(source, "tagz:"), message: expect.stringMatching(/“tagz”/) }),
+    ]);
   });
 
   it("a number without its unit is refused on its line", () => {
     const source = buildSheetSource({ frontMatter: { operations: [operationInput({ n: 18000 })] } });
-    expect(errorsOf(source)).toEqual([expect.objectContaining({ line: lineOf(source, "n: 18000"), message: expect.stringMatching(/18000 rpm/) })]);
+    expect(errorsOf(source)).toEqual([
+      expect.objectContaining({ line: lineOf(source, "n: 18000"), message: expect.stringMatching(/18000 rpm/) }),
+    ]);
   });
 
   it("YAML syntax errors carry their line in the file, not in the YAML block", () => {
@@ -86,7 +100,9 @@ describe("front-matter errors name their YAML line in the whole file", () => {
 
 describe("front matter delimiters", () => {
   it("requires front matter at the top", () => {
-    expect(errorsOf("# Just prose\n")).toEqual([expect.objectContaining({ line: 1, message: expect.stringMatching(/start with front matter/) })]);
+    expect(errorsOf("# Just prose\n")).toEqual([
+      expect.objectContaining({ line: 1, message: expect.stringMatching(/start with front matter/) }),
+    ]);
   });
 
   it("requires the closing --- line", () => {

@@ -50,15 +50,20 @@ describe("hostile MDX is rejected with the line it is on", () => {
     const source = withSnippet(snippet);
     const errors = errorsOf(source);
     const line = lineOf(source, snippet);
-    expect(errors.some((e) => e.line === line && message.test(e.message)), JSON.stringify(errors)).toBe(true);
+    expect(
+      errors.some((e) => e.line === line && message.test(e.message)),
+      JSON.stringify(errors),
+    ).toBe(true);
   });
 
   it("reports a link definition with a javascript: URL on the definition's line", () => {
     const source = withSnippet("[click][evil]\n\n[evil]: javascript:alert(1)");
-    expect(errorsOf(source)).toEqual([expect.objectContaining({ line: lineOf(source, "[evil]:"), message: expect.stringMatching(/javascript/) })]);
+    expect(errorsOf(source)).toEqual([
+      expect.objectContaining({ line: lineOf(source, "[evil]:"), message: expect.stringMatching(/javascript/) }),
+    ]);
   });
 
-  it.each(['<iframe src=https://evil.example.com/ ></iframe>', "<img onerror=alert(1)>", "<script>"])(
+  it.each(["<iframe src=https://evil.example.com/ ></iframe>", "<img onerror=alert(1)>", "<script>"])(
     "reports unparseable markup %s as an MDX syntax error on its line",
     (snippet) => {
       const source = withSnippet(snippet);
@@ -87,12 +92,16 @@ describe("safe MDX passes", () => {
   });
 
   it("does not mistake prose with a colon for a URL scheme", () => {
-    const result = validateSheetSource(withSnippet('<Caution kind="general" title="Data: keep the guard on">Note: javascript is not involved.</Caution>'));
+    const result = validateSheetSource(
+      withSnippet('<Caution kind="general" title="Data: keep the guard on">Note: javascript is not involved.</Caution>'),
+    );
     expect(result.ok).toBe(true);
   });
 
   it("accepts http, https, mailto and relative links", () => {
-    const result = validateSheetSource(withSnippet("[a](https://a.example) [b](http://b.example) [c](mailto:lab@example.com) [d](../other-sheet) [e](#adapt)"));
+    const result = validateSheetSource(
+      withSnippet("[a](https://a.example) [b](http://b.example) [c](mailto:lab@example.com) [d](../other-sheet) [e](#adapt)"),
+    );
     expect(result.ok).toBe(true);
   });
 

@@ -15,7 +15,7 @@ describe("MDX components", () => {
 
   it("Caution shows an icon and the hazard's word, not colour alone", () => {
     const html = renderToStaticMarkup(createElement(Caution, { kind: "dust", title: "Wear a mask" }, "MDF dust is fine."));
-    expect(html).toContain("<svg aria-hidden=\"true\"");
+    expect(html).toContain('<svg aria-hidden="true"');
     expect(html).toContain(">Dust</span>");
     expect(html).toContain('aria-label="Dust: Wear a mask"');
   });
@@ -27,7 +27,9 @@ describe("MDX components", () => {
   it("Figure resolves relative sources and refuses unsafe ones", () => {
     const resolveSrc = (src: string) => `/media/v1/${src}`;
     expect(renderToStaticMarkup(createElement(Figure, { src: "a.png", alt: "A", resolveSrc }))).toContain('src="/media/v1/a.png"');
-    expect(renderToStaticMarkup(createElement(Figure, { src: "https://cdn.example.com/a.png", alt: "A", resolveSrc }))).toContain('src="https://cdn.example.com/a.png"');
+    expect(renderToStaticMarkup(createElement(Figure, { src: "https://cdn.example.com/a.png", alt: "A", resolveSrc }))).toContain(
+      'src="https://cdn.example.com/a.png"',
+    );
     expect(renderToStaticMarkup(createElement(Figure, { src: "javascript:alert(1)//.png", alt: "A" }))).toBe("");
   });
 

@@ -2,8 +2,7 @@ import { createElement } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 
-import { OperationTable } from "@/components/mdx";
-import type { SheetRenderContext } from "@/components/mdx";
+import { OperationTable, type SheetRenderContext } from "@/components/mdx";
 import { sheetFrontMatterSchema } from "@/content-schema/sheet-front-matter";
 import { frontMatterInput, operationInput } from "@/tests/factories/sheet-source";
 

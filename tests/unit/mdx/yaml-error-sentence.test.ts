@@ -8,7 +8,11 @@ const issuesOf = (yaml: string) => checkFrontMatter(yaml, 2).issues;
 describe("YAML errors read as sentences with their line", () => {
   it.each([
     ["title: x\ntitle: y\n", 3, "This field is already given above; keep only one of the two."],
-    ["title: x\nsummary y\nother: z\n", 3, "A line here is not a field: write the field name, a colon and a space, then the value (like “vf: 1800 mm/min”)."],
+    [
+      "title: x\nsummary y\nother: z\n",
+      3,
+      "A line here is not a field: write the field name, a colon and a space, then the value (like “vf: 1800 mm/min”).",
+    ],
     ['title: "unclosed\nsummary: y\n', 4, "A quoted value is not closed; end it with the same quote mark on this line."],
     ["title: @foo\n", 2, "A value cannot start with “@”; put the whole value in quotes."],
     ["tags: [a, b\nx: 1\n", 3, "A list in brackets is not closed; end it with “]” on the same line."],

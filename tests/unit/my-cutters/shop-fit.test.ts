@@ -19,7 +19,10 @@ describe("which machine classes fit a customer's machine", () => {
   });
 
   it("collects the classes that fit any of the machines, once each", () => {
-    const machines = [{ rpmMin: 8000, rpmMax: 24000, powerKw: 0.8, rigidity: 0.4 }, { rpmMin: 8000, rpmMax: 24000, powerKw: 0.9, rigidity: 0.45 }];
+    const machines = [
+      { rpmMin: 8000, rpmMax: 24000, powerKw: 0.8, rigidity: 0.4 },
+      { rpmMin: 8000, rpmMax: 24000, powerKw: 0.9, rigidity: 0.45 },
+    ];
     expect(fittingClassIds(machines, [light, rigid])).toEqual(["light"]);
     expect(fittingClassIds([], [light, rigid])).toEqual([]);
   });

@@ -1,7 +1,6 @@
 import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { gzipSync } from "node:zlib";
-
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
 import { pageJavaScript } from "@/scripts/bench-pages/page-javascript";

@@ -19,7 +19,9 @@ describe("parseQuery flute counts", () => {
     const q = parseQuery(input);
     expect(q.flutes).toBe(flutes);
     expect(q.text).toBe("");
-    expect(q.chips).toEqual([{ kind: "flutes", label: flutes === 1 ? "1 flute" : `${flutes} flutes`, value: String(flutes), sourceText: input }]);
+    expect(q.chips).toEqual([
+      { kind: "flutes", label: flutes === 1 ? "1 flute" : `${flutes} flutes`, value: String(flutes), sourceText: input },
+    ]);
   });
 
   it.each([

@@ -55,7 +55,20 @@ describe("parseQuery on hostile input", () => {
   });
 
   it("answers garbage", () => {
-    for (const input of ["////", "....", "1/0", "--1--", "ø", "Ø Ø Ø", "\\x00", "%s%s%n", "${7*7}", "<script>alert(1)</script>", "NaN in", "1e400 mm"]) {
+    for (const input of [
+      "////",
+      "....",
+      "1/0",
+      "--1--",
+      "ø",
+      "Ø Ø Ø",
+      "\\x00",
+      "%s%s%n",
+      "${7*7}",
+      "<script>alert(1)</script>",
+      "NaN in",
+      "1e400 mm",
+    ]) {
       expect(() => parseQuery(input), input).not.toThrow();
     }
     expect(parseQuery("1e400 mm").diameterMm).toBeUndefined();

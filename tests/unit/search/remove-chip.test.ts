@@ -23,9 +23,30 @@ describe("removeChip", () => {
   // No fragment pair forms a longer phrase when brought together (`aluminum` + `6061` would).
   const diameters = ["", "1/8", "6mm", "3.175 mm", "Ø6", ".25"];
   const flutes = ["", "2F", "3 flute", "single flute"];
-  const words = ["acrylic", "PMMA", "cast acrylic", "aluminum", "HDPE", "mdf", "slot", "pocket", "profile", "ball nose", "upcut", "compression", "SB-1F-3175", "sign", "letters", "plastics"];
+  const words = [
+    "acrylic",
+    "PMMA",
+    "cast acrylic",
+    "aluminum",
+    "HDPE",
+    "mdf",
+    "slot",
+    "pocket",
+    "profile",
+    "ball nose",
+    "upcut",
+    "compression",
+    "SB-1F-3175",
+    "sign",
+    "letters",
+    "plastics",
+  ];
   const query = fc
-    .tuple(fc.constantFrom(...diameters), fc.constantFrom(...flutes), fc.uniqueArray(fc.constantFrom(...words), { minLength: 1, maxLength: 5 }))
+    .tuple(
+      fc.constantFrom(...diameters),
+      fc.constantFrom(...flutes),
+      fc.uniqueArray(fc.constantFrom(...words), { minLength: 1, maxLength: 5 }),
+    )
     .map(([d, f, w]) => [d, f, ...w].filter(Boolean))
     .chain((parts) => fc.shuffledSubarray(parts, { minLength: parts.length }));
 
@@ -36,7 +57,9 @@ describe("removeChip", () => {
         for (const chip of q.chips) {
           const after = parseQuery(removeChip(q.query, chip));
           const same = (c: { kind: string; value: string }) => c.kind === chip.kind && c.value === chip.value;
-          expect(after.chips.map(({ kind, value }) => ({ kind, value }))).toEqual(q.chips.filter((c) => !same(c)).map(({ kind, value }) => ({ kind, value })));
+          expect(after.chips.map(({ kind, value }) => ({ kind, value }))).toEqual(
+            q.chips.filter((c) => !same(c)).map(({ kind, value }) => ({ kind, value })),
+          );
           expect(after.text).toBe(chip.kind === "sku" ? q.text.replace(chip.value.toLowerCase(), "").replace(/\s+/g, " ").trim() : q.text);
         }
       }),

@@ -10,7 +10,16 @@ describe("search settings", () => {
   });
 
   it("can filter on everything the parser reads, and on the vendor", () => {
-    for (const field of ["vendorId", "diameterMm", "flutes", "materialKey", "materialGroup", "operations", "cornerForm", "cutterSku"] as const) {
+    for (const field of [
+      "vendorId",
+      "diameterMm",
+      "flutes",
+      "materialKey",
+      "materialGroup",
+      "operations",
+      "cornerForm",
+      "cutterSku",
+    ] as const) {
       expect(searchSettings.filterableAttributes).toContain(field);
     }
   });

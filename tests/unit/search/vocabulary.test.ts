@@ -4,10 +4,10 @@ import { OPERATION_KINDS } from "@/lib/machining/types";
 import { classifyMaterial } from "@/search/parse";
 import {
   CORNER_FORMS,
-  CUTTER_GEOMETRIES,
-  MATERIAL_GROUPS,
   cornerForms,
+  CUTTER_GEOMETRIES,
   geometries,
+  MATERIAL_GROUPS,
   materialByKey,
   materialKeysWithin,
   materials,

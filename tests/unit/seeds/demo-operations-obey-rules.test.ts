@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
-import { materialFieldsSchema } from "@/content-schema/catalogue-material";
 import { machineClassFieldsSchema } from "@/content-schema/catalogue-machine-class";
+import { materialFieldsSchema } from "@/content-schema/catalogue-material";
 import { adaptOperation } from "@/lib/adapt/adapt-context";
 import {
   ballNoseEffectiveDiameter,
@@ -40,7 +40,10 @@ describe("demo operations obey the engine's rules (invented demo data)", () => {
   it("adapting each to its own reference machine raises no engine warning", () => {
     for (const { v, op } of ops) {
       const result = adaptOperation(v.context, op.index, referenceAsMachine(v), {}, { entryCapability: "helix" });
-      expect(result.warnings.filter((w) => !NOTICES.has(w.code)).map((w) => `${w.code}: ${w.message}`), name(v, op.label)).toEqual([]);
+      expect(
+        result.warnings.filter((w) => !NOTICES.has(w.code)).map((w) => `${w.code}: ${w.message}`),
+        name(v, op.label),
+      ).toEqual([]);
     }
   });
 
@@ -48,7 +51,10 @@ describe("demo operations obey the engine's rules (invented demo data)", () => {
     for (const { v, op } of ops) {
       const m = materialFieldsSchema.parse(v.material);
       const { diameterMm: d, flutes: z } = v.context.cutter;
-      const band = chipLoadBand({ minChipLoadMm: m.minChipLoadMm, chipLoadPctOfD: { min: m.chipLoadMinPctD / 100, max: m.chipLoadMaxPctD / 100 } }, d);
+      const band = chipLoadBand(
+        { minChipLoadMm: m.minChipLoadMm, chipLoadPctOfD: { min: m.chipLoadMinPctD / 100, max: m.chipLoadMaxPctD / 100 } },
+        d,
+      );
       const de = v.context.cutter.cornerForm === "ball" ? ballNoseEffectiveDiameter({ diameterMm: d, axialDepthMm: op.axialDepthMm }) : d;
       const fz = op.feedMmMin / (z * op.rpm);
       const ctf = chipThinningFactor({ diameterMm: d, radialDepthMm: op.radialDepthMm });
@@ -82,9 +88,13 @@ describe("demo operations obey the engine's rules (invented demo data)", () => {
       const kc = m.kc11Nmm2 ?? m.kcNmm2;
       const zThrust = k.zThrustN ?? defaultZThrustN(rigidityClassFromFactor(k.rigidity));
       const fn = op.plungeFeedMmMin / op.rpm;
-      expect(plungeThrustN({ diameterMm: v.context.cutter.diameterMm, kcNmm2: kc, feedPerRevMm: fn }), name(v, op.label)).toBeLessThanOrEqual(zThrust);
+      expect(
+        plungeThrustN({ diameterMm: v.context.cutter.diameterMm, kcNmm2: kc, feedPerRevMm: fn }),
+        name(v, op.label),
+      ).toBeLessThanOrEqual(zThrust);
       // Either the thrust sets it (within rounding to 10 mm/min) or the cutting feed caps it.
-      const byThrust = plungeFeedPerRevForThrust({ diameterMm: v.context.cutter.diameterMm, kcNmm2: kc, zThrustN: 0.8 * zThrust })! * op.rpm;
+      const byThrust =
+        plungeFeedPerRevForThrust({ diameterMm: v.context.cutter.diameterMm, kcNmm2: kc, zThrustN: 0.8 * zThrust })! * op.rpm;
       expect(Math.min(byThrust, op.feedMmMin) - op.plungeFeedMmMin, name(v, op.label)).toBeLessThan(10 + 1e-9);
       expect(Math.abs(op.plungeFeedMmMin - op.feedMmMin / 3), `${name(v, op.label)}: not vf/3`).toBeGreaterThan(10);
     }
@@ -97,12 +107,22 @@ describe("demo operations obey the engine's rules (invented demo data)", () => {
       if (op.kind !== "slotting") continue;
       slots++;
       const { c, m, k } = deriveParts(v);
-      const pocket = deriveOperation({ cutter: c, material: m, machine: k, kind: "pocket", chipLoadScale: v.version.chipLoadScale, depthScale: v.version.depthScale });
+      const pocket = deriveOperation({
+        cutter: c,
+        material: m,
+        machine: k,
+        kind: "pocket",
+        chipLoadScale: v.version.chipLoadScale,
+        depthScale: v.version.depthScale,
+      });
       const slotFz = op.feedMmMin / (c.flutes * op.rpm);
       const ratio = slotFz / pocket.derived.hexMm;
       expect(ratio, name(v, op.label)).toBeGreaterThanOrEqual(SLOTTING_FACTOR - 0.05);
       // The band wins over the factor: where 75 % of the pocketing chip would rub (a narrow band), the slot sits just over the floor.
-      const floor = chipLoadBand({ minChipLoadMm: m.minChipLoadMm, chipLoadPctOfD: { min: m.chipLoadMinPctD / 100, max: m.chipLoadMaxPctD / 100 } }, c.diameterMm).minMm;
+      const floor = chipLoadBand(
+        { minChipLoadMm: m.minChipLoadMm, chipLoadPctOfD: { min: m.chipLoadMinPctD / 100, max: m.chipLoadMaxPctD / 100 } },
+        c.diameterMm,
+      ).minMm;
       if (slotFz > 1.1 * floor + 1e-3) expect(ratio, name(v, op.label)).toBeLessThanOrEqual(SLOTTING_FACTOR + 0.05);
     }
     expect(slots).toBeGreaterThan(10);

@@ -47,7 +47,9 @@ describe("demo sheets (invented demo data)", () => {
         const vc = cuttingSpeed({ diameterMm: D, rpm: op.n.value });
         // n is clamped to the machine's range, so vc may fall below the window on a slow spindle, never above it.
         expect(vc).toBeLessThanOrEqual(Number(material.vcMaxMpm) * 1.01);
-        expect(chipLoad({ feedMmMin: op.vf.value, rpm: op.n.value, flutes: Number(cutter.flutes) })).toBeGreaterThanOrEqual(Number(material.minChipLoadMm));
+        expect(chipLoad({ feedMmMin: op.vf.value, rpm: op.n.value, flutes: Number(cutter.flutes) })).toBeGreaterThanOrEqual(
+          Number(material.minChipLoadMm),
+        );
       }
     }
   });
@@ -55,8 +57,21 @@ describe("demo sheets (invented demo data)", () => {
   it("a new sheet's template validates", () => {
     const { cutter, material, machineClass } = all[0];
     const source = newSheetSource({
-      cutter: { sku: cutter.sku, name: cutter.name, diameterMm: Number(cutter.diameterMm), flutes: Number(cutter.flutes), cornerForm: "square" },
-      material: { slug: material.slug, name: material.name, materialGroup: material.materialGroup, vcMinMpm: 150, vcMaxMpm: 300, minChipLoadMm: 0.05 },
+      cutter: {
+        sku: cutter.sku,
+        name: cutter.name,
+        diameterMm: Number(cutter.diameterMm),
+        flutes: Number(cutter.flutes),
+        cornerForm: "square",
+      },
+      material: {
+        slug: material.slug,
+        name: material.name,
+        materialGroup: material.materialGroup,
+        vcMinMpm: 150,
+        vcMaxMpm: 300,
+        minChipLoadMm: 0.05,
+      },
       machineClass: { slug: machineClass.slug, name: machineClass.name, rpmMin: 8000, rpmMax: 24000, maxFeedMmMin: 5000, rigidity: 0.4 },
     });
     expect(validateSheetSource(source).ok).toBe(true);
@@ -65,8 +80,26 @@ describe("demo sheets (invented demo data)", () => {
   it("the template gives a 1/32 in two-flute cutter in acrylic a chip under the band's ceiling, not one that snaps it", () => {
     const source = newSheetSource({
       cutter: { sku: "T-132", name: "1/32 in two-flute", diameterMm: 0.79375, flutes: 2, cornerForm: "square", fluteLengthMm: 2.4 },
-      material: { slug: "cast-acrylic", name: "Cast acrylic", materialGroup: "plastics", vcMinMpm: 150, vcMaxMpm: 300, minChipLoadMm: 0.05, chipLoadMinPctD: 1.2, chipLoadMaxPctD: 3, kcNmm2: 120 },
-      machineClass: { slug: "light-router", name: "Light router", rpmMin: 8000, rpmMax: 24000, maxFeedMmMin: 5000, rigidity: 0.4, zThrustN: 150 },
+      material: {
+        slug: "cast-acrylic",
+        name: "Cast acrylic",
+        materialGroup: "plastics",
+        vcMinMpm: 150,
+        vcMaxMpm: 300,
+        minChipLoadMm: 0.05,
+        chipLoadMinPctD: 1.2,
+        chipLoadMaxPctD: 3,
+        kcNmm2: 120,
+      },
+      machineClass: {
+        slug: "light-router",
+        name: "Light router",
+        rpmMin: 8000,
+        rpmMax: 24000,
+        maxFeedMmMin: 5000,
+        rigidity: 0.4,
+        zThrustN: 150,
+      },
     });
     const result = validateSheetSource(source);
     expect(result.ok).toBe(true);

@@ -1,12 +1,6 @@
 import { describe, expect, it } from "vitest";
 
-import {
-  chipLoadBand,
-  chipThinningFactor,
-  plungeFeedPerRevForThrust,
-  plungeThrustN,
-  SLOTTING_FACTOR,
-} from "@/lib/machining";
+import { chipLoadBand, chipThinningFactor, plungeFeedPerRevForThrust, plungeThrustN, SLOTTING_FACTOR } from "@/lib/machining";
 import { chipTargets, deriveOperation } from "@/lib/sheets/derive-starting-data";
 
 // Starting numbers derived by the engine's own rules (lib/sheets/derive-starting-data.ts).
@@ -59,7 +53,15 @@ describe("deriveOperation", () => {
   });
 
   it("enters by ramp, with no plunge feed, where even the cutter's centre needs more thrust than the Z has", () => {
-    const aluminium = { materialGroup: "non-ferrous", vcMinMpm: 150, vcMaxMpm: 400, minChipLoadMm: 0.02, kcNmm2: 700, kc11Nmm2: 500, mc: 0.25 };
+    const aluminium = {
+      materialGroup: "non-ferrous",
+      vcMinMpm: 150,
+      vcMaxMpm: 400,
+      minChipLoadMm: 0.02,
+      kcNmm2: 700,
+      kc11Nmm2: 500,
+      mc: 0.25,
+    };
     const op = deriveOperation({ cutter: { ...cutter, flutes: 3 }, material: aluminium, machine: light, kind: "pocket" });
     // Centre term B·kc·D² = 0.012·500·36 = 216 N > 0.8·150 N.
     expect(op.plungeFeed).toBeUndefined();

@@ -38,7 +38,11 @@ describe("diffParameters", () => {
     const profile = operationInput({ kind: "profile", label: "Outside profile", ae: "0.5 mm", entry: "none", rampAngleDeg: undefined });
     const finish = operationInput({ kind: "finishing", label: "Finish", ae: "0.2 mm", entry: "none", rampAngleDeg: undefined });
     const diff = diffParameters(fm([slot, profile]), fm([profile, finish]), cutter);
-    expect(diff.map((d) => [d.label, d.status])).toEqual([["Outside profile", "unchanged"], ["Finish", "added"], ["Full-width slot", "removed"]]);
+    expect(diff.map((d) => [d.label, d.status])).toEqual([
+      ["Outside profile", "unchanged"],
+      ["Finish", "added"],
+      ["Full-width slot", "removed"],
+    ]);
   });
 
   it("formats a change in imperial units with a sign (1 in = 25.4 mm)", () => {

@@ -1,7 +1,6 @@
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { deflateSync } from "node:zlib";
-
 import { describe, expect, it } from "vitest";
 
 import { InvalidInput } from "@/lib/errors/domain-errors";
@@ -36,17 +35,27 @@ function png(width: number, height: number): Buffer {
   ihdr[8] = 8;
   ihdr[9] = 0;
   const raw = Buffer.concat(Array.from({ length: height }, () => Buffer.concat([Buffer.from([0]), Buffer.alloc(width, 0x80)])));
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk("IHDR", ihdr), chunk("IDAT", deflateSync(raw)), chunk("IEND", Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk("IHDR", ihdr),
+    chunk("IDAT", deflateSync(raw)),
+    chunk("IEND", Buffer.alloc(0)),
+  ]);
 }
 
 describe("hostile uploads are refused by their content", () => {
   it("has the corpus", () => {
-    expect(files).toEqual(expect.arrayContaining(["disguised-executable.png", "polyglot-gif-script.png", "oversized-header.png", "polyglot-markup.nc"]));
+    expect(files).toEqual(
+      expect.arrayContaining(["disguised-executable.png", "polyglot-gif-script.png", "oversized-header.png", "polyglot-markup.nc"]),
+    );
   });
 
   it.each(files)("%s is refused with a clear message", async (file) => {
     const bytes = readFileSync(path.join(DIR, file));
-    const error = await sniffUpload(bytes, file).then(() => null, (e: unknown) => e);
+    const error = await sniffUpload(bytes, file).then(
+      () => null,
+      (e: unknown) => e,
+    );
     expect(error).toBeInstanceOf(InvalidInput);
     expect((error as Error).message).toMatch(/not accepted|larger than any photo|damaged/);
   });

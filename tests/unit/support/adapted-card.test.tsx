@@ -8,7 +8,21 @@ import { formatQuantity } from "@/lib/machining";
 
 afterEach(cleanup);
 
-const numbers = { rpm: 16000, feedMmMin: 1600, chipLoadMm: 0.1, maxChipThicknessMm: 0.1, cuttingSpeedMpm: 150.8, axialDepthMm: 3, radialDepthMm: 3, plungeFeedMmMin: 400, mrrCm3Min: 14.4, powerKw: 0.2, torqueNm: 0.1, forceN: 20, deflectionMm: 0.01 };
+const numbers = {
+  rpm: 16000,
+  feedMmMin: 1600,
+  chipLoadMm: 0.1,
+  maxChipThicknessMm: 0.1,
+  cuttingSpeedMpm: 150.8,
+  axialDepthMm: 3,
+  radialDepthMm: 3,
+  plungeFeedMmMin: 400,
+  mrrCm3Min: 14.4,
+  powerKw: 0.2,
+  torqueNm: 0.1,
+  forceN: 20,
+  deflectionMm: 0.01,
+};
 const card: TicketCard = {
   sheetVersionId: "00000000-0000-4000-8000-000000000001",
   sheetSlug: "acrylic",
@@ -20,9 +34,28 @@ const card: TicketCard = {
       label: "Slot",
       kind: "slot",
       // 0.1 mm/tooth = 1800 / (1 · 18000); vc = π · 3.175 · 18000 / 1000 = 179.5 m/min.
-      reference: { rpm: 18000, feedMmMin: 1800, axialDepthMm: 3, radialDepthMm: 3.175, chipLoadMm: 0.1, cuttingSpeedMpm: 179.5, plungeFeedMmMin: 450 },
+      reference: {
+        rpm: 18000,
+        feedMmMin: 1800,
+        axialDepthMm: 3,
+        radialDepthMm: 3.175,
+        chipLoadMm: 0.1,
+        cuttingSpeedMpm: 179.5,
+        plungeFeedMmMin: 450,
+      },
       adapted: numbers,
-      steps: [{ rule: "spindle-speed-range", title: "Spindle speed range", field: "rpm", quantity: "spindleSpeed", before: 18000, after: 16000, why: "The machine tops out at 16 000 rpm.", source: "common practice" }],
+      steps: [
+        {
+          rule: "spindle-speed-range",
+          title: "Spindle speed range",
+          field: "rpm",
+          quantity: "spindleSpeed",
+          before: 18000,
+          after: 16000,
+          why: "The machine tops out at 16 000 rpm.",
+          source: "common practice",
+        },
+      ],
       warnings: [],
     },
   ],
@@ -42,7 +75,10 @@ describe("embedded sheet card", () => {
   });
 
   it("says when an older card did not store the sheet's fz and vc", () => {
-    const old = { ...card, operations: [{ ...card.operations[0], reference: { rpm: 18000, feedMmMin: 1800, axialDepthMm: 3, radialDepthMm: 3.175 } }] };
+    const old = {
+      ...card,
+      operations: [{ ...card.operations[0], reference: { rpm: 18000, feedMmMin: 1800, axialDepthMm: 3, radialDepthMm: 3.175 } }],
+    };
     render(<AdaptedCard card={old} vendorSlug="northbeck" />);
     expect(screen.getByRole("table").textContent).not.toContain("—");
     expect(screen.getByRole("table").textContent).toContain("not stored");

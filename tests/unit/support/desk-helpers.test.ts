@@ -7,9 +7,12 @@ import { firstResponseDueAt } from "@/lib/tickets/first-response-due";
 
 describe("snippets", () => {
   it("fills known placeholders and leaves unknown ones visible", () => {
-    expect(expandSnippet("Hi {{customer.name}}, re #{{ ticket.number }} and {{sheet.title}}", { "customer.name": "Riley", "ticket.number": "7" })).toBe(
-      "Hi Riley, re #7 and {{sheet.title}}",
-    );
+    expect(
+      expandSnippet("Hi {{customer.name}}, re #{{ ticket.number }} and {{sheet.title}}", {
+        "customer.name": "Riley",
+        "ticket.number": "7",
+      }),
+    ).toBe("Hi Riley, re #7 and {{sheet.title}}");
   });
 });
 

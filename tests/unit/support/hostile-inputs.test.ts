@@ -19,7 +19,12 @@ const searchQueries = hostileCorpus("search").flatMap(([file, text]) =>
 
 describe.each([
   ["MDX sheet source", "validateSheet", hostileCorpus("mdx"), (out: unknown) => expect(out).toMatchObject({ issues: expect.any(Array) })],
-  ["cutter CSV import", "checkCsv", hostileCorpus("csv"), (out: unknown) => expect(out).toMatchObject({ fileErrors: expect.any(Array), rows: expect.any(Array) })],
+  [
+    "cutter CSV import",
+    "checkCsv",
+    hostileCorpus("csv"),
+    (out: unknown) => expect(out).toMatchObject({ fileErrors: expect.any(Array), rows: expect.any(Array) }),
+  ],
   ["search query", "parseSearch", searchQueries, (out: unknown) => expect(out).toMatchObject({ text: expect.any(String) })],
 ])("hostile %s", (_kind, exportName, cases, check) => {
   const runner = new DeadlineRunner(ENTRY, exportName);
@@ -28,11 +33,15 @@ describe.each([
   }, 130_000);
   afterAll(() => runner.close());
 
-  it.each(cases)("%s: answers in bounded time without throwing", async (_name, input) => {
-    const result = await runner.run(input, DEADLINE_MS);
-    expect(result.status, result.status === "threw" ? result.error : "").toBe("done");
-    if (result.status === "done") check(JSON.parse(result.output));
-  }, DEADLINE_MS + 5_000);
+  it.each(cases)(
+    "%s: answers in bounded time without throwing",
+    async (_name, input) => {
+      const result = await runner.run(input, DEADLINE_MS);
+      expect(result.status, result.status === "threw" ? result.error : "").toBe("done");
+      if (result.status === "done") check(JSON.parse(result.output));
+    },
+    DEADLINE_MS + 5_000,
+  );
 });
 
 describe("the MDX corpus", () => {

@@ -23,7 +23,12 @@ const GENERATED: Array<[string, string]> = [
   ["5,000 nested ordered items", `${"1. ".repeat(5_000)}a`],
   ["quotes and bullets alternating", `${"> - ".repeat(2_500)}a`],
   ["lists nested by indentation", Array.from({ length: 140 }, (_, i) => `${" ".repeat(i * 2)}- a`).join("\n")],
-  ["quotes nested line by line", Array.from({ length: 2_000 }, (_, i) => `${">".repeat(i)} a`).join("\n").slice(0, 20_000)],
+  [
+    "quotes nested line by line",
+    Array.from({ length: 2_000 }, (_, i) => `${">".repeat(i)} a`)
+      .join("\n")
+      .slice(0, 20_000),
+  ],
   ["5,000 nested footnote definitions", `${"[^a]: ".repeat(3_000)}x`],
   ["a 20,000-character line", "x".repeat(20_000)],
   ["a 20,000-character line of words", "word ".repeat(4_000)],
@@ -66,9 +71,13 @@ describe.each([
   }, 130_000);
   afterAll(() => runner.close());
 
-  it.each(CASES)("%s: finishes and stays safe", async (_name, source, deadline) => {
-    const result = await runner.run(source, deadline);
-    expect(result.status, result.status === "threw" ? result.error : "").toBe("done");
-    if (result.status === "done") expectSafeHtml(htmlOf(result.output));
-  }, DEADLINE_MS + 5_000);
+  it.each(CASES)(
+    "%s: finishes and stays safe",
+    async (_name, source, deadline) => {
+      const result = await runner.run(source, deadline);
+      expect(result.status, result.status === "threw" ? result.error : "").toBe("done");
+      if (result.status === "done") expectSafeHtml(htmlOf(result.output));
+    },
+    DEADLINE_MS + 5_000,
+  );
 });

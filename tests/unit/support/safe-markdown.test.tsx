@@ -14,7 +14,9 @@ describe("SafeMarkdown", () => {
   });
 
   it("links http(s) and mailto only; other schemes keep their text without a link", () => {
-    const out = html("[sheet](https://example.com/a) [mail](mailto:a@example.com) [bad](javascript:alert(1)) [data](data:text/html,x) [rel](/northbeck/library)");
+    const out = html(
+      "[sheet](https://example.com/a) [mail](mailto:a@example.com) [bad](javascript:alert(1)) [data](data:text/html,x) [rel](/northbeck/library)",
+    );
     expect(out).toContain('href="https://example.com/a"');
     expect(out).toContain('href="mailto:a@example.com"');
     expect(out).not.toMatch(/javascript:|data:text|href="\/northbeck/);
@@ -30,7 +32,9 @@ describe("SafeMarkdown", () => {
   });
 
   it("renders paragraphs, lists, code, bold, quotes and tables", () => {
-    const out = html("Hello **16000 rpm** and `F1600`\n\n1. first\n2. second\n\n```\nG1 X1\n```\n\n> quoted\n\n| a | b |\n|---|---|\n| 1 | 2 |");
+    const out = html(
+      "Hello **16000 rpm** and `F1600`\n\n1. first\n2. second\n\n```\nG1 X1\n```\n\n> quoted\n\n| a | b |\n|---|---|\n| 1 | 2 |",
+    );
     expect(out).toContain("<strong>16000 rpm</strong>");
     expect(out).toContain('<ol class="list-decimal pl-6">');
     expect(out).toContain("<li>first</li>");

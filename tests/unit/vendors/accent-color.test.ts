@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
-import { explainAccentColor } from "@/lib/vendors/explain-accent-color";
 import { accentColorSchema } from "@/content-schema/vendor";
+import { explainAccentColor } from "@/lib/vendors/explain-accent-color";
 
 describe("an invalid accent colour says why", () => {
   it.each([

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 
 import { isAllowedAddress } from "@/lib/webhooks/address-policy";
-import { webhookUrlProblem } from "@/lib/webhooks/webhook-url";
 import { retryDelaySeconds } from "@/lib/webhooks/webhook-settings";
+import { webhookUrlProblem } from "@/lib/webhooks/webhook-url";
 
 // Ranges from the IANA special-purpose address registries (IPv4: RFC 6890 and successors; IPv6: RFC 6890, 4193, 4291).
 describe("webhook address policy", () => {
@@ -10,15 +10,40 @@ describe("webhook address policy", () => {
   const on = { allowLoopback: true };
 
   it("allows public addresses", () => {
-    for (const a of ["93.184.215.14", "1.1.1.1", "8.8.8.8", "2606:4700:4700::1111", "2a00:1450:4001:80b::200e"]) expect(isAllowedAddress(a, off), a).toBe(true);
+    for (const a of ["93.184.215.14", "1.1.1.1", "8.8.8.8", "2606:4700:4700::1111", "2a00:1450:4001:80b::200e"])
+      expect(isAllowedAddress(a, off), a).toBe(true);
   });
 
   it("refuses private, loopback, link-local, shared, documentation, multicast and reserved addresses, in every spelling", () => {
     const refused = [
-      "127.0.0.1", "127.1.2.3", "10.0.0.1", "172.16.0.1", "172.31.255.255", "192.168.1.1", "169.254.169.254", "100.64.0.1", "0.0.0.0",
-      "192.0.2.1", "198.18.0.1", "203.0.113.9", "224.0.0.1", "255.255.255.255",
-      "::1", "::", "fd12:3456::1", "fc00::1", "fe80::1", "fe80::1%eth0", "ff02::1", "2001:db8::1",
-      "::ffff:127.0.0.1", "::ffff:7f00:1", "::ffff:a9fe:a9fe", "0:0:0:0:0:ffff:10.0.0.1", "[::1]", "64:ff9b::a9fe:a9fe",
+      "127.0.0.1",
+      "127.1.2.3",
+      "10.0.0.1",
+      "172.16.0.1",
+      "172.31.255.255",
+      "192.168.1.1",
+      "169.254.169.254",
+      "100.64.0.1",
+      "0.0.0.0",
+      "192.0.2.1",
+      "198.18.0.1",
+      "203.0.113.9",
+      "224.0.0.1",
+      "255.255.255.255",
+      "::1",
+      "::",
+      "fd12:3456::1",
+      "fc00::1",
+      "fe80::1",
+      "fe80::1%eth0",
+      "ff02::1",
+      "2001:db8::1",
+      "::ffff:127.0.0.1",
+      "::ffff:7f00:1",
+      "::ffff:a9fe:a9fe",
+      "0:0:0:0:0:ffff:10.0.0.1",
+      "[::1]",
+      "64:ff9b::a9fe:a9fe",
       "not-an-address",
     ];
     for (const a of refused) expect(isAllowedAddress(a, off), a).toBe(false);

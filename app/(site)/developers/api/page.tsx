@@ -1,5 +1,5 @@
 import { JsonBlock } from "@/components/developers/json-block";
-import { type OperationDoc, OperationCard } from "@/components/developers/operation-card";
+import { OperationCard, type OperationDoc } from "@/components/developers/operation-card";
 import { WebhookVerifyExample } from "@/components/developers/webhook-verify-example";
 import { SafeMarkdown } from "@/components/support/safe-markdown";
 import { PageHeader } from "@/components/ui/page-header";
@@ -20,45 +20,91 @@ export default function ApiReferencePage() {
   }
   return (
     <>
-      <PageHeader title="API reference" lead={<>For integrators: every endpoint of the JSON API, its scope, limits and examples. The same as <a className="underline" href="/api/v1/openapi.json">/api/v1/openapi.json</a> (OpenAPI 3.1), for generating a client.</>} />
-      <section className="prose-sm mb-8 max-w-3xl"><SafeMarkdown source={doc.info.description} /></section>
+      <PageHeader
+        title="API reference"
+        lead={
+          <>
+            For integrators: every endpoint of the JSON API, its scope, limits and examples. The same as{" "}
+            <a className="underline" href="/api/v1/openapi.json">
+              /api/v1/openapi.json
+            </a>{" "}
+            (OpenAPI 3.1), for generating a client.
+          </>
+        }
+      />
+      <section className="prose-sm mb-8 max-w-3xl">
+        <SafeMarkdown source={doc.info.description} />
+      </section>
       <nav aria-label="Sections" className="mb-8 text-sm">
         <ul className="flex flex-wrap gap-3">
-          {[...byTag.keys(), "Token scopes", "Errors", "Webhooks"].map((t) => <li key={t}><a className="underline" href={`#${slug(t)}`}>{t}</a></li>)}
+          {[...byTag.keys(), "Token scopes", "Errors", "Webhooks"].map((t) => (
+            <li key={t}>
+              <a className="underline" href={`#${slug(t)}`}>
+                {t}
+              </a>
+            </li>
+          ))}
         </ul>
       </nav>
       <section id="token-scopes" className="mb-8">
         <h2 className="mb-3 text-lg font-semibold">Token scopes</h2>
-        <p className="mb-2 text-sm text-stone-700">A token carries its owner&apos;s role in one vendor; an endpoint&apos;s scope is the permission it needs.</p>
+        <p className="mb-2 text-sm text-stone-700">
+          A token carries its owner&apos;s role in one vendor; an endpoint&apos;s scope is the permission it needs.
+        </p>
         <table className="text-left text-sm">
-          <thead><tr><th className="pr-4">Scope</th><th>Roles that hold it</th></tr></thead>
-          <tbody>{Object.entries(PERMISSIONS).map(([p, roles]) => <tr key={p} className="border-t border-stone-100"><td className="num pr-4">{p}</td><td>{roles.join(", ")}</td></tr>)}</tbody>
+          <thead>
+            <tr>
+              <th className="pr-4">Scope</th>
+              <th>Roles that hold it</th>
+            </tr>
+          </thead>
+          <tbody>
+            {Object.entries(PERMISSIONS).map(([p, roles]) => (
+              <tr key={p} className="border-t border-stone-100">
+                <td className="num pr-4">{p}</td>
+                <td>{roles.join(", ")}</td>
+              </tr>
+            ))}
+          </tbody>
         </table>
       </section>
       {[...byTag.entries()].map(([tag, ops]) => (
         <section key={tag} id={slug(tag)} className="mb-8">
           <h2 className="mb-3 text-lg font-semibold">{tag}</h2>
-          {ops.map((o) => <OperationCard key={`${o.method} ${o.path}`} {...o} />)}
+          {ops.map((o) => (
+            <OperationCard key={`${o.method} ${o.path}`} {...o} />
+          ))}
         </section>
       ))}
       <section id="errors" className="mb-8">
         <h2 className="mb-3 text-lg font-semibold">Errors</h2>
         <ul className="mb-3 text-sm">
-          {Object.entries(doc.components.responses).map(([name, r]) => <li key={name}><span className="num font-medium">{name.slice(1)}</span> {r.description}</li>)}
+          {Object.entries(doc.components.responses).map(([name, r]) => (
+            <li key={name}>
+              <span className="num font-medium">{name.slice(1)}</span> {r.description}
+            </li>
+          ))}
         </ul>
         <JsonBlock label="ApiError" value={doc.components.schemas.ApiError} />
       </section>
       <section id="webhooks" className="mb-8">
         <h2 className="mb-3 text-lg font-semibold">Webhooks</h2>
-        <p className="mb-3 text-sm text-stone-700">A vendor&apos;s admins add webhooks under Admin → Integrations. The signing secret is shown once, when the webhook is added.</p>
+        <p className="mb-3 text-sm text-stone-700">
+          A vendor&apos;s admins add webhooks under Admin → Integrations. The signing secret is shown once, when the webhook is added.
+        </p>
         <WebhookVerifyExample />
         {Object.entries(doc.webhooks).map(([type, entry]) => {
           const post = (entry as { post: { summary: string; requestBody: { content: { "application/json": { schema: unknown } } } } }).post;
           return (
             <article key={type} id={`event-${type}`} className="mb-4 rounded-lg border border-stone-200 bg-white p-4">
-              <h3 className="font-semibold"><code>{type}</code></h3>
+              <h3 className="font-semibold">
+                <code>{type}</code>
+              </h3>
               <p className="text-sm">{post.summary}.</p>
-              <details><summary className="cursor-pointer text-sm text-stone-600">Body (JSON schema)</summary><JsonBlock value={post.requestBody.content["application/json"].schema} /></details>
+              <details>
+                <summary className="cursor-pointer text-sm text-stone-600">Body (JSON schema)</summary>
+                <JsonBlock value={post.requestBody.content["application/json"].schema} />
+              </details>
             </article>
           );
         })}

@@ -20,11 +20,14 @@ export const saveMachineAction = vendorAction({ permission: "bench.use", schema:
   redirect(`/${vendor.slug}/bench`);
 });
 
-export const deleteMachineAction = vendorAction({ permission: "bench.use", schema: machineDeleteSchema }, async (input, { vendor, user }) => {
-  await deleteMachine({ vendorId: vendor.id, userId: user.id, machineId: input.id });
-  revalidatePath(`/${vendor.slug}/bench`);
-  redirect(`/${vendor.slug}/bench`);
-});
+export const deleteMachineAction = vendorAction(
+  { permission: "bench.use", schema: machineDeleteSchema },
+  async (input, { vendor, user }) => {
+    await deleteMachine({ vendorId: vendor.id, userId: user.id, machineId: input.id });
+    revalidatePath(`/${vendor.slug}/bench`);
+    redirect(`/${vendor.slug}/bench`);
+  },
+);
 
 export const saveSetupAction = vendorAction({ permission: "bench.use", schema: setupActionSchema }, async (input, { vendor, user }) => {
   const { vendor: _slug, ...setup } = input;
@@ -41,7 +44,10 @@ export const setChangeAlertsAction = vendorAction({ permission: "bench.use", sch
   return { ok: true, message: input.enabled === "on" ? "Change alerts are on." : "Change alerts are off." };
 });
 
-const addCutterSchema = z.object({ vendor: z.string().min(1), sku: z.string().trim().min(1, "Type the cutter's SKU.").max(80, "An SKU is at most 80 characters.") });
+const addCutterSchema = z.object({
+  vendor: z.string().min(1),
+  sku: z.string().trim().min(1, "Type the cutter's SKU.").max(80, "An SKU is at most 80 characters."),
+});
 
 export const addMyCutterAction = vendorAction({ permission: "bench.use", schema: addCutterSchema }, async (input, { vendor, user }) => {
   const cutter = await addMyCutter({ vendorId: vendor.id, userId: user.id, sku: input.sku });
@@ -52,9 +58,12 @@ export const addMyCutterAction = vendorAction({ permission: "bench.use", schema:
 
 const removeCutterSchema = z.object({ vendor: z.string().min(1), cutterId: z.uuid() });
 
-export const removeMyCutterAction = vendorAction({ permission: "bench.use", schema: removeCutterSchema }, async (input, { vendor, user }) => {
-  await removeMyCutter({ vendorId: vendor.id, userId: user.id, cutterId: input.cutterId });
-  revalidatePath(`/${vendor.slug}/bench`);
-  revalidatePath(`/${vendor.slug}/library`, "layout");
-  return { ok: true, message: "Removed from your cutters." };
-});
+export const removeMyCutterAction = vendorAction(
+  { permission: "bench.use", schema: removeCutterSchema },
+  async (input, { vendor, user }) => {
+    await removeMyCutter({ vendorId: vendor.id, userId: user.id, cutterId: input.cutterId });
+    revalidatePath(`/${vendor.slug}/bench`);
+    revalidatePath(`/${vendor.slug}/library`, "layout");
+    return { ok: true, message: "Removed from your cutters." };
+  },
+);

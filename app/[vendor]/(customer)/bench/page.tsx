@@ -29,36 +29,62 @@ export default async function BenchPage({ params }: { params: Promise<{ vendor: 
     readUnits(),
   ]);
   const register = (
-    <Link href={`/${vendor.slug}/bench/machines/new`} className="inline-flex min-h-11 items-center rounded bg-accent px-4 font-medium text-accent-ink">
+    <Link
+      href={`/${vendor.slug}/bench/machines/new`}
+      className="inline-flex min-h-11 items-center rounded bg-accent px-4 font-medium text-accent-ink"
+    >
       Register a machine
     </Link>
   );
   return (
     <>
-      <PageHeader title="Bench" lead="Your machines, the setups you saved from sheets (pinned to their version) and how the cuts went." actions={register} />
+      <PageHeader
+        title="Bench"
+        lead="Your machines, the setups you saved from sheets (pinned to their version) and how the cuts went."
+        actions={register}
+      />
       <section aria-labelledby="machines" className="mb-8">
-        <h2 id="machines" className="mb-3 text-lg font-semibold">My machines</h2>
+        <h2 id="machines" className="mb-3 text-lg font-semibold">
+          My machines
+        </h2>
         {machines.length ? (
           <MachineList machines={machines} vendorSlug={vendor.slug} />
         ) : (
-          <EmptyState title="No machines registered yet.">Register your machine to adapt any sheet to its spindle, power and rigidity.</EmptyState>
+          <EmptyState title="No machines registered yet.">
+            Register your machine to adapt any sheet to its spindle, power and rigidity.
+          </EmptyState>
         )}
       </section>
-      <MyCuttersSection vendorSlug={vendor.slug} rows={myCutters} hasMachines={machines.length > 0} units={units} addMyCutterAction={addMyCutterAction} removeMyCutterAction={removeMyCutterAction} />
+      <MyCuttersSection
+        vendorSlug={vendor.slug}
+        rows={myCutters}
+        hasMachines={machines.length > 0}
+        units={units}
+        addMyCutterAction={addMyCutterAction}
+        removeMyCutterAction={removeMyCutterAction}
+      />
       <section aria-labelledby="setups" className="mb-8">
-        <h2 id="setups" className="mb-3 text-lg font-semibold">Saved setups</h2>
+        <h2 id="setups" className="mb-3 text-lg font-semibold">
+          Saved setups
+        </h2>
         {setups.length ? (
           <SetupsTable setups={setups} vendorSlug={vendor.slug} />
         ) : (
           <EmptyState title="No saved setups yet.">
-            Open a sheet in the <Link className="underline" href={`/${vendor.slug}/library`}>Library</Link> and adapt it to your machine.
+            Open a sheet in the{" "}
+            <Link className="underline" href={`/${vendor.slug}/library`}>
+              Library
+            </Link>{" "}
+            and adapt it to your machine.
           </EmptyState>
         )}
       </section>
       <section aria-label="E-mail" className="border-t border-stone-200 pt-4">
         <AlertsToggle setChangeAlertsAction={setChangeAlertsAction} vendorSlug={vendor.slug} enabled={alerts} />
         <p className="mt-2 text-sm">
-          <Link className="underline" href={`/${vendor.slug}/mail-preferences`}>All mail preferences</Link>
+          <Link className="underline" href={`/${vendor.slug}/mail-preferences`}>
+            All mail preferences
+          </Link>
         </p>
       </section>
     </>

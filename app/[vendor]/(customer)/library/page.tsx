@@ -1,10 +1,10 @@
 import Link from "next/link";
 
 import { CachedLibraryIndex } from "@/components/library/cached-library-index";
+import { LibraryIndex } from "@/components/library/library-index";
 import { readUnits } from "@/components/library/read-units";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
-import { LibraryIndex } from "@/components/library/library-index";
 import { can } from "@/lib/auth/permissions";
 import { findShopFilter } from "@/lib/my-cutters/list-shop-sheets";
 
@@ -22,18 +22,41 @@ export default async function LibraryPage({ params, searchParams }: Props) {
   const shop = keeper && q.shop === "mine" ? await findShopFilter({ vendorId: vendor.id, userId: keeper.id }) : null;
   const filters = { cutter: one(q.cutter), material: one(q.material), machineClass: one(q.machineClass) };
   const units = await readUnits();
-  const shopHint = shop && (!shop.cutters || !shop.machines) ? (
-    <p className="mb-3 text-sm text-stone-700">
-      &quot;Fits my shop&quot; needs {!shop.cutters ? "your cutters" : "a registered machine"}: add {!shop.cutters ? "them" : "one"} on your <Link className="underline" href={`/${vendor.slug}/bench`}>Bench</Link>.
-    </p>
-  ) : null;
+  const shopHint =
+    shop && (!shop.cutters || !shop.machines) ? (
+      <p className="mb-3 text-sm text-stone-700">
+        &quot;Fits my shop&quot; needs {!shop.cutters ? "your cutters" : "a registered machine"}: add {!shop.cutters ? "them" : "one"} on
+        your{" "}
+        <Link className="underline" href={`/${vendor.slug}/bench`}>
+          Bench
+        </Link>
+        .
+      </p>
+    ) : null;
   return (
     <>
-      <PageHeader title="Library" lead={`Published recipe sheets from ${vendor.name}: starting-point cutting data per cutter, material and machine class.`} actions={<Link href={`/${vendor.slug}/library/search`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500">Search sheets</Link>} />
+      <PageHeader
+        title="Library"
+        lead={`Published recipe sheets from ${vendor.name}: starting-point cutting data per cutter, material and machine class.`}
+        actions={
+          <Link
+            href={`/${vendor.slug}/library/search`}
+            className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500"
+          >
+            Search sheets
+          </Link>
+        }
+      />
       {shop ? (
         <>
           {shopHint}
-          <LibraryIndex vendorId={vendor.id} vendorSlug={vendor.slug} filters={{ ...filters, cutterIds: shop.cutterIds, machineClassIds: shop.machineClassIds }} units={units} shop={true} />
+          <LibraryIndex
+            vendorId={vendor.id}
+            vendorSlug={vendor.slug}
+            filters={{ ...filters, cutterIds: shop.cutterIds, machineClassIds: shop.machineClassIds }}
+            units={units}
+            shop={true}
+          />
         </>
       ) : (
         <CachedLibraryIndex vendorId={vendor.id} vendorSlug={vendor.slug} filters={filters} units={units} shop={keeper ? false : null} />

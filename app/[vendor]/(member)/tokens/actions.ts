@@ -7,7 +7,10 @@ import { vendorAction } from "@/lib/actions/vendor-action";
 import { createPersonalToken, revokePersonalToken } from "@/lib/auth/personal-access-tokens";
 
 export const createTokenAction = vendorAction(
-  { permission: "tokens.manage", schema: z.object({ vendor: z.string(), name: z.string().trim().min(2, "Name the token, e.g. “lab script”.").max(80) }) },
+  {
+    permission: "tokens.manage",
+    schema: z.object({ vendor: z.string(), name: z.string().trim().min(2, "Name the token, e.g. “lab script”.").max(80) }),
+  },
   async (input, { vendor, user }) => {
     const token = await createPersonalToken({ vendorId: vendor.id, userId: user.id, name: input.name });
     revalidatePath(`/${vendor.slug}/tokens`);

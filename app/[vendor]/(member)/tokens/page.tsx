@@ -3,8 +3,8 @@ import { CreateTokenForm } from "@/components/drafting/create-token-form";
 import { formatDate } from "@/components/library/format-date";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
-import { ROLE_LABELS } from "@/lib/auth/roles";
 import { listPersonalTokens } from "@/lib/auth/personal-access-tokens";
+import { ROLE_LABELS } from "@/lib/auth/roles";
 
 import { createTokenAction, revokeTokenAction } from "./actions";
 
@@ -16,7 +16,15 @@ export default async function TokensPage({ params }: { params: Promise<{ vendor:
   const tokens = user ? await listPersonalTokens({ vendorId: vendor.id, userId: user.id }) : [];
   return (
     <>
-      <PageHeader title="Personal access tokens" lead={<>For scripts that call the {vendor.name} API as you. A token can do what your role ({member ? ROLE_LABELS[member.role] : "—"}) can, in this vendor only.</>} />
+      <PageHeader
+        title="Personal access tokens"
+        lead={
+          <>
+            For scripts that call the {vendor.name} API as you. A token can do what your role ({member ? ROLE_LABELS[member.role] : "—"})
+            can, in this vendor only.
+          </>
+        }
+      />
       <CreateTokenForm vendorSlug={vendor.slug} action={createTokenAction} />
       <h2 className="mb-2 mt-8 text-lg font-semibold">Your tokens</h2>
       {tokens.length === 0 ? (
@@ -27,8 +35,22 @@ export default async function TokensPage({ params }: { params: Promise<{ vendor:
             <li key={t.id} className="flex flex-wrap items-center gap-x-4 gap-y-2 px-4 py-3 text-sm">
               <span className="font-medium">{t.name}</span>
               <span className="num text-stone-600">{t.prefix}…</span>
-              <span className="text-stone-600">created {formatDate(t.createdAt)} · last used {formatDate(t.lastUsedAt)}</span>
-              {t.revokedAt ? <span className="text-stone-700">⊘ revoked {formatDate(t.revokedAt)}</span> : <span className="ml-auto"><ActionForm action={revokeTokenAction} hidden={{ vendor: vendor.slug, id: t.id }} submitLabel="Revoke" variant="danger" label={`Revoke ${t.name}`} /></span>}
+              <span className="text-stone-600">
+                created {formatDate(t.createdAt)} · last used {formatDate(t.lastUsedAt)}
+              </span>
+              {t.revokedAt ? (
+                <span className="text-stone-700">⊘ revoked {formatDate(t.revokedAt)}</span>
+              ) : (
+                <span className="ml-auto">
+                  <ActionForm
+                    action={revokeTokenAction}
+                    hidden={{ vendor: vendor.slug, id: t.id }}
+                    submitLabel="Revoke"
+                    variant="danger"
+                    label={`Revoke ${t.name}`}
+                  />
+                </span>
+              )}
             </li>
           ))}
         </ul>

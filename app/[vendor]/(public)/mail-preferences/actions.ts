@@ -3,9 +3,9 @@
 import { redirect } from "next/navigation";
 import { z } from "zod";
 
-import { MAIL_KINDS, kindsForRole } from "@/lib/mail-preferences/mail-kinds";
-import { saveMailPreferences } from "@/lib/mail-preferences/mail-preferences";
 import { findPreferencesPerson } from "@/lib/mail-preferences/find-preferences-person";
+import { kindsForRole, MAIL_KINDS } from "@/lib/mail-preferences/mail-kinds";
+import { saveMailPreferences } from "@/lib/mail-preferences/mail-preferences";
 
 const inputSchema = z.object({
   vendor: z.string().min(1).max(80),

@@ -2,9 +2,9 @@ import { notFound } from "next/navigation";
 
 import { MailPreferencesForm } from "@/components/mail/mail-preferences-form";
 import { PageHeader } from "@/components/ui/page-header";
-import { MAIL_KIND_TEXTS, kindsForRole, mailKindSchema } from "@/lib/mail-preferences/mail-kinds";
-import { listMailPreferences } from "@/lib/mail-preferences/mail-preferences";
 import { findPreferencesPerson } from "@/lib/mail-preferences/find-preferences-person";
+import { kindsForRole, MAIL_KIND_TEXTS, mailKindSchema } from "@/lib/mail-preferences/mail-kinds";
+import { listMailPreferences } from "@/lib/mail-preferences/mail-preferences";
 
 import { saveMailPreferencesAction } from "./actions";
 
@@ -24,14 +24,32 @@ export default async function MailPreferencesPage({ params, searchParams }: Prop
   const stopped = mailKindSchema.safeParse(one(q.stopped));
   return (
     <>
-      <PageHeader title="Mail preferences" lead={<>Which e-mails {person.vendor.name} sends to <span className="num">{person.email}</span>.</>} />
+      <PageHeader
+        title="Mail preferences"
+        lead={
+          <>
+            Which e-mails {person.vendor.name} sends to <span className="num">{person.email}</span>.
+          </>
+        }
+      />
       <div role="status" className="mb-4 space-y-2">
-        {stopped.success ? <p className="rounded border border-stone-300 bg-stone-100 px-3 py-2">{MAIL_KIND_TEXTS[stopped.data].label}: off. Nothing more of this kind will come.</p> : null}
+        {stopped.success ? (
+          <p className="rounded border border-stone-300 bg-stone-100 px-3 py-2">
+            {MAIL_KIND_TEXTS[stopped.data].label}: off. Nothing more of this kind will come.
+          </p>
+        ) : null}
         {q.saved === "1" ? <p className="rounded border border-stone-300 bg-stone-100 px-3 py-2">✓ Saved.</p> : null}
       </div>
-      <MailPreferencesForm vendorSlug={person.vendor.slug} token={person.viaLink ? token : undefined} kinds={kindsForRole(person.role)} choices={choices} saveMailPreferencesAction={saveMailPreferencesAction} />
+      <MailPreferencesForm
+        vendorSlug={person.vendor.slug}
+        token={person.viaLink ? token : undefined}
+        kinds={kindsForRole(person.role)}
+        choices={choices}
+        saveMailPreferencesAction={saveMailPreferencesAction}
+      />
       <p className="mt-6 max-w-2xl text-sm text-stone-600">
-        Sign-in links, address checks and invitations always come: they are sent only when you ask for them. These choices are for {person.vendor.name} only.
+        Sign-in links, address checks and invitations always come: they are sent only when you ask for them. These choices are for{" "}
+        {person.vendor.name} only.
       </p>
     </>
   );

@@ -4,8 +4,8 @@ import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { z } from "zod";
 
-import type { ActionState } from "@/lib/actions/action-state";
 import { signUpSchema } from "@/content-schema/auth";
+import type { ActionState } from "@/lib/actions/action-state";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
@@ -20,7 +20,8 @@ export async function signUpAction(_prev: ActionState, form: FormData): Promise<
   const values = { name: String(form.get("name") ?? ""), email: String(form.get("email") ?? "") };
   const field = vendorField.safeParse({ vendor: form.get("vendor") });
   const vendor = field.success ? await getVendorBySlug(field.data.vendor) : null;
-  if (!vendor) return { ok: false, message: "This sign-up form names no vendor we know. Open the sign-up page from the vendor's Library.", values };
+  if (!vendor)
+    return { ok: false, message: "This sign-up form names no vendor we know. Open the sign-up page from the vendor's Library.", values };
   const parsed = signUpSchema.safeParse(Object.fromEntries(form.entries()));
   if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error), values };
   try {

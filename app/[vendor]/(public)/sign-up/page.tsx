@@ -5,8 +5,7 @@ import { findMembership } from "@/lib/auth/membership";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
-import { joinAsCustomerAction } from "./actions";
-import { signUpAction } from "./actions";
+import { joinAsCustomerAction, signUpAction } from "./actions";
 
 export const metadata = { title: "Create an account" };
 
@@ -25,8 +24,12 @@ export default async function SignUpPage({ params }: { params: Promise<{ vendor:
         ) : user ? (
           <form action={joinAsCustomerAction}>
             <input type="hidden" name="vendor" value={vendor.slug} />
-            <p className="mb-3">You are signed in as <span className="num">{user.email}</span>.</p>
-            <button type="submit" className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">Join {vendor.name} as a customer</button>
+            <p className="mb-3">
+              You are signed in as <span className="num">{user.email}</span>.
+            </p>
+            <button type="submit" className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">
+              Join {vendor.name} as a customer
+            </button>
           </form>
         ) : (
           <SignUpForm signUpAction={signUpAction} vendor={vendor.slug} />

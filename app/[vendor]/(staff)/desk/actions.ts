@@ -3,7 +3,13 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 
-import { bulkAssignSchema, problemReportSchema, snippetSchema, ticketReplySchema, ticketUpdateSchema } from "@/content-schema/ticket-update";
+import {
+  bulkAssignSchema,
+  problemReportSchema,
+  snippetSchema,
+  ticketReplySchema,
+  ticketUpdateSchema,
+} from "@/content-schema/ticket-update";
 import { vendorAction } from "@/lib/actions/vendor-action";
 import { db } from "@/lib/db/knex";
 import { queueFiltersSchema } from "@/lib/desk/queue-filters";
@@ -48,14 +54,33 @@ export const bulkAssignAction = vendorAction({ permission: "desk.use", schema: b
 });
 
 export const staffReplyAction = vendorAction({ permission: "desk.use", schema: ticketReplySchema }, async (input, { vendor, user }) => {
-  const ticket = await db("tickets").where({ id: input.ticketId, vendor_id: vendor.id }).first<{ customer_id: string } | undefined>("customer_id");
+  const ticket = await db("tickets")
+    .where({ id: input.ticketId, vendor_id: vendor.id })
+    .first<{ customer_id: string } | undefined>("customer_id");
   if (!ticket) throw new NotFound();
   let card = null;
   if (input.cardSheetVersionId) {
-    if (!input.cardMachineId) throw new InvalidInput("Please correct the marked fields.", { cardMachineId: ["Choose the customer's machine to adapt the sheet to."] });
-    card = await buildCard({ vendorId: vendor.id, sheetVersionId: input.cardSheetVersionId, machineId: input.cardMachineId, customerId: ticket.customer_id });
+    if (!input.cardMachineId)
+      throw new InvalidInput("Please correct the marked fields.", {
+        cardMachineId: ["Choose the customer's machine to adapt the sheet to."],
+      });
+    card = await buildCard({
+      vendorId: vendor.id,
+      sheetVersionId: input.cardSheetVersionId,
+      machineId: input.cardMachineId,
+      customerId: ticket.customer_id,
+    });
   }
-  await addStaffMessage({ vendorId: vendor.id, ticketId: input.ticketId, authorId: user.id, body: input.body, visibility: input.visibility, card, attachmentIds: input.attachmentIds, idempotencyKey: input.idempotencyKey });
+  await addStaffMessage({
+    vendorId: vendor.id,
+    ticketId: input.ticketId,
+    authorId: user.id,
+    body: input.body,
+    visibility: input.visibility,
+    card,
+    attachmentIds: input.attachmentIds,
+    idempotencyKey: input.idempotencyKey,
+  });
   revalidatePath(ticketPath(vendor.slug, input.ticketId));
   return { ok: true, message: input.visibility === "note" ? "Note added." : "Reply sent." };
 });

@@ -24,11 +24,31 @@ export default async function DeskPage({ params, searchParams }: Props) {
     listAssignees({ vendorId: vendor.id }),
     listMaterialOptions({ vendorId: vendor.id }),
   ]);
-  const dashboard = <Link href={`/${vendor.slug}/desk/dashboard`} className="inline-flex min-h-9 items-center rounded border border-stone-300 bg-white px-3 text-sm">Dashboard</Link>;
+  const dashboard = (
+    <Link
+      href={`/${vendor.slug}/desk/dashboard`}
+      className="inline-flex min-h-9 items-center rounded border border-stone-300 bg-white px-3 text-sm"
+    >
+      Dashboard
+    </Link>
+  );
   return (
     <>
-      <PageHeader title="Desk" lead="The support queue: tickets by status, priority and response target. It refreshes on its own." actions={dashboard} />
-      <QueueTable bulkAssignAction={bulkAssignAction} saveViewAction={saveViewAction} vendor={vendor.slug} initial={tickets} initialFilters={filters} views={views} assignees={assignees} materials={materials} />
+      <PageHeader
+        title="Desk"
+        lead="The support queue: tickets by status, priority and response target. It refreshes on its own."
+        actions={dashboard}
+      />
+      <QueueTable
+        bulkAssignAction={bulkAssignAction}
+        saveViewAction={saveViewAction}
+        vendor={vendor.slug}
+        initial={tickets}
+        initialFilters={filters}
+        views={views}
+        assignees={assignees}
+        materials={materials}
+      />
     </>
   );
 }

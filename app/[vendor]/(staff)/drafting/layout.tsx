@@ -7,5 +7,13 @@ const guard = areaLayout("sheets.author", "drafting");
 
 export default async function DraftingLayout({ children, params }: { children: ReactNode; params: Promise<{ vendor: string }> }) {
   const { vendor } = await params;
-  return guard({ params, children: (<><DraftingNav vendorSlug={vendor} />{children}</>) });
+  return guard({
+    params,
+    children: (
+      <>
+        <DraftingNav vendorSlug={vendor} />
+        {children}
+      </>
+    ),
+  });
 }

@@ -1,8 +1,8 @@
 import { NextResponse } from "next/server";
 
 import { runCalculation } from "@/lib/adapt/calculate/run-calculation";
-import { withPublic } from "@/lib/http/with-vendor";
 import { readJson } from "@/lib/http/read-json";
+import { withPublic } from "@/lib/http/with-vendor";
 
 const MAX_BODY_BYTES = 16 * 1024;
 
@@ -11,7 +11,8 @@ export const POST = withPublic(
   async (request) => {
     const body = await readJson(request, MAX_BODY_BYTES);
     const outcome = runCalculation(body);
-    if (!outcome.ok) return NextResponse.json({ error: "invalid_input", message: outcome.message, fieldErrors: outcome.errors }, { status: 400 });
+    if (!outcome.ok)
+      return NextResponse.json({ error: "invalid_input", message: outcome.message, fieldErrors: outcome.errors }, { status: 400 });
     return NextResponse.json(outcome.result);
   },
   { limit: 120, windowSeconds: 60 },

@@ -8,10 +8,26 @@ export function feedLimit(s: AdaptState): void {
   const floor = s.input.band.minMm;
   const factor = hexFactor(s, s.radialDepthMm, s.axialDepthMm);
   const target = s.targetChipLoadMm;
-  change(s, "feed-limit", "feedMmMin", "feedRate", target * flutes * s.rpm, "Feed rate is chip load × flutes × spindle speed; with a different speed or chip load the feed changes with them.");
+  change(
+    s,
+    "feed-limit",
+    "feedMmMin",
+    "feedRate",
+    target * flutes * s.rpm,
+    "Feed rate is chip load × flutes × spindle speed; with a different speed or chip load the feed changes with them.",
+  );
   if (s.feedMmMin > maxFeedMmMin) {
-    change(s, "feed-limit", "feedMmMin", "feedRate", maxFeedMmMin, "This feed is faster than your machine can move, so it is held at the machine's maximum.");
-    warn(s, "feed-capped", `The feed is held at your machine's maximum feed rate, ${say(s.input.units, maxFeedMmMin, "feedRate")}.`, [{ name: "maxFeedMmMin", quantity: "feedRate", value: maxFeedMmMin }]);
+    change(
+      s,
+      "feed-limit",
+      "feedMmMin",
+      "feedRate",
+      maxFeedMmMin,
+      "This feed is faster than your machine can move, so it is held at the machine's maximum.",
+    );
+    warn(s, "feed-capped", `The feed is held at your machine's maximum feed rate, ${say(s.input.units, maxFeedMmMin, "feedRate")}.`, [
+      { name: "maxFeedMmMin", quantity: "feedRate", value: maxFeedMmMin },
+    ]);
     const capped = maxFeedMmMin / (flutes * s.rpm);
     if (floor > 0 && capped * factor < floor) {
       // The n at which the capped feed gives the wanted chip again (at least the floor).
@@ -25,7 +41,14 @@ export function feedLimit(s: AdaptState): void {
         "At the capped feed each tooth would take a chip thinner than the material's minimum and rub instead of cut, which heats the part (plastics melt and weld to the tool). The spindle slows down so each tooth takes a full chip again.",
       );
     }
-    change(s, "feed-limit", "chipLoadMm", "chipLoad", maxFeedMmMin / (flutes * s.rpm), "With the feed held at the machine's maximum, each tooth takes a smaller bite.");
+    change(
+      s,
+      "feed-limit",
+      "chipLoadMm",
+      "chipLoad",
+      maxFeedMmMin / (flutes * s.rpm),
+      "With the feed held at the machine's maximum, each tooth takes a smaller bite.",
+    );
   }
   s.maxChipThicknessMm = s.chipLoadMm * factor;
   if (floor > 0 && s.maxChipThicknessMm < floor * (1 - 1e-9)) warnBelowFloor(s);

@@ -19,11 +19,28 @@ export function chipLoadBand(s: AdaptState): void {
   const factor = hexFactor(s, s.radialDepthMm, s.axialDepthMm);
   if (s.maxChipThicknessMm <= maxMm * (1 + 1e-9)) return;
   const { flutes } = s.input.operation;
-  change(s, "chip-load-band", "chipLoadMm", "chipLoad", maxMm / factor, "The chip each tooth would take is above the largest this cutter carries in this material, where a small cutter breaks; the feed per tooth comes down to the band's ceiling.");
-  change(s, "chip-load-band", "feedMmMin", "feedRate", s.chipLoadMm * flutes * s.rpm, "With a smaller chip per tooth the feed comes down with it.");
+  change(
+    s,
+    "chip-load-band",
+    "chipLoadMm",
+    "chipLoad",
+    maxMm / factor,
+    "The chip each tooth would take is above the largest this cutter carries in this material, where a small cutter breaks; the feed per tooth comes down to the band's ceiling.",
+  );
+  change(
+    s,
+    "chip-load-band",
+    "feedMmMin",
+    "feedRate",
+    s.chipLoadMm * flutes * s.rpm,
+    "With a smaller chip per tooth the feed comes down with it.",
+  );
   s.maxChipThicknessMm = maxMm;
   s.targetHexMm = Math.min(s.targetHexMm, maxMm);
-  warn(s, "chip-load-above-maximum", `The chip load is held at the most this cutter carries in this material (${say(units, maxMm, "chipLoad")} at the thickest chip); more would risk breaking it.`, [
-    { name: "maxChipThicknessMm", quantity: "chipLoad", value: maxMm },
-  ]);
+  warn(
+    s,
+    "chip-load-above-maximum",
+    `The chip load is held at the most this cutter carries in this material (${say(units, maxMm, "chipLoad")} at the thickest chip); more would risk breaking it.`,
+    [{ name: "maxChipThicknessMm", quantity: "chipLoad", value: maxMm }],
+  );
 }

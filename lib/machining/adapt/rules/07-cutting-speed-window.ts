@@ -22,8 +22,18 @@ export function cuttingSpeedWindow(s: AdaptState): void {
   const vc = s.cuttingSpeedMpm;
   const d = s.input.operation.diameterMm;
   if (s.cuttingSpeedMpm < window[0] * (1 - 1e-9)) {
-    warn(s, "cutting-speed-below-window", `The cutting speed, ${say(units, vc, "cuttingSpeed")}${where(units, de, d)}, is below the range recommended for this material; expect a rougher finish and shorter tool life, and watch for built-up edge.`, windowValues(vc, window));
+    warn(
+      s,
+      "cutting-speed-below-window",
+      `The cutting speed, ${say(units, vc, "cuttingSpeed")}${where(units, de, d)}, is below the range recommended for this material; expect a rougher finish and shorter tool life, and watch for built-up edge.`,
+      windowValues(vc, window),
+    );
   } else if (s.cuttingSpeedMpm > window[1] * (1 + 1e-9)) {
-    warn(s, "cutting-speed-above-window", `The cutting speed, ${say(units, vc, "cuttingSpeed")}${where(units, de, d)}, is above the range recommended for this material; the tool may overheat (plastics may melt). Lower the spindle speed and the feed with it.`, windowValues(vc, window));
+    warn(
+      s,
+      "cutting-speed-above-window",
+      `The cutting speed, ${say(units, vc, "cuttingSpeed")}${where(units, de, d)}, is above the range recommended for this material; the tool may overheat (plastics may melt). Lower the spindle speed and the feed with it.`,
+      windowValues(vc, window),
+    );
   }
 }

@@ -6,6 +6,13 @@ export function rigidity(s: AdaptState): void {
   const share = Math.min(1, s.input.machine.rigidity / s.input.referenceRigidity);
   const limit = sheetAp * share;
   if (s.axialDepthMm > limit) {
-    change(s, "rigidity", "axialDepthMm", "length", limit, "Your machine is less rigid than the vendor's test machine, so the depth of cut is reduced in proportion to keep chatter and tool load down.");
+    change(
+      s,
+      "rigidity",
+      "axialDepthMm",
+      "length",
+      limit,
+      "Your machine is less rigid than the vendor's test machine, so the depth of cut is reduced in proportion to keep chatter and tool load down.",
+    );
   }
 }

@@ -23,7 +23,11 @@ export function spindlePower(s: AdaptState): void {
   const apBefore = s.axialDepthMm;
   const first = powerAt(s, apBefore);
   if (first === null) {
-    warn(s, "no-cutting-force-data", "This material has no specific cutting force on file, so spindle power, cutting force, deflection and plunge thrust were not checked.");
+    warn(
+      s,
+      "no-cutting-force-data",
+      "This material has no specific cutting force on file, so spindle power, cutting force, deflection and plunge thrust were not checked.",
+    );
     return;
   }
   const units = s.input.units;
@@ -50,16 +54,22 @@ export function spindlePower(s: AdaptState): void {
     if (derated) {
       const rpm = s.rpm;
       const available = s.availablePowerKw;
-      warn(s, "power-limited-at-speed", `At ${Math.round(rpm)} rpm your spindle gives about ${say(units, available, "power")} of its ${say(units, s.input.machine.spindlePowerKw, "power")}; the depth of cut was reduced to fit.`, [
-        { name: "availablePowerKw", quantity: "power", value: s.availablePowerKw },
-      ]);
+      warn(
+        s,
+        "power-limited-at-speed",
+        `At ${Math.round(rpm)} rpm your spindle gives about ${say(units, available, "power")} of its ${say(units, s.input.machine.spindlePowerKw, "power")}; the depth of cut was reduced to fit.`,
+        [{ name: "availablePowerKw", quantity: "power", value: s.availablePowerKw }],
+      );
     }
     const sheetAp = s.input.operation.axialDepthMm;
     if (s.axialDepthMm < MIN_AXIAL_DEPTH_SHARE * sheetAp) {
       const ap = s.axialDepthMm;
-      warn(s, "machine-too-small", `Your spindle is too weak for this operation: the depth of cut had to drop to ${say(units, ap, "length")}, below a tenth of the vendor's. Choose a smaller cutter or a lighter operation.`, [
-        { name: "axialDepthMm", quantity: "length", value: s.axialDepthMm },
-      ]);
+      warn(
+        s,
+        "machine-too-small",
+        `Your spindle is too weak for this operation: the depth of cut had to drop to ${say(units, ap, "length")}, below a tenth of the vendor's. Choose a smaller cutter or a lighter operation.`,
+        [{ name: "axialDepthMm", quantity: "length", value: s.axialDepthMm }],
+      );
     }
     s.meanChipThicknessMm = s.chipLoadMm * meanFactor(s, s.radialDepthMm, s.axialDepthMm);
   }

@@ -56,7 +56,11 @@ export function toolDeflection(s: AdaptState): void {
   s.peakForceN = peakForce(s, s.radialDepthMm, s.chipLoadMm, hexFactor(s, s.radialDepthMm, s.axialDepthMm), radialTerm);
   const given = s.input.stickoutMm;
   if (given === undefined) {
-    warn(s, "no-stickout", "No stick-out was given, so tool deflection was not checked. Enter how far the cutter sticks out of the collet.");
+    warn(
+      s,
+      "no-stickout",
+      "No stick-out was given, so tool deflection was not checked. Enter how far the cutter sticks out of the collet.",
+    );
     return;
   }
   const stickout = Math.max(given, s.input.operation.fluteLengthMm ?? 0);
@@ -76,8 +80,14 @@ export function toolDeflection(s: AdaptState): void {
     { name: "axialDepthMm", quantity: "length" as const, value: s.axialDepthMm * ratio },
     ...(ae === null ? [] : [{ name: "radialDepthMm", quantity: "length" as const, value: ae }]),
   ];
-  const advice = ae === null
-    ? "Shorten the stick-out or cut shallower (see the suggested values); no radial depth the engine will adapt to is light enough at this stick-out."
-    : "Reduce the radial depth, cut shallower or shorten the stick-out (see the suggested values).";
-  warn(s, "deflection-above-limit", `The cutter will bend about ${say(units, s.deflectionMm, "deflection")} at its peak tooth force, more than the limit, which hurts accuracy and finish and can break the tool. ${advice}`, values);
+  const advice =
+    ae === null
+      ? "Shorten the stick-out or cut shallower (see the suggested values); no radial depth the engine will adapt to is light enough at this stick-out."
+      : "Reduce the radial depth, cut shallower or shorten the stick-out (see the suggested values).";
+  warn(
+    s,
+    "deflection-above-limit",
+    `The cutter will bend about ${say(units, s.deflectionMm, "deflection")} at its peak tooth force, more than the limit, which hurts accuracy and finish and can break the tool. ${advice}`,
+    values,
+  );
 }

@@ -4,7 +4,8 @@ import { hasWarning, record, warn, type AdaptState } from "../state";
 
 const RAMPED = new Set(["ramp", "helical", "drilling"]);
 
-const RAMP_ADVICE = "Enter with a ramp or a helix instead of a straight plunge: the cutter then cuts on its side, which takes far less axial force, and allows deeper passes.";
+const RAMP_ADVICE =
+  "Enter with a ramp or a helix instead of a straight plunge: the cutter then cuts on its side, which takes far less axial force, and allows deeper passes.";
 
 /** Ff = A·kc·D·fn^0.8 + B·kc·D² (form of Machinery's Handbook's drilling thrust; A and B calibrated). */
 const thrust = (d: number, kc: number, fn: number) => PLUNGE_THRUST_A * kc * d * fn ** PLUNGE_FEED_EXPONENT + PLUNGE_THRUST_B * kc * d * d;
@@ -24,13 +25,25 @@ export function plungeFeed(s: AdaptState): void {
   const maxFeedMmMin = s.input.machine.maxFeedMmMin;
   const units = s.input.units;
   if (d >= s.input.rampThresholdDiameterMm && !RAMPED.has(kind)) {
-    warn(s, "ramp-entry-recommended", `For a cutter this size, enter with a ramp or a helix rather than a straight plunge: a large cutter needs a lot of axial force to plunge, and a ramp allows deeper cuts.`);
+    warn(
+      s,
+      "ramp-entry-recommended",
+      `For a cutter this size, enter with a ramp or a helix rather than a straight plunge: a large cutter needs a lot of axial force to plunge, and a ramp allows deeper cuts.`,
+    );
   }
   if (plungeFeedMmMin === undefined) return;
   let fn = plungeFeedMmMin / refRpm;
   let feed = fn * s.rpm;
   s.plungeFeedMmMin = plungeFeedMmMin;
-  record(s, "plunge-feed", "plungeFeedMmMin", "feedRate", plungeFeedMmMin, feed, "The plunge keeps the vendor's feed per revolution, so the plunge feed follows the spindle speed.");
+  record(
+    s,
+    "plunge-feed",
+    "plungeFeedMmMin",
+    "feedRate",
+    plungeFeedMmMin,
+    feed,
+    "The plunge keeps the vendor's feed per revolution, so the plunge feed follows the spindle speed.",
+  );
   const kc = s.input.force?.kc11Nmm2;
   const plungeOnly = s.input.entryCapability === "plunge-only";
   if (kc !== undefined) {
@@ -57,20 +70,48 @@ export function plungeFeed(s: AdaptState): void {
     if (fn > fnMax) {
       fn = fnMax;
       const z = zText(s);
-      record(s, "plunge-feed", "plungeFeedMmMin", "feedRate", feed, fn * s.rpm, `Pushing the cutter straight down at this feed would take more force than your Z axis gives (${z}); a light Z axis stalls or loses steps, so the feed per revolution is lowered until the thrust fits.`);
+      record(
+        s,
+        "plunge-feed",
+        "plungeFeedMmMin",
+        "feedRate",
+        feed,
+        fn * s.rpm,
+        `Pushing the cutter straight down at this feed would take more force than your Z axis gives (${z}); a light Z axis stalls or loses steps, so the feed per revolution is lowered until the thrust fits.`,
+      );
       feed = fn * s.rpm;
       const held = feed;
-      warn(s, "plunge-thrust-limited", `The plunge feed is held to ${say(units, held, "feedRate")} by your Z axis thrust, ${z}.`, [
-        { name: "plungeFeedMmMin", quantity: "feedRate", value: feed },
-        { name: "zThrustN", quantity: "force", value: zThrustN },
-      ], "machine.zThrustN");
+      warn(
+        s,
+        "plunge-thrust-limited",
+        `The plunge feed is held to ${say(units, held, "feedRate")} by your Z axis thrust, ${z}.`,
+        [
+          { name: "plungeFeedMmMin", quantity: "feedRate", value: feed },
+          { name: "zThrustN", quantity: "force", value: zThrustN },
+        ],
+        "machine.zThrustN",
+      );
       if (!hasWarning(s, "ramp-entry-recommended")) {
-        warn(s, "ramp-entry-recommended", plungeOnly ? `${RAMP_ADVICE} Your CAM can only plunge straight; if it can be set to ramp, this cut gets faster and safer.` : RAMP_ADVICE);
+        warn(
+          s,
+          "ramp-entry-recommended",
+          plungeOnly
+            ? `${RAMP_ADVICE} Your CAM can only plunge straight; if it can be set to ramp, this cut gets faster and safer.`
+            : RAMP_ADVICE,
+        );
       }
     }
   }
   if (feed > maxFeedMmMin) {
-    record(s, "plunge-feed", "plungeFeedMmMin", "feedRate", feed, maxFeedMmMin, "This plunge feed is faster than your machine can move, so it is held at the machine's maximum.");
+    record(
+      s,
+      "plunge-feed",
+      "plungeFeedMmMin",
+      "feedRate",
+      feed,
+      maxFeedMmMin,
+      "This plunge feed is faster than your machine can move, so it is held at the machine's maximum.",
+    );
     feed = maxFeedMmMin;
     fn = feed / s.rpm;
   }

@@ -1,7 +1,7 @@
 import { say } from "../message-units";
 import { hasWarning, hexFactor, meanFactor, warn, type AdaptState } from "../state";
-import { cuttingSpeedWindow } from "./07-cutting-speed-window";
 import { warnBelowFloor } from "./05-feed-limit";
+import { cuttingSpeedWindow } from "./07-cutting-speed-window";
 
 /**
  * Rule 12: the refusals (cutter outside 0.1–100 mm, ap above the flute length, stick-out above
@@ -14,9 +14,13 @@ export function sanityLimits(s: AdaptState): void {
   if (given !== undefined && fluteLengthMm !== undefined && given < fluteLengthMm * (1 - 1e-9)) {
     const units = s.input.units;
     const field = s.input.overrides.stickoutMm === undefined ? "operation.stickoutMm" : "overrides.stickoutMm";
-    warn(s, "stickout-below-flute-length", `The stick-out (${say(units, given, "length")}) is shorter than the flute length (${say(units, fluteLengthMm, "length")}); the collet cannot grip the flutes, so deflection was judged at the flute length.`, [
-      { name: "stickoutMm", quantity: "length", value: fluteLengthMm },
-    ], field);
+    warn(
+      s,
+      "stickout-below-flute-length",
+      `The stick-out (${say(units, given, "length")}) is shorter than the flute length (${say(units, fluteLengthMm, "length")}); the collet cannot grip the flutes, so deflection was judged at the flute length.`,
+      [{ name: "stickoutMm", quantity: "length", value: fluteLengthMm }],
+      field,
+    );
   }
   s.maxChipThicknessMm = s.chipLoadMm * hexFactor(s, s.radialDepthMm, s.axialDepthMm);
   s.meanChipThicknessMm = s.chipLoadMm * meanFactor(s, s.radialDepthMm, s.axialDepthMm);

@@ -1,4 +1,4 @@
-import { type ChildProcess, execFileSync, spawn } from "node:child_process";
+import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
@@ -18,14 +18,33 @@ const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 export async function startMailDev(): Promise<MailDev> {
   const web = `http://127.0.0.1:${faultMailDevPort()}`;
   // An earlier file's MailDev may still be letting go of the ports.
-  for (let i = 0; i < 40 && (await fetch(`${web}/api/healthz`).then(() => true).catch(() => false)); i++) await sleep(250);
+  for (
+    let i = 0;
+    i < 40 &&
+    (await fetch(`${web}/api/healthz`)
+      .then(() => true)
+      .catch(() => false));
+    i++
+  )
+    await sleep(250);
   const child: ChildProcess = spawn(
     path.join(root, "node_modules/.bin/maildev"),
-    ["--ip", "127.0.0.1", "--smtp", String(faultSmtpPort()), "--web", String(faultMailDevPort()), "--mail-directory", mkdtempSync(path.join(tmpdir(), "fault-maildev-"))],
+    [
+      "--ip",
+      "127.0.0.1",
+      "--smtp",
+      String(faultSmtpPort()),
+      "--web",
+      String(faultMailDevPort()),
+      "--mail-directory",
+      mkdtempSync(path.join(tmpdir(), "fault-maildev-")),
+    ],
     { stdio: "ignore" },
   );
   for (let i = 0; i < 60; i++) {
-    const up = await fetch(`${web}/api/healthz`).then((r) => r.ok).catch(() => false);
+    const up = await fetch(`${web}/api/healthz`)
+      .then((r) => r.ok)
+      .catch(() => false);
     if (up) break;
     await sleep(250);
   }
@@ -43,7 +62,10 @@ export async function startMailDev(): Promise<MailDev> {
 }
 
 /** Poll until `check` is true or the time is up; returns whether it became true. */
-export async function waitFor(check: () => Promise<boolean>, { timeoutMs, intervalMs = 500 }: { timeoutMs: number; intervalMs?: number }): Promise<boolean> {
+export async function waitFor(
+  check: () => Promise<boolean>,
+  { timeoutMs, intervalMs = 500 }: { timeoutMs: number; intervalMs?: number },
+): Promise<boolean> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     if (await check().catch(() => false)) return true;

@@ -58,7 +58,9 @@ describe("buildSheetDocument", () => {
 
 describe("index text", () => {
   it("strips MDX to words", () => {
-    expect(mdxToPlainText('---\na: 1\n---\n## Hold *flat*\n\n<Caution kind="dust">Run **extraction**</Caution>\n{1+1}')).toBe("Hold flat Run extraction");
+    expect(mdxToPlainText('---\na: 1\n---\n## Hold *flat*\n\n<Caution kind="dust">Run **extraction**</Caution>\n{1+1}')).toBe(
+      "Hold flat Run extraction",
+    );
   });
 
   it("lists the short fields' words once, folded, with the operations' trade words", () => {

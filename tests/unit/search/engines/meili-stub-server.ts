@@ -51,9 +51,16 @@ export async function startMeiliStub() {
       polls.set(uid, seen);
       const final = taskStatus.get(uid);
       if (!final) return send(404, { message: "no task", code: "task_not_found" });
-      return send(200, { uid, indexUid: "swarfbook_search", type: final.type, status: seen === 1 ? "processing" : final.status, error: seen === 1 ? null : final.error });
+      return send(200, {
+        uid,
+        indexUid: "swarfbook_search",
+        type: final.type,
+        status: seen === 1 ? "processing" : final.status,
+        error: seen === 1 ? null : final.error,
+      });
     }
-    if (req.method === "POST" && url.pathname === "/multi-search") return send(200, searchReply(body as { queries: { filter?: string }[] }));
+    if (req.method === "POST" && url.pathname === "/multi-search")
+      return send(200, searchReply(body as { queries: { filter?: string }[] }));
     send(404, { message: "not stubbed", code: "not_stubbed" });
   });
   await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));

@@ -1,5 +1,4 @@
 import { randomUUID } from "node:crypto";
-
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 
 import { buildMeiliFilter, quote, vendorFilter } from "@/search/engines/meilisearch/meili-filter";
@@ -30,7 +29,12 @@ describe("Meilisearch engine against a loopback stub", () => {
     await e.configure();
     await e.configure();
     const [create, settings] = stub.requests.filter((r) => r.method !== "GET");
-    expect(create).toMatchObject({ method: "POST", path: "/indexes", body: { uid: "sbk_test", primaryKey: "id" }, auth: "Bearer test-key" });
+    expect(create).toMatchObject({
+      method: "POST",
+      path: "/indexes",
+      body: { uid: "sbk_test", primaryKey: "id" },
+      auth: "Bearer test-key",
+    });
     expect(settings.method).toBe("PATCH");
     expect(settings.path).toBe("/indexes/sbk_test/settings");
     expect(settings.body).toEqual(meiliSettings());
@@ -48,7 +52,12 @@ describe("Meilisearch engine against a loopback stub", () => {
     expect(s.synonyms?.acrylic).toContain("pmma");
     expect(s.synonyms?.oak).toContain("hardwood");
     expect(s.synonyms?.hardwood ?? []).not.toContain("oak");
-    expect(s.typoTolerance).toEqual({ enabled: true, minWordSizeForTypos: { oneTypo: 5, twoTypos: 9 }, disableOnAttributes: ["cutterSku"], disableOnNumbers: true });
+    expect(s.typoTolerance).toEqual({
+      enabled: true,
+      minWordSizeForTypos: { oneTypo: 5, twoTypos: 9 },
+      disableOnAttributes: ["cutterSku"],
+      disableOnNumbers: true,
+    });
   });
 
   it("writes documents under the vendor they are upserted for", async () => {
@@ -68,7 +77,10 @@ describe("Meilisearch engine against a loopback stub", () => {
     expect(del.body).toEqual({ filter: `vendorId = "${vendorId}" AND id IN ["sheet-1", "x\\" OR vendorId EXISTS"]` });
     stub.requests.length = 0;
     await e.replaceVendor(vendorId, [sheetDoc()]);
-    expect(stub.requests.filter((r) => r.method === "POST").map((r) => r.path)).toEqual(["/indexes/sbk_test/documents/delete", "/indexes/sbk_test/documents"]);
+    expect(stub.requests.filter((r) => r.method === "POST").map((r) => r.path)).toEqual([
+      "/indexes/sbk_test/documents/delete",
+      "/indexes/sbk_test/documents",
+    ]);
   });
 
   it("a failed task rejects the write, so the job retries", async () => {
@@ -82,11 +94,29 @@ describe("Meilisearch engine against a loopback stub", () => {
     const doc = sheetDoc({ vendorId });
     stub.onSearch(() => ({
       results: [
-        { indexUid: "sbk_test", hits: [{ ...doc, body: undefined, _rankingScore: 0.9 }], query: "jig", processingTimeMs: 1, hitsPerPage: 20, page: 1, totalPages: 1, totalHits: 1, facetDistribution: { operations: { slotting: 1, profile: 3 } } },
+        {
+          indexUid: "sbk_test",
+          hits: [{ ...doc, body: undefined, _rankingScore: 0.9 }],
+          query: "jig",
+          processingTimeMs: 1,
+          hitsPerPage: 20,
+          page: 1,
+          totalPages: 1,
+          totalHits: 1,
+          facetDistribution: { operations: { slotting: 1, profile: 3 } },
+        },
         { indexUid: "sbk_test", hits: [], query: "", processingTimeMs: 1, limit: 5, offset: 0, estimatedTotalHits: 0 },
       ],
     }));
-    const result = await engine().search(query({ words: ["jig"], filters: { materialKeys: ["acrylic", "acrylic-cast"], diameterMm: 3.175, operations: ["slotting"], flutes: 1 }, boosts: { skus: ["T-SF-3175"] }, page: 2, perPage: 10 }));
+    const result = await engine().search(
+      query({
+        words: ["jig"],
+        filters: { materialKeys: ["acrylic", "acrylic-cast"], diameterMm: 3.175, operations: ["slotting"], flutes: 1 },
+        boosts: { skus: ["T-SF-3175"] },
+        page: 2,
+        perPage: 10,
+      }),
+    );
     const body = stub.requests.find((r) => r.path === "/multi-search")!.body as { queries: Record<string, unknown>[] };
     expect(body.queries[0]).toMatchObject({
       indexUid: "sbk_test",
@@ -99,14 +129,19 @@ describe("Meilisearch engine against a loopback stub", () => {
     expect(body.queries[1]).toMatchObject({ filter: `vendorId = "${vendorId}" AND kind = "cutter" AND cutterSku IN ["T-SF-3175"]` });
     expect(result.total).toBe(1);
     expect(result.hits[0].doc.id).toBe(doc.id);
-    expect(result.facets.operations).toEqual([{ value: "profile", count: 3 }, { value: "slotting", count: 1 }]);
+    expect(result.facets.operations).toEqual([
+      { value: "profile", count: 3 },
+      { value: "slotting", count: 1 },
+    ]);
   });
 });
 
 describe("filter expressions", () => {
   it("quotes values so none can close the string", () => {
     expect(quote('a"b\\')).toBe('"a\\"b\\\\"');
-    expect(buildMeiliFilter(vendorId, "sheet", { machineClass: 'x" OR vendorId != "' })).toBe(`vendorId = "${vendorId}" AND kind = "sheet" AND machineClass = "x\\" OR vendorId != \\""`);
+    expect(buildMeiliFilter(vendorId, "sheet", { machineClass: 'x" OR vendorId != "' })).toBe(
+      `vendorId = "${vendorId}" AND kind = "sheet" AND machineClass = "x\\" OR vendorId != \\""`,
+    );
   });
 
   it("refuses a vendor id that is not a UUID and numbers that are not finite", () => {

@@ -31,7 +31,12 @@ describe("tsquery text", () => {
 
 describe("the search statement", () => {
   it("binds the vendor first and every value as a parameter", () => {
-    const { sql, bindings } = buildSearchSql({ ...base, words: ["x'); drop table sheets; --"], filters: { materialKeys: ["acrylic"], diameterMm: 3.175 }, boosts: { skus: ["NB-SF-3175"] } });
+    const { sql, bindings } = buildSearchSql({
+      ...base,
+      words: ["x'); drop table sheets; --"],
+      filters: { materialKeys: ["acrylic"], diameterMm: 3.175 },
+      boosts: { skus: ["NB-SF-3175"] },
+    });
     expect(sql).not.toContain("drop table");
     expect(placeholders(sql)).toBe(bindings.length);
     expect(sql).toMatch(/d\.vendor_id = \?/);
@@ -61,7 +66,15 @@ describe("sql fragments", () => {
 });
 
 describe("search steps in one statement", () => {
-  const step = (filters: EngineQuery["filters"]): EngineQuery => ({ vendorId: "00000000-0000-4000-8000-000000000001", words: ["jig"], alternatives: [], boosts: {}, filters, page: 1, perPage: 20 });
+  const step = (filters: EngineQuery["filters"]): EngineQuery => ({
+    vendorId: "00000000-0000-4000-8000-000000000001",
+    words: ["jig"],
+    alternatives: [],
+    boosts: {},
+    filters,
+    page: 1,
+    perPage: 20,
+  });
 
   it("is the first step's own statement when there is one step", () => {
     const only = step({ flutes: 2 });
@@ -109,7 +122,12 @@ describe("the widest bound of relaxed steps", () => {
   });
 
   it("drops a part some step lacks, and operations no step shares", () => {
-    expect(widestConditions([{ flutes: 2, operations: ["ramp"] }, { cornerForms: ["ball"], operations: ["slotting"] }])).toEqual([]);
+    expect(
+      widestConditions([
+        { flutes: 2, operations: ["ramp"] },
+        { cornerForms: ["ball"], operations: ["slotting"] },
+      ]),
+    ).toEqual([]);
     expect(widestConditions([{ flutes: 2 }, { flutes: 3 }]).map((c) => c.bindings)).toEqual([[[2, 3]]]);
   });
 });

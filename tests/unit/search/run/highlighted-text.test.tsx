@@ -14,7 +14,16 @@ describe("HighlightedText", () => {
   });
 
   it("skips ranges that overlap or run past the text instead of garbling it", () => {
-    const html = renderToStaticMarkup(<HighlightedText text="abcdef" ranges={[[0, 2], [1, 3], [4, 99]]} />);
+    const html = renderToStaticMarkup(
+      <HighlightedText
+        text="abcdef"
+        ranges={[
+          [0, 2],
+          [1, 3],
+          [4, 99],
+        ]}
+      />,
+    );
     expect(html).toBe('<mark class="rounded-sm bg-amber-100 px-0.5 text-inherit">ab</mark><span>cdef</span>');
   });
 });

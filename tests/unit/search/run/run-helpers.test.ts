@@ -35,14 +35,23 @@ describe("typo correction", () => {
 
 describe("highlight ranges", () => {
   it("finds terms at word starts, ignoring case and accents, and merges overlaps", () => {
-    expect(highlightRanges("Cast acrylic, 1/8 in", ["acrylic", "ACRY", "1/8"])).toEqual([[5, 12], [14, 17]]);
+    expect(highlightRanges("Cast acrylic, 1/8 in", ["acrylic", "ACRY", "1/8"])).toEqual([
+      [5, 12],
+      [14, 17],
+    ]);
     expect(highlightRanges("Acrylique coulé", ["coule"])).toEqual([[10, 15]]);
     expect(highlightRanges("polyacrylic", ["acrylic"])).toEqual([]);
   });
 
   it("folds accented and upper-case text and terms alike, with offsets into the original text", () => {
-    expect(highlighter(["Coulé", "acrylique"])("ACRYLIQUE COULÉ")).toEqual([[0, 9], [10, 15]]);
-    expect(highlighter(["cafe"])("Café Ångström cafe")).toEqual([[0, 4], [14, 18]]);
+    expect(highlighter(["Coulé", "acrylique"])("ACRYLIQUE COULÉ")).toEqual([
+      [0, 9],
+      [10, 15],
+    ]);
+    expect(highlighter(["cafe"])("Café Ångström cafe")).toEqual([
+      [0, 4],
+      [14, 18],
+    ]);
   });
 
   it("returns only offsets, never markup, so `<script>` in a title stays text", () => {
@@ -62,7 +71,11 @@ describe("search plan", () => {
 
   it("widens a narrow material to its wider material before giving it up", () => {
     const plan = planSearch(parseQuery("extruded pmma"));
-    expect(plan.steps.map((s) => s.filters.materialKeys ?? s.filters.materialGroups)).toEqual([["acrylic-extruded"], ["acrylic", "acrylic-cast", "acrylic-extruded"], ["plastics"]]);
+    expect(plan.steps.map((s) => s.filters.materialKeys ?? s.filters.materialGroups)).toEqual([
+      ["acrylic-extruded"],
+      ["acrylic", "acrylic-cast", "acrylic-extruded"],
+      ["plastics"],
+    ]);
   });
 
   it("drops one kind before two, so “1/8 mdf ball” keeps the ball nose when only the diameter fails", () => {

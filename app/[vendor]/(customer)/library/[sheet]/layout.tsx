@@ -4,7 +4,13 @@ import type { ReactNode } from "react";
 import { loadLibrarySheet } from "@/components/library/load-library-sheet";
 
 // The sheet is looked up here, above any loading boundary, so an unknown sheet is a real 404.
-export default async function SheetLayout({ children, params }: { children: ReactNode; params: Promise<{ vendor: string; sheet: string }> }) {
+export default async function SheetLayout({
+  children,
+  params,
+}: {
+  children: ReactNode;
+  params: Promise<{ vendor: string; sheet: string }>;
+}) {
   const { vendor, sheet } = await params;
   if (!(await loadLibrarySheet(vendor, sheet))) notFound();
   return children;

@@ -15,20 +15,35 @@ export default async function LibrarySearchPage({ params, searchParams }: Props)
   const { vendor: slug } = await params;
   const raw = await searchParams;
   const query = Object.fromEntries(Object.entries(raw).flatMap(([k, v]) => (typeof v === "string" ? [[k, v]] : [])));
-  const { vendor } = await requirePageAccess(slug, "library.read", `/${slug}/library/search${searchParamsToQuery(query) ? `?${searchParamsToQuery(query)}` : ""}`);
+  const { vendor } = await requirePageAccess(
+    slug,
+    "library.read",
+    `/${slug}/library/search${searchParamsToQuery(query) ? `?${searchParamsToQuery(query)}` : ""}`,
+  );
   // A malformed link still opens the page: unreadable parameters are dropped, not refused.
   const parsed = searchParamsSchema.safeParse(query);
   const p = parsed.success ? parsed.data : { q: typeof query.q === "string" ? query.q.slice(0, 2000) : "" };
   const first = await runSearch(getSearchEngine(), {
     vendorId: vendor.id,
     q: p.q,
-    filters: parsed.success ? { material: parsed.data.material, materialGroup: parsed.data.materialGroup, operation: parsed.data.operation, diameterMm: parsed.data.diameterMm, flutes: parsed.data.flutes } : {},
+    filters: parsed.success
+      ? {
+          material: parsed.data.material,
+          materialGroup: parsed.data.materialGroup,
+          operation: parsed.data.operation,
+          diameterMm: parsed.data.diameterMm,
+          flutes: parsed.data.flutes,
+        }
+      : {},
     page: parsed.success ? parsed.data.page : 1,
   });
   const key = searchApiUrl(vendor.slug, searchParamsToQuery(parsed.success ? { ...parsed.data } : { q: p.q }));
   return (
     <>
-      <PageHeader title="Search the Library" lead={`Type a cutter size, a material and a cut, e.g. “1/8 acrylic slot”. Results from ${vendor.name}'s published sheets.`} />
+      <PageHeader
+        title="Search the Library"
+        lead={`Type a cutter size, a material and a cut, e.g. “1/8 acrylic slot”. Results from ${vendor.name}'s published sheets.`}
+      />
       <SearchPageShell fallbackKey={key} fallback={first}>
         <SearchPageClient vendorSlug={vendor.slug} />
       </SearchPageShell>

@@ -23,7 +23,10 @@ export default async function NewTicketPage({ params, searchParams }: Props) {
   ]);
   return (
     <>
-      <PageHeader title="New ticket" lead="Ask the support team. Say which cutter, material and machine, and add photos of the chips and the finish." />
+      <PageHeader
+        title="New ticket"
+        lead="Ask the support team. Say which cutter, material and machine, and add photos of the chips and the finish."
+      />
       <NewTicketForm
         createTicketAction={createTicketAction}
         vendor={vendor.slug}

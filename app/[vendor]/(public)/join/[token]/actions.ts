@@ -1,11 +1,11 @@
 "use server";
 
+import { acceptInvitationSchema } from "@/content-schema/members";
 import type { ActionState } from "@/lib/actions/action-state";
 import { getSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
 import { acceptInvitation } from "@/lib/members/accept-invitation";
-import { acceptInvitationSchema } from "@/content-schema/members";
 import { getVendorBySlug } from "@/lib/vendors/get-vendor";
 
 export type AcceptedInvitation = { email: string; created: boolean };
@@ -17,7 +17,13 @@ export async function acceptInvitationAction(_prev: ActionState, form: FormData)
   if (!vendor) return { ok: false, message: "Not found." };
   const user = await getSessionUser();
   try {
-    const result = await acceptInvitation({ vendorId: vendor.id, token: parsed.data.token, name: parsed.data.name, password: parsed.data.password, sessionUserId: user?.id ?? null });
+    const result = await acceptInvitation({
+      vendorId: vendor.id,
+      token: parsed.data.token,
+      name: parsed.data.name,
+      password: parsed.data.password,
+      sessionUserId: user?.id ?? null,
+    });
     return { ok: true, message: `Welcome. You joined ${vendor.name}.`, data: { email: result.email, created: result.created } };
   } catch (error) {
     if (error instanceof DomainError) return { ok: false, message: error.message, errors: error.fieldErrors };

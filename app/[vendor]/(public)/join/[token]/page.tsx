@@ -43,14 +43,25 @@ export default async function JoinPage({ params }: { params: Promise<{ vendor: s
         {mustSignIn ? (
           <div className="space-y-3 rounded-lg border border-stone-200 bg-white p-5">
             <p>
-              There is already a Swarfbook account for <span className="num">{invitation.email}</span>. Sign in as it to accept;
-              you come back here afterwards.
+              There is already a Swarfbook account for <span className="num">{invitation.email}</span>. Sign in as it to accept; you come
+              back here afterwards.
             </p>
-            {user ? <p className="text-sm text-stone-700">You are signed in as <span className="num">{user.email}</span>, another account.</p> : null}
-            <Link href={signInHref} className="inline-block min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">Sign in to accept</Link>
+            {user ? (
+              <p className="text-sm text-stone-700">
+                You are signed in as <span className="num">{user.email}</span>, another account.
+              </p>
+            ) : null}
+            <Link href={signInHref} className="inline-block min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">
+              Sign in to accept
+            </Link>
           </div>
         ) : (
-          <AcceptInvitationForm acceptInvitationAction={acceptInvitationAction} vendor={vendor.slug} token={token} newAccount={accountId === null} />
+          <AcceptInvitationForm
+            acceptInvitationAction={acceptInvitationAction}
+            vendor={vendor.slug}
+            token={token}
+            newAccount={accountId === null}
+          />
         )}
       </div>
     </div>

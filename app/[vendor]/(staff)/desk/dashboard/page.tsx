@@ -21,28 +21,72 @@ export default async function DeskDashboardPage({ params }: { params: Promise<{ 
   const targets = vendor.settings.firstResponseHours;
   return (
     <>
-      <PageHeader title="Desk dashboard" lead="Open tickets, response times and which sheet versions bring questions." actions={<Link href={`/${vendor.slug}/desk`} className="underline">Back to the queue</Link>} />
+      <PageHeader
+        title="Desk dashboard"
+        lead="Open tickets, response times and which sheet versions bring questions."
+        actions={
+          <Link href={`/${vendor.slug}/desk`} className="underline">
+            Back to the queue
+          </Link>
+        }
+      />
       <dl className="mb-8 grid gap-4 sm:grid-cols-3">
-        <div className="rounded-lg border border-stone-200 bg-white p-4"><dt className="text-sm text-stone-600">Open tickets</dt><dd className="num text-3xl">{open}</dd></div>
-        <div className="rounded-lg border border-stone-200 bg-white p-4"><dt className="text-sm text-stone-600">Overdue for a first reply</dt><dd className={`num text-3xl ${stats.overdue ? "text-red-800" : ""}`}>{stats.overdue ? <span aria-hidden>⚠ </span> : null}{stats.overdue}</dd></div>
-        <div className="rounded-lg border border-stone-200 bg-white p-4"><dt className="text-sm text-stone-600">Median first reply (90 days, {stats.answeredCount} tickets)</dt><dd className="num text-3xl">{stats.medianFirstResponseHours == null ? "—" : hours(stats.medianFirstResponseHours)}</dd></div>
+        <div className="rounded-lg border border-stone-200 bg-white p-4">
+          <dt className="text-sm text-stone-600">Open tickets</dt>
+          <dd className="num text-3xl">{open}</dd>
+        </div>
+        <div className="rounded-lg border border-stone-200 bg-white p-4">
+          <dt className="text-sm text-stone-600">Overdue for a first reply</dt>
+          <dd className={`num text-3xl ${stats.overdue ? "text-red-800" : ""}`}>
+            {stats.overdue ? <span aria-hidden>⚠ </span> : null}
+            {stats.overdue}
+          </dd>
+        </div>
+        <div className="rounded-lg border border-stone-200 bg-white p-4">
+          <dt className="text-sm text-stone-600">Median first reply (90 days, {stats.answeredCount} tickets)</dt>
+          <dd className="num text-3xl">{stats.medianFirstResponseHours == null ? "—" : hours(stats.medianFirstResponseHours)}</dd>
+        </div>
       </dl>
       <section className="mb-8" aria-labelledby="by-status">
-        <h2 id="by-status" className="mb-2 text-lg font-semibold">Open by status</h2>
+        <h2 id="by-status" className="mb-2 text-lg font-semibold">
+          Open by status
+        </h2>
         <ul className="flex flex-wrap gap-4 text-sm">
-          {stats.openByStatus.map((s) => <li key={s.status}>{ticketStatusLabels[s.status as TicketStatus] ?? s.status}: <span className="num">{s.count}</span></li>)}
+          {stats.openByStatus.map((s) => (
+            <li key={s.status}>
+              {ticketStatusLabels[s.status as TicketStatus] ?? s.status}: <span className="num">{s.count}</span>
+            </li>
+          ))}
           {stats.openByStatus.length === 0 ? <li>No open tickets.</li> : null}
         </ul>
-        <p className="mt-2 text-sm text-stone-600">First-reply targets: <span className="num">urgent {targets.urgent}&nbsp;h, high {targets.high}&nbsp;h, normal {targets.normal}&nbsp;h, low {targets.low}&nbsp;h</span>.</p>
+        <p className="mt-2 text-sm text-stone-600">
+          First-reply targets:{" "}
+          <span className="num">
+            urgent {targets.urgent}&nbsp;h, high {targets.high}&nbsp;h, normal {targets.normal}&nbsp;h, low {targets.low}&nbsp;h
+          </span>
+          .
+        </p>
       </section>
       <section aria-labelledby="per-version">
-        <h2 id="per-version" className="mb-2 text-lg font-semibold">Tickets per sheet version</h2>
+        <h2 id="per-version" className="mb-2 text-lg font-semibold">
+          Tickets per sheet version
+        </h2>
         <TicketsPerVersionChart data={stats.perSheetVersion} />
       </section>
       <section className="mt-8" aria-labelledby="snippets">
-        <h2 id="snippets" className="mb-2 text-lg font-semibold">Reply snippets</h2>
+        <h2 id="snippets" className="mb-2 text-lg font-semibold">
+          Reply snippets
+        </h2>
         <ul className="mb-4 list-disc pl-6 text-sm">
-          {snippets.map((s) => <li key={s.id}><strong>{s.title}</strong>: <span className="text-stone-600">{s.body.slice(0, 120)}{s.body.length > 120 ? "…" : ""}</span></li>)}
+          {snippets.map((s) => (
+            <li key={s.id}>
+              <strong>{s.title}</strong>:{" "}
+              <span className="text-stone-600">
+                {s.body.slice(0, 120)}
+                {s.body.length > 120 ? "…" : ""}
+              </span>
+            </li>
+          ))}
         </ul>
         <SnippetForm saveSnippetAction={saveSnippetAction} vendor={vendor.slug} />
       </section>

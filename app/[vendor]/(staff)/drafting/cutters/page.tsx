@@ -13,8 +13,12 @@ export default async function CuttersPage({ params }: { params: Promise<{ vendor
   const cutters = await listCutters({ vendorId: vendor.id });
   const actions = (
     <>
-      <Link href={`/${slug}/drafting/cutters/import`} className="min-h-11 rounded border border-stone-300 bg-white px-4 py-2 font-medium">Import CSV</Link>
-      <Link href={`/${slug}/drafting/cutters/new`} className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">New cutter</Link>
+      <Link href={`/${slug}/drafting/cutters/import`} className="min-h-11 rounded border border-stone-300 bg-white px-4 py-2 font-medium">
+        Import CSV
+      </Link>
+      <Link href={`/${slug}/drafting/cutters/new`} className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">
+        New cutter
+      </Link>
     </>
   );
   return (

@@ -16,14 +16,20 @@ const onFamily = z.object({ vendor: z.string(), family: catalogueSlugSchema });
 const onBatch = onFamily.extend({ batch: z.coerce.number().int().positive() });
 const familyPath = (vendor: string, family: string, rest = "") => `/${vendor}/drafting/families/${family}${rest}`;
 
-export const createFamilyAction = vendorAction({ permission: "sheets.author", schema: z.intersection(z.object({ vendor: z.string() }), familyFormSchema) }, async (input, { vendor, user }) => {
-  const { rules, ...definition } = input;
-  await createFamily({ vendorId: vendor.id, userId: user.id, definition, rules });
-  redirect(familyPath(vendor.slug, definition.slug));
-});
+export const createFamilyAction = vendorAction(
+  { permission: "sheets.author", schema: z.intersection(z.object({ vendor: z.string() }), familyFormSchema) },
+  async (input, { vendor, user }) => {
+    const { rules, ...definition } = input;
+    await createFamily({ vendorId: vendor.id, userId: user.id, definition, rules });
+    redirect(familyPath(vendor.slug, definition.slug));
+  },
+);
 
 export const saveRulesAction = vendorAction(
-  { permission: "sheets.author", schema: onFamily.extend({ rules: familyRulesTextSchema, note: z.string().trim().min(3, "Say what the new rules change.").max(500) }) },
+  {
+    permission: "sheets.author",
+    schema: onFamily.extend({ rules: familyRulesTextSchema, note: z.string().trim().min(3, "Say what the new rules change.").max(500) }),
+  },
   async (input, { vendor, user }) => {
     const saved = await saveFamilyRules({ vendorId: vendor.id, userId: user.id, slug: input.family, rules: input.rules, note: input.note });
     redirect(familyPath(vendor.slug, input.family, `?saved=${saved.number}`));
@@ -35,10 +41,20 @@ export const generateAction = vendorAction({ permission: "sheets.author", schema
   redirect(familyPath(vendor.slug, input.family, `/batches/${batch.number}`));
 });
 
-export const excludeItemAction = vendorAction({ permission: "sheets.review", schema: onBatch.extend(batchExcludeSchema.shape) }, async (input, { vendor, user }) => {
-  await excludeBatchItem({ vendorId: vendor.id, userId: user.id, slug: input.family, number: input.batch, itemId: input.itemId, reason: input.reason });
-  redirect(familyPath(vendor.slug, input.family, `/batches/${input.batch}`));
-});
+export const excludeItemAction = vendorAction(
+  { permission: "sheets.review", schema: onBatch.extend(batchExcludeSchema.shape) },
+  async (input, { vendor, user }) => {
+    await excludeBatchItem({
+      vendorId: vendor.id,
+      userId: user.id,
+      slug: input.family,
+      number: input.batch,
+      itemId: input.itemId,
+      reason: input.reason,
+    });
+    redirect(familyPath(vendor.slug, input.family, `/batches/${input.batch}`));
+  },
+);
 
 export const approveBatchAction = vendorAction({ permission: "sheets.review", schema: onBatch }, async (input, { vendor, user }) => {
   await approveBatch({ vendorId: vendor.id, userId: user.id, slug: input.family, number: input.batch });

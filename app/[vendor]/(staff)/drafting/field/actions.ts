@@ -33,7 +33,15 @@ export const startDraftFromChangeAction = vendorAction(
   { permission: "sheets.author", schema: startDraftFromChangeSchema.extend({ vendor: z.string().min(1) }) },
   async (input, { vendor, user }) => {
     const { z: zValue, label } = confidenceOf(vendor.settings);
-    const draft = await startDraftFromChange({ vendorId: vendor.id, userId: user.id, versionId: input.versionId, operationIndex: input.operationIndex, param: input.param, z: zValue, confidenceLabel: label });
+    const draft = await startDraftFromChange({
+      vendorId: vendor.id,
+      userId: user.id,
+      versionId: input.versionId,
+      operationIndex: input.operationIndex,
+      param: input.param,
+      z: zValue,
+      confidenceLabel: label,
+    });
     redirect(`/${vendor.slug}/drafting/sheets/${draft.slug}/edit`);
   },
 );

@@ -13,10 +13,10 @@ import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
 import { listMachineClasses } from "@/lib/catalogue/list-catalogue";
-import { wantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { confidenceOf, percent } from "@/lib/field/confidence";
 import { readAttentionFilter } from "@/lib/field/read-filters";
 import { wilsonInterval } from "@/lib/field/wilson";
+import { wantsMail } from "@/lib/mail-preferences/mail-preferences";
 
 import { sendDigestNowAction, setWeeklyDigestAction, startDraftFromChangeAction } from "./actions";
 
@@ -24,7 +24,9 @@ export const metadata = { title: "Field results" };
 
 // The list's filters, carried to its CSV export so the file holds what the page shows.
 const attentionQuery = (f: { from?: string; to?: string; class?: string }) => {
-  const query = new URLSearchParams(Object.entries(f).filter((e): e is [string, string] => typeof e[1] === "string" && e[1] !== "")).toString();
+  const query = new URLSearchParams(
+    Object.entries(f).filter((e): e is [string, string] => typeof e[1] === "string" && e[1] !== ""),
+  ).toString();
   return query ? `?${query}` : "";
 };
 
@@ -38,8 +40,12 @@ export default async function FieldResultsPage({ params, searchParams }: Props) 
   // The explanation uses the vendor's own level, so it stays true at 80 % as at 99 %.
   const oneInOne = wilsonInterval(1, 1, z).lower;
   const thirtyInHundred = wilsonInterval(30, 100, z).lower;
-  const [digestOn, classes] = await Promise.all([wantsMail(undefined, { vendorId: vendor.id, userId: user!.id, kind: "weekly_digest" }), listMachineClasses({ vendorId: vendor.id })]);
-  const unknownClass = filter.class && !classes.some((c) => c.slug === filter.class) ? "No machine class of that name; showing every class." : null;
+  const [digestOn, classes] = await Promise.all([
+    wantsMail(undefined, { vendorId: vendor.id, userId: user!.id, kind: "weekly_digest" }),
+    listMachineClasses({ vendorId: vendor.id }),
+  ]);
+  const unknownClass =
+    filter.class && !classes.some((c) => c.slug === filter.class) ? "No machine class of that name; showing every class." : null;
   const shown = unknownClass ? { ...filter, class: undefined } : filter;
   const canDraft = member ? can(member.role, "sheets.author") : false;
   const csv = (list: string) => `/api/v1/vendors/${slug}/field/${list}`;
@@ -47,9 +53,23 @@ export default async function FieldResultsPage({ params, searchParams }: Props) 
     <>
       <PageHeader
         title="Field results"
-        lead={<>How your published numbers fare in customers’ shops: outcome reports, setups and tickets, per sheet version. Aggregates only; no customer is named. Figures as of <Suspense fallback="the latest refresh"><RefreshedAt /></Suspense>; they refresh every few minutes.</>}
+        lead={
+          <>
+            How your published numbers fare in customers’ shops: outcome reports, setups and tickets, per sheet version. Aggregates only; no
+            customer is named. Figures as of{" "}
+            <Suspense fallback="the latest refresh">
+              <RefreshedAt />
+            </Suspense>
+            ; they refresh every few minutes.
+          </>
+        }
       />
-      <DigestControls sendDigestNowAction={sendDigestNowAction} setWeeklyDigestAction={setWeeklyDigestAction} vendorSlug={slug} enabled={digestOn} />
+      <DigestControls
+        sendDigestNowAction={sendDigestNowAction}
+        setWeeklyDigestAction={setWeeklyDigestAction}
+        vendorSlug={slug}
+        enabled={digestOn}
+      />
       <Suspense fallback={<SectionSkeleton label="the totals" rows={2} />}>
         <SummaryTiles vendorId={vendor.id} />
       </Suspense>
@@ -57,14 +77,32 @@ export default async function FieldResultsPage({ params, searchParams }: Props) 
         id="needs-attention"
         title="Needs attention"
         csvHref={`${csv("needs-attention")}${attentionQuery(shown)}`}
-        lead={<>Published versions ranked by the <strong>lower end</strong> of the {label} Wilson score interval of their failure share, which weighs how many reports there are: at {label}, 1 failure in 1 report has a lower end of {percent(oneInOne)} and 30 failures in 100 of {percent(thirtyInHundred)}. The bar shows the interval and the dot the observed share. The confidence level is a vendor setting (Admin). A date range counts the reports of the whole weeks (Monday to Sunday, UTC) it touches; tickets and hand-offs are always counted in full.</>}
+        lead={
+          <>
+            Published versions ranked by the <strong>lower end</strong> of the {label} Wilson score interval of their failure share, which
+            weighs how many reports there are: at {label}, 1 failure in 1 report has a lower end of {percent(oneInOne)} and 30 failures in
+            100 of {percent(thirtyInHundred)}. The bar shows the interval and the dot the observed share. The confidence level is a vendor
+            setting (Admin). A date range counts the reports of the whole weeks (Monday to Sunday, UTC) it touches; tickets and hand-offs
+            are always counted in full.
+          </>
+        }
       >
-        <DateRangeForm action={`/${slug}/drafting/field`} label="Filter Needs attention" from={shown.from} to={shown.to} error={error ?? unknownClass}>
+        <DateRangeForm
+          action={`/${slug}/drafting/field`}
+          label="Filter Needs attention"
+          from={shown.from}
+          to={shown.to}
+          error={error ?? unknownClass}
+        >
           <label className="flex flex-col">
             <span>Machine class</span>
             <select name="class" defaultValue={shown.class ?? ""} className="min-h-11 rounded border border-stone-300 bg-white px-2">
               <option value="">Every class</option>
-              {classes.map((c) => <option key={c.slug} value={c.slug}>{c.name}</option>)}
+              {classes.map((c) => (
+                <option key={c.slug} value={c.slug}>
+                  {c.name}
+                </option>
+              ))}
             </select>
           </label>
         </DateRangeForm>

@@ -11,7 +11,11 @@ export default async function ListPage({ params }: { params: Promise<{ vendor: s
   const { vendor: slug } = await params;
   const { vendor } = await requirePageAccess(slug, "sheets.author", `/${slug}/drafting/machine-classes`);
   const items = await listMachineClasses({ vendorId: vendor.id });
-  const actions = <Link href={`/${slug}/drafting/machine-classes/new`} className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">New</Link>;
+  const actions = (
+    <Link href={`/${slug}/drafting/machine-classes/new`} className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">
+      New
+    </Link>
+  );
   return (
     <>
       <PageHeader title="Machine classes" lead="Reference machine categories the sheets are written for." actions={actions} />

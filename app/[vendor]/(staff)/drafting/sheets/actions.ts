@@ -4,12 +4,12 @@ import { redirect } from "next/navigation";
 import type { ReactNode } from "react";
 import { z } from "zod";
 
+import { renderDraftPreview } from "@/components/drafting/draft-preview";
 import { newSheetSchema, sheetSlugSchema, sourceSchema, submitDraftSchema, withdrawSchema } from "@/content-schema/sheet-workflow";
 import type { ActionState } from "@/lib/actions/action-state";
 import { vendorAction } from "@/lib/actions/vendor-action";
 import { getCutterById, getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
 import { NotFound } from "@/lib/errors/domain-errors";
-import { renderDraftPreview } from "@/components/drafting/draft-preview";
 import { approveDraft } from "@/lib/sheets/approve-draft";
 import { checkDraftSource } from "@/lib/sheets/check-draft-source";
 import { createSheet } from "@/lib/sheets/create-sheet";
@@ -35,22 +35,42 @@ export const createSheetAction = vendorAction(
     ]);
     if (!cutter || !material || !machineClass) throw new NotFound();
     const source = newSheetSource({ cutter, material, machineClass });
-    await createSheet({ vendorId: vendor.id, userId: user.id, slug: input.slug, source, refs: { cutterId: cutter.id, materialId: material.id, machineClassId: machineClass.id } });
+    await createSheet({
+      vendorId: vendor.id,
+      userId: user.id,
+      slug: input.slug,
+      source,
+      refs: { cutterId: cutter.id, materialId: material.id, machineClassId: machineClass.id },
+    });
     redirect(sheetPath(vendor.slug, input.slug, "/edit"));
   },
 );
 
-export type SaveDraftResult = ActionState<{ revision?: number; valid?: boolean; conflict?: { source: string; revision: number; updatedByName: string | null } }>;
+export type SaveDraftResult = ActionState<{
+  revision?: number;
+  valid?: boolean;
+  conflict?: { source: string; revision: number; updatedByName: string | null };
+}>;
 
 export const saveDraftAction = vendorAction(
   { permission: "sheets.author", schema: onSheet.extend({ source: sourceSchema, revision: z.coerce.number().int().min(0) }) },
   async (input, { vendor, user }): Promise<SaveDraftResult> => {
     try {
-      const saved = await saveDraft({ vendorId: vendor.id, userId: user.id, slug: input.slug, source: input.source, revision: input.revision });
+      const saved = await saveDraft({
+        vendorId: vendor.id,
+        userId: user.id,
+        slug: input.slug,
+        source: input.source,
+        revision: input.revision,
+      });
       return { ok: true, data: { revision: saved.revision, valid: saved.valid } };
     } catch (error) {
       if (!(error instanceof DraftConflict)) throw error;
-      return { ok: false, message: error.message, data: { conflict: { source: error.current.source, revision: error.current.revision, updatedByName: error.current.updatedByName } } };
+      return {
+        ok: false,
+        message: error.message,
+        data: { conflict: { source: error.current.source, revision: error.current.revision, updatedByName: error.current.updatedByName } },
+      };
     }
   },
 );
@@ -92,7 +112,10 @@ export const newVersionAction = vendorAction({ permission: "sheets.author", sche
 });
 
 export const previewDraftAction = vendorAction(
-  { permission: "sheets.author", schema: onSheet.extend({ source: sourceSchema, units: z.enum(["metric", "imperial"]).default("metric") }) },
+  {
+    permission: "sheets.author",
+    schema: onSheet.extend({ source: sourceSchema, units: z.enum(["metric", "imperial"]).default("metric") }),
+  },
   async (input, { vendor }) => {
     const sheet = await getSheet({ vendorId: vendor.id, slug: input.slug });
     const cutter = await getCutterById({ vendorId: vendor.id, id: sheet.cutterId });

@@ -11,7 +11,11 @@ export default async function SheetsPage({ params }: { params: Promise<{ vendor:
   const { vendor: slug } = await params;
   const { vendor } = await requirePageAccess(slug, "sheets.author", `/${slug}/drafting/sheets`);
   const sheets = await listDraftingSheets({ vendorId: vendor.id });
-  const actions = <Link href={`/${slug}/drafting/sheets/new`} className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">New sheet</Link>;
+  const actions = (
+    <Link href={`/${slug}/drafting/sheets/new`} className="min-h-11 rounded bg-accent px-4 py-2 font-medium text-accent-ink">
+      New sheet
+    </Link>
+  );
   return (
     <>
       <PageHeader title="Sheets" lead="Every recipe sheet with its latest version." actions={actions} />

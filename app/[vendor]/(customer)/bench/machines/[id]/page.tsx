@@ -2,10 +2,10 @@ import { notFound } from "next/navigation";
 
 import { deleteMachineAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { DeleteMachineForm } from "@/components/bench/delete-machine-form";
-import { findBenchMachine } from "@/lib/bench/page-data";
 import { MachineForm } from "@/components/bench/machine-form";
 import { machineToValues } from "@/components/bench/machine-values";
 import { PageHeader } from "@/components/ui/page-header";
+import { findBenchMachine } from "@/lib/bench/page-data";
 
 import { saveMachineAction } from "../../actions";
 

@@ -12,7 +12,10 @@ export default async function NewMachinePage({ params }: { params: Promise<{ ven
   const { vendor } = await requirePageAccess(slug, "bench.use", `/${slug}/bench/machines/new`);
   return (
     <>
-      <PageHeader title="Register a machine" lead="Its limits decide how every sheet is adapted: spindle range, power, feed, stiffness and how far the tool sticks out." />
+      <PageHeader
+        title="Register a machine"
+        lead="Its limits decide how every sheet is adapted: spindle range, power, feed, stiffness and how far the tool sticks out."
+      />
       <MachineForm vendorSlug={vendor.slug} initial={EMPTY_MACHINE_VALUES} action={saveMachineAction} />
     </>
   );

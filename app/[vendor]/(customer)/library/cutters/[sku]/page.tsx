@@ -26,7 +26,10 @@ export default async function CutterPage({ params }: Props) {
   if (!found) notFound();
   const { vendor, cutter, user, member } = found;
   const keeper = user && member && can(member.role, "bench.use") ? user : null;
-  const [units, mine] = await Promise.all([readUnits(), keeper ? hasMyCutter({ vendorId: vendor.id, userId: keeper.id, cutterId: cutter.id }) : false]);
+  const [units, mine] = await Promise.all([
+    readUnits(),
+    keeper ? hasMyCutter({ vendorId: vendor.id, userId: keeper.id, cutterId: cutter.id }) : false,
+  ]);
   const state = !user ? "signed-out" : !keeper ? "not-member" : mine ? "mine" : "not-mine";
   return (
     <>
@@ -35,7 +38,10 @@ export default async function CutterPage({ params }: Props) {
         lead="Published recipe sheets for this cutter."
         actions={
           <>
-            <a href={`/${vendor.slug}/library/cutters/${encodeURIComponent(cutter.sku)}/pdf`} className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500 print:hidden">
+            <a
+              href={`/${vendor.slug}/library/cutters/${encodeURIComponent(cutter.sku)}/pdf`}
+              className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-4 text-sm font-medium hover:border-stone-500 print:hidden"
+            >
               Cutter data sheet (PDF)
             </a>
             <UnitsToggle units={units} />
@@ -43,7 +49,14 @@ export default async function CutterPage({ params }: Props) {
         }
       />
       <div className="mb-4 max-w-xl print:hidden">
-        <MyCutterButton vendorSlug={vendor.slug} sku={cutter.sku} cutterId={cutter.id} state={state} addMyCutterAction={addMyCutterAction} removeMyCutterAction={removeMyCutterAction} />
+        <MyCutterButton
+          vendorSlug={vendor.slug}
+          sku={cutter.sku}
+          cutterId={cutter.id}
+          state={state}
+          addMyCutterAction={addMyCutterAction}
+          removeMyCutterAction={removeMyCutterAction}
+        />
       </div>
       <CachedCutterSheets vendorId={vendor.id} vendorSlug={vendor.slug} sku={cutter.sku} units={units} />
     </>

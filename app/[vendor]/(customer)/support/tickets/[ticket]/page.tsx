@@ -16,10 +16,20 @@ export const metadata = { title: "Ticket" };
 export default async function CustomerTicketPage({ params }: { params: Promise<{ vendor: string; ticket: string }> }) {
   const { vendor: slug, ticket: ticketId } = await params;
   const { vendor, user } = await requirePageAccess(slug, "support.use", `/${slug}/support`);
-  const { ticket, messages, attachments, links } = toCustomerThread(await getTicketThread({ vendorId: vendor.id, ticketId, viewer: { kind: "customer", userId: user!.id } }));
+  const { ticket, messages, attachments, links } = toCustomerThread(
+    await getTicketThread({ vendorId: vendor.id, ticketId, viewer: { kind: "customer", userId: user!.id } }),
+  );
   return (
     <>
-      <PageHeader title={ticket.subject} lead={<>Ticket <span className="num">#{ticket.number}</span> · opened {formatDateTime(ticket.createdAt)}</>} actions={<StatusBadge status={ticket.status} />} />
+      <PageHeader
+        title={ticket.subject}
+        lead={
+          <>
+            Ticket <span className="num">#{ticket.number}</span> · opened {formatDateTime(ticket.createdAt)}
+          </>
+        }
+        actions={<StatusBadge status={ticket.status} />}
+      />
       <div className="grid gap-6 lg:grid-cols-[1fr_18rem]">
         <div className="space-y-6">
           <article className="rounded-lg border border-stone-200 bg-stone-50 p-4" aria-label="Your question">
@@ -31,24 +41,42 @@ export default async function CustomerTicketPage({ params }: { params: Promise<{
             <RatingForm rateTicketAction={rateTicketAction} vendor={vendor.slug} ticketId={ticket.id} current={ticket.satisfaction} />
           ) : null}
           <section aria-labelledby="reply-heading">
-            <h2 id="reply-heading" className="mb-2 text-lg font-semibold">{ticket.status === "closed" ? "Reopen with a reply" : "Reply"}</h2>
+            <h2 id="reply-heading" className="mb-2 text-lg font-semibold">
+              {ticket.status === "closed" ? "Reopen with a reply" : "Reply"}
+            </h2>
             <CustomerReplyForm customerReplyAction={customerReplyAction} vendor={vendor.slug} ticketId={ticket.id} />
           </section>
         </div>
         <aside className="space-y-4 text-sm">
-          {ticket.machineName ? <p>Machine: <strong>{ticket.machineName}</strong></p> : null}
-          {ticket.materialName ? <p>Material: <strong>{ticket.materialName}</strong></p> : null}
+          {ticket.machineName ? (
+            <p>
+              Machine: <strong>{ticket.machineName}</strong>
+            </p>
+          ) : null}
+          {ticket.materialName ? (
+            <p>
+              Material: <strong>{ticket.materialName}</strong>
+            </p>
+          ) : null}
           {links.length ? (
             <div>
               <h2 className="font-semibold">Linked sheets</h2>
               <ul className="mt-1 space-y-1">
                 {links.map((l) => (
-                  <li key={l.sheetVersionId}><Link className="underline" href={`/${vendor.slug}/library/${l.sheetSlug}/v/${l.versionNumber}`}>{l.title} <span className="num">v{l.versionNumber}</span></Link></li>
+                  <li key={l.sheetVersionId}>
+                    <Link className="underline" href={`/${vendor.slug}/library/${l.sheetSlug}/v/${l.versionNumber}`}>
+                      {l.title} <span className="num">v{l.versionNumber}</span>
+                    </Link>
+                  </li>
                 ))}
               </ul>
             </div>
           ) : null}
-          {ticket.satisfaction ? <p>Your rating: <span className="num">{ticket.satisfaction}/5</span></p> : null}
+          {ticket.satisfaction ? (
+            <p>
+              Your rating: <span className="num">{ticket.satisfaction}/5</span>
+            </p>
+          ) : null}
         </aside>
       </div>
     </>

@@ -45,8 +45,19 @@ export default async function DeskTicketPage({ params }: { params: Promise<{ ven
     <>
       <PageHeader
         title={ticket.subject}
-        lead={<>Ticket <span className="num">#{ticket.number}</span> from {ticket.customerName} (<span className="num">{ticket.customerEmail}</span>) · {formatDateTime(ticket.createdAt)}</>}
-        actions={<div className="flex items-center gap-3"><StatusBadge status={ticket.status} /><PriorityBadge priority={ticket.priority} /><DueBadge dueAt={ticket.firstResponseDueAt} respondedAt={ticket.firstResponseAt} overdue={ticket.overdue} /></div>}
+        lead={
+          <>
+            Ticket <span className="num">#{ticket.number}</span> from {ticket.customerName} (
+            <span className="num">{ticket.customerEmail}</span>) · {formatDateTime(ticket.createdAt)}
+          </>
+        }
+        actions={
+          <div className="flex items-center gap-3">
+            <StatusBadge status={ticket.status} />
+            <PriorityBadge priority={ticket.priority} />
+            <DueBadge dueAt={ticket.firstResponseDueAt} respondedAt={ticket.firstResponseAt} overdue={ticket.overdue} />
+          </div>
+        }
       />
       <div className="grid gap-6 xl:grid-cols-[1fr_20rem]">
         <div className="space-y-6">
@@ -69,9 +80,19 @@ export default async function DeskTicketPage({ params }: { params: Promise<{ ven
           />
         </div>
         <aside className="space-y-6">
-          <section aria-labelledby="settings-h"><h2 id="settings-h" className="mb-2 font-semibold">Ticket</h2><TicketControls updateTicketAction={updateTicketAction} vendor={vendor.slug} ticket={ticket} assignees={assignees} /></section>
+          <section aria-labelledby="settings-h">
+            <h2 id="settings-h" className="mb-2 font-semibold">
+              Ticket
+            </h2>
+            <TicketControls updateTicketAction={updateTicketAction} vendor={vendor.slug} ticket={ticket} assignees={assignees} />
+          </section>
           <CustomerPanel vendorSlug={vendor.slug} context={context} links={links} ticket={ticket} />
-          <section aria-labelledby="handoff-h"><h2 id="handoff-h" className="mb-2 font-semibold">Engineering</h2><HandoffForm handoffAction={handoffAction} vendor={vendor.slug} ticketId={ticket.id} versions={linkedVersions} /></section>
+          <section aria-labelledby="handoff-h">
+            <h2 id="handoff-h" className="mb-2 font-semibold">
+              Engineering
+            </h2>
+            <HandoffForm handoffAction={handoffAction} vendor={vendor.slug} ticketId={ticket.id} versions={linkedVersions} />
+          </section>
           <TicketHistory entries={history} people={people} />
         </aside>
       </div>

@@ -3,11 +3,11 @@ import { notFound } from "next/navigation";
 
 import { CutterForm } from "@/components/catalogue/catalogue-forms";
 import { ImageUpload } from "@/components/catalogue/image-upload";
-import { findDraftingCutter } from "@/lib/catalogue/page-data";
 import { CutterCard } from "@/components/library/cutter-card";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
+import { findDraftingCutter } from "@/lib/catalogue/page-data";
 
 import { saveCutterAction } from "../../actions";
 
@@ -28,7 +28,9 @@ export default async function CutterDetailPage({ params }: Props) {
   const lead = (
     <>
       Short code <span className="num">{shortCode}</span> ·{" "}
-      <Link className="underline" href={`/${vendor.slug}/library/cutters/${encodeURIComponent(cutter.sku)}`}>Library page</Link>
+      <Link className="underline" href={`/${vendor.slug}/library/cutters/${encodeURIComponent(cutter.sku)}`}>
+        Library page
+      </Link>
     </>
   );
   return (
@@ -40,8 +42,20 @@ export default async function CutterDetailPage({ params }: Props) {
       </div>
       {editable ? (
         <section aria-labelledby="edit-heading">
-          <h2 id="edit-heading" className="mb-3 text-lg font-semibold">Edit</h2>
-          <CutterForm vendorSlug={vendor.slug} action={saveCutterAction} id={id} defaultValues={{ ...fields, coating: fields.coating ?? "", cornerRadiusMm: fields.cornerRadiusMm ?? "", helixDeg: fields.helixDeg ?? "" }} />
+          <h2 id="edit-heading" className="mb-3 text-lg font-semibold">
+            Edit
+          </h2>
+          <CutterForm
+            vendorSlug={vendor.slug}
+            action={saveCutterAction}
+            id={id}
+            defaultValues={{
+              ...fields,
+              coating: fields.coating ?? "",
+              cornerRadiusMm: fields.cornerRadiusMm ?? "",
+              helixDeg: fields.helixDeg ?? "",
+            }}
+          />
         </section>
       ) : null}
     </>

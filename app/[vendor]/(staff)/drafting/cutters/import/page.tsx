@@ -12,7 +12,11 @@ export default async function ImportCuttersPage({ params }: { params: Promise<{ 
   return (
     <>
       <PageHeader title="Import cutters from CSV" lead="Check the preview, then import. The import runs in one transaction." />
-      <CsvImport url={`/${vendor.slug}/drafting/cutters/import/run`} existingSkus={skus} cataloguePath={`/${vendor.slug}/drafting/cutters`} />
+      <CsvImport
+        url={`/${vendor.slug}/drafting/cutters/import/run`}
+        existingSkus={skus}
+        cataloguePath={`/${vendor.slug}/drafting/cutters`}
+      />
     </>
   );
 }

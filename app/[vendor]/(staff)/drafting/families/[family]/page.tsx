@@ -32,7 +32,10 @@ export default async function FamilyPage({ params, searchParams }: Props) {
   if (!family) notFound();
   const from = Math.max(0, Math.floor(Number((await searchParams).from ?? 0)) || 0);
   const ruleSet = await getLatestRuleSet({ vendorId: vendor.id, familyId: family.id });
-  const [preview, batches] = await Promise.all([previewFamily({ vendorId: vendor.id, slug: family.slug, rules: ruleSet.rules, offset: from, limit: PREVIEW_PAGE }), listBatches({ vendorId: vendor.id, familyId: family.id })]);
+  const [preview, batches] = await Promise.all([
+    previewFamily({ vendorId: vendor.id, slug: family.slug, rules: ruleSet.rules, offset: from, limit: PREVIEW_PAGE }),
+    listBatches({ vendorId: vendor.id, familyId: family.id }),
+  ]);
   const base = `/${vendor.slug}/drafting/families/${family.slug}`;
   const { cutters, materials, machineClasses } = preview.catalogue;
   return (
@@ -43,27 +46,51 @@ export default async function FamilyPage({ params, searchParams }: Props) {
       />
       <div className="grid gap-6 lg:grid-cols-2">
         <section aria-labelledby="rules-heading" className={box}>
-          <h2 id="rules-heading" className="mb-2 text-lg font-semibold">Rules</h2>
-          <RulesForm action={saveRulesAction} vendorSlug={vendor.slug} family={family.slug} text={familyRulesToText(ruleSet.rules)} version={ruleSet.number} />
+          <h2 id="rules-heading" className="mb-2 text-lg font-semibold">
+            Rules
+          </h2>
+          <RulesForm
+            action={saveRulesAction}
+            vendorSlug={vendor.slug}
+            family={family.slug}
+            text={familyRulesToText(ruleSet.rules)}
+            version={ruleSet.number}
+          />
         </section>
         <section aria-labelledby="generate-heading" className={box}>
-          <h2 id="generate-heading" className="mb-2 text-lg font-semibold">Generate</h2>
+          <h2 id="generate-heading" className="mb-2 text-lg font-semibold">
+            Generate
+          </h2>
           <p className="mb-3 text-sm text-stone-600">
-            Writes a draft for every cell of the preview under rules version {ruleSet.number}, in the background. Cells the engine warns about are not written;
-            sheets whose numbers would not change get no new version. A second engineer then reviews the batch.
+            Writes a draft for every cell of the preview under rules version {ruleSet.number}, in the background. Cells the engine warns
+            about are not written; sheets whose numbers would not change get no new version. A second engineer then reviews the batch.
           </p>
-          <ActionForm action={generateAction} hidden={{ vendor: vendor.slug, family: family.slug }} submitLabel={`Generate with rules version ${ruleSet.number}`} />
+          <ActionForm
+            action={generateAction}
+            hidden={{ vendor: vendor.slug, family: family.slug }}
+            submitLabel={`Generate with rules version ${ruleSet.number}`}
+          />
           <h3 className="mt-4 mb-2 font-semibold">Batches</h3>
           <BatchList batches={batches} base={base} />
         </section>
       </div>
       <section aria-labelledby="preview-heading" className="mt-8 flex flex-col gap-3">
-        <h2 id="preview-heading" className="text-lg font-semibold">Preview under rules version {ruleSet.number}</h2>
+        <h2 id="preview-heading" className="text-lg font-semibold">
+          Preview under rules version {ruleSet.number}
+        </h2>
         <PreviewSummary counts={countStatuses(preview.cells)} shown={preview.cells.length} total={preview.total} />
         <PreviewGrid cells={preview.cells} vendorSlug={vendor.slug} />
         <nav aria-label="Preview pages" className="flex gap-3 text-sm">
-          {from > 0 ? <a className="underline" href={`${base}?from=${Math.max(0, from - PREVIEW_PAGE)}`}>Previous cells</a> : null}
-          {from + preview.cells.length < preview.total ? <a className="underline" href={`${base}?from=${from + PREVIEW_PAGE}`}>Next cells</a> : null}
+          {from > 0 ? (
+            <a className="underline" href={`${base}?from=${Math.max(0, from - PREVIEW_PAGE)}`}>
+              Previous cells
+            </a>
+          ) : null}
+          {from + preview.cells.length < preview.total ? (
+            <a className="underline" href={`${base}?from=${from + PREVIEW_PAGE}`}>
+              Next cells
+            </a>
+          ) : null}
         </nav>
       </section>
     </>

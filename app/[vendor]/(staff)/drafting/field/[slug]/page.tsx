@@ -36,7 +36,18 @@ export default async function FieldSheetPage({ params, searchParams }: Props) {
     <>
       <PageHeader
         title={sheet.title}
-        lead={<>For the {sheet.machineClass} class; field results version by version. <Link className="underline" href={`/${slug}/drafting/sheets/${sheet.slug}`}>Open the sheet in Drafting</Link> · <Link className="underline" href={`/${slug}/drafting/field`}>All Field results</Link></>}
+        lead={
+          <>
+            For the {sheet.machineClass} class; field results version by version.{" "}
+            <Link className="underline" href={`/${slug}/drafting/sheets/${sheet.slug}`}>
+              Open the sheet in Drafting
+            </Link>{" "}
+            ·{" "}
+            <Link className="underline" href={`/${slug}/drafting/field`}>
+              All Field results
+            </Link>
+          </>
+        }
       />
       <Suspense fallback={<SectionSkeleton label="the versions' results" rows={5} />}>
         <SheetVersionsSection vendorSlug={slug} vendorId={vendorId} sheet={sheet} z={z} confidenceLabel={label} />
@@ -44,7 +55,13 @@ export default async function FieldSheetPage({ params, searchParams }: Props) {
       <FieldSection
         id="sheet-trends"
         title="Trends"
-        lead={<>Outcome reports and the share that failed, week by week (weeks start on Monday, UTC), all versions together; a dashed line marks the week a version was published. Whether failures fell after a new version is said only once the {label} intervals of the two versions no longer overlap.</>}
+        lead={
+          <>
+            Outcome reports and the share that failed, week by week (weeks start on Monday, UTC), all versions together; a dashed line marks
+            the week a version was published. Whether failures fell after a new version is said only once the {label} intervals of the two
+            versions no longer overlap.
+          </>
+        }
       >
         <DateRangeForm action={here} label="Trend date range" from={chosen.from ?? range.from} to={chosen.to ?? range.to} error={error} />
         <Suspense key={`${range.from}:${range.to}`} fallback={<SectionSkeleton label="the trends" rows={6} />}>
@@ -52,7 +69,14 @@ export default async function FieldSheetPage({ params, searchParams }: Props) {
         </Suspense>
       </FieldSection>
       <Suspense fallback={<SectionSkeleton label="changes, tickets and hand-offs" />}>
-        <SheetActivitySections vendorSlug={slug} vendorId={vendorId} sheetId={sheet.id} z={z} deskLinks={deskLinks} startDraft={canDraft ? startDraftFromChangeAction : undefined} />
+        <SheetActivitySections
+          vendorSlug={slug}
+          vendorId={vendorId}
+          sheetId={sheet.id}
+          z={z}
+          deskLinks={deskLinks}
+          startDraft={canDraft ? startDraftFromChangeAction : undefined}
+        />
       </Suspense>
     </>
   );

@@ -1,10 +1,10 @@
 import { notFound } from "next/navigation";
 
-import { CatalogueItemView } from "@/components/catalogue/catalogue-item-view";
 import { MachineClassForm } from "@/components/catalogue/catalogue-forms";
-import { findDraftingMachineClass } from "@/lib/catalogue/page-data";
+import { CatalogueItemView } from "@/components/catalogue/catalogue-item-view";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
+import { findDraftingMachineClass } from "@/lib/catalogue/page-data";
 
 import { saveMachineClassAction } from "../../actions";
 import { DetailCard } from "./detail-card";
@@ -22,6 +22,13 @@ export default async function DetailPage({ params }: Props) {
   const item = await findDraftingMachineClass(vendorSlug, slug);
   if (!item) notFound();
   const { id, updatedAt: _updatedAt, ...fields } = item;
-  const editForm = can(member?.role, "catalogue.edit") ? <MachineClassForm vendorSlug={vendorSlug} action={saveMachineClassAction} id={id} defaultValues={{ ...fields, zThrustN: fields.zThrustN ?? "", ratedRpm: fields.ratedRpm ?? "" }} /> : null;
+  const editForm = can(member?.role, "catalogue.edit") ? (
+    <MachineClassForm
+      vendorSlug={vendorSlug}
+      action={saveMachineClassAction}
+      id={id}
+      defaultValues={{ ...fields, zThrustN: fields.zThrustN ?? "", ratedRpm: fields.ratedRpm ?? "" }}
+    />
+  ) : null;
   return <CatalogueItemView title={item.name} detail={<DetailCard item={item} />} editForm={editForm} />;
 }

@@ -16,7 +16,14 @@ export default async function NewPage({ params, searchParams }: Props) {
   const fromGap = prefill.rpmMax !== undefined;
   return (
     <>
-      <PageHeader title="New machine class" lead={fromGap ? "Prefilled with the median machine of a coverage gap in Field results: check every number against a real machine before you publish sheets for it." : undefined} />
+      <PageHeader
+        title="New machine class"
+        lead={
+          fromGap
+            ? "Prefilled with the median machine of a coverage gap in Field results: check every number against a real machine before you publish sheets for it."
+            : undefined
+        }
+      />
       <MachineClassForm vendorSlug={slug} action={saveMachineClassAction} defaultValues={prefillDefaults(prefill)} />
     </>
   );

@@ -1,10 +1,10 @@
 import { notFound } from "next/navigation";
 
-import { CatalogueItemView } from "@/components/catalogue/catalogue-item-view";
 import { MaterialForm } from "@/components/catalogue/catalogue-forms";
-import { findDraftingMaterial } from "@/lib/catalogue/page-data";
+import { CatalogueItemView } from "@/components/catalogue/catalogue-item-view";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
+import { findDraftingMaterial } from "@/lib/catalogue/page-data";
 
 import { saveMaterialAction } from "../../actions";
 import { DetailCard } from "./detail-card";
@@ -22,6 +22,17 @@ export default async function DetailPage({ params }: Props) {
   const item = await findDraftingMaterial(vendorSlug, slug);
   if (!item) notFound();
   const { id, updatedAt: _updatedAt, ...fields } = item;
-  const editForm = can(member?.role, "catalogue.edit") ? <MaterialForm vendorSlug={vendorSlug} action={saveMaterialAction} id={id} defaultValues={{ ...fields, synonyms: fields.synonyms.join(", "), cautions: fields.cautions.map((c) => `${c.kind}: ${c.text}`).join("\n") }} /> : null;
+  const editForm = can(member?.role, "catalogue.edit") ? (
+    <MaterialForm
+      vendorSlug={vendorSlug}
+      action={saveMaterialAction}
+      id={id}
+      defaultValues={{
+        ...fields,
+        synonyms: fields.synonyms.join(", "),
+        cautions: fields.cautions.map((c) => `${c.kind}: ${c.text}`).join("\n"),
+      }}
+    />
+  ) : null;
   return <CatalogueItemView title={item.name} detail={<DetailCard item={item} />} editForm={editForm} />;
 }

@@ -10,10 +10,17 @@ export const metadata = { title: "New sheet" };
 export default async function NewSheetPage({ params }: { params: Promise<{ vendor: string }> }) {
   const { vendor: slug } = await params;
   const { vendor } = await requirePageAccess(slug, "sheets.author", `/${slug}/drafting/sheets/new`);
-  const [cutters, materials, machineClasses] = await Promise.all([listCutters({ vendorId: vendor.id }), listMaterials({ vendorId: vendor.id }), listMachineClasses({ vendorId: vendor.id })]);
+  const [cutters, materials, machineClasses] = await Promise.all([
+    listCutters({ vendorId: vendor.id }),
+    listMaterials({ vendorId: vendor.id }),
+    listMachineClasses({ vendorId: vendor.id }),
+  ]);
   return (
     <>
-      <PageHeader title="New sheet" lead="One cutter, one material, one machine class. The first draft starts from numbers derived by the formulas." />
+      <PageHeader
+        title="New sheet"
+        lead="One cutter, one material, one machine class. The first draft starts from numbers derived by the formulas."
+      />
       <NewSheetForm
         vendorSlug={vendor.slug}
         action={createSheetAction}

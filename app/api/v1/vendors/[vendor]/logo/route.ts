@@ -1,5 +1,5 @@
-import { withVendor } from "@/lib/http/with-vendor";
 import { NotFound } from "@/lib/errors/domain-errors";
+import { withVendor } from "@/lib/http/with-vendor";
 import { getVendorLogo } from "@/lib/vendors/get-vendor-logo";
 
 // GET /api/v1/vendors/{vendor}/logo: the vendor's logo, sandboxed so an SVG can never run script.

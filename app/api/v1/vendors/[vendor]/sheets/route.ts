@@ -24,7 +24,10 @@ export const POST = withVendor(
   async (request, { access }) => {
     const body = parseInput(apiNewSheetSchema, await readJson(request, 256 * 1024));
     const created = await createSheet({ ...apiActor(access), slug: body.slug, source: body.source });
-    return NextResponse.json({ slug: created.slug, number: created.number, state: "draft", revision: created.revision, issues: created.issues }, { status: 201 });
+    return NextResponse.json(
+      { slug: created.slug, number: created.number, state: "draft", revision: created.revision, issues: created.issues },
+      { status: 201 },
+    );
   },
   { permission: "sheets.author" },
 );

@@ -14,7 +14,8 @@ import { supportRole } from "@/lib/tickets/member-kind";
 // GET /api/v1/vendors/{vendor}/tickets: a customer's own tickets, or the Desk queue for staff (filters in the query).
 export const GET = withVendor(async (request, { access }) => {
   const who = supportRole(access);
-  if (who.kind === "customer") return NextResponse.json({ tickets: await listCustomerTickets({ vendorId: access.vendor.id, customerId: who.userId }) });
+  if (who.kind === "customer")
+    return NextResponse.json({ tickets: await listCustomerTickets({ vendorId: access.vendor.id, customerId: who.userId }) });
   // Unknown or malformed filters are dropped, never refused: a saved link keeps working.
   const filters = queueFiltersSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams)).data ?? {};
   return NextResponse.json({ tickets: await listQueue({ vendorId: access.vendor.id, userId: who.userId, filters }) });

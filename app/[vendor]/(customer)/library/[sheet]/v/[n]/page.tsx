@@ -2,10 +2,10 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 
 import { saveSetupAction } from "@/app/[vendor]/(customer)/bench/actions";
+import { adaptPanelRenderer } from "@/components/adapt/library-adapt-panel-mount";
+import { CachedSheetView } from "@/components/library/cached-sheet-view";
 import { loadLibrarySheet, parseVersionNumber } from "@/components/library/load-library-sheet";
 import { readUnits } from "@/components/library/read-units";
-import { CachedSheetView } from "@/components/library/cached-sheet-view";
-import { adaptPanelRenderer } from "@/components/adapt/library-adapt-panel-mount";
 import { countSheetView } from "@/lib/field/count-sheet-view";
 
 type Props = { params: Promise<{ vendor: string; sheet: string; n: string }> };
@@ -24,6 +24,21 @@ export default async function SheetVersionPage({ params }: Props) {
   // Counted in memory and written in batches: a view costs the reader no database round trip.
   countSheetView(found.vendor.id, found.data.version.id);
   const units = await readUnits();
-  const renderAdaptPanel = adaptPanelRenderer({ saveSetupAction, vendor: found.vendor, versionId: found.data.version.id, units, returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}` });
-  return <CachedSheetView vendorId={found.vendor.id} data={found.data} units={units} vendorSlug={found.vendor.slug} vendorName={found.vendor.name} renderAdaptPanel={renderAdaptPanel} />;
+  const renderAdaptPanel = adaptPanelRenderer({
+    saveSetupAction,
+    vendor: found.vendor,
+    versionId: found.data.version.id,
+    units,
+    returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}`,
+  });
+  return (
+    <CachedSheetView
+      vendorId={found.vendor.id}
+      data={found.data}
+      units={units}
+      vendorSlug={found.vendor.slug}
+      vendorName={found.vendor.name}
+      renderAdaptPanel={renderAdaptPanel}
+    />
+  );
 }

@@ -12,7 +12,12 @@ export const GET = withVendor<{ vendor: string; sku: string }>(
     const image = cutter?.imageKey ? await getImage({ vendorId: access.vendor.id, key: cutter.imageKey }) : null;
     if (!image) throw new NotFound("No image.");
     return new Response(new Uint8Array(image.bytes), {
-      headers: { "content-type": image.contentType, "cache-control": "private, max-age=300", "x-content-type-options": "nosniff", "content-security-policy": "default-src 'none'" },
+      headers: {
+        "content-type": image.contentType,
+        "cache-control": "private, max-age=300",
+        "x-content-type-options": "nosniff",
+        "content-security-policy": "default-src 'none'",
+      },
     });
   },
   { permission: "library.read", rateLimit: { limit: 600, windowSeconds: 60 } },

@@ -20,7 +20,12 @@ export const POST = withVendor(
       async start(controller) {
         const send = (line: unknown) => controller.enqueue(encoder.encode(`${JSON.stringify(line)}\n`));
         try {
-          const result = await importCutters({ ...actor, csv: body.csv, mode: body.mode, onProgress: (done, total) => send({ done, total }) });
+          const result = await importCutters({
+            ...actor,
+            csv: body.csv,
+            mode: body.mode,
+            onProgress: (done, total) => send({ done, total }),
+          });
           send({ result: { imported: result.imported, skipped: result.skipped } });
         } catch (error) {
           send({ error: await errorResponse(error).json() });

@@ -1,6 +1,5 @@
 import { notFound } from "next/navigation";
 
-import { findDraftingSheetPage } from "@/lib/sheets/page-data";
 import { ParameterDiffTable } from "@/components/drafting/parameter-diff-table";
 import { ProseDiffView } from "@/components/drafting/prose-diff-view";
 import { readUnits } from "@/components/library/read-units";
@@ -9,6 +8,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { splitFrontMatter } from "@/lib/mdx/split-front-matter";
+import { findDraftingSheetPage } from "@/lib/sheets/page-data";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 import { diffProse } from "@/lib/sheets/prose-diff";
 
@@ -37,12 +37,22 @@ export default async function DiffPage({ params, searchParams }: Props) {
       {(["from", "to"] as const).map((name) => (
         <label key={name} className="flex flex-col gap-1 text-sm font-medium">
           {name === "from" ? "From" : "To"}
-          <select name={name} defaultValue={(name === "from" ? from : to)?.number} className="min-h-11 rounded border border-stone-300 bg-white px-3">
-            {data.versions.map((v) => <option key={v.number} value={v.number}>Version {v.number} ({v.state.replace("_", " ")})</option>)}
+          <select
+            name={name}
+            defaultValue={(name === "from" ? from : to)?.number}
+            className="min-h-11 rounded border border-stone-300 bg-white px-3"
+          >
+            {data.versions.map((v) => (
+              <option key={v.number} value={v.number}>
+                Version {v.number} ({v.state.replace("_", " ")})
+              </option>
+            ))}
           </select>
         </label>
       ))}
-      <button type="submit" className="min-h-11 rounded border border-stone-300 bg-white px-4 font-medium">Compare</button>
+      <button type="submit" className="min-h-11 rounded border border-stone-300 bg-white px-4 font-medium">
+        Compare
+      </button>
       <UnitsToggle units={units} />
     </form>
   );
@@ -58,11 +68,19 @@ export default async function DiffPage({ params, searchParams }: Props) {
   const prose = diffProse(body(from.source), body(to.source));
   return (
     <>
-      <PageHeader title={`Version ${from.number} → version ${to.number}`} lead={to.changeNote ? `Change note: ${to.changeNote}` : undefined} actions={picker} />
+      <PageHeader
+        title={`Version ${from.number} → version ${to.number}`}
+        lead={to.changeNote ? `Change note: ${to.changeNote}` : undefined}
+        actions={picker}
+      />
       <h2 className="mb-2 text-lg font-semibold">Parameters</h2>
       <ParameterDiffTable diff={diff} units={units} />
       <h2 className="mb-2 mt-8 text-lg font-semibold">Text</h2>
-      {prose.lines.every((p) => !p.added && !p.removed) ? <p className="text-sm text-stone-600">The text is unchanged.</p> : <ProseDiffView parts={prose.words} />}
+      {prose.lines.every((p) => !p.added && !p.removed) ? (
+        <p className="text-sm text-stone-600">The text is unchanged.</p>
+      ) : (
+        <ProseDiffView parts={prose.words} />
+      )}
     </>
   );
 }

@@ -3,9 +3,9 @@ import { z } from "zod";
 import { requireMember } from "@/lib/auth/access";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
+import { sniffUpload } from "@/lib/storage/sniff-upload";
 import { contentDisposition } from "@/lib/tickets/attachments/display-file-name";
 import { readAttachment } from "@/lib/tickets/attachments/read-attachment";
-import { sniffUpload } from "@/lib/storage/sniff-upload";
 
 // GET /api/v1/vendors/{vendor}/attachments/{id}: download, for the ticket's customer or Desk staff only.
 export const GET = withVendor<{ vendor: string; attachment: string }>(async (_request, { access, params }) => {
@@ -16,7 +16,13 @@ export const GET = withVendor<{ vendor: string; attachment: string }>(async (_re
   // Images are checked again by content before a browser may show them inline.
   const recheck = file.kind === "image" ? await sniffUpload(file.bytes, file.fileName).catch(() => null) : null;
   const inline = recheck?.kind === "image";
-  const contentType = inline ? recheck.contentType : file.kind === "pdf" ? "application/pdf" : file.kind === "text" ? "text/plain; charset=utf-8" : "application/octet-stream";
+  const contentType = inline
+    ? recheck.contentType
+    : file.kind === "pdf"
+      ? "application/pdf"
+      : file.kind === "text"
+        ? "text/plain; charset=utf-8"
+        : "application/octet-stream";
   return new Response(new Uint8Array(file.bytes), {
     headers: {
       "Content-Type": contentType,

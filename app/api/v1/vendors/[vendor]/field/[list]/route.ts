@@ -1,5 +1,6 @@
 import { fieldExportSchema } from "@/content-schema/field-export";
-import { type AttentionFilter, attentionFilterSchema } from "@/content-schema/field-filters";
+import { attentionFilterSchema, type AttentionFilter } from "@/content-schema/field-filters";
+import type { Vendor } from "@/content-schema/vendor";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { confidenceOf } from "@/lib/field/confidence";
 import { loadCoverageGaps } from "@/lib/field/coverage";
@@ -8,7 +9,6 @@ import { coverageGapsCsv, customerChangesCsv, needsAttentionCsv, sheetVersionsCs
 import { listNeedsAttention } from "@/lib/field/needs-attention";
 import { findFieldSheet, loadSheetFieldResults } from "@/lib/field/sheet-field-results";
 import { withVendor } from "@/lib/http/with-vendor";
-import type { Vendor } from "@/content-schema/vendor";
 
 const EXPORT_LIMIT = 5000;
 
@@ -16,7 +16,15 @@ async function render(vendor: Vendor, query: ReturnType<typeof fieldExportSchema
   const { z, confidence } = confidenceOf(vendor.settings);
   switch (query.list) {
     case "needs-attention":
-      return needsAttentionCsv(await listNeedsAttention({ vendorId: vendor.id, z, limit: EXPORT_LIMIT, filters: { from: filter.from, to: filter.to, machineClass: filter.class } }), confidence);
+      return needsAttentionCsv(
+        await listNeedsAttention({
+          vendorId: vendor.id,
+          z,
+          limit: EXPORT_LIMIT,
+          filters: { from: filter.from, to: filter.to, machineClass: filter.class },
+        }),
+        confidence,
+      );
     case "customer-changes":
       return customerChangesCsv(await listCustomerChanges({ vendorId: vendor.id, limit: EXPORT_LIMIT }));
     case "coverage-gaps":
@@ -35,11 +43,22 @@ export const GET = withVendor<{ vendor: string; list: string }>(
   async (request, { access, params }) => {
     const query = fieldExportSchema.parse({ list: params.list, sheet: request.nextUrl.searchParams.get("sheet") ?? undefined });
     const search = request.nextUrl.searchParams;
-    const filter = query.list === "needs-attention" ? attentionFilterSchema.parse({ from: search.get("from") ?? undefined, to: search.get("to") ?? undefined, class: search.get("class") ?? undefined }) : {};
+    const filter =
+      query.list === "needs-attention"
+        ? attentionFilterSchema.parse({
+            from: search.get("from") ?? undefined,
+            to: search.get("to") ?? undefined,
+            class: search.get("class") ?? undefined,
+          })
+        : {};
     const body = await render(access.vendor, query, filter);
     const fileName = `${access.vendor.slug}-${query.list}${query.list === "sheet-versions" ? `-${query.sheet}` : ""}-${new Date().toISOString().slice(0, 10)}`;
     return new Response(body, {
-      headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${fileName}.csv"`, "cache-control": "private, no-store" },
+      headers: {
+        "content-type": "text/csv; charset=utf-8",
+        "content-disposition": `attachment; filename="${fileName}.csv"`,
+        "cache-control": "private, no-store",
+      },
     });
   },
   { permission: "field.read" },

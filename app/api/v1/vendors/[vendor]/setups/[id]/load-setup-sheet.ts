@@ -1,9 +1,8 @@
 import "server-only";
 
-import type { VendorAccess } from "@/lib/auth/access";
-import { requireMember } from "@/lib/auth/access";
-import { getSetup } from "@/lib/bench/list-setups";
 import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { requireMember, type VendorAccess } from "@/lib/auth/access";
+import { getSetup } from "@/lib/bench/list-setups";
 import { getMachine } from "@/lib/bench/machines";
 import { setupSheetData } from "@/lib/bench/setup-sheet-data";
 import { NotFound } from "@/lib/errors/domain-errors";

@@ -1,8 +1,8 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 
-import { withVendor } from "@/lib/http/with-vendor";
 import { NotFound } from "@/lib/errors/domain-errors";
+import { withVendor } from "@/lib/http/with-vendor";
 import { toCustomerThread } from "@/lib/tickets/customer-view";
 import { getTicketThread } from "@/lib/tickets/get-ticket-thread";
 import { supportRole } from "@/lib/tickets/member-kind";
@@ -13,7 +13,9 @@ export const GET = withVendor<{ vendor: string; ticket: string }>(async (_reques
   if (!ticketId) throw new NotFound();
   const who = supportRole(access);
   if (who.kind === "customer") {
-    return NextResponse.json(toCustomerThread(await getTicketThread({ vendorId: access.vendor.id, ticketId, viewer: { kind: "customer", userId: who.userId } })));
+    return NextResponse.json(
+      toCustomerThread(await getTicketThread({ vendorId: access.vendor.id, ticketId, viewer: { kind: "customer", userId: who.userId } })),
+    );
   }
   return NextResponse.json(await getTicketThread({ vendorId: access.vendor.id, ticketId, viewer: { kind: "staff" } }));
 });

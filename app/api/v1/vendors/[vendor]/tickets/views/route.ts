@@ -1,8 +1,8 @@
 import { NextResponse } from "next/server";
 
+import { listDeskViews } from "@/lib/desk/saved-views";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
-import { listDeskViews } from "@/lib/desk/saved-views";
 
 // GET /api/v1/vendors/{vendor}/tickets/views: the agent's queue views with live counts.
 export const GET = withVendor(

@@ -19,7 +19,13 @@ export const GET = withVendor<P>(
     const sheet = await getSheet({ vendorId: access.vendor.id, slug: params.slug });
     const draft = await findOpenDraft({ vendorId: access.vendor.id, sheetId: sheet.id });
     if (!draft) throw new NotFound("This sheet has no open draft.");
-    return NextResponse.json({ number: draft.number, state: draft.state, revision: draft.revision, source: draft.source, approved: Boolean(draft.approvedBy) });
+    return NextResponse.json({
+      number: draft.number,
+      state: draft.state,
+      revision: draft.revision,
+      source: draft.source,
+      approved: Boolean(draft.approvedBy),
+    });
   },
   { permission: "sheets.author" },
 );
@@ -35,7 +41,10 @@ export const PUT = withVendor<P>(
     const draft = await findOpenDraft({ vendorId: actor.vendorId, sheetId: sheet.id });
     if (!draft && body.revision === undefined) {
       const created = await startNewVersion({ ...actor, slug: params.slug, source: body.source });
-      return NextResponse.json({ number: created.number, state: "draft", revision: created.revision, issues: created.issues }, { status: 201 });
+      return NextResponse.json(
+        { number: created.number, state: "draft", revision: created.revision, issues: created.issues },
+        { status: 201 },
+      );
     }
     if (body.revision === undefined) {
       // Saving over an open draft without saying which revision it edits would skip the optimistic lock.
@@ -50,10 +59,19 @@ export const PUT = withVendor<P>(
     }
     try {
       const saved = await saveDraft({ ...actor, slug: params.slug, source: body.source, revision: body.revision });
-      return NextResponse.json({ number: draft?.number, state: "draft", revision: saved.revision, valid: saved.valid, issues: saved.issues });
+      return NextResponse.json({
+        number: draft?.number,
+        state: "draft",
+        revision: saved.revision,
+        valid: saved.valid,
+        issues: saved.issues,
+      });
     } catch (error) {
       if (error instanceof DraftConflict) {
-        return NextResponse.json({ error: "conflict", message: error.message, current: { revision: error.current.revision, source: error.current.source } }, { status: 409 });
+        return NextResponse.json(
+          { error: "conflict", message: error.message, current: { revision: error.current.revision, source: error.current.source } },
+          { status: 409 },
+        );
       }
       return errorResponse(error);
     }

@@ -15,7 +15,14 @@ export const POST = withVendor<{ vendor: string; ticket: string }>(
     const ticketId = z.uuid().safeParse(params.ticket).data;
     if (!ticketId || !access.user) throw new NotFound();
     const { body } = parseInput(ticketMessageSchema, await readJson(request));
-    const { created, ...message } = await addCustomerMessage({ vendorId: access.vendor.id, ticketId, authorId: access.user.id, body, source: "api", idempotencyKey: idempotencyKeyOf(request) });
+    const { created, ...message } = await addCustomerMessage({
+      vendorId: access.vendor.id,
+      ticketId,
+      authorId: access.user.id,
+      body,
+      source: "api",
+      idempotencyKey: idempotencyKeyOf(request),
+    });
     return NextResponse.json({ message }, { status: created ? 201 : 200 });
   },
   { permission: "support.use", rateLimit: { limit: 60, windowSeconds: 60 } },
