@@ -104,13 +104,13 @@ describe("sheet families", () => {
       await signInWithPassword(e1.page, "eng1@northbeck.test", `/${VENDOR}/drafting`);
       await signInWithPassword(e2.page, "eng2@northbeck.test", `/${VENDOR}/drafting`);
 
-      // Define a small family: the new series × cast acrylic × the two routers, slots and profiles.
+      // Define a small family: the new series × polycarbonate (no other e2e test searches it) × the two routers, slots and profiles.
       const p = e1.page;
       await p.goto(`/${VENDOR}/drafting/families/new`);
       await p.locator("#f-name").fill(`E2E series ${tag}`);
       await p.locator("#f-slug").fill(slug);
       await p.locator("#f-series").fill(series);
-      await p.getByLabel("Cast acrylic", { exact: true }).check();
+      await p.getByLabel("Polycarbonate", { exact: true }).check();
       await p.getByLabel("Light belt-drive router").check();
       await p.getByLabel("Rigid ball-screw router").check();
       await Promise.all([
