@@ -40,6 +40,11 @@ export default async function MailPreferencesPage({ params, searchParams }: Prop
         ) : null}
         {q.saved === "1" ? <p className="rounded border border-stone-300 bg-stone-100 px-3 py-2">✓ Saved.</p> : null}
       </div>
+      {q.problem === "unreadable" ? (
+        <p role="alert" className="mb-4 rounded border border-red-300 bg-red-50 px-3 py-2 text-red-900">
+          Nothing was saved: the form came back changed or incomplete. Tick the boxes you want and save again.
+        </p>
+      ) : null}
       <MailPreferencesForm
         vendorSlug={person.vendor.slug}
         token={person.viaLink ? token : undefined}
