@@ -20,6 +20,28 @@ export async function publishDraft(options: PublishOptions) {
 }
 
 /**
+ * A version a family batch wrote is reviewed and published with its batch, all or nothing: published alone, it
+ * would skip the batch's review and leave the batch unable to publish. Left out of the batch, it is the sheet's own.
+ */
+async function refuseIfInOpenBatch(trx: Knex.Transaction, vendorId: string, versionId: string) {
+  const open = await trx("family_batch_items as i")
+    .join("family_batches as b", function () {
+      this.on("b.id", "i.batch_id").andOn("b.vendor_id", "i.vendor_id");
+    })
+    .join("families as f", function () {
+      this.on("f.id", "b.family_id").andOn("f.vendor_id", "b.vendor_id");
+    })
+    .where({ "i.vendor_id": vendorId, "i.version_id": versionId })
+    .whereNull("i.excluded_reason")
+    .whereIn("b.state", ["generating", "in_review", "approved"])
+    .first<{ number: number; name: string } | undefined>("b.number", "f.name");
+  if (open)
+    throw new Conflict(
+      `This version belongs to batch ${open.number} of the family “${open.name}”: publish it with its batch, or leave it out of the batch first.`,
+    );
+}
+
+/**
  * The publish step inside the caller's transaction (a family batch publishes all its sheets in one). `batchId`
  * marks the event so the batch sends one change alert per customer instead of one per sheet.
  */
@@ -31,6 +53,7 @@ export async function publishDraftIn(
   if (draft.state !== "in_review") throw new Conflict("Only a version in review can be published. Submit the draft first.");
   if (settings.requireSecondApproval && !draft.approvedBy)
     throw new Conflict("This version needs an approval by an engineer other than the author before it is published.");
+  if (!batchId) await refuseIfInOpenBatch(trx, vendorId, draft.id);
   const superseded = await trx("sheet_versions")
     .where({ vendor_id: vendorId, sheet_id: sheet.id, state: "published" })
     .update({ state: "superseded", superseded_at: trx.fn.now(), updated_at: trx.fn.now() })

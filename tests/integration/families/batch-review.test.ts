@@ -15,6 +15,8 @@ import { saveFamilyRules } from "@/lib/families/save-family";
 import { sendBatchAlerts } from "@/lib/families/send-batch-alerts";
 import { startGeneration } from "@/lib/families/start-generation";
 import { getBoss } from "@/lib/jobs/boss";
+import { approveDraft } from "@/lib/sheets/approve-draft";
+import { publishDraft } from "@/lib/sheets/publish-draft";
 import { returnToDraft } from "@/lib/sheets/return-to-draft";
 import { weakMachineFields } from "@/tests/factories/bench";
 import { createFamilyScenario, FAMILY_RULES } from "@/tests/factories/families";
@@ -83,6 +85,36 @@ describe("sheet families: batch review and publish", () => {
     await approveBatch(review(s, batch.number));
     expect(await publishBatch(review(s, batch.number))).toEqual({ published: 3, returned: 1 });
     expect(mustExist(await db("sheet_versions").where({ id: item.version_id }).first(), "version").state).toBe("draft");
+  });
+
+  it("a sheet of a batch under review is not published alone, and the batch still publishes whole", async () => {
+    const s = await createFamilyScenario();
+    const batch = await generate(s);
+    await approveBatch(review(s, batch.number));
+    const kept = await db("family_batch_items as i")
+      .join("sheets as sh", "sh.id", "i.sheet_id")
+      .where({ "i.batch_id": batch.id })
+      .orderBy("sh.slug")
+      .first("sh.slug");
+    await expect(publishDraft({ ...review(s, batch.number), slug: kept.slug })).rejects.toThrow(
+      `belongs to batch ${batch.number} of the family`,
+    );
+    expect(await publishedCount(s.vendorId)).toBe(0);
+    // The whole batch still publishes afterwards: nothing was half done.
+    expect(await publishBatch(review(s, batch.number))).toEqual({ published: 4, returned: 0 });
+  });
+
+  it("a sheet the reviewer left out of a batch can be published on its own", async () => {
+    const s = await createFamilyScenario();
+    const batch = await generate(s);
+    const item = await db("family_batch_items as i")
+      .join("sheets as sh", "sh.id", "i.sheet_id")
+      .where({ "i.batch_id": batch.id })
+      .orderBy("sh.slug")
+      .first("i.id", "sh.slug");
+    await excludeBatchItem({ ...review(s, batch.number), itemId: item.id, reason: "Published on its own after a test cut." });
+    await approveDraft({ ...review(s, batch.number), slug: item.slug });
+    expect(await publishDraft({ ...review(s, batch.number), slug: item.slug })).toMatchObject({ state: "published" });
   });
 
   it("batch publish is all or nothing: one sheet that cannot be published keeps every sheet of the batch unpublished", async () => {
