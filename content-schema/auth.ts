@@ -14,3 +14,13 @@ export const signUpSchema = z.object({
   password: passwordSchema,
 });
 export type SignUpInput = z.infer<typeof signUpSchema>;
+
+/** The account page's password change; the current password is empty only for an account that has none yet. */
+export const changePasswordSchema = z
+  .object({
+    currentPassword: z.string().max(200, "At most 200 characters."),
+    newPassword: passwordSchema,
+    repeatPassword: z.string().max(200, "At most 200 characters."),
+  })
+  .refine((v) => v.newPassword === v.repeatPassword, { message: "The two new passwords differ.", path: ["repeatPassword"] });
+export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;

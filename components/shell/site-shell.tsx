@@ -19,7 +19,7 @@ export async function SiteShell({ children, width = "max-w-5xl" }: { children: R
           <AccountArea
             userName={user ? user.name || user.email : null}
             signInHref="/sign-in"
-            links={user?.isOperator ? [{ href: "/operator", label: "Operator" }] : []}
+            links={[...(user?.isOperator ? [{ href: "/operator", label: "Operator" }] : []), { href: "/account", label: "Your account" }]}
           />
         </div>
       </header>

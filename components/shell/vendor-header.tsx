@@ -36,7 +36,10 @@ export function VendorHeader({ vendor, role, userName }: Props) {
           roleLabel={role ? ROLE_LABELS[role] : null}
           signInHref={`/sign-in?vendor=${vendor.slug}&callbackUrl=/${vendor.slug}/library`}
           signUpHref={`/${vendor.slug}/sign-up`}
-          links={role ? [{ href: `/${vendor.slug}/mail-preferences`, label: "Mail preferences" }] : []}
+          links={[
+            ...(role ? [{ href: `/${vendor.slug}/mail-preferences`, label: "Mail preferences" }] : []),
+            { href: "/account", label: "Your account" },
+          ]}
         />
       </div>
     </header>

@@ -6,10 +6,14 @@ import { InvalidInput } from "@/lib/errors/domain-errors";
 
 import { endSessions } from "./end-sessions";
 
-/** Replaces a person's password after checking the current one; every existing session of theirs ends. */
+/**
+ * Replaces a person's password after checking the current one (an account that signs in by e-mail link only has
+ * none to check); every existing session of theirs ends, the one that asked too.
+ */
 export async function changePassword(opts: { userId: string; currentPassword: string; newPassword: string }): Promise<void> {
   const user = await db("users").where({ id: opts.userId }).first<{ password_hash: string | null } | undefined>("password_hash");
-  if (!user?.password_hash || !(await verifyPassword(user.password_hash, opts.currentPassword))) {
+  if (!user) throw new InvalidInput("This account no longer exists.");
+  if (user.password_hash && !(await verifyPassword(user.password_hash, opts.currentPassword))) {
     throw new InvalidInput("The current password is not right.", { currentPassword: ["The current password is not right."] });
   }
   const passwordHash = await hashPassword(opts.newPassword);
