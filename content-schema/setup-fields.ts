@@ -2,6 +2,10 @@ import { z } from "zod";
 
 import { isMachiningInputError, parseLength } from "@/lib/machining";
 
+import { ENTRY_CAPABILITY_KEYS } from "./entry-capability-labels";
+
+export { ENTRY_CAPABILITY_KEYS, entryCapabilityLabels, type EntryCapabilityKey } from "./entry-capability-labels";
+
 /** An override typed as `1/8`, `3.175 mm` or `0.125"`; blank means "use the sheet's". Result in mm. */
 export const lengthOverrideSchema = (what: string) =>
   z.preprocess(
@@ -23,16 +27,6 @@ export const lengthOverrideSchema = (what: string) =>
       })
       .optional(),
   );
-
-export const ENTRY_CAPABILITY_KEYS = ["plunge-only", "ramp", "helix"] as const;
-export type EntryCapabilityKey = (typeof ENTRY_CAPABILITY_KEYS)[number];
-
-/** What the customer's CAM can do to get the cutter into the material, in the trade's words. */
-export const entryCapabilityLabels: Record<EntryCapabilityKey, string> = {
-  "plunge-only": "Straight plunge only",
-  ramp: "Ramp in",
-  helix: "Helix in (and ramp)",
-};
 
 export const entryCapabilitySchema = z
   .enum(ENTRY_CAPABILITY_KEYS, { error: "Choose how your CAM enters the material: straight plunge only, ramp or helix." })

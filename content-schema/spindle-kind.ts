@@ -1,13 +1,8 @@
 import { z } from "zod";
 
-export const SPINDLE_KIND_KEYS = ["constant-torque", "constant-power"] as const;
-export type SpindleKindKey = (typeof SPINDLE_KIND_KEYS)[number];
+import { SPINDLE_KIND_KEYS } from "./spindle-kind-labels";
 
-/** In the trade's words: most router spindles run on a VFD and hold torque, not power, below their rated speed. */
-export const spindleKindLabels: Record<SpindleKindKey, string> = {
-  "constant-torque": "VFD spindle (constant torque below its rated speed)",
-  "constant-power": "Constant power over its speed range",
-};
+export { SPINDLE_KIND_KEYS, spindleKindLabels, type SpindleKindKey } from "./spindle-kind-labels";
 
 const blankToUndefined = (value: unknown) => (typeof value === "string" && value.trim() === "" ? undefined : value);
 

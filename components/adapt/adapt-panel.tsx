@@ -1,8 +1,8 @@
 "use client";
 
-import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
 
+import { LazyFeedSpeedChart } from "@/components/bench/lazy-feed-speed-chart";
 import type { EntryCapabilityKey } from "@/content-schema/setup-fields";
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
 import { computeAdaptation, readAdhocMachine, type AdhocMachineDraft, type OverrideDraft } from "@/lib/adapt/compute-adaptation";
@@ -21,9 +21,6 @@ import { TextInput } from "./text-input";
 import { UnitsSwitch } from "./units-switch";
 import { useAdaptationBeacon } from "./use-adaptation-beacon";
 import { WarningList } from "./warning-list";
-
-// recharts draws nothing useful on the server; load the chart in the browser only.
-const FeedSpeedChart = dynamic(() => import("@/components/bench/feed-speed-chart").then((m) => m.FeedSpeedChart), { ssr: false });
 
 export type AdaptPanelProps = {
   context: AdaptContext;
@@ -204,7 +201,7 @@ export function AdaptPanel({
             </h3>
             <WarningList warnings={result.warnings} />
           </section>
-          {curve ? <FeedSpeedChart curve={curve} units={units} /> : null}
+          {curve ? <LazyFeedSpeedChart curve={curve} units={units} /> : null}
           {saveAction && savedMachine && adaptation.ok ? (
             <SaveSetupForm
               action={saveAction}

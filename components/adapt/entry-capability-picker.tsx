@@ -1,6 +1,6 @@
 "use client";
 
-import { ENTRY_CAPABILITY_KEYS, entryCapabilityLabels, type EntryCapabilityKey } from "@/content-schema/setup-fields";
+import { ENTRY_CAPABILITY_KEYS, entryCapabilityLabels, type EntryCapabilityKey } from "@/content-schema/entry-capability-labels";
 
 const HINTS: Record<EntryCapabilityKey, string> = {
   "plunge-only": "The cutter goes straight down into the material.",

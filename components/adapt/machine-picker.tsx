@@ -2,7 +2,7 @@
 
 import { MACHINE_PRESETS, presetByKey } from "@/content-schema/machine-presets";
 import { RIGIDITY_CLASSES, type RigidityKey } from "@/content-schema/machine-rigidity";
-import { SPINDLE_KIND_KEYS, spindleKindLabels, type SpindleKindKey } from "@/content-schema/spindle-kind";
+import { SPINDLE_KIND_KEYS, spindleKindLabels, type SpindleKindKey } from "@/content-schema/spindle-kind-labels";
 import type { AdhocMachineDraft } from "@/lib/adapt/compute-adaptation";
 import type { Machine } from "@/lib/bench/machine-rows";
 import type { UnitSystem } from "@/lib/machining";

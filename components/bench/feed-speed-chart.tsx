@@ -18,8 +18,10 @@ import {
 import type { FeedSpeedCurve } from "@/lib/bench/feed-speed-curve";
 import type { UnitSystem } from "@/lib/machining";
 
+export type FeedSpeedChartProps = { curve: FeedSpeedCurve; units: UnitSystem };
+
 /** Feed against spindle speed across the machine's range, with the vc window and the rubbing zone shaded. */
-export function FeedSpeedChart({ curve, units }: { curve: FeedSpeedCurve; units: UnitSystem }) {
+export function FeedSpeedChart({ curve, units }: FeedSpeedChartProps) {
   const feedUnit = units === "imperial" ? "in/min" : "mm/min";
   const digits = units === "imperial" ? 1 : 0;
   const captionId = useId();
