@@ -10,6 +10,7 @@ import { FIELD_DIGEST_CRON, FIELD_DIGEST_QUEUE, weeklyDigestJob } from "@/lib/fi
 import { FIELD_REFRESH_QUEUE, refreshFieldRollupsJob } from "@/lib/field/refresh-rollups";
 import { MAIL_QUEUE, mailRetrySchedule } from "@/lib/mail/enqueue-mail";
 import { DEAD_LETTER_CHECK_CRON, DEAD_LETTER_CHECK_QUEUE, deadLetterCheckJob } from "@/lib/mail/notify-dead-letters";
+import { MAIL_SEND_CONCURRENCY } from "@/lib/mail/send-concurrency";
 import { sendMailJob } from "@/lib/mail/send-mail-job";
 import { cleanupUploadsJob, UPLOAD_CLEANUP_CRON, UPLOAD_CLEANUP_QUEUE } from "@/lib/storage/cleanup-uploads";
 import { deliverWebhookJob } from "@/lib/webhooks/deliver-webhook";
@@ -50,4 +51,9 @@ export const JOB_SCHEDULES: Record<string, string> = {
 // Queues whose retries follow a capped exponential backoff over a long window (the rest use DEFAULT_JOB_OPTIONS).
 export const JOB_RETRY_SCHEDULES: Record<string, () => { baseSeconds: number; capSeconds: number }> = {
   [MAIL_QUEUE]: mailRetrySchedule,
+};
+
+// Queues whose jobs of one batch run side by side (the rest run one after another, in the order fetched).
+export const JOB_CONCURRENCY: Record<string, number> = {
+  [MAIL_QUEUE]: MAIL_SEND_CONCURRENCY,
 };

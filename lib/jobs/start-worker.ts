@@ -5,7 +5,7 @@ import type PgBoss from "pg-boss";
 import { backoffSeconds } from "./backoff";
 import { getBoss, jobWriter } from "./boss";
 import { DEFAULT_JOB_OPTIONS, ensureQueue } from "./enqueue";
-import { JOB_HANDLERS, JOB_RETRY_SCHEDULES, JOB_SCHEDULES, type JobHandler } from "./handlers";
+import { JOB_CONCURRENCY, JOB_HANDLERS, JOB_RETRY_SCHEDULES, JOB_SCHEDULES, type JobHandler } from "./handlers";
 
 const globalForWorker = globalThis as unknown as { swarfbookWorker?: Promise<void> };
 
@@ -38,26 +38,38 @@ async function setNextDelay(name: string, id: string, seconds: number): Promise<
 
 /**
  * Each job of a batch is completed or failed on its own: pg-boss would otherwise fail the whole batch when one
- * job throws, and retry (resend) the ones that had already succeeded.
+ * job throws, and retry (resend) the ones that had already succeeded. Up to `lanes` jobs run at once.
  */
-function runBatch(boss: PgBoss, name: string, handler: JobHandler, schedule?: { baseSeconds: number; capSeconds: number }) {
-  return async (jobs: PgBoss.JobWithMetadata[]) => {
-    for (const job of jobs) {
-      try {
-        await handler(job.data, { id: job.id, retryCount: job.retryCount });
-      } catch (error) {
-        const message = error instanceof Error ? error.message : String(error);
-        console.error(`[jobs] ${name} ${job.id} failed (attempt ${job.retryCount + 1}): ${message}`);
-        await record(async () => {
-          if (schedule) await setNextDelay(name, job.id, backoffSeconds(job.retryCount, schedule));
-          await boss.fail(name, job.id, { message });
-        });
-        continue;
-      }
-      await record(() => boss.complete(name, job.id));
+function runBatch(boss: PgBoss, name: string, handler: JobHandler, lanes: number, schedule?: { baseSeconds: number; capSeconds: number }) {
+  async function runOne(job: PgBoss.JobWithMetadata) {
+    try {
+      await handler(job.data, { id: job.id, retryCount: job.retryCount });
+    } catch (error) {
+      const message = error instanceof Error ? error.message : String(error);
+      console.error(`[jobs] ${name} ${job.id} failed (attempt ${job.retryCount + 1}): ${message}`);
+      await record(async () => {
+        if (schedule) await setNextDelay(name, job.id, backoffSeconds(job.retryCount, schedule));
+        await boss.fail(name, job.id, { message });
+      });
+      return;
     }
+    await record(() => boss.complete(name, job.id));
+  }
+  return async (jobs: PgBoss.JobWithMetadata[]) => {
+    let next = 0;
+    await Promise.all(
+      Array.from({ length: Math.min(lanes, jobs.length) }, async () => {
+        while (next < jobs.length) await runOne(jobs[next++]);
+      }),
+    );
+    // A full batch means a backlog (after an outage, or a batch alert): fetch again at once instead of waiting out
+    // the polling interval, so a backlog drains as fast as the handlers go.
+    const workerId = workerIds.get(name);
+    if (jobs.length >= batchSize && workerId) boss.notifyWorker(workerId);
   };
 }
+
+const workerIds = new Map<string, string>();
 
 const registered = new Set<string>();
 
@@ -66,11 +78,12 @@ async function registerWorkers(): Promise<void> {
   for (const [name, handler] of Object.entries(JOB_HANDLERS)) {
     if (registered.has(name)) continue;
     await ensureQueue(name);
-    await boss.work(
+    const workerId = await boss.work(
       name,
       { pollingIntervalSeconds, batchSize, includeMetadata: true },
-      runBatch(boss, name, handler, JOB_RETRY_SCHEDULES[name]?.()),
+      runBatch(boss, name, handler, JOB_CONCURRENCY[name] ?? 1, JOB_RETRY_SCHEDULES[name]?.()),
     );
+    workerIds.set(name, workerId);
     registered.add(name);
   }
   for (const [name, cron] of Object.entries(JOB_SCHEDULES)) await boss.schedule(name, cron, {}, { ...DEFAULT_JOB_OPTIONS, tz: "UTC" });
