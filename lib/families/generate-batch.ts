@@ -24,7 +24,10 @@ const CHUNK = 250;
 export async function generateBatch({ vendorId, batchId, chunkSize = CHUNK }: { vendorId: string; batchId: string; chunkSize?: number }) {
   const batch = await db("family_batches").where({ vendor_id: vendorId, id: batchId }).first();
   if (!batch || batch.state !== "generating") return { written: 0 };
-  const family = rowToFamily(await db("families").where({ vendor_id: vendorId, id: batch.family_id }).first());
+  const familyRow = await db("families").where({ vendor_id: vendorId, id: batch.family_id }).first();
+  // A family's batches go with it (on delete cascade): no family, no batch to write.
+  if (!familyRow) return { written: 0 };
+  const family = rowToFamily(familyRow);
   const ruleSet = await getRuleSet({ vendorId, id: batch.rule_set_id });
   const catalogue = await loadFamilyCatalogue({ vendorId, family });
   const sheets = await findCellSheets({

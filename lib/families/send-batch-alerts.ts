@@ -74,7 +74,11 @@ export async function sendBatchAlerts({ vendorId, batchId }: { vendorId: string;
     })
     .join("vendors as ven", "ven.id", "b.vendor_id")
     .where({ "b.vendor_id": vendorId, "b.id": batchId, "b.state": "published" })
-    .first("f.name as family_name", "ven.slug as vendor_slug", "ven.name as vendor_name");
+    .first<{ family_name: string; vendor_slug: string; vendor_name: string } | undefined>(
+      "f.name as family_name",
+      "ven.slug as vendor_slug",
+      "ven.name as vendor_name",
+    );
   if (!batch) return 0;
   const changed = await changedSheets(vendorId, batchId, batch.vendor_slug);
   const byUser = new Map<string, { email: string; units: SetupRow["units"]; sheets: { changed: Changed; rows: SetupRow[] }[] }>();

@@ -43,6 +43,6 @@ export async function startGeneration({ vendorId, userId, slug }: { vendorId: st
       { vendorId, batchId: batch.id },
       { key: `family-generate:${batch.id}`, expireInSeconds: 3600 },
     );
-    return { id: batch.id as string, number: batch.number as number, total };
+    return { id: batch.id, number: batch.number, total };
   });
 }

@@ -15,8 +15,7 @@ afterAll(async () => {
 describe("demo family (invented demo data)", () => {
   it("has a published first batch, a second batch in review, and engine-clean published sheets", async () => {
     await runSeeds(db, { reset: true });
-    const family = await db("families").where({ slug: "o-flute-finishers" }).first();
-    expect(family).toBeDefined();
+    const family = mustExist(await db("families").where({ slug: "o-flute-finishers" }).first(), "demo family");
     const batches = await db("family_batches").where({ family_id: family.id }).orderBy("number").select("id", "state");
     expect(batches.map((b) => b.state)).toEqual(["published", "in_review"]);
     const outcomes = await db("family_batch_items").where({ batch_id: batches[0].id }).pluck("outcome");
