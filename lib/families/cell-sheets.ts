@@ -40,7 +40,7 @@ const publishedOf = (r: CellSheetRow): CellSheet["published"] => {
   return r.pub_id && r.pub_number !== null && frontMatter ? { id: r.pub_id, number: r.pub_number, frontMatter } : null;
 };
 
-export async function findCellSheets({
+export async function listCellSheets({
   vendorId,
   cutterIds,
   materialIds,

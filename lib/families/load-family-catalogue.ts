@@ -31,7 +31,7 @@ export async function selectCutters({
 
 export type FamilyCatalogue = { cutters: Cutter[]; materials: Material[]; machineClasses: MachineClass[] };
 
-export async function loadFamilyCatalogue({
+export async function getFamilyCatalogue({
   vendorId,
   family,
   trx = db,

@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 
 import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/load-adapt-context";
 import { db } from "@/lib/db/knex";
 import { getBoss } from "@/lib/jobs/boss";
 import { runSeeds } from "@/seeds/run-seeds";
@@ -29,7 +29,7 @@ describe("demo family (invented demo data)", () => {
       .select("v.id", "i.machine_class_id");
     expect(published.length).toBeGreaterThan(4);
     for (const { id, machine_class_id } of published) {
-      const context = (await loadAdaptContext({ vendorId: family.vendor_id, versionId: id }))!;
+      const context = (await findVersionAdaptContext({ vendorId: family.vendor_id, versionId: id }))!;
       const k = mustExist(await db("machine_classes").where({ id: machine_class_id }).first(), "k");
       const machine = {
         minRpm: k.rpm_min,
