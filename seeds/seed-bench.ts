@@ -4,7 +4,7 @@ import type { Knex } from "knex";
 
 import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { findVersionAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 
 import type { SeededIds } from "./seed-foundation";
 import { meltingStorySlug } from "./sheets/demo-sheet-plan";

@@ -2,7 +2,7 @@ import "server-only";
 
 import { cacheLife, cacheTag } from "next/cache";
 
-import { findVersionAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { libraryTag } from "@/lib/library/library-cache";
 
 /**

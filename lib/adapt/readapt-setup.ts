@@ -8,7 +8,7 @@ import type { AdaptResult } from "@/lib/machining";
 
 import type { AdaptContext } from "./adapt-context";
 import type { AdaptedChange } from "./adapted-diff";
-import { findVersionAdaptContext } from "./load-adapt-context";
+import { findVersionAdaptContext } from "./find-version-adapt-context";
 import { readaptOperation } from "./readapt-operation";
 
 export type Readaptation = {

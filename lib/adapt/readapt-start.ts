@@ -4,7 +4,7 @@ import { findSetup } from "@/lib/bench/list-setups";
 import { isUuid } from "@/lib/ids/is-uuid";
 
 import type { OverrideDraft } from "./compute-adaptation";
-import { findVersionAdaptContext } from "./load-adapt-context";
+import { findVersionAdaptContext } from "./find-version-adapt-context";
 
 export type AdaptStart = { machineId: string; operationIndex: number; overrides: OverrideDraft };
 

@@ -2,7 +2,7 @@ import "server-only";
 
 import type { SetupCreate } from "@/content-schema/setup-fields";
 import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { findVersionAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";

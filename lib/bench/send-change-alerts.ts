@@ -7,7 +7,7 @@ import { mailFooter, withFooter } from "@/lib/mail-preferences/preferences-link"
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 
-import { findVersionAdaptContext } from "../adapt/load-adapt-context";
+import { findVersionAdaptContext } from "../adapt/find-version-adapt-context";
 import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "./alert-setups";
 import { createAlertStopToken } from "./alert-token";
 import { renderChangeAlert } from "./change-alert-mail";

@@ -11,7 +11,7 @@ import { listCellSheets } from "./cell-sheets";
 import { computeCell, eachCell } from "./compute-cells";
 import { rowToFamily } from "./family-rows";
 import { getRuleSet } from "./get-family";
-import { getFamilyCatalogue } from "./load-family-catalogue";
+import { getFamilyCatalogue } from "./get-family-catalogue";
 import { writeCells } from "./write-cells";
 
 const jobSchema = z.object({ vendorId: z.uuid(), batchId: z.uuid() });

@@ -7,7 +7,7 @@ import { listCellSheets } from "./cell-sheets";
 import { cellStatus, type CellStatus } from "./cell-status";
 import { computeCell, eachCell, type ComputedCell } from "./compute-cells";
 import { getFamily } from "./get-family";
-import { getFamilyCatalogue } from "./load-family-catalogue";
+import { getFamilyCatalogue } from "./get-family-catalogue";
 
 export type PreviewCell = ComputedCell & {
   status: CellStatus;

@@ -3,7 +3,7 @@ import "server-only";
 import { z } from "zod";
 
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
-import { findVersionAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "@/lib/bench/alert-setups";
 import { db } from "@/lib/db/knex";
 import { appUrl } from "@/lib/http/app-url";

@@ -6,7 +6,7 @@ import { enqueue } from "@/lib/jobs/enqueue";
 
 import { cellCount } from "./compute-cells";
 import { getFamily, getLatestRuleSet } from "./get-family";
-import { getFamilyCatalogue } from "./load-family-catalogue";
+import { getFamilyCatalogue } from "./get-family-catalogue";
 
 export const FAMILY_GENERATE_QUEUE = "families.generate";
 

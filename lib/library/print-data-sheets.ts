@@ -11,7 +11,7 @@ import { renderDataSheetPdf } from "@/lib/pdf/data-sheet-pdf";
 import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 import { formatDate } from "@/lib/ui/dates";
-import { findVendorLogo } from "@/lib/vendors/get-vendor-logo";
+import { findVendorLogo } from "@/lib/vendors/find-vendor-logo";
 
 import { cutterSpecs, dataSheetData, dataSheetOperations, ownCautions } from "./data-sheet-data";
 import { STANDARD_CAUTIONS } from "./standard-cautions";

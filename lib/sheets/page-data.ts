@@ -3,7 +3,7 @@ import "server-only";
 import { cache } from "react";
 
 import { safeDecode } from "@/lib/http/safe-decode";
-import { findDraftingSheet } from "@/lib/sheets/get-drafting-sheet";
+import { findDraftingSheet } from "@/lib/sheets/find-drafting-sheet";
 import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 export const findDraftingSheetPage = cache(async (vendorSlug: string, slug: string) => {

@@ -5,7 +5,7 @@ import { materialFieldsSchema } from "@/content-schema/catalogue-material";
 import { machineFieldsSchema } from "@/content-schema/machine-fields";
 import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { adaptOperation, buildAdaptInput } from "@/lib/adapt/adapt-context";
-import { findVersionAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { createSetup } from "@/lib/bench/create-setup";
 import { findSetup } from "@/lib/bench/list-setups";
 import { machineToInput } from "@/lib/bench/machine-rows";

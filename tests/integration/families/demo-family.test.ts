@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 
 import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { findVersionAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { db } from "@/lib/db/knex";
 import { getBoss } from "@/lib/jobs/boss";
 import { runSeeds } from "@/seeds/run-seeds";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import { addStaffMessage } from "@/lib/tickets/add-message";
-import { getAttachment } from "@/lib/tickets/attachments/read-attachment";
+import { getAttachment } from "@/lib/tickets/attachments/get-attachment";
 import { saveAttachment } from "@/lib/tickets/attachments/save-attachment";
 import { getTicketThread } from "@/lib/tickets/get-ticket-thread";
 import { createVendorWithStaff } from "@/tests/factories/foundation";

@@ -1,6 +1,6 @@
 import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
-import { findVendorLogo } from "@/lib/vendors/get-vendor-logo";
+import { findVendorLogo } from "@/lib/vendors/find-vendor-logo";
 
 // GET /api/v1/vendors/{vendor}/logo: the vendor's logo, sandboxed so an SVG can never run script.
 export const GET = withVendor(async (_request, { access }) => {

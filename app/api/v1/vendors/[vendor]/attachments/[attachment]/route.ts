@@ -5,7 +5,7 @@ import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
 import { sniffUpload } from "@/lib/storage/sniff-upload";
 import { contentDisposition } from "@/lib/tickets/attachments/display-file-name";
-import { getAttachment } from "@/lib/tickets/attachments/read-attachment";
+import { getAttachment } from "@/lib/tickets/attachments/get-attachment";
 
 // GET /api/v1/vendors/{vendor}/attachments/{id}: download, for the ticket's customer or Desk staff only.
 export const GET = withVendor<{ vendor: string; attachment: string }>(async (_request, { access, params }) => {

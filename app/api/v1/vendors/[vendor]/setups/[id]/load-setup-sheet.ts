@@ -1,6 +1,6 @@
 import "server-only";
 
-import { findVersionAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { requireMember, type VendorAccess } from "@/lib/auth/access";
 import { findSetup } from "@/lib/bench/list-setups";
 import { findMachine } from "@/lib/bench/machines";
