@@ -37,7 +37,8 @@ export async function adaptPanelProps(
     machines,
     initialMachineId: start?.machineId,
     initialOverrides: start?.overrides,
-    units: machines[0]?.units ?? units,
+    // The reader's one units preference (the cookie), whatever units their machines were typed in.
+    units,
     vendorSlug: vendor.slug,
     saveAction: benchUser && context.versionState !== "withdrawn" ? saveSetupAction : undefined,
     signInHref: user ? undefined : `/sign-in?callbackUrl=${encodeURIComponent(returnTo)}&vendor=${encodeURIComponent(vendor.slug)}`,

@@ -3,6 +3,7 @@
 import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
 
+import { useUnitsPreference } from "@/components/units/use-units-preference";
 import type { EntryCapabilityKey } from "@/content-schema/setup-fields";
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
 import { computeAdaptation, readAdhocMachine, type AdhocMachineDraft, type OverrideDraft } from "@/lib/adapt/compute-adaptation";
@@ -56,7 +57,7 @@ export function AdaptPanel({
   context,
   operationIndex = 0,
   machines = [],
-  units: initialUnits = "metric",
+  units: pageUnits = "metric",
   vendorSlug,
   saveAction,
   signInHref,
@@ -67,7 +68,7 @@ export function AdaptPanel({
   const [draft, setDraft] = useState(EMPTY_DRAFT);
   const [opIndex, setOpIndex] = useState(context.operations[operationIndex] ? operationIndex : 0);
   const [overrides, setOverrides] = useState<OverrideDraft>(initialOverrides ?? { ae: "", ap: "", stickout: "" });
-  const [units, setUnits] = useState<UnitSystem>(initialUnits);
+  const { units, choose: chooseUnits, pending: unitsPending } = useUnitsPreference(pageUnits);
   const [entryCapability, setEntryCapability] = useState<EntryCapabilityKey>("ramp");
 
   const { adaptation, machine } = useMemo(() => {
@@ -127,7 +128,7 @@ export function AdaptPanel({
             ))}
           </select>
         </div>
-        <UnitsSwitch units={units} onChange={setUnits} />
+        <UnitsSwitch units={units} onChange={chooseUnits} pending={unitsPending} />
       </div>
       <MachinePicker
         machines={machines}
