@@ -6,11 +6,12 @@ import type { SheetFrontMatter, SheetOperation } from "@/content-schema/sheet-fr
 import type { SheetState } from "@/content-schema/sheet-workflow";
 import { readStoredOperations } from "@/lib/adapt/read-front-matter";
 import { db } from "@/lib/db/knex";
+import type { SheetRow } from "@/lib/db/tables";
 import { storedFrontMatter } from "@/lib/sheets/version-rows";
 
 import { cellKey } from "./compute-cells";
 
-// The sheets that already exist for a family's cells, with their newest and their published version.
+// The sheets that already exist for a family's cells.
 
 export type CellSheet = {
   id: string;
@@ -19,13 +20,8 @@ export type CellSheet = {
   published: { id: string; number: number; frontMatter: SheetFrontMatter } | null;
 };
 
-/** A sheet of a cell's triple with its newest version and, when there is one, its published version. */
-type CellSheetRow = {
-  id: string;
-  slug: string;
-  cutter_id: string;
-  material_id: string;
-  machine_class_id: string;
+/** A cell's sheet with its newest and its published version. */
+type CellSheetRow = Pick<SheetRow, "id" | "slug" | "cutter_id" | "material_id" | "machine_class_id"> & {
   latest_id: string;
   latest_number: number;
   latest_state: SheetState;
