@@ -185,7 +185,7 @@ async function run(url: string, knex: Knex) {
   const outcomes = await knex("family_batch_items")
     .where({ batch_id: batch.id })
     .groupBy("outcome")
-    .select("outcome", knex.raw("count(*)::int as n"));
+    .select<{ outcome: string; n: number }[]>("outcome", knex.raw("count(*)::int as n"));
   console.log(`  ${generated.written} drafts written; ${outcomes.map((o) => `${o.outcome} ${o.n}`).join(", ")}`);
   const codes = await knex.raw(
     "select w->>'code' as code, count(*)::int as n from family_batch_items, jsonb_array_elements(warnings) w where batch_id = ? group by 1 order by 2 desc limit 5",

@@ -10,7 +10,7 @@
 //     job's usual case: only the touched version is recomputed, so it should not grow with the total);
 //   · each Field-results query on its own, p50/p95/p99 (sequential, round-robin over vendors);
 //   · the overview page load: its four queries in parallel, as the page runs them;
-//   · the drill-in, loadSheetFieldResults(), for random sheets;
+//   · the drill-in, findSheetFieldResults(), for random sheets;
 //   · EXPLAIN ANALYZE of the needs-attention query and the execution time of every query the pages issue.
 // Each measured phase stops after --iterations runs or PHASE_BUDGET_MS, whichever comes first.
 // The database is always dropped at the end.
@@ -55,7 +55,7 @@ async function run(url: string, knex: Knex, o: Options, refreshOnly = false): Pr
     await printPlans(url, field, vendorIds[0], sheets[0]);
 
     const page = stats.get("page    overview (all four in parallel)") ?? Infinity;
-    const drill = stats.get("page    drill-in loadSheetFieldResults") ?? Infinity;
+    const drill = stats.get("page    drill-in findSheetFieldResults") ?? Infinity;
     console.log(
       `\nOverview page load p95 ${page.toFixed(1)} ms; drill-in p95 ${drill.toFixed(1)} ms (${drill <= TARGET_P95_MS ? "within" : "over"} ${TARGET_P95_MS} ms)`,
     );

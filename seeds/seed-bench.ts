@@ -4,7 +4,7 @@ import type { Knex } from "knex";
 
 import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 
 import type { SeededIds } from "./seed-foundation";
 import { meltingStorySlug } from "./sheets/demo-sheet-plan";
@@ -129,7 +129,7 @@ export async function seedBench(knex: Knex, ids: SeededIds): Promise<void> {
     // The melting story first, so it is always among the sheets with setups.
     for (const list of [...(melting ? [melting] : []), ...multi.filter((l) => l !== melting)].slice(0, 4)) {
       for (const version of list) {
-        const context = await loadAdaptContext({ vendorId, versionId: version.id, trx: knex });
+        const context = await findVersionAdaptContext({ vendorId, versionId: version.id, trx: knex });
         if (!context) continue;
         for (let k = 0; k < 3; k++) {
           const machine = machines[turn++ % machines.length];

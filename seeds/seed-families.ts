@@ -6,7 +6,7 @@ import type { Knex } from "knex";
 import { cutterFieldsSchema } from "@/content-schema/catalogue-cutter";
 import { familyRulesSchema, type FamilyRulesInput } from "@/content-schema/family";
 import { cutterToRow, rowToCutter, rowToMachineClass, rowToMaterial } from "@/lib/catalogue/catalogue-rows";
-import { findCellSheets } from "@/lib/families/cell-sheets";
+import { listCellSheets } from "@/lib/families/cell-sheets";
 import { computeCell, eachCell } from "@/lib/families/compute-cells";
 import { writeCells } from "@/lib/families/write-cells";
 
@@ -51,7 +51,7 @@ async function generate(
   const { vendorId } = family;
   const parsed = familyRulesSchema.parse(rules);
   const cells = [...eachCell(catalogue)].map((cell) => computeCell(cell, parsed));
-  const sheets = await findCellSheets({
+  const sheets = await listCellSheets({
     vendorId,
     cutterIds: catalogue.cutters.map((c) => c.id),
     materialIds: family.materialIds,

@@ -9,7 +9,7 @@ import type { Knex } from "knex";
 
 import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import { adaptOperation, type AdaptContext } from "@/lib/adapt/adapt-context";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 
 import type { SeededIds } from "./seed-foundation";
 import { meltingStorySlug } from "./sheets/demo-sheet-plan";
@@ -172,7 +172,7 @@ const CHANGE_KEYS = {
 } as const;
 
 async function report(knex: Knex, vendorId: string, version: Version, machines: Machine[], reports: Report[], startDay: number) {
-  const context = await loadAdaptContext({ vendorId, versionId: version.id, trx: knex });
+  const context = await findVersionAdaptContext({ vendorId, versionId: version.id, trx: knex });
   if (!context?.operations.length) return;
   let turn = 0;
   for (const [k, r] of reports.entries()) {

@@ -1,12 +1,13 @@
 import type { Knex } from "knex";
 
+import type { WebhookEventType } from "@/content-schema/webhook-events";
 import { newWebhookSecret, sealSecret, secretHint } from "@/lib/webhooks/secret-box";
 
 import type { SeededIds } from "./seed-foundation";
 
 // One invented webhook per demo vendor, paused, to addresses under the reserved .example domain: the admin pages
 // show how one looks, and nothing is ever sent from the demo.
-const DEMO_WEBHOOKS: Record<string, { url: string; description: string; events: string[] }> = {
+const DEMO_WEBHOOKS: Record<string, { url: string; description: string; events: WebhookEventType[] }> = {
   northbeck: {
     url: "https://orders.northbeck.example/swarfbook-events",
     description: "Web shop: new and withdrawn sheets (demo, paused)",

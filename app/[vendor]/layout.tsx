@@ -5,21 +5,21 @@ import type { CSSProperties, ReactNode } from "react";
 import { SafetyFooter } from "@/components/shell/safety-note";
 import { VendorHeader } from "@/components/shell/vendor-header";
 import { findMembership } from "@/lib/auth/membership";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { inkFor } from "@/lib/ui/contrast";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 type Props = { children: ReactNode; params: Promise<{ vendor: string }> };
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
-  const vendor = await getVendorBySlug((await params).vendor);
+  const vendor = await findVendorBySlug((await params).vendor);
   return { title: { default: vendor?.name ?? "Not found", template: `%s · ${vendor?.name ?? "Swarfbook"}` } };
 }
 
 export default async function VendorLayout({ children, params }: Props) {
-  const vendor = await getVendorBySlug((await params).vendor);
+  const vendor = await findVendorBySlug((await params).vendor);
   if (!vendor) notFound();
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   const member = user ? await findMembership(vendor.id, user.id) : null;
   const style = { "--vendor-accent": vendor.accentColor, "--vendor-accent-ink": inkFor(vendor.accentColor) } as CSSProperties;
   return (

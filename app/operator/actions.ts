@@ -4,13 +4,13 @@ import { revalidatePath } from "next/cache";
 
 import { createVendorSchema } from "@/content-schema/vendor-create";
 import type { ActionState } from "@/lib/actions/action-state";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
 import { createVendor } from "@/lib/vendors/create-vendor";
 
 export async function createVendorAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   if (!user?.isOperator) return { ok: false, message: "Not found." };
   const values = Object.fromEntries([...form.entries()].filter(([, v]) => typeof v === "string")) as Record<string, string>;
   const parsed = createVendorSchema.safeParse(values);

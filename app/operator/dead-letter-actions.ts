@@ -3,13 +3,13 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { discardDeadLetters, retryDeadLetters } from "@/lib/mail/dead-letters";
 
 const input = z.object({ id: z.union([z.literal(""), z.uuid()]).default("") });
 
 async function operatorInput(form: FormData): Promise<string | undefined | null> {
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   if (!user?.isOperator) return null;
   const parsed = input.safeParse({ id: form.get("id") ?? "" });
   if (!parsed.success) return null;

@@ -4,7 +4,7 @@ import type { AdaptContext } from "@/lib/adapt/adapt-context";
 import type { AdaptStart } from "@/lib/adapt/readapt-start";
 import { findMembership } from "@/lib/auth/membership";
 import { can } from "@/lib/auth/permissions";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { listMachines } from "@/lib/bench/machines";
 import type { UnitSystem } from "@/lib/machining";
 
@@ -27,7 +27,7 @@ export async function adaptPanelProps(
   context: AdaptContext,
   { vendor, operationIndex, units, returnTo, start, saveSetupAction }: AdaptMountOptions,
 ): Promise<AdaptPanelProps> {
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   const member = user ? await findMembership(vendor.id, user.id) : null;
   const benchUser = user && member && can(member.role, "bench.use") ? user : null;
   const machines = benchUser ? await listMachines({ vendorId: vendor.id, userId: benchUser.id }) : [];
@@ -37,7 +37,8 @@ export async function adaptPanelProps(
     machines,
     initialMachineId: start?.machineId,
     initialOverrides: start?.overrides,
-    units: machines[0]?.units ?? units,
+    // The reader's one units preference (the cookie), whatever units their machines were typed in.
+    units,
     vendorSlug: vendor.slug,
     saveAction: benchUser && context.versionState !== "withdrawn" ? saveSetupAction : undefined,
     signInHref: user ? undefined : `/sign-in?callbackUrl=${encodeURIComponent(returnTo)}&vendor=${encodeURIComponent(vendor.slug)}`,

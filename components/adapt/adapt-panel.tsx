@@ -3,6 +3,7 @@
 import { useMemo, useState } from "react";
 
 import { LazyFeedSpeedChart } from "@/components/bench/lazy-feed-speed-chart";
+import { useUnitsPreference } from "@/components/units/use-units-preference";
 import type { EntryCapabilityKey } from "@/content-schema/setup-fields";
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
 import { computeAdaptation, readAdhocMachine, type AdhocMachineDraft, type OverrideDraft } from "@/lib/adapt/compute-adaptation";
@@ -53,7 +54,7 @@ export function AdaptPanel({
   context,
   operationIndex = 0,
   machines = [],
-  units: initialUnits = "metric",
+  units: pageUnits = "metric",
   vendorSlug,
   saveAction,
   signInHref,
@@ -64,7 +65,7 @@ export function AdaptPanel({
   const [draft, setDraft] = useState(EMPTY_DRAFT);
   const [opIndex, setOpIndex] = useState(context.operations[operationIndex] ? operationIndex : 0);
   const [overrides, setOverrides] = useState<OverrideDraft>(initialOverrides ?? { ae: "", ap: "", stickout: "" });
-  const [units, setUnits] = useState<UnitSystem>(initialUnits);
+  const { units, choose: chooseUnits, pending: unitsPending } = useUnitsPreference(pageUnits);
   const [entryCapability, setEntryCapability] = useState<EntryCapabilityKey>("ramp");
 
   const { adaptation, machine } = useMemo(() => {
@@ -124,7 +125,7 @@ export function AdaptPanel({
             ))}
           </select>
         </div>
-        <UnitsSwitch units={units} onChange={setUnits} />
+        <UnitsSwitch units={units} onChange={chooseUnits} pending={unitsPending} />
       </div>
       <MachinePicker
         machines={machines}

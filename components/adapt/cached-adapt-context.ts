@@ -2,7 +2,7 @@ import "server-only";
 
 import { cacheLife, cacheTag } from "next/cache";
 
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { libraryTag } from "@/lib/library/library-cache";
 
 /**
@@ -13,5 +13,5 @@ export async function getCachedAdaptContext(vendorId: string, versionId: string)
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
-  return loadAdaptContext({ vendorId, versionId });
+  return findVersionAdaptContext({ vendorId, versionId });
 }

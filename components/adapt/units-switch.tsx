@@ -2,10 +2,21 @@
 
 import type { UnitSystem } from "@/lib/machining";
 
-/** Metric or imperial for the panel's numbers and bare inputs. */
-export function UnitsSwitch({ units, onChange }: { units: UnitSystem; onChange: (units: UnitSystem) => void }) {
+/**
+ * Metric or imperial for the panel's numbers and bare inputs. The panel passes the reader's one units preference
+ * (`useUnitsPreference`): switching here switches the page too.
+ */
+export function UnitsSwitch({
+  units,
+  onChange,
+  pending = false,
+}: {
+  units: UnitSystem;
+  onChange: (units: UnitSystem) => void;
+  pending?: boolean;
+}) {
   return (
-    <div role="group" aria-label="Units" className="inline-flex rounded border border-stone-300">
+    <div role="group" aria-label="Units" aria-busy={pending} className="inline-flex rounded border border-stone-300">
       {(["metric", "imperial"] as const).map((u) => (
         <button
           key={u}

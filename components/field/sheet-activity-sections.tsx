@@ -1,10 +1,10 @@
 import type { ActionState } from "@/lib/actions/action-state";
+import { findSheetResults } from "@/lib/field/page-data";
 import { formatDate } from "@/lib/ui/dates";
 
 import { CustomerChangesList } from "./customer-changes-list";
 import { FieldSection } from "./field-section";
 import { LinkedTicketList } from "./linked-ticket-list";
-import { loadSheetResults } from "./load-sheet-results";
 
 type Props = {
   vendorSlug: string;
@@ -17,7 +17,7 @@ type Props = {
 
 /** What customers changed, linked tickets and hand-offs of one sheet. */
 export async function SheetActivitySections({ vendorSlug, vendorId, sheetId, z, deskLinks, startDraft }: Props) {
-  const results = await loadSheetResults(vendorId, sheetId, z);
+  const results = await findSheetResults(vendorId, sheetId, z);
   if (!results) return null;
   return (
     <>

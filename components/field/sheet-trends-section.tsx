@@ -1,8 +1,8 @@
+import { findSheetResults } from "@/lib/field/page-data";
 import { publicationVerdict } from "@/lib/field/publication-verdict";
-import { loadSheetTrends } from "@/lib/field/sheet-trends";
+import { getSheetTrends } from "@/lib/field/sheet-trends";
 import { formatDate } from "@/lib/ui/dates";
 
-import { loadSheetResults } from "./load-sheet-results";
 import { LazyTrendChart } from "./trend-chart-lazy";
 import { TrendTable } from "./trend-table";
 
@@ -29,10 +29,7 @@ export async function SheetTrendsSection({
   z: number;
   confidenceLabel: string;
 }) {
-  const [trends, results] = await Promise.all([
-    loadSheetTrends({ vendorId, sheetId, from, to, z }),
-    loadSheetResults(vendorId, sheetId, z),
-  ]);
+  const [trends, results] = await Promise.all([getSheetTrends({ vendorId, sheetId, from, to, z }), findSheetResults(vendorId, sheetId, z)]);
   const verdict = publicationVerdict(results?.versions ?? [], confidenceLabel);
   const points = trends.weeks.map((w) => ({
     week: w.week,

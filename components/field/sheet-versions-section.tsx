@@ -1,8 +1,8 @@
 import { OUTCOME_SYMPTOMS, outcomeSymptomLabels } from "@/content-schema/outcome-fields";
 import { compareVersions } from "@/lib/field/compare-versions";
+import { findSheetResults } from "@/lib/field/page-data";
 
 import { FieldCharts } from "./field-charts";
-import { loadSheetResults } from "./load-sheet-results";
 import { VersionRollupTable } from "./version-rollup-table";
 
 /** A sheet's field results version by version: the table, each version against the one before, the charts. */
@@ -19,7 +19,7 @@ export async function SheetVersionsSection({
   z: number;
   confidenceLabel: string;
 }) {
-  const results = await loadSheetResults(vendorId, sheet.id, z);
+  const results = await findSheetResults(vendorId, sheet.id, z);
   const versions = results?.versions ?? [];
   if (versions.length === 0)
     return (

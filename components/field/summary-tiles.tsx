@@ -1,9 +1,9 @@
 import { percent } from "@/lib/field/confidence";
-import { loadFieldSummary } from "@/lib/field/field-summary";
+import { getFieldSummary } from "@/lib/field/field-summary";
 
 /** The vendor's totals across every version. */
 export async function SummaryTiles({ vendorId }: { vendorId: string }) {
-  const summary = await loadFieldSummary({ vendorId });
+  const summary = await getFieldSummary({ vendorId });
   const tiles = [
     ["Outcome reports", summary.outcomes],
     ["Failed", summary.outcomes ? `${summary.failed} (${percent(summary.failed / summary.outcomes)})` : 0],

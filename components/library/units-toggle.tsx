@@ -1,24 +1,11 @@
 "use client";
 
-import { useRouter } from "next/navigation";
-import { useTransition } from "react";
-
+import { useUnitsPreference } from "@/components/units/use-units-preference";
 import type { UnitSystem } from "@/lib/machining";
 
-export const UNITS_COOKIE = "sb-units";
-
-function rememberUnits(next: UnitSystem) {
-  document.cookie = `${UNITS_COOKIE}=${next}; path=/; max-age=31536000; samesite=lax`;
-}
-
-/** Metric or imperial for every number on the page; the choice is kept in a cookie for a year. */
-export function UnitsToggle({ units }: { units: UnitSystem }) {
-  const router = useRouter();
-  const [pending, start] = useTransition();
-  const choose = (next: UnitSystem) => {
-    rememberUnits(next);
-    start(() => router.refresh());
-  };
+/** Metric or imperial for every number on the page; the choice is kept in the units cookie for a year. */
+export function UnitsToggle({ units: pageUnits }: { units: UnitSystem }) {
+  const { units, choose, pending } = useUnitsPreference(pageUnits);
   return (
     <div
       role="group"

@@ -4,8 +4,8 @@ import { headers } from "next/headers";
 import Link from "next/link";
 
 import { findMembership } from "@/lib/auth/membership";
-import { getSessionUser } from "@/lib/auth/session-user";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findSessionUser } from "@/lib/auth/session-user";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 /**
  * A signed-in person who is not a customer of a customers-only Library gets a 404 like any
@@ -16,7 +16,7 @@ export async function PrivateLibraryNote() {
   const path = (await headers()).get("x-request-path") ?? "";
   const slug = /^\/([a-z0-9-]{1,63})\/library(?:\/|$)/.exec(path)?.[1];
   if (!slug) return null;
-  const [vendor, user] = await Promise.all([getVendorBySlug(slug), getSessionUser()]);
+  const [vendor, user] = await Promise.all([findVendorBySlug(slug), findSessionUser()]);
   if (!vendor || !user || vendor.settings.libraryPublic || (await findMembership(vendor.id, user.id))) return null;
   return (
     <div className="mx-auto max-w-xl py-16" data-private-library>

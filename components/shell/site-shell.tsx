@@ -1,14 +1,14 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 
 import { AccountArea } from "./account-area";
 import { SafetyFooter } from "./safety-note";
 
 /** The platform's own pages (home, sign-in, operator): the Swarfbook header with the signed-in state. */
 export async function SiteShell({ children, width = "max-w-5xl" }: { children: ReactNode; width?: string }) {
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   return (
     <div className="flex min-h-screen flex-col">
       <header data-shell className="border-b border-stone-200 bg-white">

@@ -5,7 +5,7 @@ import type { z } from "zod";
 import { resolveVendorAccess, type VendorAccess } from "@/lib/auth/access";
 import type { Member } from "@/lib/auth/membership";
 import type { Permission } from "@/lib/auth/permissions";
-import { getSessionUser, type SessionUser } from "@/lib/auth/session-user";
+import { findSessionUser, type SessionUser } from "@/lib/auth/session-user";
 import { pinReadsToPrimary } from "@/lib/db/read-db";
 import { CATCHING_UP, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { DomainError } from "@/lib/errors/domain-errors";
@@ -53,7 +53,7 @@ export function vendorAction<S extends z.ZodType>(
     const raw = formValues(input);
     const values = Object.fromEntries(Object.entries(raw).filter(([, v]) => typeof v === "string")) as Record<string, string>;
     try {
-      const user = await getSessionUser();
+      const user = await findSessionUser();
       const access = await resolveVendorAccess(String(raw.vendor ?? ""), user, options.permission);
       if (!access.user || !access.member) return { ok: false, message: "Sign in to continue.", values };
       const parsed = options.schema.safeParse(raw);

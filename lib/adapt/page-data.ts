@@ -2,7 +2,7 @@ import "server-only";
 
 import { cache } from "react";
 
-import { loadAdaptContext } from "./load-adapt-context";
+import { findVersionAdaptContext } from "./find-version-adapt-context";
 
 /** A sheet version's adapt context, read once per request however many panels and sections ask for it. */
-export const findAdaptContext = cache((vendorId: string, versionId: string) => loadAdaptContext({ vendorId, versionId }));
+export const findAdaptContext = cache((vendorId: string, versionId: string) => findVersionAdaptContext({ vendorId, versionId }));

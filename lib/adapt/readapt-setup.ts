@@ -2,13 +2,13 @@ import "server-only";
 
 import type { SetupSummary } from "@/lib/bench/list-setups";
 import { machineToInput } from "@/lib/bench/machine-rows";
-import { getMachine } from "@/lib/bench/machines";
+import { findMachine } from "@/lib/bench/machines";
 import { db } from "@/lib/db/knex";
 import type { AdaptResult } from "@/lib/machining";
 
 import type { AdaptContext } from "./adapt-context";
 import type { AdaptedChange } from "./adapted-diff";
-import { loadAdaptContext } from "./load-adapt-context";
+import { findVersionAdaptContext } from "./find-version-adapt-context";
 import { readaptOperation } from "./readapt-operation";
 
 export type Readaptation = {
@@ -37,8 +37,8 @@ export async function readaptSetup({
     .where({ "pinned.id": setup.sheetVersionId, "pinned.vendor_id": vendorId, "v.vendor_id": vendorId, "v.state": "published" })
     .first("v.id");
   const [context, machine] = await Promise.all([
-    current ? loadAdaptContext({ vendorId, versionId: current.id }) : null,
-    getMachine({ vendorId, userId, machineId: setup.machineId }),
+    current ? findVersionAdaptContext({ vendorId, versionId: current.id }) : null,
+    findMachine({ vendorId, userId, machineId: setup.machineId }),
   ]);
   if (!context || !machine) return null;
   const readapted = readaptOperation({

@@ -1,10 +1,10 @@
 import "server-only";
 
-import { getSetup } from "@/lib/bench/list-setups";
+import { findSetup } from "@/lib/bench/list-setups";
 import { isUuid } from "@/lib/ids/is-uuid";
 
 import type { OverrideDraft } from "./compute-adaptation";
-import { loadAdaptContext } from "./load-adapt-context";
+import { findVersionAdaptContext } from "./find-version-adapt-context";
 
 export type AdaptStart = { machineId: string; operationIndex: number; overrides: OverrideDraft };
 
@@ -26,11 +26,11 @@ export async function readaptStart({
   versionId: string;
 }): Promise<AdaptStart | null> {
   if (!setupId || !isUuid(setupId)) return null;
-  const setup = await getSetup({ vendorId, userId, setupId });
+  const setup = await findSetup({ vendorId, userId, setupId });
   if (!setup) return null;
   const [oldContext, context] = await Promise.all([
-    loadAdaptContext({ vendorId, versionId: setup.sheetVersionId }),
-    loadAdaptContext({ vendorId, versionId }),
+    findVersionAdaptContext({ vendorId, versionId: setup.sheetVersionId }),
+    findVersionAdaptContext({ vendorId, versionId }),
   ]);
   if (!oldContext || !context) return null;
   const old = oldContext.operations[setup.operationIndex];

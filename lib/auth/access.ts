@@ -2,7 +2,7 @@ import "server-only";
 
 import type { Vendor } from "@/content-schema/vendor";
 import { NotFound, Unauthenticated } from "@/lib/errors/domain-errors";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { findMembership, type Member } from "./membership";
 import { can, type Permission } from "./permissions";
@@ -16,7 +16,7 @@ export type VendorAccess = { vendor: Vendor; user: SessionUser | null; member: M
  * that another vendor's object exists; only a visitor who could sign in is told to.
  */
 export async function resolveVendorAccess(vendorSlug: string, user: SessionUser | null, permission?: Permission): Promise<VendorAccess> {
-  const vendor = await getVendorBySlug(vendorSlug);
+  const vendor = await findVendorBySlug(vendorSlug);
   if (!vendor) throw new NotFound();
   const member = user ? await findMembership(vendor.id, user.id) : null;
   if (!permission) return { vendor, user, member };

@@ -6,11 +6,11 @@ import { DomainError } from "@/lib/errors/domain-errors";
 
 import { resolveVendorAccess, type VendorAccess } from "./access";
 import type { Permission } from "./permissions";
-import { getSessionUser } from "./session-user";
+import { findSessionUser } from "./session-user";
 
 /** For layouts and pages: resolve access or answer with a 404 / a sign-in redirect. */
 export async function requirePageAccess(vendorSlug: string, permission?: Permission, returnTo?: string): Promise<VendorAccess> {
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   try {
     return await resolveVendorAccess(vendorSlug, user, permission);
   } catch (error) {

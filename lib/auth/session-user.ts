@@ -22,4 +22,4 @@ export async function sessionUserFor(session: { id?: string; epoch?: number } | 
   return { id: row.id, email: row.email, name: row.name, isOperator: row.is_operator };
 }
 
-export const getSessionUser = cache(async (): Promise<SessionUser | null> => sessionUserFor((await getServerSession(authOptions))?.user));
+export const findSessionUser = cache(async (): Promise<SessionUser | null> => sessionUserFor((await getServerSession(authOptions))?.user));

@@ -1,14 +1,12 @@
 import "server-only";
 
-import type { SheetFrontMatter } from "@/content-schema/sheet-front-matter";
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
-import { readStoredOperations } from "@/lib/adapt/read-front-matter";
 import { readaptOperation } from "@/lib/adapt/readapt-operation";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
 import type { EntryCapability, UnitSystem } from "@/lib/machining";
 import { wantsMailSql } from "@/lib/mail-preferences/mail-preferences";
-import { hasFrontMatter } from "@/lib/sheets/version-rows";
+import { storedFrontMatter } from "@/lib/sheets/version-rows";
 
 import type { AlertSetup } from "./change-alert-mail";
 import { machineToInput, rowToMachine } from "./machine-rows";
@@ -43,8 +41,8 @@ export function reAdapt(oldContext: AdaptContext, newContext: AdaptContext, row:
 
 export const frontMatterOf = async (vendorId: string, versionId: string) => {
   const row = await db("sheet_versions").where({ vendor_id: vendorId, id: versionId }).first("front_matter", "change_note");
-  if (!row || !hasFrontMatter(row.front_matter)) throw new NotFound("That sheet version has no front matter.");
-  const frontMatter: SheetFrontMatter = { ...row.front_matter, operations: readStoredOperations(row.front_matter) };
+  const frontMatter = row ? storedFrontMatter(row.front_matter) : null;
+  if (!row || !frontMatter) throw new NotFound("That sheet version has no front matter.");
   return { frontMatter, changeNote: row.change_note };
 };
 

@@ -2,14 +2,14 @@ import "server-only";
 
 import type { SetupCreate } from "@/content-schema/setup-fields";
 import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 import { isMachiningInputError } from "@/lib/machining";
 
 import { machineToInput } from "./machine-rows";
-import { getMachine } from "./machines";
+import { findMachine } from "./machines";
 
 const invalid = (field: string, message: string) => new InvalidInput("Please correct the marked fields.", { [field]: [message] });
 
@@ -19,8 +19,8 @@ const invalid = (field: string, message: string) => new InvalidInput("Please cor
  */
 export async function createSetup({ vendorId, userId, input }: { vendorId: string; userId: string; input: SetupCreate }) {
   const [context, machine] = await Promise.all([
-    loadAdaptContext({ vendorId, versionId: input.versionId }),
-    getMachine({ vendorId, userId, machineId: input.machineId }),
+    findVersionAdaptContext({ vendorId, versionId: input.versionId }),
+    findMachine({ vendorId, userId, machineId: input.machineId }),
   ]);
   if (!context || context.versionState === "withdrawn") throw invalid("versionId", "That sheet version is not available.");
   if (!machine) throw invalid("machineId", "Choose one of your machines.");

@@ -72,7 +72,7 @@ export async function listSetups({
   }));
 }
 
-export async function getSetup(options: { vendorId: string; userId: string; setupId: string }): Promise<SetupSummary | null> {
+export async function findSetup(options: { vendorId: string; userId: string; setupId: string }): Promise<SetupSummary | null> {
   if (!isUuid(options.setupId)) return null;
   return (await listSetups(options))[0] ?? null;
 }

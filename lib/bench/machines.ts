@@ -22,7 +22,7 @@ export async function listMachines(owner: Owner): Promise<Machine[]> {
   ).map(rowToMachine);
 }
 
-export async function getMachine(owner: Owner & { machineId: string }): Promise<Machine | null> {
+export async function findMachine(owner: Owner & { machineId: string }): Promise<Machine | null> {
   const row = await owned(owner)
     .andWhere({ id: owner.machineId })
     .first(...MACHINE_COLUMNS);

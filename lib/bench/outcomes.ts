@@ -113,7 +113,7 @@ export async function listOutcomes({ vendorId, userId, setupId }: Options): Prom
 }
 
 /** The stored photo of one of the customer's outcomes. */
-export async function getOutcomePhoto({ vendorId, userId, outcomeId }: { vendorId: string; userId: string; outcomeId: string }) {
+export async function findOutcomePhoto({ vendorId, userId, outcomeId }: { vendorId: string; userId: string; outcomeId: string }) {
   const row = await db("outcomes")
     .where({ vendor_id: vendorId, user_id: userId, id: outcomeId })
     .whereNotNull("photo_key")

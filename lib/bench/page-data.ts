@@ -6,8 +6,8 @@ import { findAdaptContext } from "@/lib/adapt/page-data";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { isUuid } from "@/lib/ids/is-uuid";
 
-import { getSetup } from "./list-setups";
-import { getMachine } from "./machines";
+import { findSetup } from "./list-setups";
+import { findMachine } from "./machines";
 
 // The Bench's page data: each lookup runs once per request, shared by a segment's layout (the 404) and its page.
 // `find…` answers null for "not found here", which the layout turns into a 404.
@@ -16,7 +16,7 @@ import { getMachine } from "./machines";
 export const findBenchMachine = cache(async (vendorSlug: string, id: string) => {
   const { vendor, user } = await requirePageAccess(vendorSlug, "bench.use", `/${vendorSlug}/bench/machines/${id}`);
   if (!user || !isUuid(id)) return null;
-  const machine = await getMachine({ vendorId: vendor.id, userId: user.id, machineId: id });
+  const machine = await findMachine({ vendorId: vendor.id, userId: user.id, machineId: id });
   return machine ? { vendor, user, machine } : null;
 });
 
@@ -24,7 +24,7 @@ export const findBenchMachine = cache(async (vendorSlug: string, id: string) => 
 export const findBenchSetup = cache(async (vendorSlug: string, id: string) => {
   const { vendor, user } = await requirePageAccess(vendorSlug, "bench.use", `/${vendorSlug}/bench/setups/${id}`);
   if (!user) return null;
-  const setup = await getSetup({ vendorId: vendor.id, userId: user.id, setupId: id });
+  const setup = await findSetup({ vendorId: vendor.id, userId: user.id, setupId: id });
   return setup ? { vendor, user, setup } : null;
 });
 

@@ -7,7 +7,7 @@ import { mailFooter, withFooter } from "@/lib/mail-preferences/preferences-link"
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 import { diffParameters } from "@/lib/sheets/parameter-diff";
 
-import { loadAdaptContext } from "../adapt/load-adapt-context";
+import { findVersionAdaptContext } from "../adapt/find-version-adapt-context";
 import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "./alert-setups";
 import { createAlertStopToken } from "./alert-token";
 import { renderChangeAlert } from "./change-alert-mail";
@@ -21,8 +21,8 @@ export async function sendChangeAlerts(event: SheetEvent): Promise<number> {
   if (event.type !== "version.published" || !event.supersededVersionId || event.batchId) return 0;
   const { vendorId, versionId, supersededVersionId } = event;
   const [newCtx, oldCtx, vendor] = await Promise.all([
-    loadAdaptContext({ vendorId, versionId }),
-    loadAdaptContext({ vendorId, versionId: supersededVersionId }),
+    findVersionAdaptContext({ vendorId, versionId }),
+    findVersionAdaptContext({ vendorId, versionId: supersededVersionId }),
     db("vendors").where({ id: vendorId }).first("slug", "name"),
   ]);
   if (!newCtx || !oldCtx || !vendor) return 0;

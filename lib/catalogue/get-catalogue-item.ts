@@ -14,27 +14,27 @@ export async function getCutterBySku({ vendorId, sku, trx = db }: By & { sku: st
   return row ? rowToCutter(row) : null;
 }
 
-export async function getCutterById({ vendorId, id, trx = db }: By & { id: string }): Promise<Cutter | null> {
+export async function findCutterById({ vendorId, id, trx = db }: By & { id: string }): Promise<Cutter | null> {
   const row = await trx("cutters").where({ vendor_id: vendorId, id }).first();
   return row ? rowToCutter(row) : null;
 }
 
-export async function getMaterialBySlug({ vendorId, slug, trx = db }: By & { slug: string }): Promise<Material | null> {
+export async function findMaterialBySlug({ vendorId, slug, trx = db }: By & { slug: string }): Promise<Material | null> {
   const row = await trx("materials").where({ vendor_id: vendorId, slug }).first();
   return row ? rowToMaterial(row) : null;
 }
 
-export async function getMaterialById({ vendorId, id, trx = db }: By & { id: string }): Promise<Material | null> {
+export async function findMaterialById({ vendorId, id, trx = db }: By & { id: string }): Promise<Material | null> {
   const row = await trx("materials").where({ vendor_id: vendorId, id }).first();
   return row ? rowToMaterial(row) : null;
 }
 
-export async function getMachineClassBySlug({ vendorId, slug, trx = db }: By & { slug: string }): Promise<MachineClass | null> {
+export async function findMachineClassBySlug({ vendorId, slug, trx = db }: By & { slug: string }): Promise<MachineClass | null> {
   const row = await trx("machine_classes").where({ vendor_id: vendorId, slug }).first();
   return row ? rowToMachineClass(row) : null;
 }
 
-export async function getMachineClassById({ vendorId, id, trx = db }: By & { id: string }): Promise<MachineClass | null> {
+export async function findMachineClassById({ vendorId, id, trx = db }: By & { id: string }): Promise<MachineClass | null> {
   const row = await trx("machine_classes").where({ vendor_id: vendorId, id }).first();
   return row ? rowToMachineClass(row) : null;
 }

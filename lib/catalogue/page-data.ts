@@ -2,25 +2,25 @@ import "server-only";
 
 import { cache } from "react";
 
-import { getCutterBySku, getMachineClassBySlug, getMaterialBySlug } from "@/lib/catalogue/get-catalogue-item";
+import { findMachineClassBySlug, findMaterialBySlug, getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
 import { safeDecode } from "@/lib/http/safe-decode";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 // One lookup per request, shared by a segment's layout (the 404) and its page.
 export const findDraftingCutter = cache(async (vendorSlug: string, sku: string) => {
-  const vendor = await getVendorBySlug(vendorSlug);
+  const vendor = await findVendorBySlug(vendorSlug);
   const decoded = safeDecode(sku);
   return vendor && decoded !== null ? getCutterBySku({ vendorId: vendor.id, sku: decoded }) : null;
 });
 
 export const findDraftingMaterial = cache(async (vendorSlug: string, slug: string) => {
-  const vendor = await getVendorBySlug(vendorSlug);
+  const vendor = await findVendorBySlug(vendorSlug);
   const decoded = safeDecode(slug);
-  return vendor && decoded !== null ? getMaterialBySlug({ vendorId: vendor.id, slug: decoded }) : null;
+  return vendor && decoded !== null ? findMaterialBySlug({ vendorId: vendor.id, slug: decoded }) : null;
 });
 
 export const findDraftingMachineClass = cache(async (vendorSlug: string, slug: string) => {
-  const vendor = await getVendorBySlug(vendorSlug);
+  const vendor = await findVendorBySlug(vendorSlug);
   const decoded = safeDecode(slug);
-  return vendor && decoded !== null ? getMachineClassBySlug({ vendorId: vendor.id, slug: decoded }) : null;
+  return vendor && decoded !== null ? findMachineClassBySlug({ vendorId: vendor.id, slug: decoded }) : null;
 });

@@ -6,10 +6,13 @@ import type { Knex } from "knex";
 
 import type { CutterFields } from "@/content-schema/catalogue-cutter";
 import type { MaterialFields } from "@/content-schema/catalogue-material";
+import type { BatchItemOutcome, BatchState } from "@/content-schema/family";
 import type { OutcomeResult, OutcomeSymptom } from "@/content-schema/outcome-fields";
 import type { SheetState } from "@/content-schema/sheet-workflow";
 import type { SpindleKindKey } from "@/content-schema/spindle-kind";
 import type { MessageVisibility, TicketPriority, TicketStatus } from "@/content-schema/ticket-status";
+import type { WebhookEventType } from "@/content-schema/webhook-events";
+import type { DeliveryState, WebhookState } from "@/content-schema/webhook-states";
 import type { Role } from "@/lib/auth/roles";
 import type { UnitSystem } from "@/lib/machining/quantities";
 import type { MailKind } from "@/lib/mail-preferences/mail-kinds";
@@ -90,6 +93,71 @@ export interface DeskViewRow {
   user_id: string;
   name: string;
   filters: unknown;
+  created_at: Date;
+}
+
+export interface FamilyBatchItemRow {
+  id: string;
+  vendor_id: string;
+  batch_id: string;
+  cutter_id: string;
+  material_id: string;
+  machine_class_id: string;
+  sheet_id: string | null;
+  version_id: string | null;
+  previous_version_id: string | null;
+  outcome: BatchItemOutcome;
+  /** jsonb: CellWarning[] (`cellWarningSchema`). */
+  warnings: unknown;
+  /** jsonb: CellProvenance[] (`cellProvenanceSchema`). */
+  provenance: unknown;
+  excluded_reason: string | null;
+  excluded_by: string | null;
+  created_at: Date;
+}
+
+export interface FamilyBatchRow {
+  id: string;
+  vendor_id: string;
+  family_id: string;
+  number: number;
+  rule_set_id: string;
+  state: BatchState;
+  total: number;
+  done: number;
+  error: string | null;
+  created_by: string | null;
+  approved_by: string | null;
+  approved_at: Date | null;
+  published_by: string | null;
+  published_at: Date | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface FamilyRow {
+  id: string;
+  vendor_id: string;
+  slug: string;
+  name: string;
+  /** jsonb: CutterSelection (`cutterSelectionSchema`). */
+  cutter_selection: unknown;
+  material_ids: string[];
+  machine_class_ids: string[];
+  created_by: string | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface FamilyRuleSetRow {
+  id: string;
+  vendor_id: string;
+  family_id: string;
+  number: number;
+  /** jsonb: FamilyRules (`familyRulesSchema`). */
+  rules: unknown;
+  note: string;
+  created_by: string | null;
   created_at: Date;
 }
 
@@ -495,6 +563,41 @@ export interface VerificationTokenRow {
   expires: Date;
 }
 
+export interface WebhookDeliveryRow {
+  id: string;
+  vendor_id: string;
+  webhook_id: string;
+  event_id: string;
+  event_type: WebhookEventType;
+  /** The envelope as signed and sent (text, not jsonb: the signature covers these exact bytes). */
+  body: string;
+  state: DeliveryState;
+  attempts: number;
+  last_status: number | null;
+  last_error: string | null;
+  response_excerpt: string | null;
+  duration_ms: number | null;
+  last_attempt_at: Date | null;
+  next_attempt_at: Date | null;
+  delivered_at: Date | null;
+  created_at: Date;
+}
+
+export interface WebhookRow {
+  id: string;
+  vendor_id: string;
+  url: string;
+  description: string;
+  events: WebhookEventType[];
+  secret_encrypted: string;
+  secret_hint: string;
+  state: WebhookState;
+  consecutive_failures: number;
+  paused_at: Date | null;
+  created_by: string | null;
+  created_at: Date;
+}
+
 /** The insert shape of a table keyed by a date: the day as text, defaulted columns optional. */
 type DayKeyed<Row, Day extends keyof Row, Defaulted extends keyof Row> = Omit<Row, Day | Defaulted> &
   Record<Day, string> &
@@ -510,6 +613,10 @@ declare module "knex/types/tables" {
     cutters: CutterRow;
     dead_letter_notices: DeadLetterNoticeRow;
     desk_views: DeskViewRow;
+    families: FamilyRow;
+    family_batch_items: FamilyBatchItemRow;
+    family_batches: FamilyBatchRow;
+    family_rule_sets: FamilyRuleSetRow;
     field_change_rollups: FieldChangeRollupRow;
     // A date column reads as a Date and is written as "yyyy-mm-dd" (no time zone to shift the day).
     field_digests_sent: Knex.CompositeTableType<FieldDigestSentRow, DayKeyed<FieldDigestSentRow, "week_start", "created_at">>;
@@ -544,5 +651,7 @@ declare module "knex/types/tables" {
     users: UserRow;
     vendors: VendorRow;
     verification_tokens: VerificationTokenRow;
+    webhook_deliveries: WebhookDeliveryRow;
+    webhooks: WebhookRow;
   }
 }

@@ -1,3 +1,4 @@
+import type { CellWarning } from "@/content-schema/family";
 import { adaptOperation, type AdaptContext } from "@/lib/adapt/adapt-context";
 import { toContextOperation } from "@/lib/adapt/read-front-matter";
 import { isMachiningInputError } from "@/lib/machining";
@@ -6,8 +7,6 @@ import type { CellCatalogue, CellOperation } from "./derive-cell";
 
 // Pure: what the engine says about a cell's operations on the cell's own machine class (the reference machine as
 // the customer's, the cutter out by its flute length, a CAM that can helix): any warning blocks the cell.
-
-export type CellWarning = { operation: string; code: string; message: string };
 
 /** Notices every adaptation carries; they say nothing about the numbers. */
 const NOTICES = new Set(["standard-cautions", "values-adapted"]);

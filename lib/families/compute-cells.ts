@@ -1,7 +1,7 @@
-import type { FamilyRules } from "@/content-schema/family";
+import type { CellWarning, FamilyRules } from "@/content-schema/family";
 import type { Cutter, MachineClass, Material } from "@/lib/catalogue/catalogue-types";
 
-import { cellWarnings, type CellWarning } from "./cell-warnings";
+import { cellWarnings } from "./cell-warnings";
 import { deriveCellOperations, type CellCatalogue, type CellOperation } from "./derive-cell";
 
 // Pure: every cell of a family under one rules version. Preview and generation both call this, so what the

@@ -1,4 +1,5 @@
 import { cutterSelectionSchema, familyRulesSchema, type CutterSelection, type FamilyRules } from "@/content-schema/family";
+import type { FamilyRow, FamilyRuleSetRow } from "@/lib/db/tables";
 
 // Rows of the family tables as the app reads them; JSON columns parsed again with their schemas.
 
@@ -13,23 +14,21 @@ export type Family = {
 };
 export type RuleSet = { id: string; familyId: string; number: number; rules: FamilyRules; note: string; createdAt: Date };
 
-type Row = Record<string, unknown>;
-
-export const rowToFamily = (r: Row): Family => ({
-  id: String(r.id),
-  slug: String(r.slug),
-  name: String(r.name),
+export const rowToFamily = (r: FamilyRow): Family => ({
+  id: r.id,
+  slug: r.slug,
+  name: r.name,
   cutters: cutterSelectionSchema.parse(r.cutter_selection),
-  materialIds: (r.material_ids as string[]) ?? [],
-  machineClassIds: (r.machine_class_ids as string[]) ?? [],
-  updatedAt: r.updated_at as Date,
+  materialIds: r.material_ids,
+  machineClassIds: r.machine_class_ids,
+  updatedAt: r.updated_at,
 });
 
-export const rowToRuleSet = (r: Row): RuleSet => ({
-  id: String(r.id),
-  familyId: String(r.family_id),
-  number: Number(r.number),
+export const rowToRuleSet = (r: FamilyRuleSetRow): RuleSet => ({
+  id: r.id,
+  familyId: r.family_id,
+  number: r.number,
   rules: familyRulesSchema.parse(r.rules),
-  note: String(r.note ?? ""),
-  createdAt: r.created_at as Date,
+  note: r.note,
+  createdAt: r.created_at,
 });

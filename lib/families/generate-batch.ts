@@ -7,11 +7,11 @@ import { db } from "@/lib/db/knex";
 import { DEFAULT_JOB_OPTIONS } from "@/lib/jobs/enqueue";
 import type { JobMeta } from "@/lib/jobs/job-meta";
 
-import { findCellSheets } from "./cell-sheets";
+import { listCellSheets } from "./cell-sheets";
 import { computeCell, eachCell } from "./compute-cells";
 import { rowToFamily } from "./family-rows";
 import { getRuleSet } from "./get-family";
-import { loadFamilyCatalogue } from "./load-family-catalogue";
+import { getFamilyCatalogue } from "./get-family-catalogue";
 import { writeCells } from "./write-cells";
 
 const jobSchema = z.object({ vendorId: z.uuid(), batchId: z.uuid() });
@@ -24,10 +24,13 @@ const CHUNK = 250;
 export async function generateBatch({ vendorId, batchId, chunkSize = CHUNK }: { vendorId: string; batchId: string; chunkSize?: number }) {
   const batch = await db("family_batches").where({ vendor_id: vendorId, id: batchId }).first();
   if (!batch || batch.state !== "generating") return { written: 0 };
-  const family = rowToFamily(await db("families").where({ vendor_id: vendorId, id: batch.family_id }).first());
+  const familyRow = await db("families").where({ vendor_id: vendorId, id: batch.family_id }).first();
+  // A family's batches go with it (on delete cascade): no family, no batch to write.
+  if (!familyRow) return { written: 0 };
+  const family = rowToFamily(familyRow);
   const ruleSet = await getRuleSet({ vendorId, id: batch.rule_set_id });
-  const catalogue = await loadFamilyCatalogue({ vendorId, family });
-  const sheets = await findCellSheets({
+  const catalogue = await getFamilyCatalogue({ vendorId, family });
+  const sheets = await listCellSheets({
     vendorId,
     cutterIds: catalogue.cutters.map((c) => c.id),
     materialIds: family.materialIds,

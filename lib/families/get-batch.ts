@@ -2,10 +2,11 @@ import "server-only";
 
 import type { Knex } from "knex";
 
+import type { BatchItemOutcome, BatchState } from "@/content-schema/family";
 import { db } from "@/lib/db/knex";
+import type { FamilyBatchRow } from "@/lib/db/tables";
 import { NotFound } from "@/lib/errors/domain-errors";
 
-export type BatchState = "generating" | "in_review" | "approved" | "published" | "failed";
 export type Batch = {
   id: string;
   familyId: string;
@@ -40,6 +41,12 @@ const columns = [
   "au.name as approved_by_name",
 ];
 
+/** A batch row with its rules version and the names of the people who made and approved it. */
+type BatchWithNamesRow = Pick<
+  FamilyBatchRow,
+  "id" | "family_id" | "number" | "state" | "total" | "done" | "error" | "created_by" | "approved_at" | "published_at" | "created_at"
+> & { rule_version: number; created_by_name: string | null; approved_by_name: string | null };
+
 const baseQuery = (trx: Knex, vendorId: string) =>
   trx("family_batches as b")
     .join("family_rule_sets as r", function () {
@@ -49,25 +56,27 @@ const baseQuery = (trx: Knex, vendorId: string) =>
     .leftJoin("users as au", "au.id", "b.approved_by")
     .where("b.vendor_id", vendorId);
 
-const rowToBatch = (r: Record<string, unknown>): Batch => ({
-  id: String(r.id),
-  familyId: String(r.family_id),
-  number: Number(r.number),
-  state: r.state as BatchState,
-  total: Number(r.total),
-  done: Number(r.done),
-  ruleVersion: Number(r.rule_version),
-  error: (r.error as string | null) ?? null,
-  createdBy: (r.created_by as string | null) ?? null,
-  createdByName: (r.created_by_name as string | null) ?? null,
-  approvedByName: (r.approved_by_name as string | null) ?? null,
-  approvedAt: (r.approved_at as Date | null) ?? null,
-  publishedAt: (r.published_at as Date | null) ?? null,
-  createdAt: r.created_at as Date,
+const rowToBatch = (r: BatchWithNamesRow): Batch => ({
+  id: r.id,
+  familyId: r.family_id,
+  number: r.number,
+  state: r.state,
+  total: r.total,
+  done: r.done,
+  ruleVersion: r.rule_version,
+  error: r.error,
+  createdBy: r.created_by,
+  createdByName: r.created_by_name,
+  approvedByName: r.approved_by_name,
+  approvedAt: r.approved_at,
+  publishedAt: r.published_at,
+  createdAt: r.created_at,
 });
 
 export async function listBatches({ vendorId, familyId }: { vendorId: string; familyId: string }): Promise<Batch[]> {
-  return (await baseQuery(db, vendorId).where("b.family_id", familyId).orderBy("b.number", "desc").select(columns)).map(rowToBatch);
+  return (
+    await baseQuery(db, vendorId).where("b.family_id", familyId).orderBy("b.number", "desc").select<BatchWithNamesRow[]>(columns)
+  ).map(rowToBatch);
 }
 
 export async function getBatch({
@@ -81,7 +90,9 @@ export async function getBatch({
   number: number;
   trx?: Knex;
 }): Promise<Batch> {
-  const row = await baseQuery(trx, vendorId).where({ "b.family_id": familyId, "b.number": number }).first(columns);
+  const row = await baseQuery(trx, vendorId)
+    .where({ "b.family_id": familyId, "b.number": number })
+    .first<BatchWithNamesRow | undefined>(columns);
   if (!row) throw new NotFound("No such batch.");
   return rowToBatch(row);
 }
@@ -91,8 +102,19 @@ export async function countBatchItems({ vendorId, batchId }: { vendorId: string;
   const rows = await db("family_batch_items")
     .where({ vendor_id: vendorId, batch_id: batchId })
     .groupBy("outcome")
-    .select("outcome", db.raw("count(*)::int as n"), db.raw("count(excluded_reason)::int as excluded"));
-  const counts: Record<string, number> = { created: 0, "new-version": 0, unchanged: 0, blocked: 0, busy: 0, excluded: 0 };
+    .select<{ outcome: BatchItemOutcome; n: number; excluded: number }[]>(
+      "outcome",
+      db.raw("count(*)::int as n"),
+      db.raw("count(excluded_reason)::int as excluded"),
+    );
+  const counts: Record<BatchItemOutcome | "excluded", number> = {
+    created: 0,
+    "new-version": 0,
+    unchanged: 0,
+    blocked: 0,
+    busy: 0,
+    excluded: 0,
+  };
   for (const r of rows) {
     counts[r.outcome] = r.n;
     counts.excluded += r.excluded;

@@ -3,6 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 
 import { db } from "@/lib/db/knex";
+import type { FamilyRow } from "@/lib/db/tables";
 import { NotFound } from "@/lib/errors/domain-errors";
 
 import { rowToFamily, rowToRuleSet, type Family, type RuleSet } from "./family-rows";
@@ -10,13 +11,13 @@ import { rowToFamily, rowToRuleSet, type Family, type RuleSet } from "./family-r
 export async function listFamilies({ vendorId }: { vendorId: string }) {
   const rows = await db("families as f")
     .where({ "f.vendor_id": vendorId })
-    .select(
+    .select<(FamilyRow & { rule_version: number | null; batches: number })[]>(
       "f.*",
       db.raw("(select max(number) from family_rule_sets r where r.family_id = f.id and r.vendor_id = f.vendor_id) as rule_version"),
+      db.raw("(select count(*)::int from family_batches b where b.family_id = f.id and b.vendor_id = f.vendor_id) as batches"),
     )
-    .select(db.raw("(select count(*)::int from family_batches b where b.family_id = f.id and b.vendor_id = f.vendor_id) as batches"))
     .orderBy("f.name");
-  return rows.map((r) => ({ ...rowToFamily(r), ruleVersion: Number(r.rule_version ?? 0), batches: Number(r.batches) }));
+  return rows.map((r) => ({ ...rowToFamily(r), ruleVersion: r.rule_version ?? 0, batches: r.batches }));
 }
 
 export async function getFamily({ vendorId, slug, trx = db }: { vendorId: string; slug: string; trx?: Knex }): Promise<Family> {

@@ -1,27 +1,53 @@
 import "server-only";
 
-import type { SheetFrontMatter } from "@/content-schema/sheet-front-matter";
-import { readStoredOperations } from "@/lib/adapt/read-front-matter";
+import { z } from "zod";
+
+import {
+  cellProvenanceSchema,
+  cellWarningSchema,
+  type BatchItemOutcome,
+  type CellProvenance,
+  type CellWarning,
+} from "@/content-schema/family";
+import type { SheetState } from "@/content-schema/sheet-workflow";
 import { db } from "@/lib/db/knex";
+import type { FamilyBatchItemRow } from "@/lib/db/tables";
 import { diffParameters, type OperationDiff } from "@/lib/sheets/parameter-diff";
+import { storedFrontMatter } from "@/lib/sheets/version-rows";
 
 export type BatchItem = {
   id: string;
-  outcome: string;
+  outcome: BatchItemOutcome;
   sku: string;
   materialName: string;
   className: string;
   slug: string | null;
   versionNumber: number | null;
-  versionState: string | null;
+  versionState: SheetState | null;
   previousNumber: number | null;
   excludedReason: string | null;
-  warnings: { operation: string; code: string; message: string }[];
-  provenance: { label: string; rules: string[] }[];
+  warnings: CellWarning[];
+  provenance: CellProvenance[];
   diff: OperationDiff[];
 };
 
-const fm = (raw: unknown): SheetFrontMatter => ({ ...(raw as SheetFrontMatter), operations: readStoredOperations(raw) });
+/** A batch item with its cell's catalogue names and the version it wrote and the one it replaces. */
+type BatchItemJoinRow = Pick<FamilyBatchItemRow, "id" | "outcome" | "excluded_reason" | "warnings" | "provenance"> & {
+  sku: string;
+  diameter_mm: number;
+  flutes: number;
+  material_name: string;
+  class_name: string;
+  slug: string | null;
+  number: number | null;
+  state: SheetState | null;
+  front_matter: unknown;
+  previous_number: number | null;
+  previous_fm: unknown;
+};
+
+const warningsSchema = z.array(cellWarningSchema);
+const provenanceSchema = z.array(cellProvenanceSchema);
 
 /** A page of a batch's cells for review, written sheets first, each with its parameter diff against the version it replaces. */
 export async function listBatchItems({
@@ -65,7 +91,7 @@ export async function listBatchItems({
     )
     .limit(limit)
     .offset(offset)
-    .select(
+    .select<BatchItemJoinRow[]>(
       "i.id",
       "i.outcome",
       "i.excluded_reason",
@@ -85,22 +111,22 @@ export async function listBatchItems({
     );
   return rows.map((r) => {
     const written = r.outcome === "created" || r.outcome === "new-version";
-    const after = written ? fm(r.front_matter) : null;
-    const before = r.previous_fm ? fm(r.previous_fm) : after ? { ...after, operations: [] } : null;
+    const after = written ? storedFrontMatter(r.front_matter) : null;
+    const before = storedFrontMatter(r.previous_fm) ?? (after ? { ...after, operations: [] } : null);
     return {
       id: r.id,
       outcome: r.outcome,
       sku: r.sku,
       materialName: r.material_name,
       className: r.class_name,
-      slug: r.slug ?? null,
-      versionNumber: r.number ?? null,
-      versionState: r.state ?? null,
-      previousNumber: r.previous_number ?? null,
-      excludedReason: r.excluded_reason ?? null,
-      warnings: r.warnings ?? [],
-      provenance: r.provenance ?? [],
-      diff: after && before ? diffParameters(before, after, { flutes: Number(r.flutes), diameterMm: Number(r.diameter_mm) }) : [],
+      slug: r.slug,
+      versionNumber: r.number,
+      versionState: r.state,
+      previousNumber: r.previous_number,
+      excludedReason: r.excluded_reason,
+      warnings: warningsSchema.parse(r.warnings),
+      provenance: provenanceSchema.parse(r.provenance),
+      diff: after && before ? diffParameters(before, after, { flutes: r.flutes, diameterMm: r.diameter_mm }) : [],
     };
   });
 }

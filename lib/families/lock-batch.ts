@@ -2,7 +2,8 @@ import "server-only";
 
 import type { Knex } from "knex";
 
-import { Conflict, DomainError, Forbidden } from "@/lib/errors/domain-errors";
+import type { BatchState } from "@/content-schema/family";
+import { Conflict, DomainError, Forbidden, NotFound } from "@/lib/errors/domain-errors";
 
 import { getBatch } from "./get-batch";
 import { getFamily } from "./get-family";
@@ -10,13 +11,14 @@ import { getFamily } from "./get-family";
 /** Locks a batch row (serialising review steps) and checks it is in the state the step needs. */
 export async function lockBatch(
   trx: Knex.Transaction,
-  { vendorId, slug, number, state }: { vendorId: string; slug: string; number: number; state: string },
+  { vendorId, slug, number, state }: { vendorId: string; slug: string; number: number; state: BatchState },
 ) {
   const family = await getFamily({ vendorId, slug, trx });
   const batch = await getBatch({ vendorId, familyId: family.id, number, trx });
   const locked = await trx("family_batches").where({ vendor_id: vendorId, id: batch.id }).forUpdate().first("state");
+  if (!locked) throw new NotFound("No such batch.");
   if (locked.state !== state)
-    throw new Conflict(`Batch ${number} is ${String(locked.state).replace("_", " ")}; this step needs it ${state.replace("_", " ")}.`);
+    throw new Conflict(`Batch ${number} is ${locked.state.replace("_", " ")}; this step needs it ${state.replace("_", " ")}.`);
   return { family, batch };
 }
 

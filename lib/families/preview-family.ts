@@ -3,11 +3,11 @@ import "server-only";
 import type { FamilyRules } from "@/content-schema/family";
 import { diffParameters, type OperationDiff } from "@/lib/sheets/parameter-diff";
 
-import { findCellSheets } from "./cell-sheets";
+import { listCellSheets } from "./cell-sheets";
 import { cellStatus, type CellStatus } from "./cell-status";
 import { computeCell, eachCell, type ComputedCell } from "./compute-cells";
 import { getFamily } from "./get-family";
-import { loadFamilyCatalogue } from "./load-family-catalogue";
+import { getFamilyCatalogue } from "./get-family-catalogue";
 
 export type PreviewCell = ComputedCell & {
   status: CellStatus;
@@ -33,8 +33,8 @@ export async function previewFamily({
   limit?: number;
 }) {
   const family = await getFamily({ vendorId, slug });
-  const catalogue = await loadFamilyCatalogue({ vendorId, family });
-  const sheets = await findCellSheets({
+  const catalogue = await getFamilyCatalogue({ vendorId, family });
+  const sheets = await listCellSheets({
     vendorId,
     cutterIds: catalogue.cutters.map((c) => c.id),
     materialIds: family.materialIds,

@@ -71,7 +71,7 @@ export async function createFamily({
         },
         trx,
       );
-      return { id: family.id as string, slug: family.slug as string };
+      return { id: family.id, slug: family.slug };
     });
   } catch (error) {
     if (isUniqueViolation(error))

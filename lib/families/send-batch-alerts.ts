@@ -3,7 +3,7 @@ import "server-only";
 import { z } from "zod";
 
 import type { AdaptContext } from "@/lib/adapt/adapt-context";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { frontMatterOf, listAlertSetups, reAdapt, type SetupRow } from "@/lib/bench/alert-setups";
 import { db } from "@/lib/db/knex";
 import { appUrl } from "@/lib/http/app-url";
@@ -36,8 +36,8 @@ async function changedSheets(vendorId: string, batchId: string, vendorSlug: stri
     const rows = await listAlertSetups({ vendorId, supersededVersionId: item.previous_version_id, kind: "batch_changes" });
     if (!rows.length) continue;
     const [newCtx, oldCtx, before, after] = await Promise.all([
-      loadAdaptContext({ vendorId, versionId: item.version_id }),
-      loadAdaptContext({ vendorId, versionId: item.previous_version_id }),
+      findVersionAdaptContext({ vendorId, versionId: item.version_id }),
+      findVersionAdaptContext({ vendorId, versionId: item.previous_version_id }),
       frontMatterOf(vendorId, item.previous_version_id),
       frontMatterOf(vendorId, item.version_id),
     ]);
@@ -74,7 +74,11 @@ export async function sendBatchAlerts({ vendorId, batchId }: { vendorId: string;
     })
     .join("vendors as ven", "ven.id", "b.vendor_id")
     .where({ "b.vendor_id": vendorId, "b.id": batchId, "b.state": "published" })
-    .first("f.name as family_name", "ven.slug as vendor_slug", "ven.name as vendor_name");
+    .first<{ family_name: string; vendor_slug: string; vendor_name: string } | undefined>(
+      "f.name as family_name",
+      "ven.slug as vendor_slug",
+      "ven.name as vendor_name",
+    );
   if (!batch) return 0;
   const changed = await changedSheets(vendorId, batchId, batch.vendor_slug);
   const byUser = new Map<string, { email: string; units: SetupRow["units"]; sheets: { changed: Changed; rows: SetupRow[] }[] }>();

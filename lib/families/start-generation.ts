@@ -6,7 +6,7 @@ import { enqueue } from "@/lib/jobs/enqueue";
 
 import { cellCount } from "./compute-cells";
 import { getFamily, getLatestRuleSet } from "./get-family";
-import { loadFamilyCatalogue } from "./load-family-catalogue";
+import { getFamilyCatalogue } from "./get-family-catalogue";
 
 export const FAMILY_GENERATE_QUEUE = "families.generate";
 
@@ -18,7 +18,7 @@ export async function startGeneration({ vendorId, userId, slug }: { vendorId: st
     const running = await trx("family_batches").where({ vendor_id: vendorId, family_id: family.id, state: "generating" }).first("number");
     if (running) throw new Conflict(`Batch ${running.number} of this family is still being generated.`);
     const ruleSet = await getLatestRuleSet({ vendorId, familyId: family.id, trx });
-    const total = cellCount(await loadFamilyCatalogue({ vendorId, family, trx }));
+    const total = cellCount(await getFamilyCatalogue({ vendorId, family, trx }));
     if (!total) throw new Conflict("The family has no cells: its cutter selection picks no cutter.");
     const last = await trx("family_batches")
       .where({ vendor_id: vendorId, family_id: family.id })
@@ -43,6 +43,6 @@ export async function startGeneration({ vendorId, userId, slug }: { vendorId: st
       { vendorId, batchId: batch.id },
       { key: `family-generate:${batch.id}`, expireInSeconds: 3600 },
     );
-    return { id: batch.id as string, number: batch.number as number, total };
+    return { id: batch.id, number: batch.number, total };
   });
 }

@@ -12,7 +12,15 @@ import { validateGeneratedSource } from "./validate-generated";
 // Writes one chunk of a batch: a warned cell is recorded and never written; new sheets and new versions go
 // straight to review (the batch review is their review), each carrying the rules that made its numbers.
 
-export type BatchInfo = { vendorId: string; batchId: string; batchNumber: number; userId: string; familyName: string; ruleVersion: number };
+/** The batch being written; `userId` is who started it (null once that account is gone). */
+export type BatchInfo = {
+  vendorId: string;
+  batchId: string;
+  batchNumber: number;
+  userId: string | null;
+  familyName: string;
+  ruleVersion: number;
+};
 
 const OUTCOME = { new: "created", changed: "new-version", unchanged: "unchanged", warned: "blocked", busy: "busy" } as const;
 
@@ -64,7 +72,7 @@ export async function writeCells(trx: Knex.Transaction, batch: BatchInfo, cells:
       : wanted[i],
   }));
   const created = sheetRows.length ? await trx("sheets").insert(sheetRows).returning(["id"]) : [];
-  const sheetIdOf = new Map<string, string>(fresh.map((p, i) => [p.cell.key, created[i].id as string]));
+  const sheetIdOf = new Map<string, string>(fresh.map((p, i) => [p.cell.key, created[i].id]));
 
   const writes = plans.filter((p) => p.status === "new" || p.status === "changed");
   const versionRows = writes.map((p) =>
@@ -73,7 +81,7 @@ export async function writeCells(trx: Knex.Transaction, batch: BatchInfo, cells:
       : versionRow(batch, p.cell, p.sheet!.id, p.sheet!.latest.number + 1),
   );
   const versions = versionRows.length ? await trx("sheet_versions").insert(versionRows).returning(["id"]) : [];
-  const versionOf = new Map<string, string>(writes.map((p, i) => [p.cell.key, versions[i].id as string]));
+  const versionOf = new Map<string, string>(writes.map((p, i) => [p.cell.key, versions[i].id]));
 
   const items = plans.map(({ cell, sheet, status }) => ({
     vendor_id: vendorId,

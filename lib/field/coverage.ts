@@ -8,7 +8,7 @@ import { findCoverageGaps, type CoverageReport } from "./coverage-gaps";
  * Customers' registered machines against the machine classes the vendor publishes sheets for.
  * Machines are read grouped by their numbers, never one by one, and no name or owner leaves the database.
  */
-export async function loadCoverageGaps({ vendorId }: { vendorId: string }): Promise<CoverageReport> {
+export async function getCoverageGaps({ vendorId }: { vendorId: string }): Promise<CoverageReport> {
   const db = await readDb();
   const [classes, machines] = await Promise.all([
     db("machine_classes as mc")

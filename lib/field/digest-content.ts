@@ -6,7 +6,7 @@ import { appUrl } from "@/lib/http/app-url";
 import { createStopToken } from "@/lib/mail/stop-token";
 
 import { confidenceOf, percent } from "./confidence";
-import { loadCoverageGaps } from "./coverage";
+import { getCoverageGaps } from "./coverage";
 import { listCustomerChanges } from "./customer-changes";
 import { describeChange } from "./describe-change";
 import type { DigestMail } from "./digest-mail";
@@ -30,7 +30,7 @@ export async function buildDigestContent(vendor: Vendor, weekOf: string): Promis
     listNeedsAttention({ vendorId: vendor.id, z: zValue, limit: TOP }),
     countNeedsAttention({ vendorId: vendor.id }),
     listCustomerChanges({ vendorId: vendor.id, limit: TOP }),
-    loadCoverageGaps({ vendorId: vendor.id }),
+    getCoverageGaps({ vendorId: vendor.id }),
   ]);
   return {
     vendorName: vendor.name,

@@ -27,7 +27,7 @@ type SummaryRow = Record<
 >;
 
 /** The vendor's totals, from the rollup (one row per version), never from raw outcomes. */
-export async function loadFieldSummary({ vendorId }: { vendorId: string }): Promise<FieldSummary> {
+export async function getFieldSummary({ vendorId }: { vendorId: string }): Promise<FieldSummary> {
   const db = await readDb();
   const row = await db("field_version_rollups")
     .where({ vendor_id: vendorId })

@@ -45,7 +45,7 @@ export async function findFieldSheet({ vendorId, slug }: { vendorId: string; slu
 }
 
 /** Everything Field results knows about one sheet, version by version (oldest first). */
-export async function loadSheetFieldResults({
+export async function findSheetFieldResults({
   vendorId,
   sheetId,
   z,

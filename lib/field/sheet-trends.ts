@@ -7,7 +7,7 @@ import { weekSeries, weekStartOf, type Publication, type TrendWeek } from "./wee
 export type SheetTrends = { range: { from: string; to: string }; weeks: TrendWeek[]; publications: Publication[] };
 
 /** One sheet's reports and failures week by week (all its versions together), from the weekly rollup. */
-export async function loadSheetTrends({
+export async function getSheetTrends({
   vendorId,
   sheetId,
   from,

@@ -6,7 +6,7 @@ import type { MailKind } from "@/lib/mail-preferences/mail-kinds";
 import { setMailPreference } from "@/lib/mail-preferences/mail-preferences";
 import { preferencesUrl } from "@/lib/mail-preferences/preferences-link";
 import { readStopToken, type StopPurpose } from "@/lib/mail/stop-token";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { plainPage } from "./plain-page";
 import { readBodyBytes } from "./read-json";
@@ -24,7 +24,7 @@ export function stopLinkRoute(purpose: StopPurpose, kind: MailKind, texts: Texts
   async function resolve(request: NextRequest) {
     const url = new URL(request.url);
     const who = readStopToken(purpose, url.searchParams.get("token") ?? "");
-    const vendor = who ? await getVendorBySlug(url.pathname.split("/")[4] ?? "") : null;
+    const vendor = who ? await findVendorBySlug(url.pathname.split("/")[4] ?? "") : null;
     return who && vendor && vendor.id === who.vendorId ? { who, vendor } : null;
   }
   const broken = () => plainPage("This link does not work", texts.broken, { status: 400 });

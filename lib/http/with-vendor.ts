@@ -5,11 +5,11 @@ import type { NextRequest } from "next/server";
 import { resolveVendorAccess, type VendorAccess } from "@/lib/auth/access";
 import { apiTokenOwner } from "@/lib/auth/api-tokens";
 import type { Permission } from "@/lib/auth/permissions";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { pinCookieHeader } from "@/lib/db/read-db";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { clientIp } from "./client-ip";
 import { errorResponse } from "./error-response";
@@ -49,7 +49,7 @@ export function withVendor<P extends Params & { vendor: string }>(handler: Vendo
       if (bearer) {
         // The token is checked before it may choose a bucket: an unchecked one would give a caller a fresh
         // bucket per made-up token. A token that does not verify is limited by the client's address.
-        const vendor = await getVendorBySlug(params.vendor);
+        const vendor = await findVendorBySlug(params.vendor);
         const owner = vendor ? await apiTokenOwner(bearer, vendor.id) : null;
         if (!owner) {
           await byAddress();
@@ -59,7 +59,7 @@ export function withVendor<P extends Params & { vendor: string }>(handler: Vendo
         user = owner.user;
       } else {
         await byAddress();
-        user = await getSessionUser();
+        user = await findSessionUser();
       }
       const access = await resolveVendorAccess(params.vendor, user, options.permission);
       // After access, so another vendor's route stays a plain 404.

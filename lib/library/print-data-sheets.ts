@@ -11,7 +11,7 @@ import { renderDataSheetPdf } from "@/lib/pdf/data-sheet-pdf";
 import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 import { formatDate } from "@/lib/ui/dates";
-import { getVendorLogo } from "@/lib/vendors/get-vendor-logo";
+import { findVendorLogo } from "@/lib/vendors/find-vendor-logo";
 
 import { cutterSpecs, dataSheetData, dataSheetOperations, ownCautions } from "./data-sheet-data";
 import { STANDARD_CAUTIONS } from "./standard-cautions";
@@ -20,7 +20,7 @@ import { STANDARD_CAUTIONS } from "./standard-cautions";
 const MAX_SHEETS_PER_CUTTER = 12;
 
 async function brandingOf(vendor: Vendor): Promise<Branding> {
-  const logo = vendor.hasLogo ? await getVendorLogo({ vendorId: vendor.id }) : null;
+  const logo = vendor.hasLogo ? await findVendorLogo({ vendorId: vendor.id }) : null;
   // The PDF library draws PNG and JPEG; a WebP logo is left out rather than failing the print.
   const format = logo?.type === "image/png" ? "png" : logo?.type === "image/jpeg" ? "jpg" : null;
   return { vendorName: vendor.name, accentColor: vendor.accentColor, logo: logo && format ? { data: logo.bytes, format } : null };

@@ -3,9 +3,9 @@ import "server-only";
 import type { Vendor } from "@/content-schema/vendor";
 import { findMembership } from "@/lib/auth/membership";
 import type { Role } from "@/lib/auth/roles";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { db } from "@/lib/db/knex";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { readPreferencesToken } from "./preferences-link";
 
@@ -23,11 +23,11 @@ export async function findPreferencesPerson({
   vendorSlug: string;
   token?: string | null;
 }): Promise<PreferencesPerson | null> {
-  const vendor = await getVendorBySlug(vendorSlug);
+  const vendor = await findVendorBySlug(vendorSlug);
   if (!vendor) return null;
   const fromLink = token ? readPreferencesToken(token) : null;
   if (token && (!fromLink || fromLink.vendorId !== vendor.id)) return null;
-  const userId = fromLink?.userId ?? (await getSessionUser())?.id;
+  const userId = fromLink?.userId ?? (await findSessionUser())?.id;
   if (!userId) return null;
   const member = await findMembership(vendor.id, userId);
   if (!member) return null;

@@ -2,7 +2,7 @@ import "server-only";
 
 import type { Knex } from "knex";
 
-import { getCutterById, getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/get-catalogue-item";
 import { readDb } from "@/lib/db/read-db";
 
 import { findSheet } from "./find-sheet";
@@ -25,9 +25,9 @@ export async function getLibrarySheet({ vendorId, slug, number, from }: { vendor
   const version = number === undefined ? (current ?? history[0]) : history.find((v) => v.number === number);
   if (!version || !version.frontMatter) return null;
   const [cutter, material, machineClass] = await Promise.all([
-    getCutterById({ vendorId, id: sheet.cutterId }),
-    getMaterialById({ vendorId, id: sheet.materialId }),
-    getMachineClassById({ vendorId, id: sheet.machineClassId }),
+    findCutterById({ vendorId, id: sheet.cutterId }),
+    findMaterialById({ vendorId, id: sheet.materialId }),
+    findMachineClassById({ vendorId, id: sheet.machineClassId }),
   ]);
   if (!cutter || !material || !machineClass) return null;
   return { sheet, version, frontMatter: version.frontMatter, current, history, cutter, material, machineClass };

@@ -3,6 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 
 import type { SheetFrontMatter } from "@/content-schema/sheet-front-matter";
+import { readStoredOperations } from "@/lib/adapt/read-front-matter";
 import { db } from "@/lib/db/knex";
 import type { SheetRow, SheetVersionRow } from "@/lib/db/tables";
 
@@ -25,6 +26,10 @@ export const rowToSheet = (r: SheetRow): SheetRecord => ({
 });
 
 export const hasFrontMatter = (fm: unknown): fm is SheetFrontMatter => typeof fm === "object" && fm !== null && "operations" in fm;
+
+/** Stored front matter with its operations re-parsed from the author's text (null when the column holds none). */
+export const storedFrontMatter = (fm: unknown): SheetFrontMatter | null =>
+  hasFrontMatter(fm) ? { ...fm, operations: readStoredOperations(fm) } : null;
 
 export const rowToVersion = (r: VersionWithNamesRow): SheetVersion => ({
   id: r.id,

@@ -27,7 +27,7 @@ export const vendorQuery = (trx: Knex = db) =>
   trx("vendors").select<VendorRow[]>("id", "slug", "name", "accent_color", "settings", trx.raw("logo is not null as has_logo"));
 
 /** The vendor named by a route segment, or null (reserved or malformed slugs never reach the database). */
-export const getVendorBySlug = cache(async (slug: string): Promise<Vendor | null> => {
+export const findVendorBySlug = cache(async (slug: string): Promise<Vendor | null> => {
   const parsed = vendorSlugSchema.safeParse(safeDecode(slug));
   if (!parsed.success) return null;
   const row = await vendorQuery().where({ slug: parsed.data }).first();

@@ -29,7 +29,7 @@ export async function createWebhook({
   }
   const secret = newWebhookSecret();
   return db.transaction(async (trx) => {
-    await trx.raw("select pg_advisory_xact_lock(hashtextextended(?, 11))", [vendorId]);
+    await trx.raw<unknown>("select pg_advisory_xact_lock(hashtextextended(?, 11))", [vendorId]);
     const { count } = await trx("webhooks").where({ vendor_id: vendorId }).first<{ count: string }>(trx.raw("count(*) as count"));
     if (Number(count) >= MAX_WEBHOOKS_PER_VENDOR)
       throw new InvalidInput(`A workspace can have at most ${MAX_WEBHOOKS_PER_VENDOR} webhooks.`);
@@ -43,7 +43,7 @@ export async function createWebhook({
         secret_hint: secretHint(secret),
         created_by: userId,
       })
-      .returning<{ id: string }[]>("id");
+      .returning("id");
     await writeAudit(
       {
         vendorId,

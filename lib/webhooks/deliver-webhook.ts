@@ -48,7 +48,7 @@ export async function deliverWebhookJob(data: unknown): Promise<void> {
     const hook = await trx("webhooks")
       .where({ id: row.webhook_id, vendor_id: row.vendor_id })
       .forUpdate()
-      .first<{ state: string; consecutive_failures: number } | undefined>("state", "consecutive_failures");
+      .first("state", "consecutive_failures");
     if (!hook) return;
     const retry = !ok && attempt < settings.maxAttempts;
     const wait = retry ? retryDelaySeconds(attempt + 1, settings) : 0;

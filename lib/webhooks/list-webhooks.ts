@@ -3,15 +3,27 @@ import "server-only";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
 
-import { DELIVERY_COLUMNS, WEBHOOK_COLUMNS, type Webhook, type WebhookDelivery } from "./webhook-rows";
+import { DELIVERY_COLUMNS, rowToDelivery, rowToWebhook, WEBHOOK_COLUMNS, type Webhook, type WebhookDelivery } from "./webhook-rows";
 
 export async function listWebhooks({ vendorId }: { vendorId: string }): Promise<Webhook[]> {
-  return db("webhooks").where({ vendor_id: vendorId }).orderBy("created_at").select<Webhook[]>(WEBHOOK_COLUMNS);
+  const rows = await db("webhooks")
+    .where({ vendor_id: vendorId })
+    .orderBy("created_at")
+    .select(...WEBHOOK_COLUMNS);
+  return rows.map(rowToWebhook);
+}
+
+/** One webhook of this vendor, or null (another vendor's is not found). */
+export async function findWebhook({ vendorId, webhookId }: { vendorId: string; webhookId: string }): Promise<Webhook | null> {
+  const row = await db("webhooks")
+    .where({ vendor_id: vendorId, id: webhookId })
+    .first(...WEBHOOK_COLUMNS);
+  return row ? rowToWebhook(row) : null;
 }
 
 /** One webhook of this vendor; another vendor's is not found. */
-export async function getWebhook({ vendorId, webhookId }: { vendorId: string; webhookId: string }): Promise<Webhook> {
-  const hook = await db("webhooks").where({ vendor_id: vendorId, id: webhookId }).first<Webhook | undefined>(WEBHOOK_COLUMNS);
+export async function getWebhook(o: { vendorId: string; webhookId: string }): Promise<Webhook> {
+  const hook = await findWebhook(o);
   if (!hook) throw new NotFound("No such webhook.");
   return hook;
 }
@@ -20,12 +32,13 @@ export const DELIVERY_LOG_SIZE = 50;
 
 /** The newest deliveries of one webhook, for the log. */
 export async function listDeliveries({ vendorId, webhookId }: { vendorId: string; webhookId: string }): Promise<WebhookDelivery[]> {
-  return db("webhook_deliveries")
+  const rows = await db("webhook_deliveries")
     .where({ vendor_id: vendorId, webhook_id: webhookId })
     .orderBy([
       { column: "created_at", order: "desc" },
       { column: "id", order: "desc" },
     ])
     .limit(DELIVERY_LOG_SIZE)
-    .select<WebhookDelivery[]>(DELIVERY_COLUMNS);
+    .select(...DELIVERY_COLUMNS);
+  return rows.map(rowToDelivery);
 }

@@ -32,10 +32,7 @@ export async function redeliverWebhook({
 /** Resume a paused webhook; what was held while it was paused is sent now. */
 export async function resumeWebhook({ vendorId, userId, webhookId }: Target): Promise<void> {
   await db.transaction(async (trx) => {
-    const hook = await trx("webhooks")
-      .where({ vendor_id: vendorId, id: webhookId })
-      .forUpdate()
-      .first<{ state: string; paused_at: Date | null } | undefined>("state", "paused_at");
+    const hook = await trx("webhooks").where({ vendor_id: vendorId, id: webhookId }).forUpdate().first("state", "paused_at");
     if (!hook) throw new NotFound("No such webhook.");
     if (hook.state === "active") return;
     await trx("webhooks")
@@ -68,7 +65,7 @@ export async function resumeWebhook({ vendorId, userId, webhookId }: Target): Pr
 
 export async function deleteWebhook({ vendorId, userId, webhookId }: Target): Promise<void> {
   await db.transaction(async (trx) => {
-    const [row] = await trx("webhooks").where({ vendor_id: vendorId, id: webhookId }).delete().returning<{ url: string }[]>("url");
+    const [row] = await trx("webhooks").where({ vendor_id: vendorId, id: webhookId }).delete().returning("url");
     if (!row) throw new NotFound("No such webhook.");
     await writeAudit(
       { vendorId, actorUserId: userId, action: "webhook.delete", objectType: "webhook", objectId: webhookId, details: { url: row.url } },

@@ -22,10 +22,7 @@ type Event<T extends WebhookEventType> = {
  * delivery "held" until it is resumed.
  */
 export async function queueWebhookEvent<T extends WebhookEventType>(trx: Knex.Transaction, event: Event<T>): Promise<void> {
-  const hooks = await trx("webhooks")
-    .where({ vendor_id: event.vendorId })
-    .whereRaw("? = any(events)", [event.type])
-    .select<{ id: string; state: "active" | "paused" }[]>("id", "state");
+  const hooks = await trx("webhooks").where({ vendor_id: event.vendorId }).whereRaw("? = any(events)", [event.type]).select("id", "state");
   if (hooks.length === 0) return;
   const vendor = await trx("vendors").where({ id: event.vendorId }).first<{ slug: string }>("slug");
   const envelope = webhookEnvelopeSchema(event.type).parse({
@@ -48,7 +45,7 @@ export async function queueWebhookEvent<T extends WebhookEventType>(trx: Knex.Tr
       })
       .onConflict(["webhook_id", "event_id"])
       .ignore()
-      .returning<{ id: string }[]>("id");
+      .returning("id");
     if (row && hook.state === "active") await enqueueDeliveryAttempt(trx, { deliveryId: row.id, attempt: 1, key: `${row.id}:1` });
   }
 }

@@ -4,7 +4,7 @@ import { redirect } from "next/navigation";
 
 import { changePasswordSchema } from "@/content-schema/auth";
 import type { ActionState } from "@/lib/actions/action-state";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
 import { consumeRateLimit } from "@/lib/rate-limit/consume-rate-limit";
@@ -12,7 +12,7 @@ import { changePassword } from "@/lib/users/change-password";
 import { endSessions } from "@/lib/users/end-sessions";
 
 export async function changePasswordAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   if (!user) return { ok: false, message: "Your session has ended. Sign in again to change your password." };
   const parsed = changePasswordSchema.safeParse(Object.fromEntries(form.entries()));
   if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error) };
@@ -29,7 +29,7 @@ export async function changePasswordAction(_prev: ActionState, form: FormData): 
 
 /** Ends every session of the signed-in person, on every device; they sign in again here. */
 export async function endAllSessionsAction(): Promise<void> {
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   if (user) await endSessions(user.id);
   redirect("/sign-in?callbackUrl=/account");
 }

@@ -4,7 +4,7 @@ import { redirect } from "next/navigation";
 import { ChangePasswordForm } from "@/components/auth/change-password-form";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { PageHeader } from "@/components/ui/page-header";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { getAccount } from "@/lib/users/get-account";
 
 import { changePasswordAction, endAllSessionsAction } from "./actions";
@@ -12,7 +12,7 @@ import { changePasswordAction, endAllSessionsAction } from "./actions";
 export const metadata = { title: "Your account", robots: { index: false } };
 
 export default async function AccountPage() {
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   if (!user) redirect("/sign-in?callbackUrl=/account");
   const account = await getAccount(user.id);
   return (

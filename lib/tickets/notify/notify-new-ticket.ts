@@ -9,11 +9,11 @@ import { filterWantsMail } from "@/lib/mail-preferences/mail-preferences";
 import { mailFooter } from "@/lib/mail-preferences/preferences-link";
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 
-import { loadTicketMailContext, supportTeam } from "./ticket-mail-context";
+import { findTicketMailContext, supportTeam } from "./ticket-mail-context";
 
 /** The support team hears about every new ticket (unless they turned ticket mail off); queued in the ticket's own transaction. */
 export async function notifyNewTicket(trx: Knex.Transaction, { vendor, ticketId }: { vendor: Vendor; ticketId: string }): Promise<void> {
-  const ctx = await loadTicketMailContext(trx, vendor.id, ticketId);
+  const ctx = await findTicketMailContext(trx, vendor.id, ticketId);
   if (!ctx) return;
   const link = appUrl(`/${ctx.vendorSlug}/desk/tickets/${ticketId}`);
   const team = await filterWantsMail(trx, { vendorId: vendor.id, kind: "ticket_notifications", people: await supportTeam(trx, vendor.id) });

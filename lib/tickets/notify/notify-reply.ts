@@ -9,7 +9,7 @@ import { mailFooter, withFooter } from "@/lib/mail-preferences/preferences-link"
 import { enqueueMail } from "@/lib/mail/enqueue-mail";
 
 import { renderReplyMail } from "./reply-mail";
-import { loadTicketMailContext, supportTeam } from "./ticket-mail-context";
+import { findTicketMailContext, supportTeam } from "./ticket-mail-context";
 
 type Options = { vendorId: string; ticketId: string; messageId: string; authorName: string; body: string; hasCard: boolean };
 
@@ -18,7 +18,7 @@ export async function notifyCustomerOfReply(
   trx: Knex.Transaction,
   { vendorId, ticketId, messageId, authorName, body, hasCard }: Options,
 ): Promise<void> {
-  const ctx = await loadTicketMailContext(trx, vendorId, ticketId);
+  const ctx = await findTicketMailContext(trx, vendorId, ticketId);
   if (!ctx || !(await wantsMail(trx, { vendorId, userId: ctx.customer.id, kind: "ticket_notifications" }))) return;
   const link = appUrl(`/${ctx.vendorSlug}/support/tickets/${ticketId}`);
   const note = hasCard ? "The reply includes a sheet adapted to your machine: open the ticket to see it." : undefined;
@@ -48,7 +48,7 @@ export async function notifyStaffOfCustomerReply(
   trx: Knex.Transaction,
   { vendorId, ticketId, messageId, authorName, body }: Options,
 ): Promise<void> {
-  const ctx = await loadTicketMailContext(trx, vendorId, ticketId);
+  const ctx = await findTicketMailContext(trx, vendorId, ticketId);
   if (!ctx) return;
   const link = appUrl(`/${ctx.vendorSlug}/desk/tickets/${ticketId}`);
   const recipients = await filterWantsMail(trx, {

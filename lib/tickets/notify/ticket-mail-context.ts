@@ -15,7 +15,7 @@ export type TicketMailContext = {
 export { REPLY_ABOVE } from "./reply-mail";
 
 /** Read inside the writing transaction, so a ticket or message not yet committed is seen. */
-export async function loadTicketMailContext(trx: Knex.Transaction, vendorId: string, ticketId: string): Promise<TicketMailContext | null> {
+export async function findTicketMailContext(trx: Knex.Transaction, vendorId: string, ticketId: string): Promise<TicketMailContext | null> {
   const row = await trx("tickets as t")
     .join("vendors as v", "v.id", "t.vendor_id")
     .join("users as c", "c.id", "t.customer_id")

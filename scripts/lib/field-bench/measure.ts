@@ -18,12 +18,12 @@ export async function loadFieldModules(databaseUrl: string) {
     import("../../../lib/field/sheet-field-results"),
   ]);
   const overview: Record<string, (vendorId: string) => Promise<unknown>> = {
-    loadFieldSummary: (vendorId) => summary.loadFieldSummary({ vendorId }),
+    getFieldSummary: (vendorId) => summary.getFieldSummary({ vendorId }),
     listNeedsAttention: (vendorId) => attention.listNeedsAttention({ vendorId, z: Z, limit: 25 }),
     listCustomerChanges: (vendorId) => changes.listCustomerChanges({ vendorId, limit: 25 }),
-    loadCoverageGaps: (vendorId) => coverage.loadCoverageGaps({ vendorId }),
+    getCoverageGaps: (vendorId) => coverage.getCoverageGaps({ vendorId }),
   };
-  const drillIn = (pick: SheetPick) => sheet.loadSheetFieldResults({ vendorId: pick.vendorId, sheetId: pick.sheetId, z: Z });
+  const drillIn = (pick: SheetPick) => sheet.findSheetFieldResults({ vendorId: pick.vendorId, sheetId: pick.sheetId, z: Z });
   return { db, refreshFieldRollups: refresh.refreshFieldRollups, overview, drillIn };
 }
 
@@ -76,7 +76,7 @@ export async function measure(field: Field, vendorIds: string[], sheets: SheetPi
     );
   });
   await phase(iterations, async (i) => {
-    await timeIt(samples, "page    drill-in loadSheetFieldResults", () => field.drillIn(sheets[i % sheets.length]));
+    await timeIt(samples, "page    drill-in findSheetFieldResults", () => field.drillIn(sheets[i % sheets.length]));
   });
   return samples;
 }

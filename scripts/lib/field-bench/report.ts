@@ -69,7 +69,7 @@ export async function printPlans(url: string, field: Field, vendorId: string, sh
     console.log("\nPostgreSQL execution/planning time of every query the pages send:");
     const pages: [string, () => Promise<unknown>][] = [
       ...Object.entries(field.overview).map(([n, run]) => [n, () => run(vendorId)] as [string, () => Promise<unknown>]),
-      ["loadSheetFieldResults", () => field.drillIn(sheet)],
+      ["findSheetFieldResults", () => field.drillIn(sheet)],
     ];
     for (const [name, run] of pages) {
       for (const q of await captureQueries(field.db, run)) {

@@ -5,12 +5,12 @@ import { materialFieldsSchema } from "@/content-schema/catalogue-material";
 import { machineFieldsSchema } from "@/content-schema/machine-fields";
 import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { adaptOperation, buildAdaptInput } from "@/lib/adapt/adapt-context";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { createSetup } from "@/lib/bench/create-setup";
-import { getSetup } from "@/lib/bench/list-setups";
+import { findSetup } from "@/lib/bench/list-setups";
 import { machineToInput } from "@/lib/bench/machine-rows";
-import { createMachine, getMachine } from "@/lib/bench/machines";
-import { getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { createMachine, findMachine } from "@/lib/bench/machines";
+import { findMachineClassById, findMaterialById } from "@/lib/catalogue/get-catalogue-item";
 import { saveMachineClass } from "@/lib/catalogue/save-machine-class";
 import { saveMaterial } from "@/lib/catalogue/save-material";
 import { db } from "@/lib/db/knex";
@@ -40,7 +40,7 @@ describe("engine inputs from stored rows", () => {
         mc: 0.25,
       }),
     });
-    expect(await getMaterialById({ vendorId: vendor.id, id: saved.id })).toMatchObject({
+    expect(await findMaterialById({ vendorId: vendor.id, id: saved.id })).toMatchObject({
       chipLoadMinPctD: 0.6,
       chipLoadMaxPctD: 1.4,
       kc11Nmm2: 500,
@@ -79,7 +79,7 @@ describe("engine inputs from stored rows", () => {
         ratedRpm: 18000,
       }),
     });
-    expect(await getMachineClassById({ vendorId: vendor.id, id: saved.id })).toMatchObject({
+    expect(await findMachineClassById({ vendorId: vendor.id, id: saved.id })).toMatchObject({
       spindleKind: "constant-torque",
       ratedRpm: 18000,
     });
@@ -93,12 +93,12 @@ describe("engine inputs from stored rows", () => {
       userId: customer.user.id,
       fields: machineFieldsSchema.parse({ ...weakMachineFields, spindleKind: "constant-torque", ratedRpm: "12000", zThrustN: "150" }),
     });
-    expect(await getMachine({ vendorId: vendor.id, userId: customer.user.id, machineId: machine.id })).toMatchObject({
+    expect(await findMachine({ vendorId: vendor.id, userId: customer.user.id, machineId: machine.id })).toMatchObject({
       spindleKind: "constant-torque",
       ratedRpm: 12000,
       zThrustN: 150,
     });
-    const context = (await loadAdaptContext({ vendorId: vendor.id, versionId: sheet.versionId }))!;
+    const context = (await findVersionAdaptContext({ vendorId: vendor.id, versionId: sheet.versionId }))!;
     const input = buildAdaptInput(context, 0, machineToInput(machine), {}, { entryCapability: "plunge-only", units: "imperial" });
     // The factory's catalogue: 3.175 mm cutter with 12 mm of flute in cast acrylic (its band 1.2–3.5 % of D).
     expect(input.operation).toMatchObject({ cornerForm: "square", fluteLengthMm: 12, entry: "ramp", rampAngleDeg: 3 });
@@ -128,9 +128,9 @@ describe("engine inputs from stored rows", () => {
       result: { plungeFeedMmMin: 9999 },
     });
     const { id } = await createSetup({ vendorId: vendor.id, userId: customer.user.id, input });
-    const setup = (await getSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }))!;
+    const setup = (await findSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }))!;
     expect(setup.entryCapability).toBe("plunge-only");
-    const context = (await loadAdaptContext({ vendorId: vendor.id, versionId: sheet.versionId }))!;
+    const context = (await findVersionAdaptContext({ vendorId: vendor.id, versionId: sheet.versionId }))!;
     const expected = adaptOperation(
       context,
       0,

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import { machineFieldsSchema } from "@/content-schema/machine-fields";
-import { createMachine, deleteMachine, getMachine, listMachines, updateMachine } from "@/lib/bench/machines";
+import { createMachine, deleteMachine, findMachine, listMachines, updateMachine } from "@/lib/bench/machines";
 import { weakMachineFields } from "@/tests/factories/bench";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
 
@@ -35,7 +35,7 @@ describe("machines are per vendor and per customer", () => {
     expect(mine.rigidity).toBe(0.35);
     expect((await listMachines({ vendorId: vendor.id, userId: customer.user.id })).map((m) => m.id)).toEqual([mine.id]);
     expect(await listMachines({ vendorId: vendor.id, userId: other.user.id })).toEqual([]);
-    expect(await getMachine({ vendorId: vendor.id, userId: other.user.id, machineId: mine.id })).toBeNull();
+    expect(await findMachine({ vendorId: vendor.id, userId: other.user.id, machineId: mine.id })).toBeNull();
     await expect(updateMachine({ vendorId: vendor.id, userId: other.user.id, machineId: mine.id, fields })).rejects.toMatchObject({
       code: "not_found",
     });
@@ -52,7 +52,7 @@ describe("machines are per vendor and per customer", () => {
       userId: a.customer.user.id,
       fields: machineFieldsSchema.parse(weakMachineFields),
     });
-    expect(await getMachine({ vendorId: b.vendor.id, userId: a.customer.user.id, machineId: machine.id })).toBeNull();
+    expect(await findMachine({ vendorId: b.vendor.id, userId: a.customer.user.id, machineId: machine.id })).toBeNull();
     const updated = await updateMachine({
       vendorId: a.vendor.id,
       userId: a.customer.user.id,

@@ -4,9 +4,9 @@ import { machineFieldsSchema } from "@/content-schema/machine-fields";
 import { outcomeFieldsSchema } from "@/content-schema/outcome-fields";
 import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { createSetup } from "@/lib/bench/create-setup";
-import { getSetup } from "@/lib/bench/list-setups";
+import { findSetup } from "@/lib/bench/list-setups";
 import { createMachine } from "@/lib/bench/machines";
-import { getOutcomePhoto, listOutcomes, recordOutcome } from "@/lib/bench/outcomes";
+import { findOutcomePhoto, listOutcomes, recordOutcome } from "@/lib/bench/outcomes";
 import { createBenchSheet, weakMachineFields } from "@/tests/factories/bench";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
 
@@ -60,10 +60,10 @@ describe("outcome reports", () => {
       ["failed", "melting_welding", sheet.versionId],
     ]);
     expect(history[0]).toMatchObject({ changes: { feedMmMin: { from: 1600, to: 2000 } }, hasPhoto: true });
-    expect((await getOutcomePhoto({ vendorId: vendor.id, userId: customer.user.id, outcomeId: history[0].id }))?.contentType).toBe(
+    expect((await findOutcomePhoto({ vendorId: vendor.id, userId: customer.user.id, outcomeId: history[0].id }))?.contentType).toBe(
       "image/png",
     );
-    expect((await getSetup(owner))?.lastOutcome?.result).toBe("worked_after_changes");
+    expect((await findSetup(owner))?.lastOutcome?.result).toBe("worked_after_changes");
   });
 
   it("refuses a photo that is not an image, and another customer's setup", async () => {

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { machineFieldsSchema } from "@/content-schema/machine-fields";
 import { setupCreateSchema } from "@/content-schema/setup-fields";
 import { createSetup } from "@/lib/bench/create-setup";
-import { getSetup, listSetups } from "@/lib/bench/list-setups";
+import { findSetup, listSetups } from "@/lib/bench/list-setups";
 import { createMachine } from "@/lib/bench/machines";
 import { createBenchSheet, supersede, weakMachineFields } from "@/tests/factories/bench";
 import { createMember, createVendorWithStaff } from "@/tests/factories/foundation";
@@ -33,7 +33,7 @@ describe("saving a setup", () => {
       result: { rpm: 99999 },
     });
     const { id } = await createSetup({ vendorId: vendor.id, userId: customer.user.id, input });
-    const row = mustExist(await getSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }), "setup");
+    const row = mustExist(await findSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }), "setup");
     expect(row.sheetVersionId).toBe(sheet.versionId);
     // Sheet slot n 18 000 rpm, machine max 16 000 → clamped (rule 4).
     expect(row.result.rpm).toBe(16000);
@@ -74,10 +74,10 @@ describe("saving a setup", () => {
       userId: customer.user.id,
       input: setupCreateSchema.parse({ versionId: sheet.versionId, machineId: machine.id }),
     });
-    expect((await getSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }))?.newerVersionNumber).toBeNull();
+    expect((await findSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: id }))?.newerVersionNumber).toBeNull();
     await supersede(vendor.id, sheet.sheetId);
     const [summary] = await listSetups({ vendorId: vendor.id, userId: customer.user.id });
     expect(summary).toMatchObject({ id, versionNumber: 1, newerVersionNumber: 2, machineName: "Desk router", lastOutcome: null });
-    expect(await getSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: "not-a-uuid" })).toBeNull();
+    expect(await findSetup({ vendorId: vendor.id, userId: customer.user.id, setupId: "not-a-uuid" })).toBeNull();
   });
 });

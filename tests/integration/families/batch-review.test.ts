@@ -79,12 +79,19 @@ describe("sheet families: batch review and publish", () => {
   it("a sheet left out with a reason is not published and goes back to draft", async () => {
     const s = await createFamilyScenario();
     const batch = await generate(s);
-    const item = await db("family_batch_items").where({ batch_id: batch.id }).orderBy("id").first();
+    const item = mustExist(await db("family_batch_items").where({ batch_id: batch.id }).orderBy("id").first(), "batch item");
     await expect(excludeBatchItem({ ...review(s, batch.number), itemId: item.id, reason: "" })).rejects.toThrow();
     await excludeBatchItem({ ...review(s, batch.number), itemId: item.id, reason: "Test cut pending on this cutter." });
     await approveBatch(review(s, batch.number));
     expect(await publishBatch(review(s, batch.number))).toEqual({ published: 3, returned: 1 });
-    expect(mustExist(await db("sheet_versions").where({ id: item.version_id }).first(), "version").state).toBe("draft");
+    expect(
+      mustExist(
+        await db("sheet_versions")
+          .where({ id: mustExist(item.version_id, "version id") })
+          .first(),
+        "version",
+      ).state,
+    ).toBe("draft");
   });
 
   it("a sheet of a batch under review is not published alone, and the batch still publishes whole", async () => {
@@ -122,15 +129,18 @@ describe("sheet families: batch review and publish", () => {
     const batch = await generate(s);
     await approveBatch(review(s, batch.number));
     // Someone returns one sheet of the approved batch to draft on its own page.
-    const item = await db("family_batch_items as i")
-      .join("sheets as sh", "sh.id", "i.sheet_id")
-      .where({ "i.batch_id": batch.id })
-      .orderBy("sh.slug", "desc")
-      .first("sh.slug");
+    const item = mustExist(
+      await db("family_batch_items as i")
+        .join("sheets as sh", "sh.id", "i.sheet_id")
+        .where({ "i.batch_id": batch.id })
+        .orderBy("sh.slug", "desc")
+        .first<{ slug: string } | undefined>("sh.slug"),
+      "batch item",
+    );
     await returnToDraft({ ...s.as(s.engineer.user.id), slug: item.slug });
     await expect(publishBatch(review(s, batch.number))).rejects.toThrow(item.slug);
     expect(await publishedCount(s.vendorId)).toBe(0);
-    expect((await db("family_batches").where({ id: batch.id }).first()).state).toBe("approved");
+    expect(mustExist(await db("family_batches").where({ id: batch.id }).first(), "batch").state).toBe("approved");
     expect(
       await db.raw("select count(*)::int as n from pgboss.job where name = 'families.alerts' and data->>'batchId' = ?", [batch.id]),
     ).toMatchObject({ rows: [{ n: 0 }] });

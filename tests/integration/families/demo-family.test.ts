@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 
 import { adaptOperation } from "@/lib/adapt/adapt-context";
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { db } from "@/lib/db/knex";
 import { getBoss } from "@/lib/jobs/boss";
 import { runSeeds } from "@/seeds/run-seeds";
@@ -15,8 +15,7 @@ afterAll(async () => {
 describe("demo family (invented demo data)", () => {
   it("has a published first batch, a second batch in review, and engine-clean published sheets", async () => {
     await runSeeds(db, { reset: true });
-    const family = await db("families").where({ slug: "o-flute-finishers" }).first();
-    expect(family).toBeDefined();
+    const family = mustExist(await db("families").where({ slug: "o-flute-finishers" }).first(), "demo family");
     const batches = await db("family_batches").where({ family_id: family.id }).orderBy("number").select("id", "state");
     expect(batches.map((b) => b.state)).toEqual(["published", "in_review"]);
     const outcomes = await db("family_batch_items").where({ batch_id: batches[0].id }).pluck("outcome");
@@ -30,7 +29,7 @@ describe("demo family (invented demo data)", () => {
       .select("v.id", "i.machine_class_id");
     expect(published.length).toBeGreaterThan(4);
     for (const { id, machine_class_id } of published) {
-      const context = (await loadAdaptContext({ vendorId: family.vendor_id, versionId: id }))!;
+      const context = (await findVersionAdaptContext({ vendorId: family.vendor_id, versionId: id }))!;
       const k = mustExist(await db("machine_classes").where({ id: machine_class_id }).first(), "k");
       const machine = {
         minRpm: k.rpm_min,

@@ -1,6 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
+import { z } from "zod";
 
-import { familyRulesSchema } from "@/content-schema/family";
+import { cellProvenanceSchema, familyRulesSchema } from "@/content-schema/family";
 import { readStoredOperations } from "@/lib/adapt/read-front-matter";
 import { db } from "@/lib/db/knex";
 import { generateBatch } from "@/lib/families/generate-batch";
@@ -30,7 +31,11 @@ async function generate(s: Awaited<ReturnType<typeof createFamilyScenario>>) {
   return batch;
 }
 
-const items = (batchId: string) => db("family_batch_items").where({ batch_id: batchId }).select("*");
+const items = async (batchId: string) =>
+  (await db("family_batch_items").where({ batch_id: batchId }).select("*")).map((r) => ({
+    ...r,
+    provenance: z.array(cellProvenanceSchema).parse(r.provenance),
+  }));
 
 describe("sheet families: preview and generation", () => {
   it("preview and generation match the engine's own results cell by cell; a warned cell is never generated", async () => {
@@ -75,16 +80,21 @@ describe("sheet families: preview and generation", () => {
         continue;
       }
       expect(item.outcome).toBe("created");
-      const version = mustExist(await db("sheet_versions").where({ id: item.version_id }).first(), "version");
+      const version = mustExist(
+        await db("sheet_versions")
+          .where({ id: mustExist(item.version_id, "version id") })
+          .first(),
+        "version",
+      );
       expect(version.state).toBe("in_review");
       expect(readStoredOperations(version.front_matter)).toEqual(cell.operations.map((op) => op.operation));
       // Every generated number names its rules and rules version, in the record and in the sheet's own prose.
       expect(version.source).toContain("## How these numbers were found");
       expect(version.source).toContain("rules version 1");
-      expect(item.provenance.map((p: { label: string }) => p.label)).toEqual(["Slot, full width", "Profile (contour)"]);
+      expect(item.provenance.map((p) => p.label)).toEqual(["Slot, full width", "Profile (contour)"]);
     }
     const family = await getFamily({ vendorId: s.vendorId, slug: s.slug });
-    expect((await db("family_batches").where({ family_id: family.id }).first()).state).toBe("in_review");
+    expect(mustExist(await db("family_batches").where({ family_id: family.id }).first(), "batch").state).toBe("in_review");
   });
 
   it("after the rule is fixed the warned cells generate, and their sheets say which rule version made the numbers", async () => {
@@ -109,7 +119,12 @@ describe("sheet families: preview and generation", () => {
     const created = rows.filter((r) => r.outcome === "created");
     for (const r of created) {
       expect(r.provenance[1].rules).toEqual(["plastics/profile@light-router"]);
-      const version = mustExist(await db("sheet_versions").where({ id: r.version_id }).first(), "version");
+      const version = mustExist(
+        await db("sheet_versions")
+          .where({ id: mustExist(r.version_id, "version id") })
+          .first(),
+        "version",
+      );
       expect(version.source).toContain("Profile (contour): rule plastics/profile@light-router, rules version 2");
       expect(version.change_note).toContain("rules version 2");
     }

@@ -1,14 +1,14 @@
 import { afterAll, describe, expect, it } from "vitest";
 
 import { db } from "@/lib/db/knex";
-import { loadCoverageGaps } from "@/lib/field/coverage";
+import { getCoverageGaps } from "@/lib/field/coverage";
 import { listCustomerChanges } from "@/lib/field/customer-changes";
 import { coverageGapsCsv, customerChangesCsv, needsAttentionCsv, sheetVersionsCsv } from "@/lib/field/field-csv";
-import { loadFieldSummary } from "@/lib/field/field-summary";
+import { getFieldSummary } from "@/lib/field/field-summary";
 import { listNeedsAttention } from "@/lib/field/needs-attention";
 import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { sendVendorDigests } from "@/lib/field/send-digest";
-import { loadSheetFieldResults } from "@/lib/field/sheet-field-results";
+import { findSheetFieldResults } from "@/lib/field/sheet-field-results";
 import { getBoss } from "@/lib/jobs/boss";
 import { createBenchSheet } from "@/tests/factories/bench";
 import { createFieldCustomer, reportOutcomes } from "@/tests/factories/field";
@@ -38,11 +38,11 @@ describe("Field results across vendors", () => {
     const attention = await listNeedsAttention({ vendorId: a.vendor.id, z: 1.96 });
     expect(attention.map((i) => i.versionId)).toEqual([sheetA.versionId]);
     expect(await listCustomerChanges({ vendorId: a.vendor.id })).toEqual([]);
-    expect(await loadFieldSummary({ vendorId: a.vendor.id })).toMatchObject({ outcomes: 4, failed: 1 });
+    expect(await getFieldSummary({ vendorId: a.vendor.id })).toMatchObject({ outcomes: 4, failed: 1 });
     // A's one customer machine (made by reportOutcomes), none of B's.
-    expect((await loadCoverageGaps({ vendorId: a.vendor.id })).machines).toBe(1);
+    expect((await getCoverageGaps({ vendorId: a.vendor.id })).machines).toBe(1);
     // B's sheet id under A's vendor finds nothing.
-    expect(await loadSheetFieldResults({ vendorId: a.vendor.id, sheetId: sheetB.sheetId, z: 1.96 })).toBeNull();
+    expect(await findSheetFieldResults({ vendorId: a.vendor.id, sheetId: sheetB.sheetId, z: 1.96 })).toBeNull();
 
     expect(await sendVendorDigests(await loadVendor(a.vendor.id))).toBeGreaterThan(0);
     const [digest] = await mailsTo(a.engineer.user.email);
@@ -64,8 +64,8 @@ describe("Field results across vendors", () => {
     const v = await loadVendor(vendor.id);
     const attention = await listNeedsAttention({ vendorId: vendor.id, z: 1.96 });
     const changes = await listCustomerChanges({ vendorId: vendor.id });
-    const coverage = await loadCoverageGaps({ vendorId: vendor.id });
-    const sheetResults = (await loadSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.sheetId, z: 1.96 }))!;
+    const coverage = await getCoverageGaps({ vendorId: vendor.id });
+    const sheetResults = (await findSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.sheetId, z: 1.96 }))!;
     expect(attention).toHaveLength(1);
     expect(changes).toHaveLength(1);
     await sendVendorDigests(v);
@@ -75,7 +75,7 @@ describe("Field results across vendors", () => {
         attention,
         changes,
         coverage,
-        summary: await loadFieldSummary({ vendorId: vendor.id }),
+        summary: await getFieldSummary({ vendorId: vendor.id }),
         versions: sheetResults.versions,
         changesOfSheet: sheetResults.changes,
       }),

@@ -8,10 +8,10 @@ import { createMachine } from "@/lib/bench/machines";
 import { recordOutcome } from "@/lib/bench/outcomes";
 import { db } from "@/lib/db/knex";
 import { compareVersions } from "@/lib/field/compare-versions";
-import { loadFieldSummary } from "@/lib/field/field-summary";
+import { getFieldSummary } from "@/lib/field/field-summary";
 import { recordSheetActivity } from "@/lib/field/record-activity";
 import { lastFieldRefresh, refreshFieldRollups } from "@/lib/field/refresh-rollups";
-import { loadSheetFieldResults } from "@/lib/field/sheet-field-results";
+import { findSheetFieldResults } from "@/lib/field/sheet-field-results";
 import { getBoss } from "@/lib/jobs/boss";
 import { createProblemReport } from "@/lib/tickets/problem-reports";
 import { createBenchSheet, supersede, weakMachineFields } from "@/tests/factories/bench";
@@ -66,7 +66,7 @@ describe("Field-results rollups", () => {
     });
 
     await refreshFieldRollups();
-    const results = await loadSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.sheetId, z: Z95 });
+    const results = await findSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.sheetId, z: Z95 });
     const [v1] = results!.versions;
     // 1 (recordOutcome) + 2 + 3 + 5 outcomes; 1 + 10 setups.
     expect(v1).toMatchObject({
@@ -87,7 +87,7 @@ describe("Field-results rollups", () => {
     expect(results!.handoffs.map((h) => h.summary)).toEqual(["Melts at the sheet's feed"]);
     expect(await lastFieldRefresh()).toBeInstanceOf(Date);
 
-    const summary = await loadFieldSummary({ vendorId: vendor.id });
+    const summary = await getFieldSummary({ vendorId: vendor.id });
     expect(summary).toMatchObject({
       versionsWithReports: 1,
       outcomes: 11,
@@ -107,7 +107,7 @@ describe("Field-results rollups", () => {
     const event = await supersede(vendor.id, sheet.sheetId);
     await reportOutcomes(vendor.id, event.versionId, { asWritten: 12, afterChanges: 1, failed: { poor_finish: 1 } });
     await refreshFieldRollups();
-    const { versions } = (await loadSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.sheetId, z: Z95 }))!;
+    const { versions } = (await findSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.sheetId, z: Z95 }))!;
     expect(versions.map((v) => [v.number, v.state, v.failed, v.outcomes])).toEqual([
       [1, "superseded", 8, 10],
       [2, "published", 1, 14],

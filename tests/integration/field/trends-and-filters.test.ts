@@ -4,7 +4,7 @@ import { db } from "@/lib/db/knex";
 import { listNeedsAttention } from "@/lib/field/needs-attention";
 import { refreshFieldRollups } from "@/lib/field/refresh-rollups";
 import { findFieldSheet } from "@/lib/field/sheet-field-results";
-import { loadSheetTrends } from "@/lib/field/sheet-trends";
+import { getSheetTrends } from "@/lib/field/sheet-trends";
 import { weekStartOf } from "@/lib/field/week-series";
 import { wilsonInterval } from "@/lib/field/wilson";
 import { getBoss } from "@/lib/jobs/boss";
@@ -36,7 +36,7 @@ describe("Field-results trends per sheet", () => {
     await reportOutcomes(vendor.id, sheet.versionId, { failed: { chatter: 1 } }, undefined, { at: at("2026-10-20T10:00:00Z") });
     await refreshFieldRollups();
 
-    const trends = await loadSheetTrends({ vendorId: vendor.id, sheetId: sheet.sheetId, from: "2026-11-04", to: "2026-11-22", z: Z95 });
+    const trends = await getSheetTrends({ vendorId: vendor.id, sheetId: sheet.sheetId, from: "2026-11-04", to: "2026-11-22", z: Z95 });
     expect(trends.weeks.map((w) => [w.week, w.outcomes, w.failed])).toEqual([
       ["2026-11-02", 4, 1],
       ["2026-11-09", 0, 0],
@@ -46,7 +46,7 @@ describe("Field-results trends per sheet", () => {
     // Both versions were published when the factory ran (published versions are immutable): their week is marked.
     expect(trends.weeks.some((w) => w.published.length)).toBe(false);
     const today = new Date().toISOString().slice(0, 10);
-    const upToNow = await loadSheetTrends({
+    const upToNow = await getSheetTrends({
       vendorId: vendor.id,
       sheetId: sheet.sheetId,
       from: "2026-11-02",
@@ -90,7 +90,7 @@ describe("Field-results trends per sheet", () => {
     await reportOutcomes(b.vendor.id, sheetB.versionId, { failed: { chatter: 4 } }, undefined, { at: at("2026-11-03T10:00:00Z") });
     await refreshFieldRollups();
     expect(await findFieldSheet({ vendorId: a.vendor.id, slug: sheetB.sheetSlug })).toBeNull();
-    const trends = await loadSheetTrends({ vendorId: a.vendor.id, sheetId: sheetB.sheetId, from: "2026-11-01", to: "2026-11-10", z: Z95 });
+    const trends = await getSheetTrends({ vendorId: a.vendor.id, sheetId: sheetB.sheetId, from: "2026-11-01", to: "2026-11-10", z: Z95 });
     expect(trends.weeks.every((w) => w.outcomes === 0)).toBe(true);
     expect(trends.publications).toEqual([]);
   });

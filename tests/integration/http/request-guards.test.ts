@@ -8,7 +8,7 @@ import { createVendorWithStaff } from "@/tests/factories/foundation";
 
 // The session cookie is what a browser sends on its own; stand in for it with the user it would resolve to.
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
-vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.user }));
+vi.mock("@/lib/auth/session-user", () => ({ findSessionUser: async () => session.user }));
 
 const ORIGIN = "http://localhost";
 

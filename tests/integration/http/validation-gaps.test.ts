@@ -6,11 +6,11 @@ import { saveViewAction } from "@/app/[vendor]/(staff)/desk/actions";
 import { GET as shortLink } from "@/app/c/[code]/route";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { db } from "@/lib/db/knex";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
-vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.user }));
+vi.mock("@/lib/auth/session-user", () => ({ findSessionUser: async () => session.user }));
 
 const form = (values: Record<string, string>) => {
   const data = new FormData();
@@ -24,7 +24,7 @@ describe("inputs that used to escape as raw errors", () => {
   });
 
   it("a slug that is not valid percent-encoding is simply not found", async () => {
-    await expect(getVendorBySlug("%E0%A4%A")).resolves.toBeNull();
+    await expect(findVendorBySlug("%E0%A4%A")).resolves.toBeNull();
     const res = await shortLink(new NextRequest("http://localhost/c/%E0%A4%A"));
     expect(res.status).toBe(404);
   });

@@ -13,7 +13,7 @@ import { mustExist } from "@/tests/support/must-exist";
 import { readPdf } from "@/tests/support/pdf-text";
 
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
-vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.user }));
+vi.mock("@/lib/auth/session-user", () => ({ findSessionUser: async () => session.user }));
 
 const get = (vendor: string, sku: string) =>
   cutterPdf(new NextRequest(`http://127.0.0.1:3000/${vendor}/library/cutters/${sku}/pdf`), { params: Promise.resolve({ vendor, sku }) });

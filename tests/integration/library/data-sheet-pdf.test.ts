@@ -10,7 +10,7 @@ import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { readPdf } from "@/tests/support/pdf-text";
 
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
-vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.user }));
+vi.mock("@/lib/auth/session-user", () => ({ findSessionUser: async () => session.user }));
 
 const as = (user: { id: string; email: string; name: string } | null) => {
   session.user = user ? { id: user.id, email: user.email, name: user.name, isOperator: false } : null;

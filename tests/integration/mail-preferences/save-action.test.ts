@@ -5,7 +5,7 @@ import { listMailPreferences } from "@/lib/mail-preferences/mail-preferences";
 import { createPreferencesToken } from "@/lib/mail-preferences/preferences-link";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 
-vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => null }));
+vi.mock("@/lib/auth/session-user", () => ({ findSessionUser: async () => null }));
 
 /** What a server action ends in: the redirect's digest (NEXT_REDIRECT;…;url;…) or a not-found digest. */
 async function outcome(form: FormData) {

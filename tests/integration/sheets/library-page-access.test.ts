@@ -11,7 +11,7 @@ import { mustExist } from "@/tests/support/must-exist";
 
 // A request can render a page segment without its layout, so each Library page checks access itself.
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
-vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.user }));
+vi.mock("@/lib/auth/session-user", () => ({ findSessionUser: async () => session.user }));
 vi.mock("@/components/library/read-units", () => ({ readUnits: async () => "metric" }));
 vi.mock("next/server", async (original) => ({ ...(await original<typeof import("next/server")>()), after: () => undefined }));
 // Outside Next's server the "use cache" directive is inert and cacheLife/cacheTag refuse to run: the pages render

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import { addStaffMessage } from "@/lib/tickets/add-message";
-import { readAttachment } from "@/lib/tickets/attachments/read-attachment";
+import { getAttachment } from "@/lib/tickets/attachments/get-attachment";
 import { saveAttachment } from "@/lib/tickets/attachments/save-attachment";
 import { getTicketThread } from "@/lib/tickets/get-ticket-thread";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
@@ -38,7 +38,7 @@ describe("internal notes", () => {
     expect(seen.messages.map((m) => m.body)).toEqual(["Raise the feed to 1800 mm/min."]);
     expect(seen.attachments).toEqual([]);
     await expect(
-      readAttachment({ vendorId: vendor.id, attachmentId: file.id, userId: customer.user.id, role: "customer" }),
+      getAttachment({ vendorId: vendor.id, attachmentId: file.id, userId: customer.user.id, role: "customer" }),
     ).rejects.toMatchObject({ code: "not_found" });
 
     const staff = await getTicketThread({ vendorId: vendor.id, ticketId: ticket.id, viewer: { kind: "staff" } });

@@ -10,7 +10,7 @@ import { createVendorWithStaff, FACTORY_PASSWORD } from "@/tests/factories/found
 import { mustExist } from "@/tests/support/must-exist";
 
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
-vi.mock("@/lib/auth/session-user", () => ({ getSessionUser: async () => session.user }));
+vi.mock("@/lib/auth/session-user", () => ({ findSessionUser: async () => session.user }));
 
 const formOf = (fields: Record<string, string>) => {
   const form = new FormData();

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { brandingSchema } from "@/content-schema/vendor-branding";
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 import { updateBranding } from "@/lib/vendors/update-branding";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
 import { mustExist } from "@/tests/support/must-exist";
@@ -44,7 +44,7 @@ describe("branding", () => {
   it("keeps the Field-results confidence unless the form sends one, and accepts only the offered levels", async () => {
     const { vendor, admin } = await createVendorWithStaff({ settings: { wilsonConfidence: 0.9 } });
     await updateBranding({ vendorId: vendor.id, actorUserId: admin.user.id, input: input() });
-    expect((await getVendorBySlug(vendor.slug))?.settings.wilsonConfidence).toBe(0.9);
+    expect((await findVendorBySlug(vendor.slug))?.settings.wilsonConfidence).toBe(0.9);
     // As the admin form posts it: checkboxes as "on", the level as a string.
     const form = { vendor: "x", name: "Renamed Co", accentColor: "#123456", requireSecondApproval: "on" };
     await updateBranding({
@@ -52,7 +52,7 @@ describe("branding", () => {
       actorUserId: admin.user.id,
       input: brandingSchema.parse({ ...form, wilsonConfidence: "0.99" }),
     });
-    expect((await getVendorBySlug(vendor.slug))?.settings.wilsonConfidence).toBe(0.99);
+    expect((await findVendorBySlug(vendor.slug))?.settings.wilsonConfidence).toBe(0.99);
     expect(brandingSchema.safeParse({ ...form, wilsonConfidence: "0.5" }).success).toBe(false);
   });
 });

@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, afterEach, beforeEach, describe, expect, it } from "vitest";
 
+import type { DeliveryState } from "@/content-schema/webhook-states";
 import { recordOutcome } from "@/lib/bench/outcomes";
 import { db } from "@/lib/db/knex";
 import { stopBoss } from "@/lib/jobs/boss";
@@ -325,11 +326,11 @@ describe("webhook delivery", () => {
   it("prunes finished deliveries after 30 days and keeps held ones", async () => {
     const s = await scenario();
     const { id } = await s.hook("http://127.0.0.1:9/never");
-    const row = (state: string, days: number) => ({
+    const row = (state: DeliveryState, days: number) => ({
       vendor_id: s.vendor.id,
       webhook_id: id,
       event_id: randomUUID(),
-      event_type: "ticket.created",
+      event_type: "ticket.created" as const,
       body: "{}",
       state,
       created_at: db.raw(`now() - interval '${days} days'`),

@@ -10,6 +10,8 @@ import { acrylicContext } from "./adapt-context-fixture";
 
 // The chart is loaded in the browser only (recharts); it is not what these tests look at.
 vi.mock("next/dynamic", () => ({ default: () => () => null }));
+// The units switch writes the units cookie and asks the router to render the page again.
+vi.mock("next/navigation", () => ({ useRouter: () => ({ refresh: () => {} }) }));
 
 afterEach(cleanup);
 

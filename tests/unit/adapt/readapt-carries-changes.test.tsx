@@ -9,6 +9,8 @@ import { formatQuantity } from "@/lib/machining";
 import { acrylicContext } from "./adapt-context-fixture";
 
 vi.mock("next/dynamic", () => ({ default: () => () => null }));
+// The units switch writes the units cookie and asks the router to render the page again.
+vi.mock("next/navigation", () => ({ useRouter: () => ({ refresh: () => {} }) }));
 afterEach(cleanup);
 
 const base: Machine = {

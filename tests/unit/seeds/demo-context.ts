@@ -10,7 +10,7 @@ import { DEMO_SHEET_PLAN, demoSheetSlug, seededVersions, type PlannedSheet, type
 import { demoSheetSource } from "@/seeds/sheets/demo-sheet-source";
 
 // The demo sheets as the app reads them: each seeded version's source validated, and the adapt context the
-// Bench would build from its front matter and catalogue rows (the same mapping as lib/adapt/load-adapt-context.ts).
+// Bench would build from its front matter and catalogue rows (the same mapping as lib/adapt/find-version-adapt-context.ts).
 
 export type DemoVersion = {
   vendor: string;

@@ -2,17 +2,17 @@ import { notFound } from "next/navigation";
 
 import { SignUpForm } from "@/components/auth/sign-up-form";
 import { findMembership } from "@/lib/auth/membership";
-import { getSessionUser } from "@/lib/auth/session-user";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findSessionUser } from "@/lib/auth/session-user";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { joinAsCustomerAction, signUpAction } from "./actions";
 
 export const metadata = { title: "Create an account" };
 
 export default async function SignUpPage({ params }: { params: Promise<{ vendor: string }> }) {
-  const vendor = await getVendorBySlug((await params).vendor);
+  const vendor = await findVendorBySlug((await params).vendor);
   if (!vendor) notFound();
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   const member = user ? await findMembership(vendor.id, user.id) : null;
   return (
     <div className="mx-auto max-w-md">

@@ -2,20 +2,20 @@
 
 import { acceptInvitationSchema } from "@/content-schema/members";
 import type { ActionState } from "@/lib/actions/action-state";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { fieldErrorsOf } from "@/lib/errors/zod-field-errors";
 import { acceptInvitation } from "@/lib/members/accept-invitation";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 export type AcceptedInvitation = { email: string; created: boolean };
 
 export async function acceptInvitationAction(_prev: ActionState, form: FormData): Promise<ActionState<AcceptedInvitation>> {
   const parsed = acceptInvitationSchema.safeParse(Object.fromEntries(form.entries()));
   if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error) };
-  const vendor = await getVendorBySlug(parsed.data.vendor);
+  const vendor = await findVendorBySlug(parsed.data.vendor);
   if (!vendor) return { ok: false, message: "Not found." };
-  const user = await getSessionUser();
+  const user = await findSessionUser();
   try {
     const result = await acceptInvitation({
       vendorId: vendor.id,

@@ -3,11 +3,11 @@ import { notFound } from "next/navigation";
 
 import { AcceptInvitationForm } from "@/components/auth/accept-invitation-form";
 import { ROLE_LABELS } from "@/lib/auth/roles";
-import { getSessionUser } from "@/lib/auth/session-user";
+import { findSessionUser } from "@/lib/auth/session-user";
 import { DomainError } from "@/lib/errors/domain-errors";
 import { findOpenInvitation } from "@/lib/members/accept-invitation";
 import { findConfirmedAccount } from "@/lib/users/find-confirmed-account";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
 import { acceptInvitationAction } from "./actions";
 
@@ -15,7 +15,7 @@ export const metadata = { title: "Accept invitation" };
 
 export default async function JoinPage({ params }: { params: Promise<{ vendor: string; token: string }> }) {
   const { vendor: slug, token } = await params;
-  const vendor = await getVendorBySlug(slug);
+  const vendor = await findVendorBySlug(slug);
   if (!vendor) notFound();
   const invitation = await findOpenInvitation({ vendorId: vendor.id, token }).catch((error: unknown) => {
     if (error instanceof DomainError) return null;
@@ -29,7 +29,7 @@ export default async function JoinPage({ params }: { params: Promise<{ vendor: s
       </div>
     );
   }
-  const [accountId, user] = await Promise.all([findConfirmedAccount(invitation.email), getSessionUser()]);
+  const [accountId, user] = await Promise.all([findConfirmedAccount(invitation.email), findSessionUser()]);
   // An existing account joins only while signed in as itself, so nobody can collect a role meant for its owner.
   const mustSignIn = accountId !== null && user?.id !== accountId;
   const signInHref = `/sign-in?vendor=${vendor.slug}&callbackUrl=${encodeURIComponent(`/${vendor.slug}/join/${token}`)}`;

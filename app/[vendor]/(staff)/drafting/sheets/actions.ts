@@ -8,7 +8,7 @@ import { renderDraftPreview } from "@/components/drafting/draft-preview";
 import { newSheetSchema, sheetSlugSchema, sourceSchema, submitDraftSchema, withdrawSchema } from "@/content-schema/sheet-workflow";
 import type { ActionState } from "@/lib/actions/action-state";
 import { vendorAction } from "@/lib/actions/vendor-action";
-import { getCutterById, getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/get-catalogue-item";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { approveDraft } from "@/lib/sheets/approve-draft";
 import { checkDraftSource } from "@/lib/sheets/check-draft-source";
@@ -29,9 +29,9 @@ export const createSheetAction = vendorAction(
   { permission: "sheets.author", schema: newSheetSchema.extend({ vendor: z.string() }) },
   async (input, { vendor, user }) => {
     const [cutter, material, machineClass] = await Promise.all([
-      getCutterById({ vendorId: vendor.id, id: input.cutterId }),
-      getMaterialById({ vendorId: vendor.id, id: input.materialId }),
-      getMachineClassById({ vendorId: vendor.id, id: input.machineClassId }),
+      findCutterById({ vendorId: vendor.id, id: input.cutterId }),
+      findMaterialById({ vendorId: vendor.id, id: input.materialId }),
+      findMachineClassById({ vendorId: vendor.id, id: input.machineClassId }),
     ]);
     if (!cutter || !material || !machineClass) throw new NotFound();
     const source = newSheetSource({ cutter, material, machineClass });
@@ -118,7 +118,7 @@ export const previewDraftAction = vendorAction(
   },
   async (input, { vendor }) => {
     const sheet = await getSheet({ vendorId: vendor.id, slug: input.slug });
-    const cutter = await getCutterById({ vendorId: vendor.id, id: sheet.cutterId });
+    const cutter = await findCutterById({ vendorId: vendor.id, id: sheet.cutterId });
     if (!cutter) throw new NotFound();
     const check = await checkDraftSource({ vendorId: vendor.id, source: input.source, expected: sheet });
     let preview: ReactNode = null;

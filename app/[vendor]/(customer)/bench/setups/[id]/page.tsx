@@ -16,7 +16,7 @@ import { findAdaptContext } from "@/lib/adapt/page-data";
 import { readaptSetup } from "@/lib/adapt/readapt-setup";
 import { feedSpeedCurve } from "@/lib/bench/feed-speed-curve";
 import { machineToInput } from "@/lib/bench/machine-rows";
-import { getMachine } from "@/lib/bench/machines";
+import { findMachine } from "@/lib/bench/machines";
 import { listOutcomes } from "@/lib/bench/outcomes";
 import { findBenchSetup } from "@/lib/bench/page-data";
 import { setupSheetData } from "@/lib/bench/setup-sheet-data";
@@ -33,7 +33,7 @@ export default async function SetupPage({ params }: { params: Promise<{ vendor: 
   const owner = { vendorId: vendor.id, userId: user.id };
   const [context, machine, outcomes] = await Promise.all([
     findAdaptContext(vendor.id, setup.sheetVersionId),
-    getMachine({ ...owner, machineId: setup.machineId }),
+    findMachine({ ...owner, machineId: setup.machineId }),
     listOutcomes({ ...owner, setupId: setup.id }),
   ]);
   if (!context) notFound();

@@ -1,7 +1,7 @@
 import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
 
-import { loadFamily } from "@/components/families/load-family";
+import { findDraftingFamily } from "@/lib/families/page-data";
 
 export default async function FamilyLayout({
   children,
@@ -11,6 +11,6 @@ export default async function FamilyLayout({
   params: Promise<{ vendor: string; family: string }>;
 }) {
   const { vendor, family } = await params;
-  if (!(await loadFamily(vendor, family))) notFound();
+  if (!(await findDraftingFamily(vendor, family))) notFound();
   return children;
 }

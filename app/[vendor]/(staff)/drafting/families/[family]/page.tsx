@@ -2,7 +2,6 @@ import { notFound } from "next/navigation";
 
 import { ActionForm } from "@/components/drafting/action-form";
 import { BatchList } from "@/components/families/batch-list";
-import { loadFamily } from "@/components/families/load-family";
 import { PreviewGrid } from "@/components/families/preview-grid";
 import { PreviewSummary } from "@/components/families/preview-summary";
 import { RulesForm } from "@/components/families/rules-form";
@@ -11,6 +10,7 @@ import { familyRulesToText } from "@/content-schema/family";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { listBatches } from "@/lib/families/get-batch";
 import { getLatestRuleSet } from "@/lib/families/get-family";
+import { findDraftingFamily } from "@/lib/families/page-data";
 import { countStatuses, PREVIEW_PAGE, previewFamily } from "@/lib/families/preview-family";
 
 import { generateAction, saveRulesAction } from "../actions";
@@ -19,7 +19,7 @@ type Props = { params: Promise<{ vendor: string; family: string }>; searchParams
 
 export async function generateMetadata({ params }: Props) {
   const { vendor, family } = await params;
-  return { title: (await loadFamily(vendor, family))?.name ?? "Family" };
+  return { title: (await findDraftingFamily(vendor, family))?.name ?? "Family" };
 }
 
 const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
@@ -28,7 +28,7 @@ const box = "rounded-md border border-stone-300 bg-white p-4";
 export default async function FamilyPage({ params, searchParams }: Props) {
   const { vendor: vendorSlug, family: slug } = await params;
   const { vendor } = await requirePageAccess(vendorSlug, "sheets.author", `/${vendorSlug}/drafting/families/${slug}`);
-  const family = await loadFamily(vendorSlug, slug);
+  const family = await findDraftingFamily(vendorSlug, slug);
   if (!family) notFound();
   const from = Math.max(0, Math.floor(Number((await searchParams).from ?? 0)) || 0);
   const ruleSet = await getLatestRuleSet({ vendorId: vendor.id, familyId: family.id });

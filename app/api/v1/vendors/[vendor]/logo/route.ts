@@ -1,10 +1,10 @@
 import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
-import { getVendorLogo } from "@/lib/vendors/get-vendor-logo";
+import { findVendorLogo } from "@/lib/vendors/find-vendor-logo";
 
 // GET /api/v1/vendors/{vendor}/logo: the vendor's logo, sandboxed so an SVG can never run script.
 export const GET = withVendor(async (_request, { access }) => {
-  const logo = await getVendorLogo({ vendorId: access.vendor.id });
+  const logo = await findVendorLogo({ vendorId: access.vendor.id });
   if (!logo) throw new NotFound();
   return new Response(new Uint8Array(logo.bytes), {
     headers: {

@@ -1,12 +1,13 @@
 import Link from "next/link";
+import { notFound } from "next/navigation";
 
 import { WebhookDeliveryLog } from "@/components/admin/webhook-delivery-log";
 import { WebhookStateActions } from "@/components/admin/webhook-state-actions";
 import { PageHeader } from "@/components/ui/page-header";
 import { webhookEventLabels } from "@/content-schema/webhook-events";
-import { requirePageAccess } from "@/lib/auth/page-access";
 import { formatDateTime } from "@/lib/ui/dates";
-import { getWebhook, listDeliveries } from "@/lib/webhooks/list-webhooks";
+import { listDeliveries } from "@/lib/webhooks/list-webhooks";
+import { findAdminWebhook } from "@/lib/webhooks/page-data";
 import { REPLAY_WINDOW_SECONDS } from "@/lib/webhooks/sign-payload";
 
 import { deleteWebhookAction, redeliverAction, resumeWebhookAction } from "../../actions";
@@ -15,11 +16,11 @@ export const metadata = { title: "Webhook" };
 
 export default async function WebhookPage({ params }: { params: Promise<{ vendor: string; webhook: string }> }) {
   const { vendor: slug, webhook: webhookId } = await params;
-  const { vendor } = await requirePageAccess(slug, "integrations.manage", `/${slug}/admin/integrations`);
-  const [hook, deliveries] = await Promise.all([
-    getWebhook({ vendorId: vendor.id, webhookId }),
-    listDeliveries({ vendorId: vendor.id, webhookId }),
-  ]);
+  // The layout answered 404 for a webhook that is not this vendor's; this is the same (cached) lookup.
+  const found = await findAdminWebhook(slug, webhookId);
+  if (!found) notFound();
+  const { vendor, webhook: hook } = found;
+  const deliveries = await listDeliveries({ vendorId: vendor.id, webhookId });
   return (
     <>
       <p className="mb-2 text-sm">

@@ -5,14 +5,14 @@ import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
 import { sniffUpload } from "@/lib/storage/sniff-upload";
 import { contentDisposition } from "@/lib/tickets/attachments/display-file-name";
-import { readAttachment } from "@/lib/tickets/attachments/read-attachment";
+import { getAttachment } from "@/lib/tickets/attachments/get-attachment";
 
 // GET /api/v1/vendors/{vendor}/attachments/{id}: download, for the ticket's customer or Desk staff only.
 export const GET = withVendor<{ vendor: string; attachment: string }>(async (_request, { access, params }) => {
   const attachmentId = z.uuid().safeParse(params.attachment).data;
   if (!attachmentId) throw new NotFound();
   requireMember(access);
-  const file = await readAttachment({ vendorId: access.vendor.id, attachmentId, userId: access.user.id, role: access.member.role });
+  const file = await getAttachment({ vendorId: access.vendor.id, attachmentId, userId: access.user.id, role: access.member.role });
   // Images are checked again by content before a browser may show them inline.
   const recheck = file.kind === "image" ? await sniffUpload(file.bytes, file.fileName).catch(() => null) : null;
   const inline = recheck?.kind === "image";

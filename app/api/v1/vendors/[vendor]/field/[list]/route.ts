@@ -3,11 +3,11 @@ import { attentionFilterSchema, type AttentionFilter } from "@/content-schema/fi
 import type { Vendor } from "@/content-schema/vendor";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { confidenceOf } from "@/lib/field/confidence";
-import { loadCoverageGaps } from "@/lib/field/coverage";
+import { getCoverageGaps } from "@/lib/field/coverage";
 import { listCustomerChanges } from "@/lib/field/customer-changes";
 import { coverageGapsCsv, customerChangesCsv, needsAttentionCsv, sheetVersionsCsv } from "@/lib/field/field-csv";
 import { listNeedsAttention } from "@/lib/field/needs-attention";
-import { findFieldSheet, loadSheetFieldResults } from "@/lib/field/sheet-field-results";
+import { findFieldSheet, findSheetFieldResults } from "@/lib/field/sheet-field-results";
 import { withVendor } from "@/lib/http/with-vendor";
 
 const EXPORT_LIMIT = 5000;
@@ -28,10 +28,10 @@ async function render(vendor: Vendor, query: ReturnType<typeof fieldExportSchema
     case "customer-changes":
       return customerChangesCsv(await listCustomerChanges({ vendorId: vendor.id, limit: EXPORT_LIMIT }));
     case "coverage-gaps":
-      return coverageGapsCsv(await loadCoverageGaps({ vendorId: vendor.id }));
+      return coverageGapsCsv(await getCoverageGaps({ vendorId: vendor.id }));
     case "sheet-versions": {
       const sheet = await findFieldSheet({ vendorId: vendor.id, slug: query.sheet });
-      const results = sheet && (await loadSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.id, z }));
+      const results = sheet && (await findSheetFieldResults({ vendorId: vendor.id, sheetId: sheet.id, z }));
       if (!results) throw new NotFound("No such sheet.");
       return sheetVersionsCsv(results.sheet.slug, results.versions, confidence);
     }

@@ -1,6 +1,6 @@
 import { machineFieldsSchema } from "@/content-schema/machine-fields";
 import { requireMember } from "@/lib/auth/access";
-import { deleteMachine, getMachine, updateMachine } from "@/lib/bench/machines";
+import { deleteMachine, findMachine, updateMachine } from "@/lib/bench/machines";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { parseInput } from "@/lib/errors/zod-field-errors";
 import { readJson } from "@/lib/http/read-json";
@@ -16,7 +16,7 @@ const machineId = (id: string) => {
 export const GET = withVendor<{ vendor: string; id: string }>(
   async (_request, { access, params }) => {
     requireMember(access);
-    const machine = await getMachine({ vendorId: access.vendor.id, userId: access.user.id, machineId: machineId(params.id) });
+    const machine = await findMachine({ vendorId: access.vendor.id, userId: access.user.id, machineId: machineId(params.id) });
     if (!machine) throw new NotFound();
     return Response.json({ machine });
   },

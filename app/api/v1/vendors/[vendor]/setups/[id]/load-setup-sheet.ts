@@ -1,9 +1,9 @@
 import "server-only";
 
-import { loadAdaptContext } from "@/lib/adapt/load-adapt-context";
+import { findVersionAdaptContext } from "@/lib/adapt/find-version-adapt-context";
 import { requireMember, type VendorAccess } from "@/lib/auth/access";
-import { getSetup } from "@/lib/bench/list-setups";
-import { getMachine } from "@/lib/bench/machines";
+import { findSetup } from "@/lib/bench/list-setups";
+import { findMachine } from "@/lib/bench/machines";
 import { setupSheetData } from "@/lib/bench/setup-sheet-data";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { appUrl } from "@/lib/http/app-url";
@@ -11,11 +11,11 @@ import { appUrl } from "@/lib/http/app-url";
 /** The setup sheet's data for the PDF and CSV routes; only the owner finds it. */
 export async function loadSetupSheet(access: VendorAccess, setupId: string) {
   requireMember(access);
-  const setup = await getSetup({ vendorId: access.vendor.id, userId: access.user.id, setupId });
+  const setup = await findSetup({ vendorId: access.vendor.id, userId: access.user.id, setupId });
   if (!setup) throw new NotFound();
   const [context, machine] = await Promise.all([
-    loadAdaptContext({ vendorId: access.vendor.id, versionId: setup.sheetVersionId }),
-    getMachine({ vendorId: access.vendor.id, userId: access.user.id, machineId: setup.machineId }),
+    findVersionAdaptContext({ vendorId: access.vendor.id, versionId: setup.sheetVersionId }),
+    findMachine({ vendorId: access.vendor.id, userId: access.user.id, machineId: setup.machineId }),
   ]);
   if (!context) throw new NotFound();
   const data = setupSheetData({

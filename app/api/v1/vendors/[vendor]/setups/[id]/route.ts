@@ -1,5 +1,5 @@
 import { requireMember } from "@/lib/auth/access";
-import { getSetup } from "@/lib/bench/list-setups";
+import { findSetup } from "@/lib/bench/list-setups";
 import { listOutcomes } from "@/lib/bench/outcomes";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
@@ -9,7 +9,7 @@ export const GET = withVendor<{ vendor: string; id: string }>(
   async (_request, { access, params }) => {
     requireMember(access);
     const owner = { vendorId: access.vendor.id, userId: access.user.id, setupId: params.id };
-    const setup = await getSetup(owner);
+    const setup = await findSetup(owner);
     if (!setup) throw new NotFound();
     return Response.json({ setup, outcomes: await listOutcomes(owner) });
   },

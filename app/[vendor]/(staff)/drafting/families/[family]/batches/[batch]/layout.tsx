@@ -1,7 +1,7 @@
 import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
 
-import { loadBatch } from "@/components/families/load-family";
+import { findFamilyBatch } from "@/lib/families/page-data";
 
 export default async function BatchLayout({
   children,
@@ -11,6 +11,6 @@ export default async function BatchLayout({
   params: Promise<{ vendor: string; family: string; batch: string }>;
 }) {
   const { vendor, family, batch } = await params;
-  if (!(await loadBatch(vendor, family, batch))) notFound();
+  if (!(await findFamilyBatch(vendor, family, batch))) notFound();
   return children;
 }

@@ -5,12 +5,12 @@ import { BatchItemsTable } from "@/components/families/batch-items-table";
 import { batchStateLabels } from "@/components/families/batch-list";
 import { BatchProgress } from "@/components/families/batch-progress";
 import { BatchSummary } from "@/components/families/batch-summary";
-import { loadBatch, loadFamily } from "@/components/families/load-family";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
 import { countBatchItems } from "@/lib/families/get-batch";
 import { listBatchItems } from "@/lib/families/list-batch-items";
+import { findDraftingFamily, findFamilyBatch } from "@/lib/families/page-data";
 
 import { approveBatchAction, excludeItemAction, publishBatchAction } from "../../../actions";
 
@@ -27,7 +27,7 @@ export default async function BatchPage({ params, searchParams }: Props) {
     "sheets.author",
     `/${vendorSlug}/drafting/families/${slug}/batches/${segment}`,
   );
-  const [family, batch] = await Promise.all([loadFamily(vendorSlug, slug), loadBatch(vendorSlug, slug, segment)]);
+  const [family, batch] = await Promise.all([findDraftingFamily(vendorSlug, slug), findFamilyBatch(vendorSlug, slug, segment)]);
   if (!family || !batch) notFound();
   const requested = (await searchParams).outcome;
   const outcome = requested && OUTCOMES.has(requested) ? requested : undefined;

@@ -1,7 +1,7 @@
 import { outcomeFieldsSchema } from "@/content-schema/outcome-fields";
 import { outcomeFormSchema } from "@/content-schema/outcome-form";
 import { requireMember } from "@/lib/auth/access";
-import { getSetup } from "@/lib/bench/list-setups";
+import { findSetup } from "@/lib/bench/list-setups";
 import { recordOutcome } from "@/lib/bench/outcomes";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { parseInput } from "@/lib/errors/zod-field-errors";
@@ -18,7 +18,7 @@ export const POST = withVendor<{ vendor: string; id: string }>(
   async (request, { access, params }) => {
     requireMember(access);
     const owner = { vendorId: access.vendor.id, userId: access.user.id, setupId: params.id, idempotencyKey: idempotencyKeyOf(request) };
-    if (!(await getSetup(owner))) throw new NotFound();
+    if (!(await findSetup(owner))) throw new NotFound();
     let outcome;
     if ((request.headers.get("content-type") ?? "").startsWith("multipart/form-data")) {
       const form = await readForm(request, MAX_UPLOAD_BYTES + 64 * 1024, "A photo may be at most 10 MB.");

@@ -1,5 +1,5 @@
 import { requireMember } from "@/lib/auth/access";
-import { getOutcomePhoto } from "@/lib/bench/outcomes";
+import { findOutcomePhoto } from "@/lib/bench/outcomes";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { withVendor } from "@/lib/http/with-vendor";
 import { isUuid } from "@/lib/ids/is-uuid";
@@ -9,7 +9,7 @@ export const GET = withVendor<{ vendor: string; id: string; outcomeId: string }>
   async (_request, { access, params }) => {
     requireMember(access);
     if (!isUuid(params.outcomeId)) throw new NotFound();
-    const photo = await getOutcomePhoto({ vendorId: access.vendor.id, userId: access.user.id, outcomeId: params.outcomeId });
+    const photo = await findOutcomePhoto({ vendorId: access.vendor.id, userId: access.user.id, outcomeId: params.outcomeId });
     if (!photo) throw new NotFound();
     return new Response(new Uint8Array(photo.bytes), {
       headers: {

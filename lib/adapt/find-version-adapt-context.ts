@@ -15,7 +15,7 @@ const hasMeltingCaution = (cautions: unknown) =>
 const READABLE = ["published", "superseded", "withdrawn"];
 
 /** The sheet-derived engine inputs of one readable version, built from its front matter and catalogue rows. */
-export async function loadAdaptContext({
+export async function findVersionAdaptContext({
   vendorId,
   versionId,
   trx = db,

@@ -10,7 +10,7 @@ import { db } from "@/lib/db/knex";
 import type { Family } from "./family-rows";
 
 /** The vendor's cutters a selection picks (all its filters together), by SKU. */
-export async function selectCutters({
+export async function listSelectedCutters({
   vendorId,
   selection,
   trx = db,
@@ -31,7 +31,7 @@ export async function selectCutters({
 
 export type FamilyCatalogue = { cutters: Cutter[]; materials: Material[]; machineClasses: MachineClass[] };
 
-export async function loadFamilyCatalogue({
+export async function getFamilyCatalogue({
   vendorId,
   family,
   trx = db,
@@ -40,7 +40,7 @@ export async function loadFamilyCatalogue({
   family: Family;
   trx?: Knex;
 }): Promise<FamilyCatalogue> {
-  const cutters = await selectCutters({ vendorId, selection: family.cutters, trx });
+  const cutters = await listSelectedCutters({ vendorId, selection: family.cutters, trx });
   const materials = (await trx("materials").where({ vendor_id: vendorId }).whereIn("id", family.materialIds).orderBy("name")).map(
     rowToMaterial,
   );

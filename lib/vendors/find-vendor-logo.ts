@@ -2,7 +2,7 @@ import "server-only";
 
 import { db } from "@/lib/db/knex";
 
-export async function getVendorLogo({ vendorId }: { vendorId: string }): Promise<{ bytes: Buffer; type: string } | null> {
+export async function findVendorLogo({ vendorId }: { vendorId: string }): Promise<{ bytes: Buffer; type: string } | null> {
   const row = await db("vendors")
     .where({ id: vendorId })
     .whereNotNull("logo")

@@ -13,7 +13,7 @@ export type AttachmentFile = { bytes: Buffer; fileName: string; contentType: str
  * A file for download, if this person may see it: its uploader before it is attached; afterwards the
  * ticket's customer (not for files on internal notes) or staff with desk.use. Anyone else: not found.
  */
-export async function readAttachment({ vendorId, attachmentId, userId, role }: Options): Promise<AttachmentFile> {
+export async function getAttachment({ vendorId, attachmentId, userId, role }: Options): Promise<AttachmentFile> {
   const staff = can(role, "desk.use");
   const row = await db("ticket_attachments as a")
     .leftJoin("tickets as t", function () {

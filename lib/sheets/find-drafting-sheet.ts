@@ -1,17 +1,17 @@
 import "server-only";
 
-import { getCutterById, getMachineClassById, getMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/get-catalogue-item";
 
 import { findSheet, listVersions } from "./find-sheet";
 
 /** A sheet with its catalogue entries and every version (drafts included), newest first. */
-export async function getDraftingSheet({ vendorId, slug }: { vendorId: string; slug: string }) {
+export async function findDraftingSheet({ vendorId, slug }: { vendorId: string; slug: string }) {
   const sheet = await findSheet({ vendorId, slug });
   if (!sheet) return null;
   const [cutter, material, machineClass, versions] = await Promise.all([
-    getCutterById({ vendorId, id: sheet.cutterId }),
-    getMaterialById({ vendorId, id: sheet.materialId }),
-    getMachineClassById({ vendorId, id: sheet.machineClassId }),
+    findCutterById({ vendorId, id: sheet.cutterId }),
+    findMaterialById({ vendorId, id: sheet.materialId }),
+    findMachineClassById({ vendorId, id: sheet.machineClassId }),
     listVersions({ vendorId, sheetId: sheet.id }),
   ]);
   if (!cutter || !material || !machineClass) return null;
@@ -20,4 +20,4 @@ export async function getDraftingSheet({ vendorId, slug }: { vendorId: string; s
   return { sheet, cutter, material, machineClass, versions, openDraft, published };
 }
 
-export type DraftingSheet = NonNullable<Awaited<ReturnType<typeof getDraftingSheet>>>;
+export type DraftingSheet = NonNullable<Awaited<ReturnType<typeof findDraftingSheet>>>;

@@ -3,14 +3,15 @@ import "server-only";
 import { cache } from "react";
 
 import { DomainError } from "@/lib/errors/domain-errors";
-import { getBatch } from "@/lib/families/get-batch";
-import { getFamily } from "@/lib/families/get-family";
 import { safeDecode } from "@/lib/http/safe-decode";
-import { getVendorBySlug } from "@/lib/vendors/get-vendor";
+import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
-const orNull = async <T>(load: () => Promise<T>): Promise<T | null> => {
+import { getBatch } from "./get-batch";
+import { getFamily } from "./get-family";
+
+const orNull = async <T>(read: () => Promise<T>): Promise<T | null> => {
   try {
-    return await load();
+    return await read();
   } catch (error) {
     if (error instanceof DomainError && error.code === "not_found") return null;
     throw error;
@@ -18,15 +19,15 @@ const orNull = async <T>(load: () => Promise<T>): Promise<T | null> => {
 };
 
 /** The family of a route segment, or null (another vendor's family is simply not found). */
-export const loadFamily = cache(async (vendorSlug: string, slug: string) => {
-  const vendor = await getVendorBySlug(vendorSlug);
+export const findDraftingFamily = cache(async (vendorSlug: string, slug: string) => {
+  const vendor = await findVendorBySlug(vendorSlug);
   const decoded = safeDecode(slug);
   return vendor && decoded !== null ? orNull(() => getFamily({ vendorId: vendor.id, slug: decoded })) : null;
 });
 
-export const loadBatch = cache(async (vendorSlug: string, slug: string, batch: string) => {
-  const family = await loadFamily(vendorSlug, slug);
-  const vendor = await getVendorBySlug(vendorSlug);
+export const findFamilyBatch = cache(async (vendorSlug: string, slug: string, batch: string) => {
+  const family = await findDraftingFamily(vendorSlug, slug);
+  const vendor = await findVendorBySlug(vendorSlug);
   const number = /^[1-9][0-9]{0,8}$/.test(batch) ? Number(batch) : null;
   return family && vendor && number ? orNull(() => getBatch({ vendorId: vendor.id, familyId: family.id, number })) : null;
 });
