@@ -13,8 +13,6 @@ const NEAR_WORDS_PER_TYPO = 3;
 const MAX_CUTTERS = 5;
 const cols = DOC_COLUMNS.map((c) => `d.${c}`).join(", ");
 const FACET_COLS = "d.material_group, d.material_key, d.diameter_mm, d.flutes, d.corner_form, d.machine_class, d.operations";
-// Columns the score reads beside the facet columns (partConditions and the text rank).
-const SCORE_COLS = "d.search_vector, d.cutter_sku, d.geometry";
 
 // Scalar facets in one GROUP BY GROUPING SETS pass; operations (an array) by unnest.
 const FACETS_SQL = `select case when grouping(material_group) = 0 then 'materialGroup' when grouping(material_key) = 0 then 'materialKey'
@@ -135,11 +133,11 @@ function laterBound(filters: readonly QueryParts[], conds: readonly (Fragment | 
 }
 
 /**
- * The steps of a search (strictest first, differing only in their filters) in one statement that costs
- * about what the first step alone costs while the first step matches. Only when it matches nothing are
- * the later steps looked at: one pass over the documents within the widest bound of those steps marks
- * each with the first step it meets, and the lowest mark found is the step answered. Answers that step's
- * index (the last one when nothing matched) beside the results.
+ * The steps of a search (strictest first, differing only in their filters) in one statement. The first
+ * step is matched as in buildSearchSql; only when it matches nothing are the later steps looked at: one
+ * pass over the documents within the widest bound of those steps marks each (by id alone) with the first
+ * step it meets, and the documents of the lowest mark found are read again for their score and facets.
+ * Answers that step's index (the last one when nothing matched) beside the results.
  */
 export function buildSearchStepsSql(queries: readonly EngineQuery[]): Fragment {
   const [first, ...later] = queries;
@@ -160,16 +158,19 @@ export function buildSearchStepsSql(queries: readonly EngineQuery[]): Fragment {
   return compose(
     `with $1,
 m0 as (select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from search_documents d cross join q where $3),
-later as (select d.doc_id, d.published_at, ${FACET_COLS}, ${SCORE_COLS}, case $4 end as step from search_documents d cross join q where not exists (select 1 from m0) and $5),
+later as (select * from (select d.doc_id, case $4 end as step from search_documents d cross join q where not exists (select 1 from m0) and $5) as l
+  where l.step is not null),
 chosen as (select case when exists (select 1 from m0) then 0 else coalesce((select min(step) from later), ${later.length}) end as step),
 matched as (select * from m0
-  union all select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from later d cross join q where d.step = (select step from chosen)),
-$6`,
+  union all select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score
+    from later l join search_documents d on $6 and d.doc_id = l.doc_id cross join q where l.step = (select step from chosen)),
+$7`,
     parts.queryCte,
     parts.score,
     joinFrags([vendor, ...(firstCond ? [firstCond] : [])], " and "),
     marks,
     joinFrags([vendor, ...bound], " and "),
+    frag("d.vendor_id = ?", first.vendorId),
     resultsFrom(first, parts, "(select step from chosen) as step, ", cols),
   );
 }

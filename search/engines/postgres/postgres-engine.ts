@@ -34,17 +34,20 @@ const toResult = (row: Raw): EngineResult => ({
 const VENDOR = "\u0000vendor";
 const recentStatements = new LruCache<string, NativeStatement>(500);
 
-/** The steps statement of `queries` (one vendor), built once per text, filters and page. */
-function stepsStatement(queries: readonly EngineQuery[], shapeKey?: string): NativeStatement {
+/**
+ * A statement of `queries` (one vendor), built once per text, filters and page (`shapeKey`) with a stand-in
+ * vendor that each search replaces with its own: the first step alone (`first`), or the steps after it (`relaxed`).
+ */
+function statementOf(kind: "first" | "relaxed", queries: readonly EngineQuery[], shapeKey?: string): NativeStatement {
   const vendorId = queries[0].vendorId;
   const build = (qs: readonly EngineQuery[]) => {
-    const { sql, bindings } = buildSearchStepsSql(qs);
+    const { sql, bindings } = kind === "first" ? buildSearchSql(qs[0]) : buildSearchStepsSql(qs);
     const native = numberPlaceholders(sql, bindings);
     if (!native) throw new Error("The search statement has text only knex can number.");
     return native;
   };
   if (queries.some((q) => q.vendorId !== vendorId)) return build(queries);
-  const key = shapeKey !== undefined ? `k${shapeKey}` : `q${JSON.stringify(queries.map(({ vendorId: _, ...rest }) => rest))}`;
+  const key = `${kind}:${shapeKey !== undefined ? `k${shapeKey}` : `q${JSON.stringify(queries.map(({ vendorId: _, ...rest }) => rest))}`}`;
   let cached = recentStatements.get(key);
   if (!cached) recentStatements.set(key, (cached = build(queries.map((q) => ({ ...q, vendorId: VENDOR })))));
   return { text: cached.text, values: cached.values.map((v) => (v === VENDOR ? vendorId : v)) };
@@ -67,9 +70,14 @@ export function createPostgresEngine(knex: Knex, reads: () => Promise<Knex> = as
       const [row] = await preparedQuery<Raw>(await reads(), sql, bindings);
       return toResult(row);
     },
+    // The first step is the statement `search` runs; the later steps, in one statement, only when it matched nothing
+    // (most searches match at once and pay for their own statement alone).
     async searchSteps(queries: readonly EngineQuery[], shapeKey?: string) {
-      const [row] = await runNative<Raw & { step: number }>(await reads(), stepsStatement(queries, shapeKey));
-      return { step: row.step, result: toResult(row) };
+      const reader = await reads();
+      const [first] = await runNative<Raw>(reader, statementOf("first", queries, shapeKey));
+      if (first.total > 0 || queries.length === 1) return { step: 0, result: toResult(first), roundTrips: 1 };
+      const [row] = await runNative<Raw & { step: number }>(reader, statementOf("relaxed", queries.slice(1), shapeKey));
+      return { step: row.step + 1, result: toResult(row), roundTrips: 2 };
     },
   };
 }

@@ -4,12 +4,13 @@ import { db } from "@/lib/db/knex";
 import type { SearchEngine } from "@/search/engines/engine-types";
 import { createPostgresEngine } from "@/search/engines/postgres/postgres-engine";
 import { reindexVendor } from "@/search/indexing/reindex";
-import { runSearch } from "@/search/run/run-search";
+import { engineQueriesFor, runSearch } from "@/search/run/run-search";
 import { runSeeds } from "@/seeds/run-seeds";
 
 import { RELEVANCE_CASES } from "./relevance-cases";
 
-// The steps of a search in one statement must answer exactly what running the steps one by one answers.
+// The steps of a search (the first step's statement, then the later steps in one statement) must answer exactly
+// what running the steps one by one answers.
 const engine = createPostgresEngine(db);
 const stepByStep: SearchEngine = { ...engine, searchSteps: undefined };
 let vendors: Record<string, string> = {};
@@ -50,7 +51,7 @@ const requests = () => [
   { vendorId: vendors.northbeck, q: "mdf", page: 2, perPage: 2 },
 ];
 
-describe("search steps in one statement (PostgreSQL)", () => {
+describe("search steps in at most two statements (PostgreSQL)", () => {
   it("answers what the steps run one by one answer: step, total, hits in order, facets, cutters", async () => {
     let relaxedSeen = 0;
     for (const req of requests()) {
@@ -60,6 +61,21 @@ describe("search steps in one statement (PostgreSQL)", () => {
     }
     // The list must exercise relaxation, or the comparison proves little.
     expect(relaxedSeen).toBeGreaterThan(3);
+  });
+
+  it("runs the first step's own statement first and the later steps only when it matched nothing", async () => {
+    const matching = engineQueriesFor({ vendorId: vendors.northbeck, q: "acrylic" }).steps.map((s) => s.query);
+    const atOnce = await engine.searchSteps!(matching);
+    expect(atOnce.step).toBe(0);
+    expect(atOnce.roundTrips).toBe(1);
+    expect(atOnce.result).toEqual(await engine.search(matching[0]));
+
+    const relaxing = engineQueriesFor({ vendorId: vendors.northbeck, q: "1/8 2F acrylic slot" }).steps.map((s) => s.query);
+    const later = await engine.searchSteps!(relaxing);
+    expect(later.step).toBeGreaterThan(0);
+    expect(later.roundTrips).toBe(2);
+    expect(later.result.total).toBeGreaterThan(0);
+    expect(later.result).toEqual(await engine.search(relaxing[later.step]));
   });
 
   it("runs the same statements unnamed behind a pooler in transaction mode", async () => {

@@ -99,7 +99,14 @@ describe("search steps in one statement", () => {
     const bare = (filters: EngineQuery["filters"]): EngineQuery => ({ ...step(filters), words: [] });
     const { sql } = buildSearchStepsSql([bare({ flutes: 2 }), bare({})]);
     expect(sql).toContain("case when true then 1 end as step");
-    expect(sql).toMatch(/where not exists \(select 1 from m0\) and d\.vendor_id = \? and d\.kind = 'sheet'\),/);
+    expect(sql).toMatch(/where not exists \(select 1 from m0\) and d\.vendor_id = \? and d\.kind = 'sheet'\) as l/);
+  });
+
+  it("marks the later steps by document id alone and reads the answered step's documents again, within the vendor", () => {
+    const { sql } = buildSearchStepsSql([step({ flutes: 2 }), step({})]);
+    expect(sql).toMatch(/later as \(select \* from \(select d\.doc_id, case .* end as step from search_documents d /);
+    expect(sql).not.toMatch(/later as [^\n]*search_vector,/);
+    expect(sql).toContain("from later l join search_documents d on d.vendor_id = ? and d.doc_id = l.doc_id");
   });
 });
 
