@@ -5,7 +5,7 @@ import { LruCache } from "@/lib/mdx/lru-cache";
 import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
 import { compareFacetValues } from "../facet-order";
 import { rowToDoc } from "./pg-columns";
-import { buildSearchSql, buildSearchStepsSql } from "./pg-search-sql";
+import { buildRelaxedStepsSql, buildSearchSql } from "./pg-search-sql";
 import { removeRows, replaceVendorRows, upsertRows } from "./pg-write";
 import { numberPlaceholders, preparedQuery, runNative, type NativeStatement } from "./prepared-query";
 
@@ -35,19 +35,21 @@ const VENDOR = "\u0000vendor";
 const recentStatements = new LruCache<string, NativeStatement>(500);
 
 /**
- * A statement of `queries` (one vendor), built once per text, filters and page (`shapeKey`) with a stand-in
- * vendor that each search replaces with its own: the first step alone (`first`), or the steps after it (`relaxed`).
+ * What a search runs, as `$n` text:
+ * - `"first"`: the first step's own search statement (the statement the benchmark runs bare);
+ * - `"relaxed"`: the steps after it, answering the first of them that matches anything.
+ * Built once per text, filters and page (`shapeKey`) with a stand-in vendor that each search replaces with its own.
  */
-function statementOf(kind: "first" | "relaxed", queries: readonly EngineQuery[], shapeKey?: string): NativeStatement {
+function statementOf(what: "first" | "relaxed", queries: readonly EngineQuery[], shapeKey?: string): NativeStatement {
   const vendorId = queries[0].vendorId;
   const build = (qs: readonly EngineQuery[]) => {
-    const { sql, bindings } = kind === "first" ? buildSearchSql(qs[0]) : buildSearchStepsSql(qs);
+    const { sql, bindings } = what === "first" ? buildSearchSql(qs[0]) : buildRelaxedStepsSql(qs.slice(1));
     const native = numberPlaceholders(sql, bindings);
     if (!native) throw new Error("The search statement has text only knex can number.");
     return native;
   };
   if (queries.some((q) => q.vendorId !== vendorId)) return build(queries);
-  const key = `${kind}:${shapeKey !== undefined ? `k${shapeKey}` : `q${JSON.stringify(queries.map(({ vendorId: _, ...rest }) => rest))}`}`;
+  const key = `${what}:${shapeKey !== undefined ? `k${shapeKey}` : `q${JSON.stringify(queries.map(({ vendorId: _, ...rest }) => rest))}`}`;
   let cached = recentStatements.get(key);
   if (!cached) recentStatements.set(key, (cached = build(queries.map((q) => ({ ...q, vendorId: VENDOR })))));
   return { text: cached.text, values: cached.values.map((v) => (v === VENDOR ? vendorId : v)) };
@@ -70,13 +72,13 @@ export function createPostgresEngine(knex: Knex, reads: () => Promise<Knex> = as
       const [row] = await preparedQuery<Raw>(await reads(), sql, bindings);
       return toResult(row);
     },
-    // The first step is the statement `search` runs; the later steps, in one statement, only when it matched nothing
-    // (most searches match at once and pay for their own statement alone).
+    // Most searches match at their first step and pay for that step's own statement alone; only when it matches
+    // nothing do the later steps run, all in a second statement.
     async searchSteps(queries: readonly EngineQuery[], shapeKey?: string) {
       const reader = await reads();
       const [first] = await runNative<Raw>(reader, statementOf("first", queries, shapeKey));
       if (first.total > 0 || queries.length === 1) return { step: 0, result: toResult(first), roundTrips: 1 };
-      const [row] = await runNative<Raw & { step: number }>(reader, statementOf("relaxed", queries.slice(1), shapeKey));
+      const [row] = await runNative<Raw & { step: number }>(reader, statementOf("relaxed", queries, shapeKey));
       return { step: row.step + 1, result: toResult(row), roundTrips: 2 };
     },
   };

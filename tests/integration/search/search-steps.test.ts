@@ -9,8 +9,8 @@ import { runSeeds } from "@/seeds/run-seeds";
 
 import { RELEVANCE_CASES } from "./relevance-cases";
 
-// The steps of a search (the first step's statement, then the later steps in one statement) must answer exactly
-// what running the steps one by one answers.
+// The steps of a search (the first step's statement; when it matches nothing, the later steps in one statement)
+// must answer exactly what running the steps one by one answers.
 const engine = createPostgresEngine(db);
 const stepByStep: SearchEngine = { ...engine, searchSteps: undefined };
 let vendors: Record<string, string> = {};
@@ -51,7 +51,7 @@ const requests = () => [
   { vendorId: vendors.northbeck, q: "mdf", page: 2, perPage: 2 },
 ];
 
-describe("search steps in at most two statements (PostgreSQL)", () => {
+describe("search steps: the first step's statement, then the later steps in one statement (PostgreSQL)", () => {
   it("answers what the steps run one by one answer: step, total, hits in order, facets, cutters", async () => {
     let relaxedSeen = 0;
     for (const req of requests()) {
