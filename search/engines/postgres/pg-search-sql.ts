@@ -135,13 +135,14 @@ function laterBound(filters: readonly QueryParts[], conds: readonly (Fragment | 
 }
 
 /**
- * The steps of a search after its first (strictest first, differing only in their filters), for when the first
- * matched nothing, in one statement: one pass over the vendor's documents within the widest bound of the steps
- * marks each (by id alone) with the first step it meets; the lowest mark is the step answered (the last step
- * when nothing matched), and the documents bearing it are read again for their score, facets and the page.
- * Answers that step's index in `queries` beside the results.
+ * Steps of a search (strictest first, differing only in their filters) in one statement, answering the first
+ * that matches anything, as running them one by one would: one pass over the vendor's documents within the widest
+ * bound of the steps marks each (by id alone) with the first step it meets; the lowest mark is the step answered
+ * (the last step when nothing matched), and the documents bearing it are read again for their score, facets and
+ * the page. Answers that step's index in `queries` beside the results. Used for the steps after a first step that
+ * matched nothing, or for every step of a search that relaxed when last run.
  */
-export function buildRelaxedStepsSql(queries: readonly EngineQuery[]): Fragment {
+export function buildFirstMatchingStepSql(queries: readonly EngineQuery[]): Fragment {
   const [first] = queries;
   const parts = searchParts(first);
   const conds = queries.map((s) => stepCondition(s.filters, parts));

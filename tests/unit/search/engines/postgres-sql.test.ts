@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import type { EngineQuery } from "@/search/engines/engine-types";
-import { buildRelaxedStepsSql, buildSearchSql } from "@/search/engines/postgres/pg-search-sql";
+import { buildFirstMatchingStepSql, buildSearchSql } from "@/search/engines/postgres/pg-search-sql";
 import { widestConditions } from "@/search/engines/postgres/pg-widest";
 import { numberPlaceholders } from "@/search/engines/postgres/prepared-query";
 import { compose, frag } from "@/search/engines/postgres/sql-fragment";
@@ -78,7 +78,7 @@ describe("the steps after the first in one statement", () => {
 
   it("marks each document with the first step it meets and answers the lowest mark, else the last step", () => {
     const steps = [step({ diameterMm: 3.175 }), step({})];
-    const { sql, bindings } = buildRelaxedStepsSql(steps);
+    const { sql, bindings } = buildFirstMatchingStepSql(steps);
     expect(sql).toMatch(/case when d\.diameter_mm between \? and \? then 0 when \(d\.search_vector @@ q\.tsq\) then 1 end as step/);
     expect(sql).toContain("chosen as (select coalesce(min(step), 1) as step from marked)");
     // The first step has a filter, the last only words: the bound is either.
@@ -88,7 +88,7 @@ describe("the steps after the first in one statement", () => {
   });
 
   it("marks documents by id alone and reads the answered step's documents again, within the vendor", () => {
-    const { sql } = buildRelaxedStepsSql([step({ flutes: 2 }), step({})]);
+    const { sql } = buildFirstMatchingStepSql([step({ flutes: 2 }), step({})]);
     expect(sql).toMatch(/marked as \(select \* from \(select d\.doc_id, case .* end as step from search_documents d /);
     expect(sql).not.toMatch(/marked as [^\n]*search_vector,/);
     expect(sql).toContain("from marked l join search_documents d on d.vendor_id = ? and d.doc_id = l.doc_id");
@@ -96,7 +96,7 @@ describe("the steps after the first in one statement", () => {
 
   it("has no bound when a step takes everything (no filter and nothing typed)", () => {
     const bare = (filters: EngineQuery["filters"]): EngineQuery => ({ ...step(filters), words: [] });
-    const { sql } = buildRelaxedStepsSql([bare({ flutes: 2 }), bare({})]);
+    const { sql } = buildFirstMatchingStepSql([bare({ flutes: 2 }), bare({})]);
     expect(sql).toContain("case when d.flutes = ? then 0 when true then 1 end as step");
     expect(sql).toMatch(/from search_documents d cross join q where d\.vendor_id = \? and d\.kind = 'sheet'\) as l/);
   });
