@@ -31,7 +31,11 @@ async function main() {
     const engine = {
       ...pgEngine,
       search: (...args: Parameters<typeof pgEngine.search>) => (roundTrips++, pgEngine.search(...args)),
-      searchSteps: (...args: Parameters<NonNullable<typeof pgEngine.searchSteps>>) => (roundTrips++, pgEngine.searchSteps!(...args)),
+      searchSteps: async (...args: Parameters<NonNullable<typeof pgEngine.searchSteps>>) => {
+        const found = await pgEngine.searchSteps!(...args);
+        roundTrips += found.roundTrips ?? 1;
+        return found;
+      },
     };
     t = performance.now();
     for (const v of vendors) await reindexVendor({ engine, knex, vendorId: v.id });

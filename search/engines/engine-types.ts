@@ -52,9 +52,10 @@ export interface SearchEngine {
   replaceVendor(vendorId: string, docs: readonly SearchDocument[]): Promise<void>;
   search(query: EngineQuery): Promise<EngineResult>;
   /**
-   * Optional: the steps of a search (strictest first) in one round trip, answering the first step that
-   * matched anything (else the last) and its index. Without it, runSearch calls `search` step by step.
+   * Optional: the steps of a search (strictest first) in few round trips, answering the first step that
+   * matched anything (else the last), its index and, when the engine counts them, the round trips taken.
+   * Without it, runSearch calls `search` step by step.
    * `shapeKey`, when given, names everything about the queries but the vendor (the same key, the same queries).
    */
-  searchSteps?(queries: readonly EngineQuery[], shapeKey?: string): Promise<{ step: number; result: EngineResult }>;
+  searchSteps?(queries: readonly EngineQuery[], shapeKey?: string): Promise<{ step: number; result: EngineResult; roundTrips?: number }>;
 }

@@ -6,8 +6,8 @@ export type HighlightRange = [start: number, end: number];
 const ASCII = /^[\x00-\x7f]*$/;
 const foldChar = (c: string) => (c.charCodeAt(0) < 128 ? c : (c.normalize("NFKD").replace(/[\u0300-\u036f]/g, "")[0] ?? c)).toLowerCase();
 const foldChars = (text: string) => (ASCII.test(text) ? text.toLowerCase() : Array.from(text, foldChar).join(""));
+const escapeRegExp = (s: string) => s.replace(/[.*+?^${}()|[\]\\/]/g, "\\$&");
 
-const MAX_REMEMBERED = 200;
 const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
 const isWordChar = (c: string) => {
   const code = c.charCodeAt(0);
@@ -16,27 +16,17 @@ const isWordChar = (c: string) => {
 };
 
 /**
- * The highlighter of one search: its terms folded once and grouped by first character (longest first, so a
- * word start takes its longest term), then applied to each field of each hit. A text met again (the same
- * cutter or material on many hits) is marked once.
+ * The highlighter of one search: its terms folded once and compiled into one regular expression (longest term
+ * first, so a word start takes its longest term; plain alternatives, quick to compile for each new search text).
+ * Applied to each field of each hit, it scans the folded text once and keeps the matches at word starts
+ * (positions not preceded by a letter or digit).
  */
 export function highlighter(terms: readonly string[]): (text: string) => HighlightRange[] {
-  const byFirst = new Map<string, string[]>();
-  for (const term of new Set(terms.map((t) => foldChars(t.trim())))) {
-    if (term.length >= 2) byFirst.set(term[0], [...(byFirst.get(term[0]) ?? []), term]);
-  }
-  if (byFirst.size === 0) return () => [];
-  for (const list of byFirst.values()) list.sort((a, b) => b.length - a.length);
-  const seen = new Map<string, HighlightRange[]>();
-  return (text) => {
-    let ranges = seen.get(text);
-    if (!ranges) {
-      // A highlighter lives as long as its search plan is kept; it remembers a bounded number of texts.
-      if (seen.size >= MAX_REMEMBERED) seen.clear();
-      seen.set(text, (ranges = rangesOf(text, byFirst)));
-    }
-    return ranges.map(([start, end]) => [start, end]);
-  };
+  const folded = [...new Set(terms.map((t) => foldChars(t.trim())))].filter((t) => t.length >= 2);
+  if (folded.length === 0) return () => [];
+  folded.sort((a, b) => b.length - a.length);
+  const pattern = new RegExp(folded.map(escapeRegExp).join("|"), "g");
+  return (text) => rangesOf(text, pattern);
 }
 
 /**
@@ -47,20 +37,22 @@ export function highlightRanges(text: string, terms: readonly string[]): Highlig
   return highlighter(terms)(text);
 }
 
-function rangesOf(text: string, byFirst: ReadonlyMap<string, readonly string[]>): HighlightRange[] {
+function rangesOf(text: string, pattern: RegExp): HighlightRange[] {
   // Offsets count UTF-16 units; text with astral characters (emoji) is not marked rather than marked wrong.
   if (/[\uD800-\uDFFF]/.test(text)) return [];
   const hay = foldChars(text);
   const merged: HighlightRange[] = [];
-  for (let at = 0; at < hay.length; at++) {
-    const candidates = byFirst.get(hay[at]);
-    if (!candidates || (at > 0 && isWordChar(hay[at - 1]))) continue;
-    const term = candidates.find((t) => hay.startsWith(t, at));
-    if (!term) continue;
+  pattern.lastIndex = 0;
+  for (let match = pattern.exec(hay); match !== null; match = pattern.exec(hay)) {
+    const at = match.index;
+    // A term must start a word; elsewhere, look again from the next character.
+    pattern.lastIndex = at + 1;
+    if (at > 0 && isWordChar(hay[at - 1])) continue;
+    const end = at + match[0].length;
     // Starts come in order, so an overlapping or touching term extends the range before it.
     const last = merged.at(-1);
-    if (last && at <= last[1]) last[1] = Math.max(last[1], at + term.length);
-    else merged.push([at, at + term.length]);
+    if (last && at <= last[1]) last[1] = Math.max(last[1], end);
+    else merged.push([at, end]);
   }
   return merged;
 }

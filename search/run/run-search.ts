@@ -42,6 +42,8 @@ type SearchPlanOfText = {
   mark: (text: string) => HighlightRange[];
   looser: string[];
   description: string;
+  /** The steps' engine queries of each vendor that searched this text lately (a search builds them once). */
+  byVendor: Map<string, EngineQuery[]>;
 };
 
 function planOfText(key: string, q: string, filters: ExplicitFilters | undefined, page: number, perPage: number): SearchPlanOfText {
@@ -59,7 +61,21 @@ function planOfText(key: string, q: string, filters: ExplicitFilters | undefined
     mark: highlighter(highlightTerms(parsed, corrections)),
     looser: looserQueries(parsed),
     description: describeQuery(parsed),
+    byVendor: new Map(),
   };
+}
+
+const VENDORS_PER_PLAN = 64;
+
+/** The engine queries of `plan` for one vendor, strictest first (shared by its searches: never changed). */
+function vendorQueries(plan: SearchPlanOfText, vendorId: string): EngineQuery[] {
+  let queries = plan.byVendor.get(vendorId);
+  if (!queries) {
+    if (plan.byVendor.size >= VENDORS_PER_PLAN) plan.byVendor.clear();
+    queries = plan.steps.map((s) => ({ ...s.query, vendorId }));
+    plan.byVendor.set(vendorId, queries);
+  }
+  return queries;
 }
 
 // Parsing, typo correction and planning are pure functions of the text; searches repeat (typeahead, popular
@@ -93,20 +109,17 @@ export function engineQueriesFor(req: SearchRequest) {
 export async function runSearch(engine: SearchEngine, req: SearchRequest): Promise<SearchResponse> {
   const plan = textPlan(req);
   const { parsed, corrections, page, perPage } = plan;
-  const steps = plan.steps.map((s) => ({ query: { ...s.query, vendorId: req.vendorId } satisfies EngineQuery, dropped: s.dropped }));
+  const queries = vendorQueries(plan, req.vendorId);
   let result: EngineResult = { total: 0, hits: [], facets: {}, cutters: [] };
   let relaxed: SearchResponse["relaxed"] = [];
   if (engine.searchSteps) {
-    const found = await engine.searchSteps(
-      steps.map((s) => s.query),
-      plan.key,
-    );
+    const found = await engine.searchSteps(queries, plan.key);
     result = found.result;
-    relaxed = steps[found.step].dropped;
+    relaxed = plan.steps[found.step].dropped;
   } else {
-    for (const step of steps) {
-      result = await engine.search(step.query);
-      relaxed = step.dropped;
+    for (const [i, query] of queries.entries()) {
+      result = await engine.search(query);
+      relaxed = plan.steps[i].dropped;
       if (result.total > 0) break;
     }
   }

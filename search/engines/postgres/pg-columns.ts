@@ -102,6 +102,7 @@ export function rowToDoc(r: Row): SearchDocument {
     geometry: r.geometry as string,
     tags: (r.tags as string[]) ?? [],
     body: "",
-    publishedAt: r.published_at ? new Date(r.published_at as string).toISOString() : null,
+    // The search statement writes it as ISO 8601 text already (see pg-search-sql).
+    publishedAt: typeof r.published_at === "string" ? r.published_at : null,
   };
 }

@@ -11,10 +11,10 @@ const TEXT_WEIGHT = 6;
 const NEAR_WEIGHT = 2;
 const NEAR_WORDS_PER_TYPO = 3;
 const MAX_CUTTERS = 5;
-const cols = DOC_COLUMNS.map((c) => `d.${c}`).join(", ");
+// published_at leaves as the ISO 8601 text JavaScript's toISOString writes (UTC, milliseconds), so hits need no date parsing.
+const ISO_PUBLISHED_AT = `to_char(d.published_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') as published_at`;
+const cols = DOC_COLUMNS.map((c) => (c === "published_at" ? ISO_PUBLISHED_AT : `d.${c}`)).join(", ");
 const FACET_COLS = "d.material_group, d.material_key, d.diameter_mm, d.flutes, d.corner_form, d.machine_class, d.operations";
-// Columns the score reads beside the facet columns (partConditions and the text rank).
-const SCORE_COLS = "d.search_vector, d.cutter_sku, d.geometry";
 
 // Scalar facets in one GROUP BY GROUPING SETS pass; operations (an array) by unnest.
 const FACETS_SQL = `select case when grouping(material_group) = 0 then 'materialGroup' when grouping(material_key) = 0 then 'materialKey'
@@ -100,7 +100,7 @@ select ${head}(select count(*)::int from matched) as total,
 }
 
 /**
- * The one round trip of a search: the words of the vendor's index close to each long word
+ * The statement of one step of a search: the words of the vendor's index close to each long word
  * (pg_trgm on search_words) join the full-text query; then the matching documents with a score,
  * the requested page, the total, the facet counts over all matches, and cutters whose SKU was typed.
  */
@@ -135,41 +135,38 @@ function laterBound(filters: readonly QueryParts[], conds: readonly (Fragment | 
 }
 
 /**
- * The steps of a search (strictest first, differing only in their filters) in one statement that costs
- * about what the first step alone costs while the first step matches. Only when it matches nothing are
- * the later steps looked at: one pass over the documents within the widest bound of those steps marks
- * each with the first step it meets, and the lowest mark found is the step answered. Answers that step's
- * index (the last one when nothing matched) beside the results.
+ * Steps of a search (strictest first, differing only in their filters) in one statement, answering the first
+ * that matches anything, as running them one by one would: one pass over the vendor's documents within the widest
+ * bound of the steps marks each (by id alone) with the first step it meets; the lowest mark is the step answered
+ * (the last step when nothing matched), and the documents bearing it are read again for their score, facets and
+ * the page. Answers that step's index in `queries` beside the results. Used for the steps after a first step that
+ * matched nothing, or for every step of a search that relaxed when last run.
  */
-export function buildSearchStepsSql(queries: readonly EngineQuery[]): Fragment {
-  const [first, ...later] = queries;
-  if (later.length === 0) return compose("select 0 as step, s0.* from ($1) as s0", buildSearchSql(first));
+export function buildFirstMatchingStepSql(queries: readonly EngineQuery[]): Fragment {
+  const [first] = queries;
   const parts = searchParts(first);
-  const vendor = frag("d.vendor_id = ? and d.kind = 'sheet'", first.vendorId);
-  const firstCond = stepCondition(first.filters, parts);
-  const laterConds = later.map((s) => stepCondition(s.filters, parts));
+  const conds = queries.map((s) => stepCondition(s.filters, parts));
   const marks = joinFrags(
-    laterConds.map((c, i) => compose(`when $1 then ${i + 1}`, c ?? frag("true"))),
+    conds.map((c, i) => compose(`when $1 then ${i}`, c ?? frag("true"))),
     " ",
   );
   const bound = laterBound(
-    later.map((s) => s.filters),
-    laterConds,
+    queries.map((s) => s.filters),
+    conds,
     parts,
   );
   return compose(
     `with $1,
-m0 as (select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from search_documents d cross join q where $3),
-later as (select d.doc_id, d.published_at, ${FACET_COLS}, ${SCORE_COLS}, case $4 end as step from search_documents d cross join q where not exists (select 1 from m0) and $5),
-chosen as (select case when exists (select 1 from m0) then 0 else coalesce((select min(step) from later), ${later.length}) end as step),
-matched as (select * from m0
-  union all select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from later d cross join q where d.step = (select step from chosen)),
+marked as (select * from (select d.doc_id, case $2 end as step from search_documents d cross join q where $3) as l where l.step is not null),
+chosen as (select coalesce(min(step), ${queries.length - 1}) as step from marked),
+matched as (select d.doc_id, d.published_at, ${FACET_COLS}, $4 as score
+  from marked l join search_documents d on $5 and d.doc_id = l.doc_id cross join q where l.step = (select step from chosen)),
 $6`,
     parts.queryCte,
-    parts.score,
-    joinFrags([vendor, ...(firstCond ? [firstCond] : [])], " and "),
     marks,
-    joinFrags([vendor, ...bound], " and "),
+    joinFrags([frag("d.vendor_id = ? and d.kind = 'sheet'", first.vendorId), ...bound], " and "),
+    parts.score,
+    frag("d.vendor_id = ?", first.vendorId),
     resultsFrom(first, parts, "(select step from chosen) as step, ", cols),
   );
 }

@@ -40,11 +40,18 @@ async function deliverQueuedEvents() {
 
 async function insertReviewedDraft(vendor: string, slug: string, title: string) {
   const vendorId = ids.vendors[vendor];
-  const template = mustExist(await db("sheets").where({ vendor_id: vendorId }).first(), "template sheet");
-  const source = mustExist(
-    await db("sheet_versions").where({ vendor_id: vendorId, sheet_id: template.id, state: "published" }).first("source", "front_matter"),
-    "published version",
+  // Any sheet of the vendor with a published version (the first row without an order was sometimes a sheet without one).
+  const template = mustExist(
+    await db("sheets as s")
+      .join("sheet_versions as v", function () {
+        this.on("v.sheet_id", "s.id").andOn("v.vendor_id", "s.vendor_id");
+      })
+      .where({ "s.vendor_id": vendorId, "v.state": "published" })
+      .orderBy("s.slug")
+      .first("s.id", "s.cutter_id", "s.material_id", "s.machine_class_id", "v.source", "v.front_matter"),
+    "template sheet with a published version",
   );
+  const source = template;
   const [{ id: sheetId }] = await db("sheets")
     .insert({
       vendor_id: vendorId,

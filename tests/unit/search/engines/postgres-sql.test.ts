@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import type { EngineQuery } from "@/search/engines/engine-types";
-import { buildSearchSql, buildSearchStepsSql } from "@/search/engines/postgres/pg-search-sql";
+import { buildFirstMatchingStepSql, buildSearchSql } from "@/search/engines/postgres/pg-search-sql";
 import { widestConditions } from "@/search/engines/postgres/pg-widest";
 import { numberPlaceholders } from "@/search/engines/postgres/prepared-query";
 import { compose, frag } from "@/search/engines/postgres/sql-fragment";
@@ -65,7 +65,7 @@ describe("sql fragments", () => {
   });
 });
 
-describe("search steps in one statement", () => {
+describe("the steps after the first in one statement", () => {
   const step = (filters: EngineQuery["filters"]): EngineQuery => ({
     vendorId: "00000000-0000-4000-8000-000000000001",
     words: ["jig"],
@@ -76,30 +76,29 @@ describe("search steps in one statement", () => {
     perPage: 20,
   });
 
-  it("is the first step's own statement when there is one step", () => {
-    const only = step({ flutes: 2 });
-    const { sql, bindings } = buildSearchStepsSql([only]);
-    expect(sql).toContain(buildSearchSql(only).sql);
-    expect(bindings).toEqual(buildSearchSql(only).bindings);
-  });
-
-  it("scans the later steps only when the first matched nothing, marking each document with the first later step it meets", () => {
-    const steps = [step({ flutes: 2, diameterMm: 3.175 }), step({ diameterMm: 3.175 }), step({})];
-    const { sql, bindings } = buildSearchStepsSql(steps);
-    expect(sql).toContain("where not exists (select 1 from m0) and d.vendor_id = ?");
-    expect(sql).toMatch(/case when d\.diameter_mm between \? and \? then 1 when \(d\.search_vector @@ q\.tsq\) then 2 end as step/);
-    expect(sql).toContain("coalesce((select min(step) from later), 2)");
-    // The second step has a filter, the last only words: the bound is either.
+  it("marks each document with the first step it meets and answers the lowest mark, else the last step", () => {
+    const steps = [step({ diameterMm: 3.175 }), step({})];
+    const { sql, bindings } = buildFirstMatchingStepSql(steps);
+    expect(sql).toMatch(/case when d\.diameter_mm between \? and \? then 0 when \(d\.search_vector @@ q\.tsq\) then 1 end as step/);
+    expect(sql).toContain("chosen as (select coalesce(min(step), 1) as step from marked)");
+    // The first step has a filter, the last only words: the bound is either.
     expect(sql).toContain("(d.diameter_mm between ? and ? or (d.search_vector @@ q.tsq))");
     expect(placeholders(sql)).toBe(bindings.length);
     expect(bindings.filter((b) => b === steps[0].vendorId).length).toBeGreaterThanOrEqual(3);
   });
 
-  it("has no bound when a later step takes everything (no filter and nothing typed)", () => {
+  it("marks documents by id alone and reads the answered step's documents again, within the vendor", () => {
+    const { sql } = buildFirstMatchingStepSql([step({ flutes: 2 }), step({})]);
+    expect(sql).toMatch(/marked as \(select \* from \(select d\.doc_id, case .* end as step from search_documents d /);
+    expect(sql).not.toMatch(/marked as [^\n]*search_vector,/);
+    expect(sql).toContain("from marked l join search_documents d on d.vendor_id = ? and d.doc_id = l.doc_id");
+  });
+
+  it("has no bound when a step takes everything (no filter and nothing typed)", () => {
     const bare = (filters: EngineQuery["filters"]): EngineQuery => ({ ...step(filters), words: [] });
-    const { sql } = buildSearchStepsSql([bare({ flutes: 2 }), bare({})]);
-    expect(sql).toContain("case when true then 1 end as step");
-    expect(sql).toMatch(/where not exists \(select 1 from m0\) and d\.vendor_id = \? and d\.kind = 'sheet'\),/);
+    const { sql } = buildFirstMatchingStepSql([bare({ flutes: 2 }), bare({})]);
+    expect(sql).toContain("case when d.flutes = ? then 0 when true then 1 end as step");
+    expect(sql).toMatch(/from search_documents d cross join q where d\.vendor_id = \? and d\.kind = 'sheet'\) as l/);
   });
 });
 

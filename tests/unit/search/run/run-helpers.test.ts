@@ -54,6 +54,20 @@ describe("highlight ranges", () => {
     ]);
   });
 
+  it("matches terms with punctuation and regular-expression characters as plain text", () => {
+    expect(highlighter(["b3-up2-6", '0.25"', "(pmma)", "1/8"])('B3-UP2-6-12 cuts 0.25" (PMMA), 1/8 in, b3xup2x6')).toEqual([
+      [0, 8],
+      [17, 22],
+      [23, 29],
+      [31, 34],
+    ]);
+    expect(highlighter([".*"])("anything at all")).toEqual([]);
+  });
+
+  it("extends a range with a term that starts inside it at a later word start", () => {
+    expect(highlighter(["cast acr", "acrylic sheet"])("Cast acrylic sheet")).toEqual([[0, 18]]);
+  });
+
   it("returns only offsets, never markup, so `<script>` in a title stays text", () => {
     expect(highlightRanges("<script>alert(1)</script> acrylic", ["acrylic"])).toEqual([[26, 33]]);
   });
