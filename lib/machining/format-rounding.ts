@@ -10,7 +10,7 @@ const roundTo = (value: number, decimals: number) => {
 
 const fixed = (value: number, decimals: number) => {
   const s = roundTo(value, decimals).toFixed(decimals);
-  return s === "-0" || /^-0\.0*$/.test(s) ? s.slice(1) : s;
+  return s.charCodeAt(0) === 45 && (s === "-0" || /^-0\.0*$/.test(s)) ? s.slice(1) : s;
 };
 
 /** Fixed decimals, then trailing zeros dropped down to `keep` decimals. */

@@ -36,14 +36,22 @@ const PATHS: Record<string, string> = {
 
 export const bodyPathOf = (engineField: string) => PATHS[engineField] ?? engineField;
 
+const RENAMED: Record<string, string> = {
+  rpm: "spindleSpeed",
+  mrrCm3Min: "removalRate",
+  feedMmMin: "feed",
+  plungeFeedMmMin: "plungeFeed",
+  maxFeedMmMin: "maxFeed",
+};
+// The engine names a handful of fields, so each is worked out once.
+const API_NAMES = new Map<string, string>();
+
 /** API name of an engine output or warning value: the unit suffix is dropped (`feedMmMin` → `feed`). */
 export function apiName(engineName: string): string {
-  const renamed: Record<string, string> = {
-    rpm: "spindleSpeed",
-    mrrCm3Min: "removalRate",
-    feedMmMin: "feed",
-    plungeFeedMmMin: "plungeFeed",
-    maxFeedMmMin: "maxFeed",
-  };
-  return renamed[engineName] ?? engineName.replace(/(MmMin|Mpm|Cm3Min|Mm|Kw|Nm|N)$/, "");
+  let name = API_NAMES.get(engineName);
+  if (name === undefined) {
+    name = RENAMED[engineName] ?? engineName.replace(/(MmMin|Mpm|Cm3Min|Mm|Kw|Nm|N)$/, "");
+    if (API_NAMES.size < 500) API_NAMES.set(engineName, name);
+  }
+  return name;
 }

@@ -51,11 +51,19 @@ const both = (metricValue: number, kind: QuantityKind): BothSystems => ({
   imperial: display(metricValue, kind, "imperial"),
 });
 
+// Worked out once: the output fields with their API names and kinds, and each rule's title by id.
+const OUTPUTS = (Object.entries(OUTPUT_KINDS) as [keyof AdaptNumbers, QuantityKind][]).map(([field, kind]) => ({
+  field,
+  kind,
+  name: apiName(field),
+}));
+const RULE_TITLES = new Map<string, string>(RULES.map((r) => [r.id, r.title]));
+
 function block(result: AdaptResult, system: UnitSystem) {
   const out: Record<string, DisplayQuantity | null> = {};
-  for (const [field, kind] of Object.entries(OUTPUT_KINDS) as [keyof AdaptNumbers, QuantityKind][]) {
+  for (const { field, kind, name } of OUTPUTS) {
     const v = result[field];
-    out[apiName(field)] = v === null ? null : display(v, kind, system);
+    out[name] = v === null ? null : display(v, kind, system);
   }
   return out;
 }
@@ -74,7 +82,7 @@ export function presentResult(result: AdaptResult, units: UnitSystem) {
     })),
     steps: result.steps.map((s) => ({
       rule: s.rule,
-      title: RULES.find((r) => r.id === s.rule)?.title ?? s.rule,
+      title: RULE_TITLES.get(s.rule) ?? s.rule,
       field: apiName(s.field),
       before: both(s.before, s.quantity),
       after: both(s.after, s.quantity),
