@@ -7,6 +7,7 @@ import { CachedSheetView } from "@/components/library/cached-sheet-view";
 import { loadLibrarySheet } from "@/components/library/load-library-sheet";
 import { readUnits } from "@/components/library/read-units";
 import { countSheetView } from "@/lib/field/count-sheet-view";
+import { noteStoredRender } from "@/lib/library/note-stored-render";
 
 type Props = { params: Promise<{ vendor: string; sheet: string }> };
 
@@ -19,8 +20,10 @@ export default async function SheetPage({ params }: Props) {
   const { vendor, sheet } = await params;
   const found = await loadLibrarySheet(vendor, sheet);
   if (!found) notFound();
-  // Counted in memory and written in batches: a view costs the reader no database round trip.
-  countSheetView(found.vendor.id, found.data.version.id);
+  // Counted in memory and written in batches: a view costs the reader no database round trip. A rendering for
+  // the Library page store (lib/library/page-store-proxy.ts) is no view: the store counts each page it serves.
+  const countView = () => countSheetView(found.vendor.id, found.data.version.id);
+  if (!(await noteStoredRender({ vendorId: found.vendor.id, versionId: found.data.version.id, onServe: countView }))) countView();
   const units = await readUnits();
   const renderAdaptPanel = adaptPanelRenderer({
     saveSetupAction,
@@ -33,6 +36,7 @@ export default async function SheetPage({ params }: Props) {
     <CachedSheetView
       vendorId={found.vendor.id}
       data={found.data}
+      generation={found.generation}
       units={units}
       vendorSlug={found.vendor.slug}
       vendorName={found.vendor.name}
