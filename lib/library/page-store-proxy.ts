@@ -20,8 +20,9 @@ const RENDER_HEADER = "x-swarfbook-page-render";
 /** Header the proxy hands the page being rendered for the store (never taken from a client). */
 export const STORE_TOKEN_HEADER = "x-swarfbook-store-token";
 
-// /<vendor>/library/<sheet> and /<vendor>/library/<sheet>/v/<n>; "search" and "cutters" are pages of their own.
-const PAGE_PATH = /^\/([a-z0-9-]{1,64})\/library\/(?!search$|cutters$)([^/]{1,200})(?:\/v\/\d{1,6})?$/;
+// /<vendor>/library, /<vendor>/library/cutters/<sku>, /<vendor>/library/<sheet> and /<vendor>/library/<sheet>/v/<n>
+// ("search" and "cutters" are not sheets).
+const PAGE_PATH = /^\/([a-z0-9-]{1,64})\/library(?:\/cutters\/[^/]{1,200}|\/(?!search$|cutters$)[^/]{1,200}(?:\/v\/\d{1,6})?)?$/;
 const KEPT_HEADERS = new Set(["content-type", "vary", "link"]);
 const NO_SHARED_CACHE = "private, no-cache, no-store, max-age=0, must-revalidate";
 const RENDER_TIMEOUT_MS = 15_000;

@@ -12,7 +12,9 @@ describe("which requests the Library page store answers", () => {
     delete process.env.LIBRARY_PAGE_STORE;
   });
 
-  it("takes anonymous GETs of sheet and version pages, naming the vendor", () => {
+  it("takes anonymous GETs of the index, cutter, sheet and version pages, naming the vendor", () => {
+    expect(storableVendorSlug(get("/acme/library"))).toBe("acme");
+    expect(storableVendorSlug(get("/acme/library/cutters/SF-125-O"))).toBe("acme");
     expect(storableVendorSlug(get("/acme/library/slot-6mm"))).toBe("acme");
     expect(storableVendorSlug(get("/acme/library/slot-6mm/v/3"))).toBe("acme");
     expect(storableVendorSlug(get("/acme/library/slot-6mm", { cookie: "sb-units=imperial; other=1" }))).toBe("acme");
@@ -20,10 +22,13 @@ describe("which requests the Library page store answers", () => {
 
   it("leaves every other page, queries, RSC navigations, prefetches, other methods and sessions to Next", () => {
     const no = [
-      get("/acme/library"),
+      get("/acme/library/"),
+      get("/acme/library?cutter=SF-1"),
       get("/acme/library/search"),
       get("/acme/library/cutters"),
-      get("/acme/library/cutters/SF-1"),
+      get("/acme/library/cutters/SF-1/pdf"),
+      get("/acme/library/cutters/SF-1/image"),
+      get("/acme/library/slot-6mm/v/2/pdf"),
       get("/acme/library/slot-6mm/v/x"),
       get("/acme/library/slot-6mm/pdf"),
       get("/acme/desk"),

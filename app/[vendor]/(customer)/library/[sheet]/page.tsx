@@ -22,8 +22,9 @@ export default async function SheetPage({ params }: Props) {
   if (!found) notFound();
   // Counted in memory and written in batches: a view costs the reader no database round trip. A rendering for
   // the Library page store (lib/library/page-store-proxy.ts) is no view: the store counts each page it serves.
-  const countView = () => countSheetView(found.vendor.id, found.data.version.id);
-  if (!(await noteStoredRender({ vendorId: found.vendor.id, versionId: found.data.version.id, onServe: countView }))) countView();
+  const [vendorId, versionId] = [found.vendor.id, found.data.version.id];
+  const countView = () => countSheetView(vendorId, versionId);
+  if (!(await noteStoredRender({ vendorId, versionId, onServe: countView }))) countView();
   const units = await readUnits();
   const renderAdaptPanel = adaptPanelRenderer({
     saveSetupAction,
