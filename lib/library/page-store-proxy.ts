@@ -142,7 +142,7 @@ export async function answerFromStore(request: NextRequest, slug: string, csp: (
   page.onServe?.();
   const nonce = freshNonce();
   // Next names the nonce in its preload Link header too.
-  const headers = new Headers(page.headers.map(([name, value]) => [name, withNonce(value, placeholderNonce, nonce)]));
+  const headers = new Headers(page.headers.map(([name, value]): [string, string] => [name, withNonce(value, placeholderNonce, nonce)]));
   for (const { key: name, value } of SECURITY_HEADERS) headers.set(name, value);
   headers.set("Content-Security-Policy", csp(nonce));
   headers.set("Cache-Control", NO_SHARED_CACHE);

@@ -30,6 +30,7 @@ export default async function SheetPage({ params }: Props) {
     saveSetupAction,
     vendor: found.vendor,
     versionId: found.data.version.id,
+    generation: found.generation,
     units,
     returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}`,
   });

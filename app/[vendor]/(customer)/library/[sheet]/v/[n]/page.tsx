@@ -32,6 +32,7 @@ export default async function SheetVersionPage({ params }: Props) {
     saveSetupAction,
     vendor: found.vendor,
     versionId: found.data.version.id,
+    generation: found.generation,
     units,
     returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}`,
   });
