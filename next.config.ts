@@ -1,5 +1,7 @@
 import type { NextConfig } from "next";
 
+import { SECURITY_HEADERS } from "./lib/http/security-headers";
+
 const nextConfig: NextConfig = {
   poweredByHeader: false,
   // The test run builds into its own folder so a developer's dev server keeps running.
@@ -13,12 +15,7 @@ const nextConfig: NextConfig = {
     return [
       {
         source: "/:path*",
-        headers: [
-          { key: "X-Content-Type-Options", value: "nosniff" },
-          { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
-          { key: "X-Frame-Options", value: "DENY" },
-          { key: "Permissions-Policy", value: "camera=(), microphone=(), geolocation=()" },
-        ],
+        headers: SECURITY_HEADERS,
       },
     ];
   },

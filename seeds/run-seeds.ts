@@ -13,6 +13,7 @@ import { seedWebhooks } from "./seed-webhooks";
 
 // Tables in dependency order for a reset; later features add theirs at the front.
 export const TENANT_TABLES = [
+  "library_generations",
   "webhook_deliveries",
   "webhooks",
   "field_week_rollups",

@@ -15,8 +15,8 @@ import { SheetCards } from "./sheet-cards";
 // A cutter and its published sheets from Next's cache; catalogue edits and publishing drop the vendor's Library
 // tag (lib/library/library-cache.ts). Access is checked per request by the layout and the page.
 
-/** The vendor's cutter by SKU, or null. */
-export async function getCachedLibraryCutter(vendorId: string, sku: string) {
+/** The vendor's cutter by SKU, or null; `_generation` (lib/library/library-generation.ts) is only part of the key. */
+export async function getCachedLibraryCutter(vendorId: string, sku: string, _generation: string) {
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
@@ -28,17 +28,19 @@ export async function CachedCutterSheets({
   vendorId,
   vendorSlug,
   sku,
+  generation,
   units,
 }: {
   vendorId: string;
   vendorSlug: string;
   sku: string;
+  generation: string;
   units: UnitSystem;
 }) {
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
-  const cutter = await getCachedLibraryCutter(vendorId, sku);
+  const cutter = await getCachedLibraryCutter(vendorId, sku, generation);
   if (!cutter) return null;
   const sheets = await listPublishedSheets({ vendorId, filters: { cutter: cutter.sku }, from: libraryCacheDb });
   return (

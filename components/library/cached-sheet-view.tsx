@@ -15,6 +15,8 @@ type Props = {
   vendorSlug: string;
   vendorName: string;
   data: LibrarySheet;
+  /** The vendor's Library generation the data was read under (part of the cache key). */
+  generation: string;
   units: UnitSystem;
   renderAdaptPanel?: (slot: { index: number; operation: LibrarySheet["frontMatter"]["operations"][number] }) => ReactNode;
 };
@@ -25,17 +27,18 @@ type CachedProps = {
   vendorName: string;
   slug: string;
   number: number;
+  generation: string;
   units: UnitSystem;
   adaptPanels: ReactNode[];
 };
 
 // Rendered once per version and unit system; the adapt panels (the reader's own machines) pass through
 // as holes, so the entry holds nothing personal.
-async function CachedSheet({ vendorId, vendorSlug, vendorName, slug, number, units, adaptPanels }: CachedProps) {
+async function CachedSheet({ vendorId, vendorSlug, vendorName, slug, number, generation, units, adaptPanels }: CachedProps) {
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
-  const data = await getCachedLibrarySheet(vendorId, slug, number);
+  const data = await getCachedLibrarySheet(vendorId, slug, number, generation);
   if (!data) return null;
   cacheTag(librarySheetTag(data.sheet.id));
   return (
@@ -50,7 +53,7 @@ async function CachedSheet({ vendorId, vendorSlug, vendorName, slug, number, uni
 }
 
 /** SheetView served from Next's cache: the page's access checks and personal parts stay per request. */
-export function CachedSheetView({ vendorId, vendorSlug, vendorName, data, units, renderAdaptPanel }: Props) {
+export function CachedSheetView({ vendorId, vendorSlug, vendorName, data, generation, units, renderAdaptPanel }: Props) {
   const adaptPanels = data.frontMatter.operations.map((operation, index) => renderAdaptPanel?.({ index, operation }) ?? null);
   return (
     <CachedSheet
@@ -59,6 +62,7 @@ export function CachedSheetView({ vendorId, vendorSlug, vendorName, data, units,
       vendorName={vendorName}
       slug={data.sheet.slug}
       number={data.version.number}
+      generation={generation}
       units={units}
       adaptPanels={adaptPanels}
     />

@@ -4,6 +4,8 @@ import { cache } from "react";
 
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { safeDecode } from "@/lib/http/safe-decode";
+import { libraryCacheDb } from "@/lib/library/library-cache";
+import { readLibraryGeneration } from "@/lib/library/library-generation";
 
 import { getCachedLibraryCutter } from "./cached-library-cutter";
 
@@ -12,6 +14,7 @@ export const loadLibraryCutter = cache(async (vendorSlug: string, sku: string) =
   const { vendor, user, member } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/cutters/${sku}`);
   const decoded = safeDecode(sku);
   if (decoded === null) return null;
-  const cutter = await getCachedLibraryCutter(vendor.id, decoded);
-  return cutter ? { vendor, cutter, user, member } : null;
+  const generation = await readLibraryGeneration(vendor.id, libraryCacheDb);
+  const cutter = await getCachedLibraryCutter(vendor.id, decoded, generation);
+  return cutter ? { vendor, cutter, user, member, generation } : null;
 });

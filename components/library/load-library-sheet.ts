@@ -4,6 +4,8 @@ import { cache } from "react";
 
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { safeDecode } from "@/lib/http/safe-decode";
+import { libraryCacheDb } from "@/lib/library/library-cache";
+import { readLibraryGeneration } from "@/lib/library/library-generation";
 
 import { getCachedLibrarySheet } from "./cached-library-sheet";
 
@@ -13,8 +15,9 @@ export const loadLibrarySheet = cache(async (vendorSlug: string, sheetSlug: stri
   const { vendor } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/${sheetSlug}`);
   const slug = safeDecode(sheetSlug);
   if (slug === null) return null;
-  const data = await getCachedLibrarySheet(vendor.id, slug, number);
-  return data ? { vendor, data } : null;
+  const generation = await readLibraryGeneration(vendor.id, libraryCacheDb);
+  const data = await getCachedLibrarySheet(vendor.id, slug, number, generation);
+  return data ? { vendor, data, generation } : null;
 });
 
 export const parseVersionNumber = (text: string) => (/^\d{1,6}$/.test(text) ? Number(text) : null);

@@ -6,6 +6,7 @@ import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { invalidateLibrary } from "@/lib/library/library-cache";
+import { bumpLibraryGeneration } from "@/lib/library/library-generation";
 
 import { checkImage } from "./check-image";
 import { deleteImage, putImage } from "./image-store";
@@ -29,7 +30,10 @@ export async function setCutterImage({
   if (!cutter) throw new NotFound("No such cutter.");
   const key = `cutters/${cutterId}/${randomBytes(6).toString("hex")}`;
   await putImage({ vendorId, key, image: { contentType, bytes: Buffer.from(bytes) } });
-  await db("cutters").where({ vendor_id: vendorId, id: cutterId }).update({ image_key: key, updated_at: db.fn.now() });
+  await db.transaction(async (trx) => {
+    await trx("cutters").where({ vendor_id: vendorId, id: cutterId }).update({ image_key: key, updated_at: trx.fn.now() });
+    await bumpLibraryGeneration(trx, vendorId);
+  });
   // The Library shows the picture on the cutter card of its cached pages.
   invalidateLibrary({ vendorId });
   if (cutter.image_key) await deleteImage({ vendorId, key: cutter.image_key });

@@ -4,6 +4,7 @@ import type { Knex } from "knex";
 
 import { enqueue } from "@/lib/jobs/enqueue";
 import { invalidateLibrary } from "@/lib/library/library-cache";
+import { bumpLibraryGeneration } from "@/lib/library/library-generation";
 
 import { SHEET_EVENTS_QUEUE, sheetEventSchema, type SheetEvent } from "./sheet-events";
 
@@ -15,6 +16,8 @@ import { SHEET_EVENTS_QUEUE, sheetEventSchema, type SheetEvent } from "./sheet-e
 export async function emitSheetEvent(trx: Knex.Transaction, event: SheetEvent): Promise<void> {
   const parsed = sheetEventSchema.parse(event);
   await enqueue(trx, SHEET_EVENTS_QUEUE, parsed);
+  // Stored Library pages of every app instance stop being served when this transaction commits.
+  await bumpLibraryGeneration(trx, parsed.vendorId);
   // The cached Library pages of this process go once the change is committed (earlier, a concurrent render
   // could cache the old state again); the subscribers follow in jobs.
   const sheetId = parsed.type === "catalogue.changed" ? undefined : parsed.sheetId;

@@ -7,6 +7,7 @@ import { writeAudit } from "@/lib/audit/write-audit";
 import { db } from "@/lib/db/knex";
 import { InvalidInput } from "@/lib/errors/domain-errors";
 import { invalidateLibrary } from "@/lib/library/library-cache";
+import { bumpLibraryGeneration } from "@/lib/library/library-generation";
 
 /** Decide a logo's type by its bytes, never by its name or the browser's word. */
 export async function checkLogo(bytes: Buffer): Promise<{ bytes: Buffer; type: string }> {
@@ -56,6 +57,8 @@ export async function updateBranding(opts: { vendorId: string; actorUserId: stri
       },
       trx,
     );
+    // Name, colour, logo and the customers-only setting show on (or close) every stored Library page.
+    await bumpLibraryGeneration(trx, opts.vendorId);
   });
   invalidateLibrary({ vendorId: opts.vendorId });
 }

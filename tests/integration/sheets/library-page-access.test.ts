@@ -13,6 +13,7 @@ import { mustExist } from "@/tests/support/must-exist";
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
 vi.mock("@/lib/auth/session-user", () => ({ findSessionUser: async () => session.user }));
 vi.mock("@/components/library/read-units", () => ({ readUnits: async () => "metric" }));
+vi.mock("@/lib/library/note-stored-render", () => ({ noteStoredRender: async () => false }));
 vi.mock("next/server", async (original) => ({ ...(await original<typeof import("next/server")>()), after: () => undefined }));
 // Outside Next's server the "use cache" directive is inert and cacheLife/cacheTag refuse to run: the pages render
 // uncached here (what this test is about is the access check, which runs on every request before the cache).

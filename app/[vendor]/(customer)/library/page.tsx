@@ -6,6 +6,9 @@ import { readUnits } from "@/components/library/read-units";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { can } from "@/lib/auth/permissions";
+import { libraryCacheDb } from "@/lib/library/library-cache";
+import { readLibraryGeneration } from "@/lib/library/library-generation";
+import { noteStoredRender } from "@/lib/library/note-stored-render";
 import { findShopFilter } from "@/lib/my-cutters/list-shop-sheets";
 
 export const metadata = { title: "Library" };
@@ -21,7 +24,9 @@ export default async function LibraryPage({ params, searchParams }: Props) {
   const keeper = user && member && can(member.role, "bench.use") ? user : null;
   const shop = keeper && q.shop === "mine" ? await findShopFilter({ vendorId: vendor.id, userId: keeper.id }) : null;
   const filters = { cutter: one(q.cutter), material: one(q.material), machineClass: one(q.machineClass) };
-  const units = await readUnits();
+  const [units, generation] = await Promise.all([readUnits(), readLibraryGeneration(vendor.id, libraryCacheDb)]);
+  // The Library page store (lib/library/page-store-proxy.ts) keeps the anonymous index without filters.
+  await noteStoredRender({ vendorId: vendor.id, versionId: null });
   const shopHint =
     shop && (!shop.cutters || !shop.machines) ? (
       <p className="mb-3 text-sm text-stone-700">
@@ -59,7 +64,14 @@ export default async function LibraryPage({ params, searchParams }: Props) {
           />
         </>
       ) : (
-        <CachedLibraryIndex vendorId={vendor.id} vendorSlug={vendor.slug} filters={filters} units={units} shop={keeper ? false : null} />
+        <CachedLibraryIndex
+          generation={generation}
+          vendorId={vendor.id}
+          vendorSlug={vendor.slug}
+          filters={filters}
+          units={units}
+          shop={keeper ? false : null}
+        />
       )}
     </>
   );

@@ -8,6 +8,7 @@ import { readUnits } from "@/components/library/read-units";
 import { UnitsToggle } from "@/components/library/units-toggle";
 import { PageHeader } from "@/components/ui/page-header";
 import { can } from "@/lib/auth/permissions";
+import { noteStoredRender } from "@/lib/library/note-stored-render";
 import { hasMyCutter } from "@/lib/my-cutters/my-cutters";
 
 import { addMyCutterAction, removeMyCutterAction } from "../../../bench/actions";
@@ -30,6 +31,8 @@ export default async function CutterPage({ params }: Props) {
     readUnits(),
     keeper ? hasMyCutter({ vendorId: vendor.id, userId: keeper.id, cutterId: cutter.id }) : false,
   ]);
+  // The Library page store (lib/library/page-store-proxy.ts) keeps the anonymous page.
+  await noteStoredRender({ vendorId: vendor.id, versionId: null });
   const state = !user ? "signed-out" : !keeper ? "not-member" : mine ? "mine" : "not-mine";
   return (
     <>
@@ -58,7 +61,7 @@ export default async function CutterPage({ params }: Props) {
           removeMyCutterAction={removeMyCutterAction}
         />
       </div>
-      <CachedCutterSheets vendorId={vendor.id} vendorSlug={vendor.slug} sku={cutter.sku} units={units} />
+      <CachedCutterSheets vendorId={vendor.id} vendorSlug={vendor.slug} sku={cutter.sku} generation={found.generation} units={units} />
     </>
   );
 }

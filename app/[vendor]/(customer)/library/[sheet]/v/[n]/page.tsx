@@ -7,6 +7,7 @@ import { CachedSheetView } from "@/components/library/cached-sheet-view";
 import { loadLibrarySheet, parseVersionNumber } from "@/components/library/load-library-sheet";
 import { readUnits } from "@/components/library/read-units";
 import { countSheetView } from "@/lib/field/count-sheet-view";
+import { noteStoredRender } from "@/lib/library/note-stored-render";
 
 type Props = { params: Promise<{ vendor: string; sheet: string; n: string }> };
 
@@ -21,13 +22,17 @@ export default async function SheetVersionPage({ params }: Props) {
   const number = parseVersionNumber(n);
   const found = number === null ? null : await loadLibrarySheet(vendor, sheet, number);
   if (!found) notFound();
-  // Counted in memory and written in batches: a view costs the reader no database round trip.
-  countSheetView(found.vendor.id, found.data.version.id);
+  // Counted in memory and written in batches: a view costs the reader no database round trip. A rendering for
+  // the Library page store (lib/library/page-store-proxy.ts) is no view: the store counts each page it serves.
+  const [vendorId, versionId] = [found.vendor.id, found.data.version.id];
+  const countView = () => countSheetView(vendorId, versionId);
+  if (!(await noteStoredRender({ vendorId, versionId, onServe: countView }))) countView();
   const units = await readUnits();
   const renderAdaptPanel = adaptPanelRenderer({
     saveSetupAction,
     vendor: found.vendor,
     versionId: found.data.version.id,
+    generation: found.generation,
     units,
     returnTo: `/${found.vendor.slug}/library/${found.data.sheet.slug}/v/${found.data.version.number}`,
   });
@@ -35,6 +40,7 @@ export default async function SheetVersionPage({ params }: Props) {
     <CachedSheetView
       vendorId={found.vendor.id}
       data={found.data}
+      generation={found.generation}
       units={units}
       vendorSlug={found.vendor.slug}
       vendorName={found.vendor.name}
