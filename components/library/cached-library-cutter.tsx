@@ -4,7 +4,7 @@ import { cacheLife, cacheTag } from "next/cache";
 
 import { CutterQrLinks } from "@/components/bench/cutter-qr-links";
 import { cutterShortUrl } from "@/lib/bench/cutter-links";
-import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterBySku } from "@/lib/catalogue/find-catalogue-item";
 import { libraryCacheDb, libraryTag } from "@/lib/library/library-cache";
 import type { UnitSystem } from "@/lib/machining";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
@@ -20,7 +20,7 @@ export async function getCachedLibraryCutter(vendorId: string, sku: string, _gen
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
-  return getCutterBySku({ vendorId, sku });
+  return findCutterBySku({ vendorId, sku });
 }
 
 /** The cutter's card, its short link and QR codes, and its published sheets. */

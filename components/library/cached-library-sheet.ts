@@ -3,7 +3,7 @@ import "server-only";
 import { cacheLife, cacheTag } from "next/cache";
 
 import { libraryCacheDb, librarySheetTag, libraryTag } from "@/lib/library/library-cache";
-import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
+import { findLibrarySheet } from "@/lib/sheets/find-library-sheet";
 
 /**
  * A Library sheet's readable data from Next's cache. A published version never changes; publishing,
@@ -15,7 +15,7 @@ export async function getCachedLibrarySheet(vendorId: string, slug: string, numb
   "use cache";
   cacheLife("minutes");
   cacheTag(libraryTag(vendorId));
-  const data = await getLibrarySheet({ vendorId, slug, number, from: libraryCacheDb });
+  const data = await findLibrarySheet({ vendorId, slug, number, from: libraryCacheDb });
   if (data) cacheTag(librarySheetTag(data.sheet.id));
   return data;
 }

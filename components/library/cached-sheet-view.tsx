@@ -5,7 +5,7 @@ import type { ReactNode } from "react";
 
 import { librarySheetTag, libraryTag } from "@/lib/library/library-cache";
 import type { UnitSystem } from "@/lib/machining";
-import type { LibrarySheet } from "@/lib/sheets/get-library-sheet";
+import type { LibrarySheet } from "@/lib/sheets/find-library-sheet";
 
 import { getCachedLibrarySheet } from "./cached-library-sheet";
 import { SheetView } from "./sheet-view";

@@ -5,7 +5,7 @@ import { getCompiledSheet } from "@/components/mdx/render-sheet";
 import type { SheetRenderContext } from "@/components/mdx/sheet-render-context";
 import { AskAboutSheet } from "@/components/support/ask-about-sheet";
 import type { UnitSystem } from "@/lib/machining";
-import type { LibrarySheet } from "@/lib/sheets/get-library-sheet";
+import type { LibrarySheet } from "@/lib/sheets/find-library-sheet";
 
 import { CutterCard } from "./cutter-card";
 import { formatDate } from "./format-date";

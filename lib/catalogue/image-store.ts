@@ -12,7 +12,7 @@ export async function putImage({ vendorId, key, image }: { vendorId: string; key
     .merge();
 }
 
-export async function getImage({ vendorId, key }: { vendorId: string; key: string }): Promise<StoredImage | null> {
+export async function findImage({ vendorId, key }: { vendorId: string; key: string }): Promise<StoredImage | null> {
   const row = await db("cutter_images").where({ vendor_id: vendorId, key }).first<{ content_type: string; bytes: Buffer } | undefined>();
   return row ? { contentType: row.content_type, bytes: row.bytes } : null;
 }

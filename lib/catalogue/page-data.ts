@@ -2,7 +2,7 @@ import "server-only";
 
 import { cache } from "react";
 
-import { findMachineClassBySlug, findMaterialBySlug, getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterBySku, findMachineClassBySlug, findMaterialBySlug } from "@/lib/catalogue/find-catalogue-item";
 import { safeDecode } from "@/lib/http/safe-decode";
 import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 
@@ -10,7 +10,7 @@ import { findVendorBySlug } from "@/lib/vendors/get-vendor";
 export const findDraftingCutter = cache(async (vendorSlug: string, sku: string) => {
   const vendor = await findVendorBySlug(vendorSlug);
   const decoded = safeDecode(sku);
-  return vendor && decoded !== null ? getCutterBySku({ vendorId: vendor.id, sku: decoded }) : null;
+  return vendor && decoded !== null ? findCutterBySku({ vendorId: vendor.id, sku: decoded }) : null;
 });
 
 export const findDraftingMaterial = cache(async (vendorSlug: string, slug: string) => {

@@ -3,7 +3,7 @@ import { materialGroupLabels } from "@/content-schema/catalogue-material";
 import { cautionKindLabels } from "@/content-schema/sheet-kinds";
 import type { Cutter, MachineClass, Material } from "@/lib/catalogue/catalogue-types";
 import { formatChipLoad, formatCuttingSpeed, formatFeed, formatLength, formatPower, formatSpindleSpeed } from "@/lib/machining";
-import type { LibrarySheet } from "@/lib/sheets/get-library-sheet";
+import type { LibrarySheet } from "@/lib/sheets/find-library-sheet";
 import { formatDate } from "@/lib/ui/dates";
 
 import { operationCells } from "./operation-cells";

@@ -2,13 +2,13 @@ import "server-only";
 
 import type { Vendor } from "@/content-schema/vendor";
 import { cutterShortUrl } from "@/lib/bench/cutter-links";
-import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterBySku } from "@/lib/catalogue/find-catalogue-item";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { appUrl } from "@/lib/http/app-url";
 import { renderCutterDataSheetPdf } from "@/lib/pdf/cutter-data-sheet-pdf";
 import type { Branding } from "@/lib/pdf/data-sheet-parts";
 import { renderDataSheetPdf } from "@/lib/pdf/data-sheet-pdf";
-import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
+import { findLibrarySheet } from "@/lib/sheets/find-library-sheet";
 import { listPublishedSheets } from "@/lib/sheets/list-published-sheets";
 import { formatDate } from "@/lib/ui/dates";
 import { findVendorLogo } from "@/lib/vendors/find-vendor-logo";
@@ -44,7 +44,7 @@ export async function printVersionDataSheet({
   number: number;
   now?: Date;
 }) {
-  const data = await getLibrarySheet({ vendorId: vendor.id, slug, number });
+  const data = await findLibrarySheet({ vendorId: vendor.id, slug, number });
   if (!data || (data.version.state !== "published" && data.version.state !== "superseded"))
     throw new NotFound("No printable version of that sheet was found.");
   const pdf = await renderDataSheetPdf({
@@ -57,12 +57,12 @@ export async function printVersionDataSheet({
 
 /** Every current published sheet of one cutter on one data sheet. */
 export async function printCutterDataSheet({ vendor, sku, now = new Date() }: { vendor: Vendor; sku: string; now?: Date }) {
-  const cutter = await getCutterBySku({ vendorId: vendor.id, sku });
+  const cutter = await findCutterBySku({ vendorId: vendor.id, sku });
   if (!cutter) throw new NotFound("That cutter was not found.");
   const summaries = await listPublishedSheets({ vendorId: vendor.id, filters: { cutter: cutter.sku }, limit: MAX_SHEETS_PER_CUTTER });
   const sheets = [];
   for (const summary of summaries) {
-    const data = await getLibrarySheet({ vendorId: vendor.id, slug: summary.slug });
+    const data = await findLibrarySheet({ vendorId: vendor.id, slug: summary.slug });
     if (!data || data.version.state !== "published") continue;
     sheets.push({
       title: data.version.title,

@@ -1,6 +1,6 @@
 import "server-only";
 
-import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterBySku } from "@/lib/catalogue/find-catalogue-item";
 import { db } from "@/lib/db/knex";
 import { NotFound } from "@/lib/errors/domain-errors";
 
@@ -38,7 +38,7 @@ export async function addMyCutter({
   userId,
   sku,
 }: Owner & { sku: string }): Promise<{ id: string; sku: string; added: boolean }> {
-  const cutter = await getCutterBySku({ vendorId, sku: sku.trim() });
+  const cutter = await findCutterBySku({ vendorId, sku: sku.trim() });
   if (!cutter) throw new NotFound(`No cutter has the SKU ${sku.trim()}.`);
   const inserted = await db("customer_cutters")
     .insert({ vendor_id: vendorId, user_id: userId, cutter_id: cutter.id })

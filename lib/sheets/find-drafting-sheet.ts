@@ -1,6 +1,6 @@
 import "server-only";
 
-import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/find-catalogue-item";
 
 import { findSheet, listVersions } from "./find-sheet";
 

@@ -10,7 +10,7 @@ import { createSetup } from "@/lib/bench/create-setup";
 import { findSetup } from "@/lib/bench/list-setups";
 import { machineToInput } from "@/lib/bench/machine-rows";
 import { createMachine, findMachine } from "@/lib/bench/machines";
-import { findMachineClassById, findMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { findMachineClassById, findMaterialById } from "@/lib/catalogue/find-catalogue-item";
 import { saveMachineClass } from "@/lib/catalogue/save-machine-class";
 import { saveMaterial } from "@/lib/catalogue/save-material";
 import { db } from "@/lib/db/knex";

@@ -2,8 +2,8 @@ import { describe, expect, it } from "vitest";
 
 import { cutterFieldsSchema } from "@/content-schema/catalogue-cutter";
 import { checkImage } from "@/lib/catalogue/check-image";
-import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
-import { getImage } from "@/lib/catalogue/image-store";
+import { findCutterBySku } from "@/lib/catalogue/find-catalogue-item";
+import { findImage } from "@/lib/catalogue/image-store";
 import { importCutters } from "@/lib/catalogue/import-cutters";
 import { listCutters } from "@/lib/catalogue/list-catalogue";
 import { createCutter, updateCutter } from "@/lib/catalogue/save-cutter";
@@ -26,7 +26,7 @@ describe("cutter catalogue", () => {
     const fields = cutterFieldsSchema.parse(cutterInput({ sku: "NB-T-6" }));
     const cutter = await createCutter({ vendorId: vendor.id, userId: engineer.user.id, fields });
     await updateCutter({ vendorId: vendor.id, userId: engineer.user.id, id: cutter.id, fields: { ...fields, name: "Renamed" } });
-    expect((await getCutterBySku({ vendorId: vendor.id, sku: "nb-t-6" }))?.name).toBe("Renamed");
+    expect((await findCutterBySku({ vendorId: vendor.id, sku: "nb-t-6" }))?.name).toBe("Renamed");
     const dup = await createCutter({ vendorId: vendor.id, userId: null, fields }).catch((e: unknown) => e);
     expect((dup as InvalidInput).fieldErrors?.sku).toBeDefined();
     expect(await listCutters({ vendorId: other.vendor.id })).toEqual([]);
@@ -59,7 +59,7 @@ describe("cutter catalogue", () => {
       onProgress: (done) => progress.push(done),
     });
     expect([result.imported, progress]).toEqual([2, [1, 2]]);
-    expect((await getCutterBySku({ vendorId: vendor.id, sku: "A-2" }))?.name).toBe("Two, with comma");
+    expect((await findCutterBySku({ vendorId: vendor.id, sku: "A-2" }))?.name).toBe("Two, with comma");
     const mixed = `${HEADER}\nA-3,Three,6,2,18,50,6,upcut\nA-1,Again,6,2,18,50,6,upcut\n`;
     const partial = await importCutters({ vendorId: vendor.id, userId: engineer.user.id, csv: mixed, mode: "valid-rows" });
     expect([partial.imported, partial.skipped]).toEqual([1, 1]);
@@ -73,8 +73,8 @@ describe("cutter catalogue", () => {
     const { vendor, engineer } = await createVendorWithStaff();
     const cutter = await createCutter({ vendorId: vendor.id, userId: null, fields: cutterFieldsSchema.parse(cutterInput()) });
     const { key } = await setCutterImage({ vendorId: vendor.id, userId: engineer.user.id, cutterId: cutter.id, bytes: PNG });
-    expect((await getImage({ vendorId: vendor.id, key }))?.contentType).toBe("image/png");
+    expect((await findImage({ vendorId: vendor.id, key }))?.contentType).toBe("image/png");
     const other = await createVendorWithStaff();
-    expect(await getImage({ vendorId: other.vendor.id, key })).toBeNull();
+    expect(await findImage({ vendorId: other.vendor.id, key })).toBeNull();
   });
 });

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { db } from "@/lib/db/knex";
 import { Conflict, Forbidden, InvalidInput, NotFound } from "@/lib/errors/domain-errors";
 import { approveDraft } from "@/lib/sheets/approve-draft";
-import { getLibrarySheet } from "@/lib/sheets/get-library-sheet";
+import { findLibrarySheet } from "@/lib/sheets/find-library-sheet";
 import { publishDraft } from "@/lib/sheets/publish-draft";
 import { returnToDraft } from "@/lib/sheets/return-to-draft";
 import { DraftConflict, saveDraft } from "@/lib/sheets/save-draft";
@@ -102,7 +102,7 @@ describe("sheet version workflow", () => {
     const result = await publishOpenDraft(s, "Feed lowered 10 %.");
     expect(result).toMatchObject({ number: 2, superseded: 1 });
     expect(await states(s.vendor.id, s.slug)).toEqual(["superseded", "published"]);
-    const library = await getLibrarySheet({ vendorId: s.vendor.id, slug: s.slug, number: 1 });
+    const library = await findLibrarySheet({ vendorId: s.vendor.id, slug: s.slug, number: 1 });
     expect(library?.version.state).toBe("superseded");
     expect(library?.current?.number).toBe(2);
   });
@@ -123,7 +123,7 @@ describe("sheet version workflow", () => {
     await publishOpenDraft(s);
     await expect(withdrawVersion({ ...s.as(s.engineer.user.id), reason: "" })).rejects.toBeInstanceOf(InvalidInput);
     await withdrawVersion({ ...s.as(s.engineer.user.id), reason: "Chatter reported on light routers." });
-    const library = await getLibrarySheet({ vendorId: s.vendor.id, slug: s.slug });
+    const library = await findLibrarySheet({ vendorId: s.vendor.id, slug: s.slug });
     expect(library?.version).toMatchObject({ state: "withdrawn", withdrawnReason: "Chatter reported on light routers." });
     expect(library?.current).toBeNull();
     expect(await auditActions(s.vendor.id)).toContain("sheet.withdraw");
@@ -131,8 +131,8 @@ describe("sheet version workflow", () => {
 
   it("drafts never reach the Library", async () => {
     const s = await createDraftingScenario();
-    expect(await getLibrarySheet({ vendorId: s.vendor.id, slug: s.slug })).toBeNull();
-    expect(await getLibrarySheet({ vendorId: s.vendor.id, slug: s.slug, number: 1 })).toBeNull();
+    expect(await findLibrarySheet({ vendorId: s.vendor.id, slug: s.slug })).toBeNull();
+    expect(await findLibrarySheet({ vendorId: s.vendor.id, slug: s.slug, number: 1 })).toBeNull();
   });
 
   it("another vendor's sheet is simply not found", async () => {
@@ -143,6 +143,6 @@ describe("sheet version workflow", () => {
     await expect(submitDraft({ ...foreign, changeNote: "Sneaky." })).rejects.toBeInstanceOf(NotFound);
     await expect(approveDraft(foreign)).rejects.toBeInstanceOf(NotFound);
     await expect(withdrawVersion({ ...foreign, reason: "Sneaky reason." })).rejects.toBeInstanceOf(NotFound);
-    expect(await getLibrarySheet({ vendorId: other.vendor.id, slug: s.slug })).toBeNull();
+    expect(await findLibrarySheet({ vendorId: other.vendor.id, slug: s.slug })).toBeNull();
   });
 });

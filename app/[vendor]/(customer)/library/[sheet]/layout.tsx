@@ -1,7 +1,7 @@
 import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
 
-import { loadLibrarySheet } from "@/components/library/load-library-sheet";
+import { findLibrarySheetPage } from "@/components/library/find-library-sheet-page";
 
 // The sheet is looked up here, above any loading boundary, so an unknown sheet is a real 404.
 export default async function SheetLayout({
@@ -12,6 +12,6 @@ export default async function SheetLayout({
   params: Promise<{ vendor: string; sheet: string }>;
 }) {
   const { vendor, sheet } = await params;
-  if (!(await loadLibrarySheet(vendor, sheet))) notFound();
+  if (!(await findLibrarySheetPage(vendor, sheet))) notFound();
   return children;
 }

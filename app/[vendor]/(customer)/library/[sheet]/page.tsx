@@ -4,7 +4,7 @@ import { notFound } from "next/navigation";
 import { saveSetupAction } from "@/app/[vendor]/(customer)/bench/actions";
 import { adaptPanelRenderer } from "@/components/adapt/library-adapt-panel-mount";
 import { CachedSheetView } from "@/components/library/cached-sheet-view";
-import { loadLibrarySheet } from "@/components/library/load-library-sheet";
+import { findLibrarySheetPage } from "@/components/library/find-library-sheet-page";
 import { readUnits } from "@/components/library/read-units";
 import { countSheetView } from "@/lib/field/count-sheet-view";
 import { noteStoredRender } from "@/lib/library/note-stored-render";
@@ -13,12 +13,12 @@ type Props = { params: Promise<{ vendor: string; sheet: string }> };
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const { vendor, sheet } = await params;
-  return { title: (await loadLibrarySheet(vendor, sheet))?.data.version.title ?? "Sheet" };
+  return { title: (await findLibrarySheetPage(vendor, sheet))?.data.version.title ?? "Sheet" };
 }
 
 export default async function SheetPage({ params }: Props) {
   const { vendor, sheet } = await params;
-  const found = await loadLibrarySheet(vendor, sheet);
+  const found = await findLibrarySheetPage(vendor, sheet);
   if (!found) notFound();
   // Counted in memory and written in batches: a view costs the reader no database round trip. A rendering for
   // the Library page store (lib/library/page-store-proxy.ts) is no view: the store counts each page it serves.

@@ -8,7 +8,7 @@ import { renderDraftPreview } from "@/components/drafting/draft-preview";
 import { newSheetSchema, sheetSlugSchema, sourceSchema, submitDraftSchema, withdrawSchema } from "@/content-schema/sheet-workflow";
 import type { ActionState } from "@/lib/actions/action-state";
 import { vendorAction } from "@/lib/actions/vendor-action";
-import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/find-catalogue-item";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { approveDraft } from "@/lib/sheets/approve-draft";
 import { checkDraftSource } from "@/lib/sheets/check-draft-source";

@@ -1,7 +1,7 @@
 import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
 
-import { loadLibraryCutter } from "@/components/library/load-library-cutter";
+import { findLibraryCutterPage } from "@/components/library/find-library-cutter-page";
 
 export default async function CutterLayout({
   children,
@@ -11,6 +11,6 @@ export default async function CutterLayout({
   params: Promise<{ vendor: string; sku: string }>;
 }) {
   const { vendor, sku } = await params;
-  if (!(await loadLibraryCutter(vendor, sku))) notFound();
+  if (!(await findLibraryCutterPage(vendor, sku))) notFound();
   return children;
 }

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 
 import { CachedCutterSheets } from "@/components/library/cached-library-cutter";
-import { loadLibraryCutter } from "@/components/library/load-library-cutter";
+import { findLibraryCutterPage } from "@/components/library/find-library-cutter-page";
 import { MyCutterButton } from "@/components/library/my-cutter-button";
 import { readUnits } from "@/components/library/read-units";
 import { UnitsToggle } from "@/components/library/units-toggle";
@@ -17,13 +17,13 @@ type Props = { params: Promise<{ vendor: string; sku: string }> };
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const { vendor, sku } = await params;
-  return { title: (await loadLibraryCutter(vendor, sku))?.cutter.sku ?? "Cutter" };
+  return { title: (await findLibraryCutterPage(vendor, sku))?.cutter.sku ?? "Cutter" };
 }
 
 // The deep-link target of a cutter's short link and QR code: the cutter and its published sheets.
 export default async function CutterPage({ params }: Props) {
   const { vendor: vendorSlug, sku } = await params;
-  const found = await loadLibraryCutter(vendorSlug, sku);
+  const found = await findLibraryCutterPage(vendorSlug, sku);
   if (!found) notFound();
   const { vendor, cutter, user, member } = found;
   const keeper = user && member && can(member.role, "bench.use") ? user : null;

@@ -1,7 +1,7 @@
 import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
 
-import { loadLibrarySheet, parseVersionNumber } from "@/components/library/load-library-sheet";
+import { findLibrarySheetPage, parseVersionNumber } from "@/components/library/find-library-sheet-page";
 
 // Drafts and versions in review are never found here; readable versions stay readable for ever.
 export default async function VersionLayout({
@@ -13,6 +13,6 @@ export default async function VersionLayout({
 }) {
   const { vendor, sheet, n } = await params;
   const number = parseVersionNumber(n);
-  if (number === null || !(await loadLibrarySheet(vendor, sheet, number))) notFound();
+  if (number === null || !(await findLibrarySheetPage(vendor, sheet, number))) notFound();
   return children;
 }

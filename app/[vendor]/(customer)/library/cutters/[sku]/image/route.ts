@@ -1,5 +1,5 @@
-import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
-import { getImage } from "@/lib/catalogue/image-store";
+import { findCutterBySku } from "@/lib/catalogue/find-catalogue-item";
+import { findImage } from "@/lib/catalogue/image-store";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { safeDecode } from "@/lib/http/safe-decode";
 import { withVendor } from "@/lib/http/with-vendor";
@@ -8,8 +8,8 @@ import { withVendor } from "@/lib/http/with-vendor";
 export const GET = withVendor<{ vendor: string; sku: string }>(
   async (_request, { access, params }) => {
     const sku = safeDecode(params.sku);
-    const cutter = sku === null ? null : await getCutterBySku({ vendorId: access.vendor.id, sku });
-    const image = cutter?.imageKey ? await getImage({ vendorId: access.vendor.id, key: cutter.imageKey }) : null;
+    const cutter = sku === null ? null : await findCutterBySku({ vendorId: access.vendor.id, sku });
+    const image = cutter?.imageKey ? await findImage({ vendorId: access.vendor.id, key: cutter.imageKey }) : null;
     if (!image) throw new NotFound("No image.");
     return new Response(new Uint8Array(image.bytes), {
       headers: {

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 
 import { MAX_IMAGE_BYTES } from "@/lib/catalogue/check-image";
-import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterBySku } from "@/lib/catalogue/find-catalogue-item";
 import { setCutterImage } from "@/lib/catalogue/set-cutter-image";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { readBodyBytes } from "@/lib/http/read-json";
@@ -14,7 +14,7 @@ export const POST = withVendor<{ vendor: string; sku: string }>(
   async (request, { access, params }) => {
     const actor = apiActor(access);
     const sku = safeDecode(params.sku);
-    const cutter = sku === null ? null : await getCutterBySku({ vendorId: actor.vendorId, sku });
+    const cutter = sku === null ? null : await findCutterBySku({ vendorId: actor.vendorId, sku });
     if (!cutter) throw new NotFound("No such cutter.");
     const bytes = await readBodyBytes(request, MAX_IMAGE_BYTES, "The image is larger than 5 MB.");
     const saved = await setCutterImage({ ...actor, cutterId: cutter.id, bytes });

@@ -1,4 +1,4 @@
-import { parseVersionNumber } from "@/components/library/load-library-sheet";
+import { parseVersionNumber } from "@/components/library/find-library-sheet-page";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { pdfResponse } from "@/lib/http/pdf-response";
 import { safeDecode } from "@/lib/http/safe-decode";

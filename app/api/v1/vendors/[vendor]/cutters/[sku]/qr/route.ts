@@ -1,6 +1,6 @@
 import { cutterQrQuerySchema } from "@/content-schema/api-queries";
 import { cutterQr } from "@/lib/bench/cutter-links";
-import { getCutterBySku } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterBySku } from "@/lib/catalogue/find-catalogue-item";
 import { NotFound } from "@/lib/errors/domain-errors";
 import { safeDecode } from "@/lib/http/safe-decode";
 import { withVendor } from "@/lib/http/with-vendor";
@@ -9,7 +9,7 @@ import { withVendor } from "@/lib/http/with-vendor";
 export const GET = withVendor<{ vendor: string; sku: string }>(
   async (request, { access, params }) => {
     const sku = safeDecode(params.sku);
-    const cutter = sku === null ? null : await getCutterBySku({ vendorId: access.vendor.id, sku });
+    const cutter = sku === null ? null : await findCutterBySku({ vendorId: access.vendor.id, sku });
     if (!cutter) throw new NotFound();
     const query = cutterQrQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
     const format = query.format;

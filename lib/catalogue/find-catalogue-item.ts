@@ -9,7 +9,7 @@ import type { Cutter, MachineClass, Material } from "./catalogue-types";
 
 type By = { vendorId: string; trx?: Knex };
 
-export async function getCutterBySku({ vendorId, sku, trx = db }: By & { sku: string }): Promise<Cutter | null> {
+export async function findCutterBySku({ vendorId, sku, trx = db }: By & { sku: string }): Promise<Cutter | null> {
   const row = await trx("cutters").where({ vendor_id: vendorId }).whereRaw("lower(sku) = lower(?)", [sku]).first();
   return row ? rowToCutter(row) : null;
 }

@@ -2,7 +2,7 @@ import "server-only";
 
 import type { Knex } from "knex";
 
-import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/get-catalogue-item";
+import { findCutterById, findMachineClassById, findMaterialById } from "@/lib/catalogue/find-catalogue-item";
 import { readDb } from "@/lib/db/read-db";
 
 import { findSheet } from "./find-sheet";
@@ -14,7 +14,7 @@ import { rowToVersion, versionQuery } from "./version-rows";
  * latest withdrawn one) and the history of readable versions. Drafts and versions in review never appear.
  * `from`: the connection to read (default readDb(); the Library's cache entries read the primary).
  */
-export async function getLibrarySheet({ vendorId, slug, number, from }: { vendorId: string; slug: string; number?: number; from?: Knex }) {
+export async function findLibrarySheet({ vendorId, slug, number, from }: { vendorId: string; slug: string; number?: number; from?: Knex }) {
   const db = from ?? (await readDb());
   const sheet = await findSheet({ vendorId, slug, trx: db });
   if (!sheet) return null;
@@ -33,4 +33,4 @@ export async function getLibrarySheet({ vendorId, slug, number, from }: { vendor
   return { sheet, version, frontMatter: version.frontMatter, current, history, cutter, material, machineClass };
 }
 
-export type LibrarySheet = NonNullable<Awaited<ReturnType<typeof getLibrarySheet>>>;
+export type LibrarySheet = NonNullable<Awaited<ReturnType<typeof findLibrarySheet>>>;

@@ -9,7 +9,7 @@ import { readLibraryGeneration } from "@/lib/library/library-generation";
 
 import { getCachedLibraryCutter } from "./cached-library-cutter";
 
-export const loadLibraryCutter = cache(async (vendorSlug: string, sku: string) => {
+export const findLibraryCutterPage = cache(async (vendorSlug: string, sku: string) => {
   // The access check runs here, so the page checks it as well as the layout (a page segment can render alone).
   const { vendor, user, member } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/cutters/${sku}`);
   const decoded = safeDecode(sku);

@@ -10,7 +10,7 @@ import { readLibraryGeneration } from "@/lib/library/library-generation";
 import { getCachedLibrarySheet } from "./cached-library-sheet";
 
 /** One lookup per request, shared by a segment's layout (404 check) and its page; the vendor (and its access settings) fresh, the sheet from the cache. */
-export const loadLibrarySheet = cache(async (vendorSlug: string, sheetSlug: string, number?: number) => {
+export const findLibrarySheetPage = cache(async (vendorSlug: string, sheetSlug: string, number?: number) => {
   // The access check runs here, so the page checks it as well as the layout (a page segment can render alone).
   const { vendor } = await requirePageAccess(vendorSlug, "library.read", `/${vendorSlug}/library/${sheetSlug}`);
   const slug = safeDecode(sheetSlug);
