@@ -10,6 +10,7 @@ import { NextResponse, type NextRequest } from "next/server";
 
 import { SECURITY_HEADERS } from "@/lib/http/security-headers";
 import type { UnitSystem } from "@/lib/machining/quantities";
+import { UNITS_COOKIE, unitsFromCookie } from "@/lib/ui/units-cookie";
 
 import { findLibraryVendorState, type LibraryVendorState } from "./library-vendor-state";
 import { pageStoreKey, withNonce, type StoredPage } from "./page-store";
@@ -46,8 +47,7 @@ export function storableVendorSlug(request: NextRequest): string | null {
   return match ? match[1] : null;
 }
 
-export const unitsOf = (request: NextRequest): UnitSystem =>
-  request.cookies.get("sb-units")?.value === "imperial" ? "imperial" : "metric";
+export const unitsOf = (request: NextRequest): UnitSystem => unitsFromCookie(request.cookies.get(UNITS_COOKIE)?.value);
 
 /**
  * The token of the proxy's own rendering request, or null for any other request (a client cannot know the
