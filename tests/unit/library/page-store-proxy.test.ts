@@ -18,6 +18,15 @@ describe("which requests the Library page store answers", () => {
     expect(storableVendorSlug(get("/acme/library/slot-6mm"))).toBe("acme");
     expect(storableVendorSlug(get("/acme/library/slot-6mm/v/3"))).toBe("acme");
     expect(storableVendorSlug(get("/acme/library/slot-6mm", { cookie: "sb-units=imperial; other=1" }))).toBe("acme");
+    expect(storableVendorSlug(get("/acme/library/slot-6mm", { "sec-fetch-mode": "navigate", "sec-fetch-dest": "document" }))).toBe("acme");
+  });
+
+  it("never answers the browser router's fetches, whose RSC headers and _rsc query Next hides from the proxy", () => {
+    // What a router.refresh() or a segment prefetch looks like from inside the proxy.
+    const routerFetch = { "sec-fetch-mode": "cors", "sec-fetch-dest": "empty", accept: "*/*" };
+    expect(storableVendorSlug(get("/acme/library/slot-6mm", routerFetch))).toBeNull();
+    expect(storableVendorSlug(get("/acme/library/slot-6mm", { "sec-fetch-mode": "same-origin" }))).toBeNull();
+    expect(storableVendorSlug(get("/acme/library/slot-6mm", { "next-url": "/acme/library" }))).toBeNull();
   });
 
   it("leaves every other page, queries, RSC navigations, prefetches, other methods and sessions to Next", () => {
