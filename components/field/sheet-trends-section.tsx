@@ -15,14 +15,18 @@ const VERDICT_STYLE = {
 
 /** Reports and failure share week by week over the chosen range, publications marked, and the verdict on the latest. */
 export async function SheetTrendsSection({
+  vendorSlug,
   vendorId,
+  sheetSlug,
   sheetId,
   from,
   to,
   z,
   confidenceLabel,
 }: {
+  vendorSlug: string;
   vendorId: string;
+  sheetSlug: string;
   sheetId: string;
   from: string;
   to: string;
@@ -49,6 +53,15 @@ export async function SheetTrendsSection({
       </p>
       <div className="mb-4 rounded-md border border-stone-300 bg-white p-4">
         <LazyTrendChart data={points} />
+      </div>
+      <div className="mb-2 flex justify-end">
+        <a
+          href={`/api/v1/vendors/${vendorSlug}/field/sheet-trends?${new URLSearchParams({ sheet: sheetSlug, from, to })}`}
+          className="inline-flex min-h-11 items-center rounded border border-stone-300 bg-white px-3 text-sm"
+          download
+        >
+          Export CSV<span className="sr-only"> of the weekly trends</span>
+        </a>
       </div>
       <TrendTable weeks={trends.weeks} confidenceLabel={confidenceLabel} />
     </>

@@ -6,6 +6,7 @@ import type { ChangeItem } from "./customer-changes";
 import { describeChange } from "./describe-change";
 import type { AttentionItem } from "./needs-attention";
 import type { VersionRollup } from "./rollup-rows";
+import type { TrendWeek } from "./week-series";
 
 // Pure: each Field-results list as CSV. Shares as fractions with 4 decimals, so a spreadsheet can compute with them.
 const share = (n: number) => n.toFixed(4);
@@ -146,6 +147,32 @@ export function sheetVersionsCsv(sheetSlug: string, versions: VersionRollup[], c
       share(v.failure.upper),
       v.tickets,
       v.handoffs,
+    ]),
+  ]);
+}
+
+/** One row per week of the range (weeks without reports as zeros), with the versions published that week. */
+export function sheetTrendsCsv(sheetSlug: string, weeks: TrendWeek[], confidence: number): string {
+  return toCsv([
+    [
+      "sheet",
+      "week_start",
+      "reports",
+      "failed",
+      "failure_share",
+      `wilson_lower_${confidence}`,
+      `wilson_upper_${confidence}`,
+      "published_versions",
+    ],
+    ...weeks.map((w) => [
+      sheetSlug,
+      w.week,
+      w.outcomes,
+      w.failed,
+      w.outcomes ? share(w.failure.share) : "",
+      w.outcomes ? share(w.failure.lower) : "",
+      w.outcomes ? share(w.failure.upper) : "",
+      w.published.join(" "),
     ]),
   ]);
 }

@@ -65,7 +65,16 @@ export default async function FieldSheetPage({ params, searchParams }: Props) {
       >
         <DateRangeForm action={here} label="Trend date range" from={chosen.from ?? range.from} to={chosen.to ?? range.to} error={error} />
         <Suspense key={`${range.from}:${range.to}`} fallback={<SectionSkeleton label="the trends" rows={6} />}>
-          <SheetTrendsSection vendorId={vendorId} sheetId={sheet.id} from={range.from} to={range.to} z={z} confidenceLabel={label} />
+          <SheetTrendsSection
+            vendorSlug={slug}
+            vendorId={vendorId}
+            sheetSlug={sheet.slug}
+            sheetId={sheet.id}
+            from={range.from}
+            to={range.to}
+            z={z}
+            confidenceLabel={label}
+          />
         </Suspense>
       </FieldSection>
       <Suspense fallback={<SectionSkeleton label="changes, tickets and hand-offs" />}>
