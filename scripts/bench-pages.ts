@@ -120,6 +120,12 @@ async function main() {
         console.log(
           `\nLibrary sheet page JavaScript: ${js.chunks} chunks, ${(js.raw / 1024).toFixed(0)} KB raw, ${kb.toFixed(0)} KB gzip (goal ≤ ${SHEET_JS_GOAL_KB} KB: ${kb <= SHEET_JS_GOAL_KB ? "met" : "not met"}; ${js.skippedNoModule} noModule polyfill chunk(s) not counted)`,
         );
+        // The same build's not-found page has no client code of its own: what the sheet page adds to the framework.
+        const floor = await pageJavaScript(app.baseUrl, `/${v}/library/no-such-sheet-${Date.now()}`);
+        console.log(
+          `not-found page JavaScript (framework and root layout only): ${(floor.compressed / 1024).toFixed(1)} KB gzip; the sheet page adds ${((js.compressed - floor.compressed) / 1024).toFixed(1)} KB`,
+        );
+        console.log(`sheet page/not-found page JavaScript ratio: ${(js.compressed / floor.compressed).toFixed(2)}`);
       }
     } finally {
       await app.stop();
