@@ -1,6 +1,8 @@
+import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it, vi } from "vitest";
 
 import { saveMailPreferencesAction } from "@/app/[vendor]/(public)/mail-preferences/actions";
+import MailPreferencesPage from "@/app/[vendor]/(public)/mail-preferences/page";
 import { listMailPreferences } from "@/lib/mail-preferences/mail-preferences";
 import { createPreferencesToken } from "@/lib/mail-preferences/preferences-link";
 import { createVendorWithStaff } from "@/tests/factories/foundation";
@@ -46,5 +48,30 @@ describe("saving mail preferences from the form", () => {
 
   it("is not found when even the vendor cannot be read", async () => {
     expect(await outcome(formOf({ vendor: "../../etc", change_alerts: "yes" }))).toMatch(/NOT_FOUND|404/);
+  });
+});
+
+describe("the mail preferences page reached by a link that no longer works", () => {
+  const html = async (vendor: string, token?: string) => {
+    try {
+      const page = await MailPreferencesPage({
+        params: Promise.resolve({ vendor }),
+        searchParams: Promise.resolve(token ? { token } : {}),
+      });
+      return renderToStaticMarkup(page);
+    } catch (error) {
+      return error && typeof error === "object" && "digest" in error ? String(error.digest) : String(error);
+    }
+  };
+
+  it("says so and offers sign-in, instead of a bare not-found page; without a link it stays not found", async () => {
+    const a = await createVendorWithStaff();
+    const token = createPreferencesToken({ vendorId: a.vendor.id, userId: a.customer.user.id });
+    const altered = token.replace(/.$/, (c) => (c === "A" ? "B" : "A"));
+    const page = await html(a.vendor.slug, altered);
+    expect(page).toContain("This link no longer opens your mail preferences.");
+    expect(page).toContain(`/sign-in?callbackUrl=${encodeURIComponent(`/${a.vendor.slug}/mail-preferences`)}`);
+    expect(await html(a.vendor.slug)).toMatch(/NOT_FOUND|404/);
+    expect(await html("no-such-vendor-here", altered)).toMatch(/NOT_FOUND|404/);
   });
 });
