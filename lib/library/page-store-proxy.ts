@@ -85,7 +85,7 @@ async function render(pathname: string, units: UnitSystem, vendor: LibraryVendor
   state.pending.set(token, null);
   try {
     const response = await fetch(`http://127.0.0.1:${port}${pathname}`, {
-      headers: { [RENDER_HEADER]: `${state.renderSecret}.${token}`, cookie: `sb-units=${units}`, accept: "text/html" },
+      headers: { [RENDER_HEADER]: `${state.renderSecret}.${token}`, cookie: `${UNITS_COOKIE}=${units}`, accept: "text/html" },
       redirect: "manual",
       cache: "no-store",
       signal: AbortSignal.timeout(RENDER_TIMEOUT_MS),
