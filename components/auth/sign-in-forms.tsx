@@ -117,6 +117,7 @@ export function SignInForms({
         <h2 id="ml-title" className="font-medium">
           With a link by e-mail
         </h2>
+        <p className="text-sm text-stone-700">Forgot your password? Sign in with a link, then set a new one under Your account.</p>
         <Field label="E-mail" name="email" type="email" autoComplete="email" errors={linkErrors} id="ml-email" />
         <button type="submit" className="min-h-11 w-full rounded border border-stone-400 bg-white px-4 py-2 font-medium">
           E-mail me a sign-in link
