@@ -40,10 +40,10 @@ export function storableVendorSlug(request: NextRequest): string | null {
   if (request.method !== "GET" || request.nextUrl.search !== "") return null;
   const h = request.headers;
   // Next hides its own router headers (RSC, state tree, prefetch) and the `_rsc` query from the proxy, so a
-  // router fetch looks like a plain GET here. A browser marks every request it makes: only a document
-  // navigation (or a client that is no browser at all) may get a stored page, never the router's fetches.
-  const mode = h.get("sec-fetch-mode");
-  if (mode !== null && mode !== "navigate") return null;
+  // router fetch looks like a plain GET here. A browser names what each request is for: only a document
+  // (or a client that is no browser and says nothing) may get a stored page, never the router's fetches.
+  const dest = h.get("sec-fetch-dest");
+  if (dest !== null && dest !== "document") return null;
   if (h.has("next-url")) return null;
   if (h.has("rsc") || h.has("next-router-prefetch") || h.has("next-router-state-tree") || h.has("next-router-segment-prefetch"))
     return null;
