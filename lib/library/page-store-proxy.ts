@@ -14,6 +14,7 @@ import { UNITS_COOKIE, unitsFromCookie } from "@/lib/ui/units-cookie";
 
 import { findLibraryVendorState, type LibraryVendorState } from "./library-vendor-state";
 import { pageStoreKey, withNonce, type StoredPage } from "./page-store";
+import { bodyWithNonce, storedBody } from "./page-store-body";
 import { pageStoreState } from "./page-store-state";
 
 /** Header of the proxy's own loopback request for a page to store: `<render secret>.<token>`. */
@@ -101,7 +102,8 @@ async function render(pathname: string, units: UnitSystem, vendor: LibraryVendor
     const note = state.pending.get(token);
     if (!note || note.vendorId !== vendor.id || !html.includes(state.placeholderNonce)) return null;
     const headers = [...response.headers].filter(([name]) => KEPT_HEADERS.has(name.toLowerCase()));
-    return { vendorId: vendor.id, generation: vendor.generation, versionId: note.versionId, html, headers, onServe: note.onServe };
+    const body = storedBody(html, state.placeholderNonce);
+    return { vendorId: vendor.id, generation: vendor.generation, versionId: note.versionId, body, headers, onServe: note.onServe };
   } catch {
     return null;
   } finally {
@@ -152,7 +154,7 @@ export async function answerFromStore(request: NextRequest, slug: string, csp: (
   for (const { key: name, value } of SECURITY_HEADERS) headers.set(name, value);
   headers.set("Content-Security-Policy", csp(nonce));
   headers.set("Cache-Control", NO_SHARED_CACHE);
-  return new NextResponse(withNonce(page.html, placeholderNonce, nonce), { status: 200, headers });
+  return new NextResponse(bodyWithNonce(page.body, nonce), { status: 200, headers });
 }
 
 /** The nonce of a rendering the proxy asked for: the placeholder the store replaces in every answer. */

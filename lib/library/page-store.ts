@@ -3,13 +3,16 @@
 // gets a fresh nonce in its place (lib/library/page-store-proxy.ts). Nothing here reaches a client.
 import type { UnitSystem } from "@/lib/machining/quantities";
 
+import type { StoredBody } from "./page-store-body";
+
 export type StoredPage = {
   vendorId: string;
   /** The vendor's Library generation the page was rendered under; served only while it is still current. */
   generation: string;
   /** The version the page shows, for the view counter. */
   versionId: string | null;
-  html: string;
+  /** The HTML, split where the placeholder nonce stood (lib/library/page-store-body.ts). */
+  body: StoredBody;
   /** Response headers of the rendering worth keeping (content type, vary, link). */
   headers: [string, string][];
   /** Counts a view of the page (the page itself is not rendered for a stored answer). */
@@ -36,7 +39,7 @@ export class PageStore {
 
   set(key: string, page: StoredPage): void {
     this.delete(key);
-    const bytes = Buffer.byteLength(page.html) + key.length + page.headers.reduce((n, [k, v]) => n + k.length + v.length, 0);
+    const bytes = page.body.bytes + key.length + page.headers.reduce((n, [k, v]) => n + k.length + v.length, 0);
     if (bytes > this.maxBytes) return;
     this.entries.set(key, { page, bytes });
     this.used += bytes;
@@ -71,9 +74,9 @@ export class PageStore {
 }
 
 /**
- * The stored HTML with the placeholder replaced by this response's nonce. The placeholder is random per process
+ * A stored header with the placeholder replaced by this response's nonce. The placeholder is random per process
  * and never leaves it, and vendor text renders with HTML off, so only Next's own nonce attributes carry it.
  */
-export function withNonce(html: string, placeholder: string, nonce: string): string {
-  return html.split(placeholder).join(nonce);
+export function withNonce(value: string, placeholder: string, nonce: string): string {
+  return value.split(placeholder).join(nonce);
 }

@@ -5,6 +5,7 @@ import { db } from "@/lib/db/knex";
 import { bumpLibraryGeneration, readLibraryGeneration } from "@/lib/library/library-generation";
 import { findLibraryVendorState } from "@/lib/library/library-vendor-state";
 import { pageStoreKey } from "@/lib/library/page-store";
+import { storedBody } from "@/lib/library/page-store-body";
 import { answerFromStore } from "@/lib/library/page-store-proxy";
 import { pageStoreState } from "@/lib/library/page-store-state";
 import { startNewVersion } from "@/lib/sheets/start-new-version";
@@ -28,7 +29,10 @@ async function storePage(vendor: { id: string; slug: string }, path: string, tex
     vendorId: vendor.id,
     generation: state.generation,
     versionId: null,
-    html: `<html><script nonce="${placeholderNonce}">1</script><p>${text}</p><script nonce="${placeholderNonce}">2</script></html>`,
+    body: storedBody(
+      `<html><script nonce="${placeholderNonce}">1</script><p>${text}</p><script nonce="${placeholderNonce}">2</script></html>`,
+      placeholderNonce,
+    ),
     headers: [
       ["content-type", "text/html; charset=utf-8"],
       ["link", `</_next/static/a.css>; rel=preload; as="style"; nonce="${placeholderNonce}"`],

@@ -1,17 +1,26 @@
 import { describe, expect, it } from "vitest";
 
 import { PageStore, pageStoreKey, withNonce, type StoredPage } from "@/lib/library/page-store";
+import { bodyWithNonce, storedBody } from "@/lib/library/page-store-body";
 
-const page = (html: string, vendorId = "v1", generation = "3"): StoredPage => ({ vendorId, generation, versionId: "x", html, headers: [] });
-const size = (key: string, html: string) => Buffer.byteLength(html) + key.length;
+const PLACEHOLDER = "placeholder-nonce";
+const page = (html: string, vendorId = "v1", generation = "3"): StoredPage => ({
+  vendorId,
+  generation,
+  versionId: "x",
+  body: storedBody(html, PLACEHOLDER),
+  headers: [],
+});
+const text = (stored: StoredPage | undefined) => stored && Buffer.from(bodyWithNonce(stored.body, PLACEHOLDER)).toString();
+const size = (key: string, html: string) => storedBody(html, PLACEHOLDER).bytes + key.length;
 
 describe("Library page store", () => {
   it("keys pages by path and unit system", () => {
     const store = new PageStore(10_000);
     store.set(pageStoreKey("/acme/library/a", "metric"), page("metric page"));
     store.set(pageStoreKey("/acme/library/a", "imperial"), page("imperial page"));
-    expect(store.get(pageStoreKey("/acme/library/a", "metric"))?.html).toBe("metric page");
-    expect(store.get(pageStoreKey("/acme/library/a", "imperial"))?.html).toBe("imperial page");
+    expect(text(store.get(pageStoreKey("/acme/library/a", "metric")))).toBe("metric page");
+    expect(text(store.get(pageStoreKey("/acme/library/a", "imperial")))).toBe("imperial page");
     expect(store.get(pageStoreKey("/acme/library/b", "metric"))).toBeUndefined();
     expect(pageStoreKey("/acme/library/a", "metric")).not.toBe(pageStoreKey("/acme/library/a", "imperial"));
   });
@@ -51,15 +60,15 @@ describe("Library page store", () => {
     store.set("c", page("c", "v1", "3"));
     store.set("d", page("d", "v1", "4"));
     store.dropStale("v1", "4");
-    expect([store.get("a"), store.get("b")?.html, store.get("c"), store.get("d")?.html]).toEqual([undefined, "b", undefined, "d"]);
+    expect([store.get("a"), text(store.get("b")), store.get("c"), text(store.get("d"))]).toEqual([undefined, "b", undefined, "d"]);
     expect(store.bytes).toBe(size("b", "b") + size("d", "d"));
   });
 
-  it("puts the response's nonce wherever the placeholder stood, and nowhere else", () => {
+  it("puts the response's nonce wherever the placeholder stood in a header, and nowhere else", () => {
     const placeholder = "Zq3_placeholder_9f";
-    const html = `<script nonce="${placeholder}">a</script><p>nonce=&quot;x&quot;</p><script nonce="${placeholder}" src="/b.js"></script>`;
-    const out = withNonce(html, placeholder, "N0NCE==");
-    expect(out).toBe(`<script nonce="N0NCE==">a</script><p>nonce=&quot;x&quot;</p><script nonce="N0NCE==" src="/b.js"></script>`);
+    const link = `</a.js>; rel=preload; as="script"; nonce="${placeholder}", </b.css>; rel=preload; nonce="${placeholder}"`;
+    const out = withNonce(link, placeholder, "N0NCE==");
+    expect(out).toBe(`</a.js>; rel=preload; as="script"; nonce="N0NCE==", </b.css>; rel=preload; nonce="N0NCE=="`);
     expect(out).not.toContain(placeholder);
   });
 });
