@@ -11,19 +11,22 @@ import {
 import { useMemo, useState, useTransition } from "react";
 
 import type { FormAction } from "@/lib/actions/action-state";
-import { queueFiltersToSearch, type QueueFilters } from "@/lib/desk/queue-filters";
+import type { QueueFilters } from "@/lib/desk/queue-filters";
+import { queueSearch, type QueuePage } from "@/lib/desk/queue-page";
 import type { DeskView } from "@/lib/desk/saved-views";
+import { viewCountLabel } from "@/lib/desk/view-count";
 import { useDeskQueue, useDeskViews } from "@/lib/swr/use-desk-queue";
 import type { TicketSummary } from "@/lib/tickets/ticket-types";
 
 import { queueColumns } from "./queue-columns";
 import { QueueFilterBar } from "./queue-filter-bar";
+import { QueuePager } from "./queue-pager";
 import { SaveViewForm } from "./save-view-form";
 
 type Option = { id: string; name: string };
 type Props = {
   vendor: string;
-  initial: TicketSummary[];
+  initial: QueuePage<TicketSummary>;
   initialFilters?: QueueFilters;
   views: DeskView[];
   assignees: Option[];
@@ -43,21 +46,26 @@ export function QueueTable({
   saveViewAction,
 }: Props) {
   const [filters, setFiltersState] = useState<QueueFilters>(initialFilters);
-  const [initialSearch] = useState(() => queueFiltersToSearch(initialFilters));
-  const [activeView, setActiveView] = useState(initialSearch ? "" : "open");
-  // The filters live in the address, so a reload, the back button and a shared link keep them.
-  const setFilters = (next: QueueFilters) => {
-    setFiltersState(next);
-    const search = queueFiltersToSearch(next);
+  const [page, setPage] = useState(initial.page);
+  const [initialSearch] = useState(() => queueSearch(initialFilters, initial.page));
+  const [activeView, setActiveView] = useState(queueSearch(initialFilters, 1) ? "" : "open");
+  // Filters and page live in the address, so a reload, the back button and a shared link keep them.
+  const show = (nextFilters: QueueFilters, nextPage: number) => {
+    setFiltersState(nextFilters);
+    setPage(nextPage);
+    setSelection({});
+    const search = queueSearch(nextFilters, nextPage);
     window.history.replaceState(null, "", `${window.location.pathname}${search ? `?${search}` : ""}`);
   };
+  // Other filters are another list: it starts on its first page.
+  const setFilters = (next: QueueFilters) => show(next, 1);
   const [sorting, setSorting] = useState<SortingState>([]);
   const [selection, setSelection] = useState<RowSelectionState>({});
   const [assignTo, setAssignTo] = useState("");
   const [message, setMessage] = useState<string | null>(null);
   const [pending, startTransition] = useTransition();
-  const isInitial = queueFiltersToSearch(filters) === initialSearch;
-  const queue = useDeskQueue(vendor, filters, isInitial ? initial : undefined);
+  const isInitial = queueSearch(filters, page) === initialSearch;
+  const queue = useDeskQueue(vendor, filters, page, isInitial ? initial : undefined);
   const views = useDeskViews(vendor, initialViews);
   const data = useMemo(() => queue.data?.tickets ?? [], [queue.data]);
   const columns = useMemo(() => queueColumns(vendor), [vendor]);
@@ -97,11 +105,10 @@ export function QueueTable({
             onClick={() => {
               setActiveView(v.id);
               setFilters(v.filters);
-              setSelection({});
             }}
             className="min-h-9 rounded border border-stone-300 bg-white px-3 text-sm aria-pressed:bg-stone-800 aria-pressed:text-white"
           >
-            {v.name} <span className="num">({v.count})</span>
+            {v.name} <span className="num">({viewCountLabel(v.count)})</span>
           </button>
         ))}
       </nav>
@@ -199,6 +206,13 @@ export function QueueTable({
           </tbody>
         </table>
       </div>
+      <QueuePager
+        page={queue.data?.page ?? page}
+        pageSize={queue.data?.pageSize ?? initial.pageSize}
+        shown={data.length}
+        hasMore={queue.data?.hasMore ?? false}
+        onPage={(next) => show(filters, next)}
+      />
     </div>
   );
 }

@@ -7,6 +7,7 @@ import { selectTickets, toTicketDetail } from "@/lib/tickets/ticket-select";
 import type { TicketSummary } from "@/lib/tickets/ticket-types";
 
 import type { QueueFilters } from "./queue-filters";
+import { QUEUE_PAGE_SIZE, type QueuePage } from "./queue-page";
 
 /** Applies queue filters to a `tickets as t` query; without a status filter, closed tickets are left out. */
 export function applyQueueFilters<Q extends Knex.QueryBuilder>(q: Q, f: QueueFilters, userId: string): Q {
@@ -42,20 +43,39 @@ export async function listQueue({
   userId,
   filters,
   limit = 500,
+  offset = 0,
 }: {
   vendorId: string;
   userId: string;
   filters: QueueFilters;
   limit?: number;
+  offset?: number;
 }): Promise<TicketSummary[]> {
   const [column, direction] = ORDER[filters.sort ?? "newest"];
   const q = applyQueueFilters(selectTickets(db, vendorId), filters, userId)
     .orderBy(column, direction)
     .orderBy("t.number", direction)
-    .limit(limit);
+    .limit(limit)
+    .offset(offset);
   const rows = await q;
   return rows.map((r) => {
     const { body: _body, machineName: _m, closedAt: _c, satisfaction: _s, satisfactionComment: _sc, ...summary } = toTicketDetail(r);
     return summary;
   });
+}
+
+/** One page of the Desk queue (pages start at 1); one row more than a page tells whether another follows. */
+export async function listQueuePage({
+  vendorId,
+  userId,
+  filters,
+  page,
+}: {
+  vendorId: string;
+  userId: string;
+  filters: QueueFilters;
+  page: number;
+}): Promise<QueuePage<TicketSummary>> {
+  const rows = await listQueue({ vendorId, userId, filters, limit: QUEUE_PAGE_SIZE + 1, offset: (page - 1) * QUEUE_PAGE_SIZE });
+  return { tickets: rows.slice(0, QUEUE_PAGE_SIZE), page, pageSize: QUEUE_PAGE_SIZE, hasMore: rows.length > QUEUE_PAGE_SIZE };
 }

@@ -4,7 +4,9 @@ import { db } from "@/lib/db/knex";
 
 import { applyQueueFilters } from "./list-queue";
 import { parseQueueFilters, type QueueFilters } from "./queue-filters";
+import { VIEW_COUNT_CAP } from "./view-count";
 
+/** `count` stops one past VIEW_COUNT_CAP (lib/desk/view-count.ts). */
 export type DeskView = { id: string; name: string; filters: QueueFilters; builtIn: boolean; count: number };
 
 const BUILT_IN: { id: string; name: string; filters: QueueFilters }[] = [
@@ -15,9 +17,10 @@ const BUILT_IN: { id: string; name: string; filters: QueueFilters }[] = [
 ];
 
 async function countFor(vendorId: string, userId: string, filters: QueueFilters): Promise<number> {
-  const row = await applyQueueFilters(db("tickets as t").where("t.vendor_id", vendorId), filters, userId)
-    .count<{ count: string }[]>("* as count")
-    .first();
+  const capped = applyQueueFilters(db("tickets as t").where("t.vendor_id", vendorId), filters, userId)
+    .select(db.raw("1"))
+    .limit(VIEW_COUNT_CAP + 1);
+  const row = await db.from(capped.as("capped")).count<{ count: string }[]>("* as count").first();
   return Number(row?.count ?? 0);
 }
 

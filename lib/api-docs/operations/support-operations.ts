@@ -1,7 +1,7 @@
 import { ticketMessageSchema } from "@/content-schema/api-queries";
 import { openObject, ticketCreatedResponseSchema } from "@/content-schema/api-responses";
 import { createTicketSchema } from "@/content-schema/ticket-create";
-import { queueFiltersSchema } from "@/lib/desk/queue-filters";
+import { QUEUE_PAGE_SIZE, queueQuerySchema } from "@/lib/desk/queue-page";
 
 import type { ApiOperation } from "../api-operation";
 
@@ -14,10 +14,14 @@ export const supportOperations: ApiOperation[] = [
     tag: "Support",
     summary: "A customer's own tickets, or the Desk queue for staff",
     access: "token",
-    description:
-      "Customers get their tickets in the customer's view; support staff and admins get the queue, filtered by the query (unknown filters are dropped).",
-    query: queueFiltersSchema,
-    responses: { "200": { description: "The tickets.", schema: openObject("{ tickets: [...] }") } },
+    description: `Customers get their tickets in the customer's view; support staff and admins get the queue, filtered by the query (unknown filters are dropped), ${QUEUE_PAGE_SIZE} tickets a page: \`page\` picks one, \`hasMore\` says whether another follows.`,
+    query: queueQuerySchema,
+    responses: {
+      "200": {
+        description: "The tickets; for staff, one page of the queue.",
+        schema: openObject("{ tickets: [...] } or, for staff, { tickets: [...], page, pageSize, hasMore }"),
+      },
+    },
   },
   {
     method: "POST",

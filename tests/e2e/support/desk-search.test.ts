@@ -1,5 +1,6 @@
 import { afterAll, describe, expect, it } from "vitest";
 
+import { QUEUE_PAGE_SIZE } from "@/lib/desk/queue-page";
 import { mustExist } from "@/tests/support/must-exist";
 
 import { openBrowser, screenshot, type Session } from "../support/browser";
@@ -46,5 +47,42 @@ describe("desk search", () => {
     await expect(s.page.getByPlaceholder("Ticket number or words").inputValue()).resolves.toBe(`#${ticket.number}`);
     await expect(s.page.locator("select:has(option[value=target])").inputValue()).resolves.toBe("target");
     await expect(rows.evaluateAll((trs) => trs.map((tr) => tr.getAttribute("data-ticket-id")))).resolves.toEqual([ticket.id]);
+  });
+
+  it("pages through a long queue, and the page stays in the address across a reload", async () => {
+    const db = e2eDb();
+    const vendor = mustExist(await db("vendors").where({ slug: "northbeck" }).first("id"), "vendor");
+    const customer = mustExist(await db("users").where({ email: "maker@example.test" }).first("id"), "customer");
+    // Tagged so that only they are listed, and a year old so that no other test's "newest" changes.
+    await db.raw(
+      `insert into tickets (vendor_id, number, customer_id, subject, body, status, priority, tags, idempotency_key, first_response_due_at, created_at, last_activity_at)
+       select ?, (select max(number) from tickets where vendor_id = ?) + g, ?, 'Paging check ' || g, 'A question of the paging check.', 'new', 'normal',
+              array['paging-check'], 'paging-check-' || g, now(), now() - interval '1 year' + g * interval '1 minute', now()
+       from generate_series(1, ?) g`,
+      [vendor.id, vendor.id, customer.id, QUEUE_PAGE_SIZE + 3],
+    );
+    const s = await openBrowser();
+    sessions.push(s);
+    s.page.setDefaultNavigationTimeout(90_000);
+    await signInWithPassword(s.page, "support1@northbeck.test", "/northbeck/desk?tag=paging-check");
+    await s.page.goto("/northbeck/desk?tag=paging-check");
+    const rows = s.page.locator("tr[data-ticket-id]");
+    await rows.first().waitFor({ timeout: 30_000 });
+    await expect(rows.count()).resolves.toBe(QUEUE_PAGE_SIZE);
+    await expect(rows.first().textContent()).resolves.toContain(`Paging check ${QUEUE_PAGE_SIZE + 3}`);
+
+    await s.page.getByRole("button", { name: "Next page →" }).click();
+    await expect.poll(() => new URL(s.page.url()).searchParams.get("page"), { timeout: 10_000 }).toBe("2");
+    await expect.poll(() => rows.count(), { timeout: 20_000 }).toBe(3);
+    await expect(s.page.getByRole("button", { name: "Next page →" }).isDisabled()).resolves.toBe(true);
+    await screenshot(s.page, "desk-queue-page-2");
+
+    await s.page.reload();
+    await rows.first().waitFor({ timeout: 30_000 });
+    await expect(rows.count()).resolves.toBe(3);
+    await expect(rows.last().textContent()).resolves.toContain("Paging check 1");
+    await s.page.getByRole("button", { name: "← Previous page" }).click();
+    await expect.poll(() => rows.count(), { timeout: 20_000 }).toBe(QUEUE_PAGE_SIZE);
+    await expect.poll(() => new URL(s.page.url()).searchParams.get("page")).toBeNull();
   });
 });

@@ -4,8 +4,9 @@ import { QueueTable } from "@/components/desk/queue-table";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { listAssignees, listMaterialOptions } from "@/lib/desk/desk-options";
-import { listQueue } from "@/lib/desk/list-queue";
+import { listQueuePage } from "@/lib/desk/list-queue";
 import { parseQueueFilters } from "@/lib/desk/queue-filters";
+import { parseQueuePage } from "@/lib/desk/queue-page";
 import { listDeskViews } from "@/lib/desk/saved-views";
 
 import { bulkAssignAction, saveViewAction } from "./actions";
@@ -17,9 +18,10 @@ type Props = { params: Promise<{ vendor: string }>; searchParams: Promise<Record
 export default async function DeskPage({ params, searchParams }: Props) {
   const { vendor: slug } = await params;
   const { vendor, user } = await requirePageAccess(slug, "desk.use", `/${slug}/desk`);
-  const filters = parseQueueFilters(await searchParams);
+  const query = await searchParams;
+  const filters = parseQueueFilters(query);
   const [tickets, views, assignees, materials] = await Promise.all([
-    listQueue({ vendorId: vendor.id, userId: user!.id, filters }),
+    listQueuePage({ vendorId: vendor.id, userId: user!.id, filters, page: parseQueuePage(query.page) }),
     listDeskViews({ vendorId: vendor.id, userId: user!.id }),
     listAssignees({ vendorId: vendor.id }),
     listMaterialOptions({ vendorId: vendor.id }),

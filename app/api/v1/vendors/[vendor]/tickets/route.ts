@@ -2,8 +2,8 @@ import { NextResponse } from "next/server";
 
 import { createTicketSchema } from "@/content-schema/ticket-create";
 import { requireMember } from "@/lib/auth/access";
-import { listQueue } from "@/lib/desk/list-queue";
-import { queueFiltersSchema } from "@/lib/desk/queue-filters";
+import { listQueuePage } from "@/lib/desk/list-queue";
+import { queueQuerySchema } from "@/lib/desk/queue-page";
 import { parseInput } from "@/lib/errors/zod-field-errors";
 import { readJson } from "@/lib/http/read-json";
 import { withVendor } from "@/lib/http/with-vendor";
@@ -17,8 +17,8 @@ export const GET = withVendor(async (request, { access }) => {
   if (who.kind === "customer")
     return NextResponse.json({ tickets: await listCustomerTickets({ vendorId: access.vendor.id, customerId: who.userId }) });
   // Unknown or malformed filters are dropped, never refused: a saved link keeps working.
-  const filters = queueFiltersSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams)).data ?? {};
-  return NextResponse.json({ tickets: await listQueue({ vendorId: access.vendor.id, userId: who.userId, filters }) });
+  const { page = 1, ...filters } = queueQuerySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams)).data ?? {};
+  return NextResponse.json(await listQueuePage({ vendorId: access.vendor.id, userId: who.userId, filters, page }));
 });
 
 // POST /api/v1/vendors/{vendor}/tickets: open a ticket; repeating the idempotency key returns the same ticket (200, not 201).
