@@ -22,3 +22,19 @@ export const cutterQrQuerySchema = z.object({
 
 /** POST /api/v1/vendors/{vendor}/tickets/{ticket}/messages */
 export const ticketMessageSchema = z.object({ body: z.string().trim().min(1).max(20_000) });
+
+/** How many of a ticket's latest messages a thread shows when it is folded. */
+export const LATEST_THREAD_MESSAGES = 30;
+
+/** GET /api/v1/vendors/{vendor}/tickets/{ticket} and the ticket pages: the thread folded to its latest messages, or all of it. */
+export const ticketThreadQuerySchema = z.object({
+  messages: z
+    .enum(["latest", "all"])
+    .default("latest")
+    .catch("latest")
+    .describe(
+      `latest: the question and the ${LATEST_THREAD_MESSAGES} latest messages, with earlierCount for the rest; all: every message.`,
+    ),
+});
+
+export type ThreadMessages = z.infer<typeof ticketThreadQuerySchema>["messages"];

@@ -65,6 +65,8 @@ export type LinkedSheet = {
 export type TicketThread = {
   ticket: TicketDetail;
   messages: TicketMessage[];
+  /** Messages before the shown ones that the thread folds away (0 when the whole thread is shown). */
+  earlierCount: number;
   attachments: TicketAttachment[];
   links: LinkedSheet[];
 };

@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 
 import { sheetFrontMatterSchema } from "@/content-schema/sheet-front-matter";
+import type { MessageVisibility } from "@/content-schema/ticket-status";
 import type { Vendor } from "@/content-schema/vendor";
 import { db } from "@/lib/db/knex";
 import { createTicket } from "@/lib/tickets/create-ticket";
@@ -73,4 +74,28 @@ export async function openTicket(vendorId: string, customerId: string, overrides
       ...overrides,
     },
   });
+}
+
+/**
+ * A long thread in one insert: `Message 1` … `Message n`, a second apart in that order, alternating customer and
+ * support. `note` picks the 1-based positions written as internal notes.
+ */
+export async function insertThreadMessages(
+  ids: { vendorId: string; ticketId: string; customerId: string; supportId: string },
+  count: number,
+  note: (n: number) => boolean = () => false,
+) {
+  const start = Date.now() - count * 1000;
+  const rows = Array.from({ length: count }, (_, i) => {
+    const visibility: MessageVisibility = note(i + 1) ? "note" : "public";
+    return {
+      vendor_id: ids.vendorId,
+      ticket_id: ids.ticketId,
+      author_id: i % 2 ? ids.supportId : ids.customerId,
+      visibility,
+      body: `Message ${i + 1}`,
+      created_at: new Date(start + i * 1000),
+    };
+  });
+  return db("ticket_messages").insert(rows).returning<{ id: string; body: string }[]>(["id", "body"]);
 }

@@ -1,4 +1,4 @@
-import { ticketMessageSchema } from "@/content-schema/api-queries";
+import { ticketMessageSchema, ticketThreadQuerySchema } from "@/content-schema/api-queries";
 import { openObject, ticketCreatedResponseSchema } from "@/content-schema/api-responses";
 import { createTicketSchema } from "@/content-schema/ticket-create";
 import { QUEUE_PAGE_SIZE, queueQuerySchema } from "@/lib/desk/queue-page";
@@ -52,8 +52,14 @@ export const supportOperations: ApiOperation[] = [
     tag: "Support",
     summary: "One ticket with its thread",
     access: "token",
+    description:
+      "A long thread comes folded: the question, the latest messages, and earlierCount for those left out; messages=all gives every one.",
+    query: ticketThreadQuerySchema,
     responses: {
-      "200": { description: "Customers get their own ticket in the customer's view.", schema: openObject("{ ticket, messages }") },
+      "200": {
+        description: "Customers get their own ticket in the customer's view.",
+        schema: openObject("{ ticket, messages, earlierCount, attachments, links }"),
+      },
     },
   },
   {

@@ -4,20 +4,28 @@ import { customerReplyAction, rateTicketAction } from "@/app/[vendor]/(customer)
 import { CustomerReplyForm } from "@/components/support/customer-reply-form";
 import { RatingForm } from "@/components/support/rating-form";
 import { SafeMarkdown } from "@/components/support/safe-markdown";
+import { ThreadFold } from "@/components/support/thread-fold";
 import { formatDateTime, StatusBadge } from "@/components/support/ticket-badges";
 import { AttachmentList, TicketThreadView } from "@/components/support/ticket-thread";
 import { PageHeader } from "@/components/ui/page-header";
+import { ticketThreadQuerySchema } from "@/content-schema/api-queries";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { toCustomerThread } from "@/lib/tickets/customer-view";
 import { getTicketThread } from "@/lib/tickets/get-ticket-thread";
 
 export const metadata = { title: "Ticket" };
 
-export default async function CustomerTicketPage({ params }: { params: Promise<{ vendor: string; ticket: string }> }) {
+type Props = {
+  params: Promise<{ vendor: string; ticket: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+};
+
+export default async function CustomerTicketPage({ params, searchParams }: Props) {
   const { vendor: slug, ticket: ticketId } = await params;
+  const { messages: fold } = ticketThreadQuerySchema.parse(await searchParams);
   const { vendor, user } = await requirePageAccess(slug, "support.use", `/${slug}/support`);
-  const { ticket, messages, attachments, links } = toCustomerThread(
-    await getTicketThread({ vendorId: vendor.id, ticketId, viewer: { kind: "customer", userId: user!.id } }),
+  const { ticket, messages, earlierCount, attachments, links } = toCustomerThread(
+    await getTicketThread({ vendorId: vendor.id, ticketId, messages: fold, viewer: { kind: "customer", userId: user!.id } }),
   );
   return (
     <>
@@ -36,6 +44,12 @@ export default async function CustomerTicketPage({ params }: { params: Promise<{
             <SafeMarkdown source={ticket.body} />
             <AttachmentList vendorSlug={vendor.slug} attachments={attachments.filter((a) => !a.messageId)} />
           </article>
+          <ThreadFold
+            threadPath={`/${vendor.slug}/support/tickets/${ticket.id}`}
+            messages={fold}
+            shown={messages.length}
+            earlierCount={earlierCount}
+          />
           <TicketThreadView vendorSlug={vendor.slug} messages={messages} attachments={attachments} />
           {ticket.status === "closed" ? (
             <RatingForm rateTicketAction={rateTicketAction} vendor={vendor.slug} ticketId={ticket.id} current={ticket.satisfaction} />

@@ -9,6 +9,7 @@ import { SafeMarkdown } from "@/components/support/safe-markdown";
 import { DueBadge, formatDateTime, PriorityBadge, StatusBadge } from "@/components/support/ticket-badges";
 import { AttachmentList } from "@/components/support/ticket-thread";
 import { PageHeader } from "@/components/ui/page-header";
+import { ticketThreadQuerySchema } from "@/content-schema/api-queries";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { getCustomerContext } from "@/lib/desk/customer-context";
 import { listAssignees, listPickerVersions } from "@/lib/desk/desk-options";
@@ -18,10 +19,16 @@ import { listTicketHistory } from "@/lib/tickets/list-ticket-history";
 
 export const metadata = { title: "Ticket · Desk" };
 
-export default async function DeskTicketPage({ params }: { params: Promise<{ vendor: string; ticket: string }> }) {
+type Props = {
+  params: Promise<{ vendor: string; ticket: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+};
+
+export default async function DeskTicketPage({ params, searchParams }: Props) {
   const { vendor: slug, ticket: ticketId } = await params;
+  const { messages } = ticketThreadQuerySchema.parse(await searchParams);
   const { vendor, user } = await requirePageAccess(slug, "desk.use", `/${slug}/desk`);
-  const thread = await getTicketThread({ vendorId: vendor.id, ticketId, viewer: { kind: "staff" } });
+  const thread = await getTicketThread({ vendorId: vendor.id, ticketId, messages, viewer: { kind: "staff" } });
   const { ticket, links, attachments } = thread;
   const [context, assignees, versions, snippets, history] = await Promise.all([
     getCustomerContext({ vendorId: vendor.id, customerId: ticket.customerId, excludeTicketId: ticket.id }),
@@ -65,7 +72,7 @@ export default async function DeskTicketPage({ params }: { params: Promise<{ ven
             <SafeMarkdown source={ticket.body} />
             <AttachmentList vendorSlug={vendor.slug} attachments={attachments.filter((a) => !a.messageId)} />
           </article>
-          <DeskThread vendor={vendor.slug} initial={thread} />
+          <DeskThread vendor={vendor.slug} messages={messages} initial={thread} />
           <ReplyEditor
             staffReplyAction={staffReplyAction}
             vendor={vendor.slug}
