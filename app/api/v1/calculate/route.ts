@@ -1,5 +1,3 @@
-import { NextResponse } from "next/server";
-
 import { runCalculation } from "@/lib/adapt/calculate/run-calculation";
 import { readJson } from "@/lib/http/read-json";
 import { withPublic } from "@/lib/http/with-vendor";
@@ -12,8 +10,8 @@ export const POST = withPublic(
     const body = await readJson(request, MAX_BODY_BYTES);
     const outcome = runCalculation(body);
     if (!outcome.ok)
-      return NextResponse.json({ error: "invalid_input", message: outcome.message, fieldErrors: outcome.errors }, { status: 400 });
-    return NextResponse.json(outcome.result);
+      return Response.json({ error: "invalid_input", message: outcome.message, fieldErrors: outcome.errors }, { status: 400 });
+    return Response.json(outcome.result);
   },
   { limit: 120, windowSeconds: 60 },
 );
