@@ -83,7 +83,7 @@ function pinned(response: Response): Response {
 export function withPublic(handler: (request: NextRequest) => Promise<Response>, rate = DEFAULT_PUBLIC_RATE) {
   return async (request: NextRequest): Promise<Response> => {
     try {
-      await consumeRateLimit({ key: `public:${new URL(request.url).pathname}:${clientIp(request.headers)}`, ...scaled(rate) });
+      await consumeRateLimit({ key: `public:${request.nextUrl.pathname}:${clientIp(request.headers)}`, ...scaled(rate) });
       return await handler(request);
     } catch (error) {
       return errorResponse(error);

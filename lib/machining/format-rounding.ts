@@ -1,17 +1,5 @@
 import type { QuantityKind, UnitSystem } from "./quantities";
-
-// Round half away from zero on the decimal digits, after shedding binary noise (4.762499999… is 4.7625).
-const roundTo = (value: number, decimals: number) => {
-  const clean = Number(value.toPrecision(12));
-  const shifted =
-    Math.abs(clean) >= 1e-6 && Math.abs(clean) < 1e15 ? Number(`${Math.abs(clean)}e${decimals}`) : Math.abs(clean) * 10 ** decimals;
-  return (Math.sign(clean) * Math.round(shifted)) / 10 ** decimals;
-};
-
-const fixed = (value: number, decimals: number) => {
-  const s = roundTo(value, decimals).toFixed(decimals);
-  return s.charCodeAt(0) === 45 && (s === "-0" || /^-0\.0*$/.test(s)) ? s.slice(1) : s;
-};
+import { fixed, toPrecision3 } from "./round-decimal";
 
 /** Fixed decimals, then trailing zeros dropped down to `keep` decimals. */
 const trimmed = (value: number, decimals: number, keep = 0) => {
@@ -28,7 +16,7 @@ const bySize = (value: number, small: number, large: number, threshold: number) 
 /** Three significant figures, zeros kept (0.0500, 0.00200, 0.250): chip loads read alike in both systems. */
 const significant3 = (value: number) => {
   if (value === 0) return "0.000";
-  const rounded = Number(value.toPrecision(3));
+  const rounded = toPrecision3(value);
   return fixed(rounded, Math.max(0, 2 - Math.floor(Math.log10(Math.abs(rounded)))));
 };
 
