@@ -23,6 +23,7 @@ export const TENANT_TABLES = [
   "sheet_version_activity",
   "search_words",
   "search_documents",
+  "search_index_versions",
   "inbound_mail_log",
   "problem_reports",
   "reply_snippets",

@@ -402,6 +402,12 @@ export interface SearchDocumentRow {
   indexed_at: Date;
 }
 
+export interface SearchIndexVersionRow {
+  vendor_id: string;
+  /** bigint: moved by triggers on every change to the vendor's search_documents or search_words. */
+  version: string;
+}
+
 export interface SearchWordRow {
   vendor_id: string;
   word: string;
@@ -635,6 +641,7 @@ declare module "knex/types/tables" {
     rate_limit_buckets: RateLimitBucketRow;
     reply_snippets: ReplySnippetRow;
     search_documents: SearchDocumentRow;
+    search_index_versions: SearchIndexVersionRow;
     search_words: SearchWordRow;
     setups: SetupRow;
     sheet_version_activity: Knex.CompositeTableType<

@@ -99,25 +99,55 @@ select ${head}(select count(*)::int from matched) as total,
   );
 }
 
+/** The vendor's search index version (see the search_index_versions migration) as text; 0 before its first change. */
+const seenCte = (vendorId: string) =>
+  frag("seen as (select coalesce((select v.version from search_index_versions v where v.vendor_id = ?), 0)::text as version)", vendorId);
+
+function stepSql(q: EngineQuery, known?: { version: string }): Fragment {
+  const parts = searchParts(q);
+  const filters = partConditions(q.filters).map((p) => p.cond);
+  const where: Fragment[] = [frag("d.vendor_id = ?", q.vendorId), frag("d.kind = 'sheet'"), ...filters];
+  if (filters.length === 0 && parts.anyMatch) where.push(parts.anyMatch);
+  if (!known)
+    return compose(
+      `with $1,
+matched as (select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from search_documents d cross join q where $3),
+$4`,
+      parts.queryCte,
+      parts.score,
+      joinFrags(where, " and "),
+      resultsFrom(q, parts, "", cols),
+    );
+  return compose(
+    `with $1, $2,
+matched as (select d.doc_id, d.published_at, ${FACET_COLS}, $3 as score from search_documents d cross join q
+  where $4 and (select version from seen) = $5),
+$6`,
+    parts.queryCte,
+    seenCte(q.vendorId),
+    parts.score,
+    joinFrags(where, " and "),
+    frag("?::text", known.version),
+    resultsFrom(q, parts, "(select version from seen) as version, ", cols),
+  );
+}
+
 /**
  * The statement of one step of a search: the words of the vendor's index close to each long word
  * (pg_trgm on search_words) join the full-text query; then the matching documents with a score,
  * the requested page, the total, the facet counts over all matches, and cutters whose SKU was typed.
  */
 export function buildSearchSql(q: EngineQuery): Fragment {
-  const parts = searchParts(q);
-  const filters = partConditions(q.filters).map((p) => p.cond);
-  const where: Fragment[] = [frag("d.vendor_id = ?", q.vendorId), frag("d.kind = 'sheet'"), ...filters];
-  if (filters.length === 0 && parts.anyMatch) where.push(parts.anyMatch);
-  return compose(
-    `with $1,
-matched as (select d.doc_id, d.published_at, ${FACET_COLS}, $2 as score from search_documents d cross join q where $3),
-$4`,
-    parts.queryCte,
-    parts.score,
-    joinFrags(where, " and "),
-    resultsFrom(q, parts, "", cols),
-  );
+  return stepSql(q);
+}
+
+/**
+ * The same statement, searched only while the vendor's search index is still at `version` (it answers the version
+ * it read, and nothing matched when that differs): for a step known to be the first that matched anything when the
+ * index was at that version, so the steps before it need not be searched again.
+ */
+export function buildKnownStepSql(q: EngineQuery, version: string): Fragment {
+  return stepSql(q, { version });
 }
 
 /**
@@ -139,8 +169,8 @@ function laterBound(filters: readonly QueryParts[], conds: readonly (Fragment | 
  * that matches anything, as running them one by one would: one pass over the vendor's documents within the widest
  * bound of the steps marks each (by id alone) with the first step it meets; the lowest mark is the step answered
  * (the last step when nothing matched), and the documents bearing it are read again for their score, facets and
- * the page. Answers that step's index in `queries` beside the results. Used for the steps after a first step that
- * matched nothing, or for every step of a search that relaxed when last run.
+ * the page. Answers that step's index in `queries` and the vendor's search index version beside the results. Used
+ * for every step of a search whose first step's own statement matched nothing.
  */
 export function buildFirstMatchingStepSql(queries: readonly EngineQuery[]): Fragment {
   const [first] = queries;
@@ -156,7 +186,7 @@ export function buildFirstMatchingStepSql(queries: readonly EngineQuery[]): Frag
     parts,
   );
   return compose(
-    `with $1,
+    `with $1, $7,
 marked as (select * from (select d.doc_id, case $2 end as step from search_documents d cross join q where $3) as l where l.step is not null),
 chosen as (select coalesce(min(step), ${queries.length - 1}) as step from marked),
 matched as (select d.doc_id, d.published_at, ${FACET_COLS}, $4 as score
@@ -167,6 +197,7 @@ $6`,
     joinFrags([frag("d.vendor_id = ? and d.kind = 'sheet'", first.vendorId), ...bound], " and "),
     parts.score,
     frag("d.vendor_id = ?", first.vendorId),
-    resultsFrom(first, parts, "(select step from chosen) as step, ", cols),
+    resultsFrom(first, parts, "(select step from chosen) as step, (select version from seen) as version, ", cols),
+    seenCte(first.vendorId),
   );
 }

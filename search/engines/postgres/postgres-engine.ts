@@ -5,7 +5,7 @@ import { LruCache } from "@/lib/mdx/lru-cache";
 import type { EngineQuery, EngineResult, FacetCounts, FacetName, SearchEngine } from "../engine-types";
 import { compareFacetValues } from "../facet-order";
 import { rowToDoc } from "./pg-columns";
-import { buildFirstMatchingStepSql, buildSearchSql } from "./pg-search-sql";
+import { buildFirstMatchingStepSql, buildKnownStepSql, buildSearchSql } from "./pg-search-sql";
 import { removeRows, replaceVendorRows, upsertRows } from "./pg-write";
 import { numberPlaceholders, preparedQuery, runNative, type NativeStatement } from "./prepared-query";
 
@@ -30,34 +30,48 @@ const toResult = (row: Raw): EngineResult => ({
   cutters: row.cutters.map(rowToDoc),
 });
 
-// Statements by everything but the vendor, built with a stand-in vendor that each search replaces with its own.
+// Statements by everything but the vendor (and the index version a "known" statement expects), built with stand-ins
+// that each search replaces with its own.
 const VENDOR = "\u0000vendor";
+const VERSION = "\u0000version";
 const recentStatements = new LruCache<string, NativeStatement>(500);
-// Searches (vendor, text, filters and page) whose first step matched nothing when last run: typeahead and popular
-// queries repeat, so the next one runs every step in one statement at once (exact even if the first step matches by now).
-const relaxedLately = new LruCache<string, true>(5000);
+
+/** What a search runs: its first step's own statement, every step at once, or a step known to answer first. */
+type Statement = { what: "first" } | { what: "every" } | { what: "known"; step: number; version: string };
 
 /**
- * What a search runs, as `$n` text:
- * - `"first"`: the first step's own search statement (the statement the benchmark runs bare);
- * - `"relaxed"`: the steps after it, answering the first of them that matches anything;
- * - `"every"`: every step, answering the first that matches anything (for searches that relaxed lately).
- * Built once per text, filters and page (`shapeKey`) with a stand-in vendor that each search replaces with its own.
+ * A statement as `$n` text:
+ * - `first`: the first step's own search statement (the statement the benchmark runs bare);
+ * - `every`: every step, answering the first that matches anything and the vendor's search index version;
+ * - `known`: step `step`'s own statement, answered while the vendor's index is still at `version`.
+ * Built once per text, filters and page (`shapeKey`) and kind.
  */
-function statementOf(what: "first" | "relaxed" | "every", queries: readonly EngineQuery[], shapeKey?: string): NativeStatement {
+function statementOf(s: Statement, queries: readonly EngineQuery[], shapeKey?: string): NativeStatement {
   const vendorId = queries[0].vendorId;
-  const build = (qs: readonly EngineQuery[]) => {
-    const { sql, bindings } = what === "first" ? buildSearchSql(qs[0]) : buildFirstMatchingStepSql(what === "every" ? qs : qs.slice(1));
+  const version = s.what === "known" ? s.version : "";
+  const build = (qs: readonly EngineQuery[], v: string) => {
+    const { sql, bindings } =
+      s.what === "first" ? buildSearchSql(qs[0]) : s.what === "every" ? buildFirstMatchingStepSql(qs) : buildKnownStepSql(qs[s.step], v);
     const native = numberPlaceholders(sql, bindings);
     if (!native) throw new Error("The search statement has text only knex can number.");
     return native;
   };
-  if (queries.some((q) => q.vendorId !== vendorId)) return build(queries);
-  const key = `${what}:${shapeKey !== undefined ? `k${shapeKey}` : `q${JSON.stringify(queries.map(({ vendorId: _, ...rest }) => rest))}`}`;
+  if (queries.some((q) => q.vendorId !== vendorId)) return build(queries, version);
+  const kind = s.what === "known" ? `known${s.step}` : s.what;
+  const key = `${kind}:${shapeKey !== undefined ? `k${shapeKey}` : `q${JSON.stringify(queries.map(({ vendorId: _, ...rest }) => rest))}`}`;
   let cached = recentStatements.get(key);
-  if (!cached) recentStatements.set(key, (cached = build(queries.map((q) => ({ ...q, vendorId: VENDOR })))));
-  return { text: cached.text, values: cached.values.map((v) => (v === VENDOR ? vendorId : v)) };
+  if (!cached) {
+    const standIns = queries.map((q) => ({ ...q, vendorId: VENDOR }));
+    recentStatements.set(key, (cached = build(standIns, VERSION)));
+  }
+  return { text: cached.text, values: cached.values.map((v) => (v === VENDOR ? vendorId : v === VERSION ? version : v)) };
 }
+
+// Searches (vendor, text, filters and page) whose first step matched nothing when last run, with the step that
+// answered and the vendor's search index version then: while the index stays at that version, the steps before
+// the one that answered still match nothing, so that step's own statement answers exactly (typeahead and popular
+// queries repeat).
+const relaxedLately = new LruCache<string, { step: number; version: string }>(5000);
 
 /**
  * The default engine: the search_documents table (weighted tsvector, pg_trgm, unaccent) in the app's own database.
@@ -76,21 +90,23 @@ export function createPostgresEngine(knex: Knex, reads: () => Promise<Knex> = as
       const [row] = await preparedQuery<Raw>(await reads(), sql, bindings);
       return toResult(row);
     },
-    // Most searches match at their first step and pay for that step's own statement alone; when it matches nothing,
-    // the later steps run in a second statement, and the same search next time runs every step in one.
+    // Most searches match at their first step and pay for that step's own statement alone. When it matches nothing,
+    // every step runs in a second statement; the same search next time runs the step that answered, in one.
     async searchSteps(queries: readonly EngineQuery[], shapeKey?: string) {
       const reader = await reads();
       const seen = shapeKey !== undefined && queries.length > 1 ? `${queries[0].vendorId}\u0000${shapeKey}` : undefined;
-      if (seen !== undefined && relaxedLately.get(seen)) {
-        const [row] = await runNative<Raw & { step: number }>(reader, statementOf("every", queries, shapeKey));
-        if (row.step === 0) relaxedLately.delete(seen);
-        return { step: row.step, result: toResult(row), roundTrips: 1 };
+      const known = seen !== undefined ? relaxedLately.get(seen) : undefined;
+      if (known) {
+        const [row] = await runNative<Raw & { version: string }>(reader, statementOf({ what: "known", ...known }, queries, shapeKey));
+        if (row.version === known.version) return { step: known.step, result: toResult(row), roundTrips: 1 };
+      } else {
+        const [first] = await runNative<Raw>(reader, statementOf({ what: "first" }, queries, shapeKey));
+        if (first.total > 0 || queries.length === 1) return { step: 0, result: toResult(first), roundTrips: 1 };
       }
-      const [first] = await runNative<Raw>(reader, statementOf("first", queries, shapeKey));
-      if (first.total > 0 || queries.length === 1) return { step: 0, result: toResult(first), roundTrips: 1 };
-      if (seen !== undefined) relaxedLately.set(seen, true);
-      const [row] = await runNative<Raw & { step: number }>(reader, statementOf("relaxed", queries, shapeKey));
-      return { step: row.step + 1, result: toResult(row), roundTrips: 2 };
+      const [row] = await runNative<Raw & { step: number; version: string }>(reader, statementOf({ what: "every" }, queries, shapeKey));
+      if (seen !== undefined && row.step > 0) relaxedLately.set(seen, { step: row.step, version: row.version });
+      else if (seen !== undefined) relaxedLately.delete(seen);
+      return { step: row.step, result: toResult(row), roundTrips: 2 };
     },
   };
 }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import type { EngineQuery } from "@/search/engines/engine-types";
-import { buildFirstMatchingStepSql, buildSearchSql } from "@/search/engines/postgres/pg-search-sql";
+import { buildFirstMatchingStepSql, buildKnownStepSql, buildSearchSql } from "@/search/engines/postgres/pg-search-sql";
 import { widestConditions } from "@/search/engines/postgres/pg-widest";
 import { numberPlaceholders } from "@/search/engines/postgres/prepared-query";
 import { compose, frag } from "@/search/engines/postgres/sql-fragment";
@@ -99,6 +99,28 @@ describe("the steps after the first in one statement", () => {
     const { sql } = buildFirstMatchingStepSql([bare({ flutes: 2 }), bare({})]);
     expect(sql).toContain("case when d.flutes = ? then 0 when true then 1 end as step");
     expect(sql).toMatch(/from search_documents d cross join q where d\.vendor_id = \? and d\.kind = 'sheet'\) as l/);
+  });
+});
+
+describe("a step known to answer first", () => {
+  const query: EngineQuery = { ...base, words: ["jig"], filters: { flutes: 2 } };
+
+  it("is the step's own statement, searched only while the vendor's index version is the one given", () => {
+    const own = buildSearchSql(query).sql;
+    const { sql, bindings } = buildKnownStepSql(query, "41");
+    expect(sql).toContain(
+      "seen as (select coalesce((select v.version from search_index_versions v where v.vendor_id = ?), 0)::text as version)",
+    );
+    expect(own).toContain("where d.vendor_id = ? and d.kind = 'sheet' and d.flutes = ?),");
+    expect(sql).toContain("where d.vendor_id = ? and d.kind = 'sheet' and d.flutes = ? and (select version from seen) = ?::text),");
+    expect(sql).toContain("select (select version from seen) as version, (select count(*)::int from matched) as total");
+    expect(placeholders(sql)).toBe(bindings.length);
+    expect(bindings).toContain("41");
+  });
+
+  it("leaves the first step's own statement without the version", () => {
+    expect(buildSearchSql(query).sql).not.toContain("search_index_versions");
+    expect(buildFirstMatchingStepSql([query, { ...query, filters: {} }]).sql).toContain("(select version from seen) as version");
   });
 });
 
