@@ -2,6 +2,7 @@
 
 import { useMemo, useState } from "react";
 
+import { useKeptText } from "@/components/forms/use-kept-text";
 import { cutterCsvColumns, requiredCutterCsvColumns } from "@/content-schema/catalogue-cutter";
 import { checkCutterCsv, formatCellError } from "@/lib/catalogue/cutter-csv";
 import type { ImportMode } from "@/lib/catalogue/import-cutters-types";
@@ -11,7 +12,7 @@ type Outcome = { ok: true; imported: number; skipped: number } | { ok: false; me
 
 /** Preview in the browser with the same checks the server runs, then import with a progress bar. */
 export function CsvImport({ url, existingSkus, cataloguePath }: { url: string; existingSkus: string[]; cataloguePath: string }) {
-  const [csv, setCsv] = useState("");
+  const [csv, setCsv] = useKeptText("csv-text", "");
   const [mode, setMode] = useState<ImportMode>("all-or-nothing");
   const [progress, setProgress] = useState<Progress>(null);
   const [outcome, setOutcome] = useState<Outcome>(null);

@@ -11,7 +11,8 @@ type Props = {
   hidden: Record<string, string>;
   submitLabel: string;
   variant?: "primary" | "quiet" | "danger";
-  children?: (errors: Record<string, string[]>) => ReactNode;
+  /** The fields; after a refusal they get what was sent, since React empties a form once its action returns. */
+  children?: (errors: Record<string, string[]>, sent: ActionState) => ReactNode;
   label?: string;
   /** Asks before acting (publishing reaches every customer): the button first shows this question with a confirm and a cancel. */
   confirm?: { question: string; yes: string };
@@ -26,7 +27,7 @@ export function ActionForm({ action, hidden, submitLabel, variant = "primary", c
       {Object.entries(hidden).map(([name, value]) => (
         <input key={name} type="hidden" name={name} value={value} />
       ))}
-      {children?.(state.errors ?? {})}
+      {children?.(state.errors ?? {}, state)}
       {confirm && asking ? (
         <div
           role="group"

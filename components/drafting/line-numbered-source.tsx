@@ -12,10 +12,11 @@ type Props = {
 };
 
 export const LINE_HEIGHT_PX = 20;
+export const SHEET_SOURCE_ID = "sheet-source";
 
 /** A monospace source area with a line-number gutter that scrolls with it; lines with errors are marked. */
 export const LineNumberedSource = forwardRef<HTMLTextAreaElement, Props>(function LineNumberedSource(
-  { value, onChange, label, invalidLines, readOnly, id = "sheet-source" },
+  { value, onChange, label, invalidLines, readOnly, id = SHEET_SOURCE_ID },
   ref,
 ) {
   const gutter = useRef<HTMLDivElement>(null);

@@ -2,11 +2,12 @@
 
 import { useMemo, useRef, useState, useTransition } from "react";
 
+import { useKeptText } from "@/components/forms/use-kept-text";
 import { initialActionState } from "@/lib/actions/action-state";
 
 import { ConflictPanel } from "./conflict-panel";
 import { IssueList } from "./issue-list";
-import { LINE_HEIGHT_PX, LineNumberedSource } from "./line-numbered-source";
+import { LINE_HEIGHT_PX, LineNumberedSource, SHEET_SOURCE_ID } from "./line-numbered-source";
 import { useDraftAutosave, type DraftAction, type SaveStatus } from "./use-draft-autosave";
 import { useDraftPreview } from "./use-draft-preview";
 
@@ -47,10 +48,11 @@ export function SheetEditor({
     initialSource,
     initialRevision,
     saveAction,
+    fieldId: SHEET_SOURCE_ID,
   });
   const { issues, preview, renderError } = useDraftPreview({ base, source, previewAction });
   const [submitting, startSubmit] = useTransition();
-  const [changeNote, setChangeNote] = useState(initialChangeNote);
+  const [changeNote, setChangeNote] = useKeptText("change-note", initialChangeNote);
   const [submitError, setSubmitError] = useState<string | null>(null);
   const area = useRef<HTMLTextAreaElement>(null);
 

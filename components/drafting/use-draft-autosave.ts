@@ -2,6 +2,7 @@
 
 import { useCallback, useEffect, useRef, useState } from "react";
 
+import { useKeptText } from "@/components/forms/use-kept-text";
 import { initialActionState, type ActionState } from "@/lib/actions/action-state";
 
 export type Conflict = { source: string; revision: number; updatedByName: string | null };
@@ -20,13 +21,16 @@ export function useDraftAutosave({
   initialSource,
   initialRevision,
   saveAction,
+  fieldId,
 }: {
   base: { vendor: string; slug: string };
   initialSource: string;
+  /** The source textarea: text typed there before the page hydrated is kept and autosaved. */
+  fieldId: string;
   initialRevision: number;
   saveAction: DraftAction;
 }) {
-  const [source, setSource] = useState(initialSource);
+  const [source, setSource] = useKeptText(fieldId, initialSource);
   const [revision, setRevision] = useState(initialRevision);
   const [saved, setSaved] = useState(initialSource);
   const [status, setStatus] = useState<SaveStatus>("saved");

@@ -9,11 +9,11 @@ type Props = { action: (s: ActionState, f: FormData) => Promise<ActionState>; ve
 export function WithdrawForm({ action, vendorSlug, slug, versions }: Props) {
   return (
     <ActionForm action={action} hidden={{ vendor: vendorSlug, slug }} submitLabel="Withdraw" variant="danger" label="Withdraw a version">
-      {(errors) => (
+      {(errors, sent) => (
         <>
           <label className="flex flex-col gap-1 text-sm font-medium">
             Version
-            <select name="version" className="min-h-11 rounded border border-stone-300 bg-white px-3">
+            <select name="version" defaultValue={sent.values?.version} className="min-h-11 rounded border border-stone-300 bg-white px-3">
               {versions.map((n) => (
                 <option key={n} value={n}>
                   Version {n}
@@ -28,6 +28,7 @@ export function WithdrawForm({ action, vendorSlug, slug, versions }: Props) {
               rows={2}
               required
               minLength={5}
+              defaultValue={sent.values?.reason}
               aria-invalid={errors.reason ? true : undefined}
               className="rounded border border-stone-300 p-2 font-normal"
             />

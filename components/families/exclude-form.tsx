@@ -11,7 +11,7 @@ export function ExcludeForm({ action, hidden, sku }: Props) {
     <details>
       <summary className="cursor-pointer text-sm underline">Leave out…</summary>
       <ActionForm action={action} hidden={hidden} submitLabel="Leave this sheet out" variant="danger" label={`Leave ${sku} out`}>
-        {(errors) => (
+        {(errors, sent) => (
           <>
             <label className="flex flex-col gap-1 text-sm font-medium">
               Reason
@@ -19,6 +19,7 @@ export function ExcludeForm({ action, hidden, sku }: Props) {
                 name="reason"
                 required
                 minLength={3}
+                defaultValue={sent.values?.reason}
                 aria-invalid={errors.reason ? true : undefined}
                 className="min-h-11 rounded border border-stone-300 px-3 font-normal"
               />

@@ -4,7 +4,7 @@ import { ActionForm } from "@/components/drafting/action-form";
 import { Field } from "@/components/forms/field";
 import { geometryLabels } from "@/content-schema/catalogue-cutter";
 import { operationKindLabels } from "@/content-schema/sheet-kinds";
-import type { ActionState } from "@/lib/actions/action-state";
+import { sentList, type ActionState } from "@/lib/actions/action-state";
 
 type Option = { id: string; label: string };
 type Props = {
@@ -58,41 +58,72 @@ function Checks({
 export function FamilyForm({ action, vendorSlug, materials, machineClasses }: Props) {
   return (
     <ActionForm action={action} hidden={{ vendor: vendorSlug }} submitLabel="Create family" label="New family">
-      {(errors) => (
+      {(errors, sent) => (
         <div className="grid max-w-3xl gap-4">
-          <Field label="Name" name="name" required errors={errors.name} />
+          <Field label="Name" name="name" required errors={errors.name} defaultValue={sent.values?.name} />
           <Field
             label="Slug"
             name="slug"
             required
+            defaultValue={sent.values?.slug}
             hint="Lowercase letters, digits and hyphens, e.g. sf-series-acrylic"
             errors={errors.slug}
           />
           <fieldset className="grid gap-3 rounded border border-stone-300 p-3 sm:grid-cols-3">
             <legend className="px-1 text-sm font-semibold">Cutters (all filters given apply together)</legend>
-            <Field label="Series (SKU starts with)" name="series" errors={errors["cutters.series"]} />
-            <Field label="Smallest D (mm)" name="diameterMinMm" inputMode="decimal" errors={errors["cutters.diameterMinMm"]} />
-            <Field label="Largest D (mm)" name="diameterMaxMm" inputMode="decimal" errors={errors["cutters.diameterMaxMm"]} />
+            <Field label="Series (SKU starts with)" name="series" errors={errors["cutters.series"]} defaultValue={sent.values?.series} />
+            <Field
+              label="Smallest D (mm)"
+              name="diameterMinMm"
+              inputMode="decimal"
+              errors={errors["cutters.diameterMinMm"]}
+              defaultValue={sent.values?.diameterMinMm}
+            />
+            <Field
+              label="Largest D (mm)"
+              name="diameterMaxMm"
+              inputMode="decimal"
+              errors={errors["cutters.diameterMaxMm"]}
+              defaultValue={sent.values?.diameterMaxMm}
+            />
             <div className="sm:col-span-3">
               <Checks
                 legend="Geometry"
                 name="geometries"
                 options={Object.entries(geometryLabels).map(([id, label]) => ({ id, label }))}
                 errors={errorText(errors, "cutters.geometries")}
+                checked={sentList(sent, "geometries")}
               />
             </div>
             <label className="flex flex-col gap-1 text-sm font-medium sm:col-span-3">
               SKUs (one a line; empty: every cutter the filters pick)
-              <textarea name="skus" rows={3} className="rounded border border-stone-300 p-2 font-mono font-normal" />
+              <textarea
+                name="skus"
+                rows={3}
+                defaultValue={sent.values?.skus}
+                className="rounded border border-stone-300 p-2 font-mono font-normal"
+              />
             </label>
           </fieldset>
-          <Checks legend="Materials" name="materialIds" options={materials} errors={errorText(errors, "materialIds")} />
-          <Checks legend="Machine classes" name="machineClassIds" options={machineClasses} errors={errorText(errors, "machineClassIds")} />
+          <Checks
+            legend="Materials"
+            name="materialIds"
+            options={materials}
+            errors={errorText(errors, "materialIds")}
+            checked={sentList(sent, "materialIds")}
+          />
+          <Checks
+            legend="Machine classes"
+            name="machineClassIds"
+            options={machineClasses}
+            errors={errorText(errors, "machineClassIds")}
+            checked={sentList(sent, "machineClassIds")}
+          />
           <Checks
             legend="Operations on every sheet"
             name="kinds"
             options={KINDS.map((k) => ({ id: k, label: operationKindLabels[k] }))}
-            checked={["slotting", "profile"]}
+            checked={sentList(sent, "kinds") ?? ["slotting", "profile"]}
             errors={errorText(errors, "rules")}
           />
         </div>

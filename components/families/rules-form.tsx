@@ -1,6 +1,7 @@
 "use client";
 
 import { ActionForm } from "@/components/drafting/action-form";
+import { KeptTextarea } from "@/components/forms/kept-textarea";
 import type { ActionState } from "@/lib/actions/action-state";
 
 type Props = {
@@ -15,7 +16,7 @@ type Props = {
 export function RulesForm({ action, vendorSlug, family, text, version }: Props) {
   return (
     <ActionForm action={action} hidden={{ vendor: vendorSlug, family }} submitLabel="Save as a new rules version" label="Family rules">
-      {(errors) => {
+      {(errors, sent) => {
         const ruleErrors = Object.entries(errors)
           .filter(([k]) => k === "rules" || k.startsWith("rules."))
           .map(([k, v]) => `${k.replace(/^rules\.?/, "") || "rules"}: ${v.join(" ")}`);
@@ -23,11 +24,12 @@ export function RulesForm({ action, vendorSlug, family, text, version }: Props) 
           <>
             <label className="flex flex-col gap-1 text-sm font-medium">
               Rules (version {version})
-              <textarea
+              <KeptTextarea
+                id="family-rules"
                 name="rules"
                 rows={14}
                 spellCheck={false}
-                defaultValue={text}
+                defaultValue={sent.values?.rules ?? text}
                 aria-invalid={ruleErrors.length ? true : undefined}
                 aria-describedby="rules-help"
                 className="rounded border border-stone-300 p-2 font-mono text-sm font-normal"
@@ -50,7 +52,13 @@ export function RulesForm({ action, vendorSlug, family, text, version }: Props) 
             ) : null}
             <label className="flex flex-col gap-1 text-sm font-medium">
               What changes
-              <input name="note" required minLength={3} className="min-h-11 rounded border border-stone-300 px-3 font-normal" />
+              <input
+                name="note"
+                required
+                minLength={3}
+                defaultValue={sent.values?.note}
+                className="min-h-11 rounded border border-stone-300 px-3 font-normal"
+              />
             </label>
             {errors.note ? <p className="text-sm text-red-800">⚠ {errors.note.join(" ")}</p> : null}
           </>

@@ -26,6 +26,17 @@ function formValues(input: FormData | Record<string, unknown>): Record<string, u
   return out;
 }
 
+/** The submitted text fields, so a refused form can show them again; repeated fields (checkbox groups) as lists. */
+function sentValues(raw: Record<string, unknown>): { values: Record<string, string>; lists: Record<string, string[]> } {
+  const values: Record<string, string> = {};
+  const lists: Record<string, string[]> = {};
+  for (const [key, value] of Object.entries(raw)) {
+    if (typeof value === "string") values[key] = value;
+    else if (Array.isArray(value)) lists[key] = value.filter((v): v is string => typeof v === "string");
+  }
+  return { values, lists };
+}
+
 // The author's next reads (a redirect to the published page, say) come from the primary, not a lagging replica.
 async function pinAfterWrite(run: () => Promise<ActionState | void>): Promise<ActionState | void> {
   try {
@@ -51,25 +62,26 @@ export function vendorAction<S extends z.ZodType>(
 ) {
   return async (_previous: ActionState, input: FormData | Record<string, unknown>): Promise<ActionState> => {
     const raw = formValues(input);
-    const values = Object.fromEntries(Object.entries(raw).filter(([, v]) => typeof v === "string")) as Record<string, string>;
+    const { values, lists } = sentValues(raw);
     try {
       const user = await findSessionUser();
       const access = await resolveVendorAccess(String(raw.vendor ?? ""), user, options.permission);
-      if (!access.user || !access.member) return { ok: false, message: "Sign in to continue.", values };
+      if (!access.user || !access.member) return { ok: false, message: "Sign in to continue.", values, lists };
       const parsed = options.schema.safeParse(raw);
-      if (!parsed.success) return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error), values };
+      if (!parsed.success)
+        return { ok: false, message: "Please correct the marked fields.", errors: fieldErrorsOf(parsed.error), values, lists };
       const result = await pinAfterWrite(() => run(parsed.data, access as MemberAccess));
       return result ?? { ok: true };
     } catch (error) {
       if (error instanceof DomainError) {
-        return { ok: false, message: error.code === "not_found" ? "Not found." : error.message, errors: error.fieldErrors, values };
+        return { ok: false, message: error.code === "not_found" ? "Not found." : error.message, errors: error.fieldErrors, values, lists };
       }
       // Next's redirect() and notFound() signal by throwing; let them through.
       if (error && typeof error === "object" && "digest" in error) throw error;
-      if (isDatabaseUnavailable(error)) return { ok: false, message: CATCHING_UP, values };
+      if (isDatabaseUnavailable(error)) return { ok: false, message: CATCHING_UP, values, lists };
       console.error("[action]", error);
       // Not "nothing was saved": a failure after the commit (a revalidation, say) leaves the write in place.
-      return { ok: false, message: "Something went wrong on our side. Please try again; a form sent twice is saved once.", values };
+      return { ok: false, message: "Something went wrong on our side. Please try again; a form sent twice is saved once.", values, lists };
     }
   };
 }

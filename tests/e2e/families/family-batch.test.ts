@@ -164,6 +164,9 @@ describe("sheet families", () => {
       // New rules, a second batch: every sheet gets a new version; published as a batch, one mail lists both sheets.
       const started = Date.now();
       await p.goto(`/${VENDOR}/drafting/families/${slug}`);
+      // Playwright's fill selects the old text, then inserts the new in a second step; hydration between the two puts
+      // the caret at the start and the rules come out doubled. A user types after the page is ready; so does the test.
+      await p.waitForLoadState("networkidle", { timeout: 60_000 });
       await saveRules(p, SLOWER, "Lower in the cutting-speed window.", 4);
       const second = await generateAndWait(p);
       await expect(p.locator('[data-count="new-version"] dd').textContent()).resolves.toBe("4");

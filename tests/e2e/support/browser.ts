@@ -48,3 +48,19 @@ export async function screenshot(page: Page, name: string): Promise<void> {
   const file = `${String(shot).padStart(3, "0")}-${name.replace(/[^a-z0-9-]+/gi, "-").toLowerCase()}.png`;
   await page.screenshot({ path: path.join(SCREENSHOT_DIR, file), fullPage: true });
 }
+
+/**
+ * Holds back the page's script chunks until `release()` is called, so a test can act on the server-rendered page
+ * before it hydrates, as a user on a slow line does. Inline scripts (streamed content) still run.
+ */
+export async function holdScripts(page: Page): Promise<{ release: () => Promise<void> }> {
+  let open!: () => void;
+  const gate = new Promise<void>((resolve) => (open = resolve));
+  const pattern = /\/_next\/static\/chunks\/.+\.js$/;
+  await page.route(pattern, async (route) => {
+    await gate;
+    await route.continue();
+  });
+  // The route stays: once the gate is open, later chunks pass straight through.
+  return { release: async () => open() };
+}

@@ -49,7 +49,9 @@ export default async function FamilyPage({ params, searchParams }: Props) {
           <h2 id="rules-heading" className="mb-2 text-lg font-semibold">
             Rules
           </h2>
+          {/* A new rules version starts a fresh form: what an earlier refused try sent does not come back. */}
           <RulesForm
+            key={ruleSet.number}
             action={saveRulesAction}
             vendorSlug={vendor.slug}
             family={family.slug}

@@ -119,7 +119,13 @@ export default async function DraftingSheetPage({ params }: Props) {
               Withdraw
             </h2>
             <p className="mb-2 text-sm text-stone-700">A withdrawn version stays readable with a banner and your reason.</p>
-            <WithdrawForm action={withdrawAction} vendorSlug={vendor.slug} slug={sheet.slug} versions={withdrawable} />
+            <WithdrawForm
+              key={withdrawable.join()}
+              action={withdrawAction}
+              vendorSlug={vendor.slug}
+              slug={sheet.slug}
+              versions={withdrawable}
+            />
           </section>
         ) : null}
       </div>
