@@ -38,3 +38,18 @@ export const ticketThreadQuerySchema = z.object({
 });
 
 export type ThreadMessages = z.infer<typeof ticketThreadQuerySchema>["messages"];
+
+/** How many sheet versions the reply editor's picker offers at a time. */
+export const PICKER_VERSIONS = 25;
+
+/** GET /api/v1/vendors/{vendor}/desk/sheet-versions: sheet versions a staff reply can embed, found by words. */
+export const pickerVersionQuerySchema = z.object({
+  q: z
+    .string()
+    .trim()
+    .max(120)
+    .default("")
+    .describe(
+      "Words that must all appear in the version's title, cutter SKU, material or machine class; empty: the first current versions.",
+    ),
+});

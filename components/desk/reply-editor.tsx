@@ -5,6 +5,7 @@ import { useEffect, useRef, useState } from "react";
 import { FormMessage } from "@/components/forms/form-message";
 import { IdempotencyKeyField } from "@/components/forms/idempotency-key-field";
 import { SubmitButton } from "@/components/forms/submit-button";
+import { useKeptText } from "@/components/forms/use-kept-text";
 import { useValidatedAction } from "@/components/forms/use-validated-action";
 import { SafeMarkdown } from "@/components/support/safe-markdown";
 import { UploadField } from "@/components/support/upload-field";
@@ -12,15 +13,18 @@ import { ticketReplySchema } from "@/content-schema/ticket-update";
 import type { FormAction } from "@/lib/actions/action-state";
 import { expandSnippet, type SnippetValues } from "@/lib/desk/expand-snippet";
 
+import { useVersionPicker, type VersionPage } from "./use-version-picker";
+
 type Option = { id: string; name: string };
 type Version = Option & { state: string };
 type Props = {
   staffReplyAction: FormAction;
   vendor: string;
   ticketId: string;
-  versions: Version[];
+  /** The first current versions, shown until the agent types words to find others. */
+  firstVersions: VersionPage;
   /** The ticket's linked sheet versions, listed first in the picker. */
-  linkedVersionIds?: string[];
+  linkedVersions?: Version[];
   machines: Option[];
   defaultMachineId: string | null;
   defaultVersionId: string | null;
@@ -28,6 +32,7 @@ type Props = {
   placeholders: SnippetValues;
 };
 
+const BODY_ID = "f-staff-body";
 const field = "min-h-9 rounded border border-stone-300 bg-white px-2 text-sm";
 
 /** Markdown reply or internal note, with an adapted-sheet picker and saved snippets. */
@@ -35,8 +40,8 @@ export function ReplyEditor({
   staffReplyAction,
   vendor,
   ticketId,
-  versions,
-  linkedVersionIds = [],
+  firstVersions,
+  linkedVersions = [],
   machines,
   defaultMachineId,
   defaultVersionId,
@@ -46,13 +51,23 @@ export function ReplyEditor({
   const { state, formAction, onSubmit, errors } = useValidatedAction(staffReplyAction, ticketReplySchema);
   const [visibility, setVisibility] = useState<"public" | "note">("public");
   const note = visibility === "note";
-  const linked = versions.filter((v) => linkedVersionIds.includes(v.id));
+  const picker = useVersionPicker(vendor, firstVersions);
+  const [chosen, setChosen] = useState<Version | null>(null);
+  const isLinked = (v: Version) => linkedVersions.some((l) => l.id === v.id);
+  const found = picker.page.versions.filter((v) => !isLinked(v));
   const groups = [
-    { label: "Linked to this ticket", items: linked },
-    { label: "Current versions", items: versions.filter((v) => v.state === "published" && !linkedVersionIds.includes(v.id)) },
-    { label: "Older versions", items: versions.filter((v) => v.state !== "published" && !linkedVersionIds.includes(v.id)) },
-  ].filter((g) => g.items.length);
-  const [body, setBody] = useState("");
+    { label: "Linked to this ticket", items: linkedVersions },
+    ...(picker.asked
+      ? [{ label: `Found for “${picker.asked}”`, items: found }]
+      : [
+          { label: "Current versions", items: found.filter((v) => v.state === "published") },
+          { label: "Older versions", items: found.filter((v) => v.state !== "published") },
+        ]),
+  ];
+  // The chosen version stays selectable while other words are typed.
+  if (chosen && !groups.some((g) => g.items.some((v) => v.id === chosen.id))) groups.push({ label: "Chosen", items: [chosen] });
+  const shownGroups = groups.filter((g) => g.items.length);
+  const [body, setBody] = useKeptText(BODY_ID, "");
   const [preview, setPreview] = useState(false);
   const [versionId, setVersionId] = useState("");
   const form = useRef<HTMLFormElement>(null);
@@ -64,6 +79,7 @@ export function ReplyEditor({
     if (state.ok) {
       setBody("");
       setVersionId("");
+      setChosen(null);
       setVisibility("public");
       setSent((n) => n + 1);
     }
@@ -71,7 +87,7 @@ export function ReplyEditor({
   useEffect(() => {
     if (sent) form.current?.reset();
   }, [sent]);
-  const sheetTitle = versions.find((v) => v.id === (versionId || defaultVersionId))?.name;
+  const sheetTitle = [...linkedVersions, ...(chosen ? [chosen] : [])].find((v) => v.id === (versionId || defaultVersionId))?.name;
   const values = { ...placeholders, "sheet.title": sheetTitle ?? placeholders["sheet.title"] };
 
   return (
@@ -127,11 +143,11 @@ export function ReplyEditor({
           </select>
         ) : null}
       </div>
-      <label htmlFor="f-staff-body" className="sr-only">
+      <label htmlFor={BODY_ID} className="sr-only">
         Message
       </label>
       <textarea
-        id="f-staff-body"
+        id={BODY_ID}
         name="body"
         rows={7}
         value={body}
@@ -153,11 +169,36 @@ export function ReplyEditor({
       ) : null}
       <fieldset className="grid gap-2 text-sm sm:grid-cols-2">
         <legend className="font-medium">Embed a sheet adapted to the customer&apos;s machine</legend>
+        <div className="flex flex-col sm:col-span-2">
+          <label htmlFor="f-version-find">Find a sheet version</label>
+          <input
+            id="f-version-find"
+            type="search"
+            className={field}
+            value={picker.query}
+            onChange={(e) => picker.setQuery(e.target.value)}
+            // Enter looks up; it must not send the reply.
+            onKeyDown={(e) => e.key === "Enter" && e.preventDefault()}
+            placeholder="Words of the title, cutter SKU, material or machine class"
+            aria-describedby="version-find-hint"
+          />
+          <span id="version-find-hint" className="text-xs text-stone-600" aria-live="polite">
+            {picker.hint}
+          </span>
+        </div>
         <label className="flex flex-col">
           Sheet version
-          <select name="cardSheetVersionId" className={field} value={versionId} onChange={(e) => setVersionId(e.target.value)}>
+          <select
+            name="cardSheetVersionId"
+            className={field}
+            value={versionId}
+            onChange={(e) => {
+              setVersionId(e.target.value);
+              setChosen(groups.flatMap((g) => g.items).find((v) => v.id === e.target.value) ?? null);
+            }}
+          >
             <option value="">No sheet</option>
-            {groups.map((g) => (
+            {shownGroups.map((g) => (
               <optgroup key={g.label} label={g.label}>
                 {g.items.map((v) => (
                   <option key={v.id} value={v.id}>

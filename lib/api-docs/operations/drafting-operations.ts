@@ -1,3 +1,4 @@
+import { PICKER_VERSIONS, pickerVersionQuerySchema } from "@/content-schema/api-queries";
 import { draftStateResponseSchema, openObject } from "@/content-schema/api-responses";
 import { fieldExportSchema } from "@/content-schema/field-export";
 import { apiNewSheetSchema, saveDraftSchema, submitDraftSchema, withdrawSchema } from "@/content-schema/sheet-workflow";
@@ -128,5 +129,21 @@ export const draftingOperations: ApiOperation[] = [
     access: "token",
     permission: "desk.use",
     responses: { "200": { description: "The views.", schema: openObject("{ views: [{ id, name, filters, count }] }") } },
+  },
+  {
+    method: "GET",
+    path: `${V}/desk/sheet-versions`,
+    tag: "Desk",
+    summary: "Sheet versions a reply can embed, found by words",
+    access: "token",
+    permission: "desk.use",
+    description: `Versions customers can read, published ones first, ${PICKER_VERSIONS} at a time; \`hasMore\` says whether more match.`,
+    query: pickerVersionQuerySchema,
+    responses: {
+      "200": {
+        description: "One page of matching versions.",
+        schema: openObject("{ versions: [{ id, name, state, machineClass }], hasMore }"),
+      },
+    },
   },
 ];

@@ -115,6 +115,19 @@ describe("support journey", () => {
       await expect(firstGroup.getAttribute("label")).resolves.toBe("Linked to this ticket");
       await expect(firstGroup.locator("option").first().getAttribute("value")).resolves.toBe(version.id);
       await expect(firstGroup.locator("option").first().textContent()).resolves.toMatch(/ · .+ \(version \d+\)$/);
+      // Other sheets are found by words (a catalogue holds more versions than a list can carry); the linked one stays.
+      await s.page.waitForLoadState("networkidle", { timeout: 60_000 }).catch(() => undefined);
+      const other = mustExist(
+        await db("sheet_versions").where({ vendor_id: vendor.id, state: "published" }).whereNot({ id: version.id }).first("title"),
+        "another published version",
+      );
+      await s.page.getByLabel("Find a sheet version").fill(other.title);
+      const found = s.page.locator('select[name="cardSheetVersionId"] optgroup[label^="Found for"]');
+      await found.waitFor({ state: "attached", timeout: 30_000 });
+      const foundNames = await found.locator("option").allTextContents();
+      expect(foundNames.length).toBeGreaterThan(0);
+      for (const name of foundNames) expect(name.startsWith(other.title)).toBe(true);
+      await expect(firstGroup.locator("option").first().getAttribute("value")).resolves.toBe(version.id);
       await s.page.locator("#f-staff-body").fill("Your router tops out below the sheet's speed, so here is the sheet adapted to it.");
       await s.page.locator('select[name="cardSheetVersionId"]').selectOption(version.id);
       await s.page.locator('select[name="cardMachineId"]').selectOption(machine.id);

@@ -12,7 +12,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { ticketThreadQuerySchema } from "@/content-schema/api-queries";
 import { requirePageAccess } from "@/lib/auth/page-access";
 import { getCustomerContext } from "@/lib/desk/customer-context";
-import { listAssignees, listPickerVersions } from "@/lib/desk/desk-options";
+import { listAssignees } from "@/lib/desk/desk-options";
+import { findPickerVersions, listPickerVersionsById } from "@/lib/desk/picker-versions";
 import { listSnippets } from "@/lib/desk/snippets";
 import { getTicketThread } from "@/lib/tickets/get-ticket-thread";
 import { listTicketHistory } from "@/lib/tickets/list-ticket-history";
@@ -30,10 +31,11 @@ export default async function DeskTicketPage({ params, searchParams }: Props) {
   const { vendor, user } = await requirePageAccess(slug, "desk.use", `/${slug}/desk`);
   const thread = await getTicketThread({ vendorId: vendor.id, ticketId, messages, viewer: { kind: "staff" } });
   const { ticket, links, attachments } = thread;
-  const [context, assignees, versions, snippets, history] = await Promise.all([
+  const [context, assignees, firstVersions, linkedPickerVersions, snippets, history] = await Promise.all([
     getCustomerContext({ vendorId: vendor.id, customerId: ticket.customerId, excludeTicketId: ticket.id }),
     listAssignees({ vendorId: vendor.id }),
-    listPickerVersions({ vendorId: vendor.id }),
+    findPickerVersions({ vendorId: vendor.id, q: "" }),
+    listPickerVersionsById({ vendorId: vendor.id, ids: links.map((l) => l.sheetVersionId) }),
     listSnippets({ vendorId: vendor.id }),
     listTicketHistory({ vendorId: vendor.id, ticketId: ticket.id }),
   ]);
@@ -77,8 +79,8 @@ export default async function DeskTicketPage({ params, searchParams }: Props) {
             staffReplyAction={staffReplyAction}
             vendor={vendor.slug}
             ticketId={ticket.id}
-            versions={versions}
-            linkedVersionIds={links.map((l) => l.sheetVersionId)}
+            firstVersions={firstVersions}
+            linkedVersions={linkedPickerVersions}
             machines={context.machines.map((m) => ({ id: m.id, name: m.name }))}
             defaultMachineId={ticket.machineId}
             defaultVersionId={links[0]?.sheetVersionId ?? null}
