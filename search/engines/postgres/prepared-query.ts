@@ -1,7 +1,12 @@
 import { createHash } from "node:crypto";
 import type { Knex } from "knex";
 
-type PgConnection = { query: (config: { name?: string; text: string; values: readonly unknown[] }) => Promise<{ rows: unknown[] }> };
+// Knex's own query step (not the connection's): the replica pool wraps it to run a read again on the primary when
+// the replica goes away mid-statement (lib/db/replica.ts).
+type ClientQuery = (
+  connection: unknown,
+  query: { sql: string; bindings: unknown[]; options?: { name: string } },
+) => Promise<{ response: { rows: unknown[] } }>;
 
 /**
  * Named prepared statements are on unless DATABASE_PREPARED_STATEMENTS=off or DATABASE_POOL_MODE=transaction: a
@@ -59,10 +64,12 @@ export type NativeStatement = { text: string; values: readonly unknown[] };
 
 /** Runs `$n` text on a pooled connection: named (planned once per connection and shape) unless named statements are off. */
 export async function runNative<T>(knex: Knex, { text, values }: NativeStatement): Promise<T[]> {
-  const connection = (await knex.client.acquireConnection()) as PgConnection;
+  const connection: unknown = await knex.client.acquireConnection();
   try {
     const name = preparedStatementsEnabled() ? statementName(text) : undefined;
-    return (await connection.query({ ...(name && { name }), text, values })).rows as T[];
+    const query: ClientQuery = knex.client.query.bind(knex.client);
+    const result = await query(connection, { sql: text, bindings: [...values], ...(name && { options: { name } }) });
+    return result.response.rows as T[];
   } finally {
     await knex.client.releaseConnection(connection);
   }
