@@ -12,17 +12,18 @@ import { UploadField } from "@/components/support/upload-field";
 import { ticketReplySchema } from "@/content-schema/ticket-update";
 import type { FormAction } from "@/lib/actions/action-state";
 import { expandSnippet, type SnippetValues } from "@/lib/desk/expand-snippet";
+import type { PickerPage, PickerVersion } from "@/lib/desk/picker-versions";
 
-import { useVersionPicker, type VersionPage } from "./use-version-picker";
+import { useVersionPicker } from "./use-version-picker";
 
 type Option = { id: string; name: string };
-type Version = Option & { state: string };
+type Version = Omit<PickerVersion, "machineClass">;
 type Props = {
   staffReplyAction: FormAction;
   vendor: string;
   ticketId: string;
   /** The first current versions, shown until the agent types words to find others. */
-  firstVersions: VersionPage;
+  firstVersions: PickerPage;
   /** The ticket's linked sheet versions, listed first in the picker. */
   linkedVersions?: Version[];
   machines: Option[];

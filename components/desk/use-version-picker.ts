@@ -2,9 +2,8 @@
 
 import { useEffect, useState } from "react";
 
+import type { PickerPage } from "@/lib/desk/picker-versions";
 import { useApiJson } from "@/lib/swr/use-api-json";
-
-export type VersionPage = { versions: { id: string; name: string; state: string }[]; hasMore: boolean };
 
 const TYPING_PAUSE_MS = 250;
 
@@ -12,14 +11,14 @@ const TYPING_PAUSE_MS = 250;
  * The reply editor's sheet-version lookup: the first current versions until words are typed, then the versions
  * the server finds for them (a vendor's catalogue can hold thousands), asked once typing pauses.
  */
-export function useVersionPicker(vendor: string, first: VersionPage) {
+export function useVersionPicker(vendor: string, first: PickerPage) {
   const [query, setQuery] = useState("");
   const [asked, setAsked] = useState("");
   useEffect(() => {
     const timer = setTimeout(() => setAsked(query.trim()), TYPING_PAUSE_MS);
     return () => clearTimeout(timer);
   }, [query]);
-  const found = useApiJson<VersionPage>(asked ? `/api/v1/vendors/${vendor}/desk/sheet-versions?q=${encodeURIComponent(asked)}` : null, {
+  const found = useApiJson<PickerPage>(asked ? `/api/v1/vendors/${vendor}/desk/sheet-versions?q=${encodeURIComponent(asked)}` : null, {
     keepPreviousData: true,
     revalidateOnFocus: false,
   });

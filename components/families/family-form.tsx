@@ -26,14 +26,18 @@ function Checks({
   name,
   options,
   errors,
-  checked = [],
+  sent,
+  ticked = [],
 }: {
   legend: string;
   name: string;
   options: Option[];
   errors: string;
-  checked?: string[];
+  /** A refused form's state: the boxes it sent stay ticked. */
+  sent: ActionState;
+  ticked?: string[];
 }) {
+  const checked = sentList(sent, name) ?? ticked;
   return (
     <fieldset className="flex flex-col gap-1">
       <legend className="text-sm font-medium">{legend}</legend>
@@ -92,7 +96,7 @@ export function FamilyForm({ action, vendorSlug, materials, machineClasses }: Pr
                 name="geometries"
                 options={Object.entries(geometryLabels).map(([id, label]) => ({ id, label }))}
                 errors={errorText(errors, "cutters.geometries")}
-                checked={sentList(sent, "geometries")}
+                sent={sent}
               />
             </div>
             <label className="flex flex-col gap-1 text-sm font-medium sm:col-span-3">
@@ -105,25 +109,20 @@ export function FamilyForm({ action, vendorSlug, materials, machineClasses }: Pr
               />
             </label>
           </fieldset>
-          <Checks
-            legend="Materials"
-            name="materialIds"
-            options={materials}
-            errors={errorText(errors, "materialIds")}
-            checked={sentList(sent, "materialIds")}
-          />
+          <Checks legend="Materials" name="materialIds" options={materials} errors={errorText(errors, "materialIds")} sent={sent} />
           <Checks
             legend="Machine classes"
             name="machineClassIds"
             options={machineClasses}
             errors={errorText(errors, "machineClassIds")}
-            checked={sentList(sent, "machineClassIds")}
+            sent={sent}
           />
           <Checks
             legend="Operations on every sheet"
             name="kinds"
             options={KINDS.map((k) => ({ id: k, label: operationKindLabels[k] }))}
-            checked={sentList(sent, "kinds") ?? ["slotting", "profile"]}
+            sent={sent}
+            ticked={["slotting", "profile"]}
             errors={errorText(errors, "rules")}
           />
         </div>

@@ -5,6 +5,8 @@ import { db } from "@/lib/db/knex";
 import { READABLE_STATES } from "@/lib/tickets/resolve-ticket-links";
 
 export type PickerVersion = { id: string; name: string; state: string; machineClass: string };
+/** One answer of the picker: a page of versions, and whether more match. */
+export type PickerPage = { versions: PickerVersion[]; hasMore: boolean };
 
 const likeWords = (q: string) =>
   q
@@ -44,7 +46,7 @@ export async function findPickerVersions({
   vendorId: string;
   q: string;
   limit?: number;
-}): Promise<{ versions: PickerVersion[]; hasMore: boolean }> {
+}): Promise<PickerPage> {
   const query = readableVersions(vendorId);
   for (const word of likeWords(q)) query.whereRaw("concat_ws(' ', v.title, c.sku, m.name, k.name) ilike ? escape '\\'", [word]);
   const rows = await query
